@@ -1,0 +1,129 @@
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import express from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { auditRepository } from './audit/audit-repository';
+import { authRouter } from './auth/auth-router';
+import { authService } from './auth/auth-service';
+import { createAuthorize } from './auth/authorize';
+import { requireCsrfToken } from './auth/csrf';
+import { createPassport } from './auth/passport';
+import { DatabaseSessionStore } from './auth/session-store';
+import { usersRepository } from './auth/users-repository';
+import type { Db } from './db/connection';
+import { labsRepository } from './labs/labs-repository';
+import type { Clock } from './lib/clock';
+import { apiNotFound, errorHandler } from './lib/error-handler';
+import type { Mailer } from './mail/mailer';
+import { outboxRouter } from './mail/outbox-router';
+import { invitationsRouter, labMembersRouter } from './members/members-router';
+import { membersService } from './members/members-service';
+
+export interface AppConfig {
+  sessionSecret: string;
+  /** Base URL put in e-mailed links, e.g. http://127.0.0.1:3000 */
+  publicUrl: string;
+  production: boolean;
+  trustProxy: boolean;
+  /** Built client to serve (production); omitted in development and API tests. */
+  clientDir?: string;
+  log?: (message: string, error?: unknown) => void;
+}
+
+export interface AppDeps {
+  db: Db;
+  mailer: Mailer;
+  clock: Clock;
+  config: AppConfig;
+}
+
+const SESSION_MAX_AGE_MS = 12 * 60 * 60 * 1000;
+
+/** Builds the Express app; `server/index.ts` only listens. Tests drive it with supertest. */
+export function createApp({ db, mailer, clock, config }: AppDeps) {
+  const log = config.log ?? ((message: string, error?: unknown) => console.error(message, error));
+  const now = () => clock.now();
+  const publicUrl = (path: string) => `${config.publicUrl.replace(/\/$/, '')}${path}`;
+
+  const users = usersRepository(db);
+  const labs = labsRepository(db);
+  const audit = auditRepository(db, now);
+  const sessions = new DatabaseSessionStore(db, () => now().getTime());
+  const auth = authService({ db, users, audit, mailer, sessions, now, publicUrl });
+  const members = membersService({ db, users, labs, audit, mailer, sessions, now, publicUrl });
+  const passport = createPassport(auth);
+  const authorize = createAuthorize(labs);
+
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.trustProxy) app.set('trust proxy', 1);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          workerSrc: ["'self'", 'blob:'],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb', strict: true }));
+  api.use(
+    session({
+      name: 'dilutrace.sid',
+      secret: config.sessionSecret,
+      store: sessions,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: config.production && config.trustProxy ? true : false,
+        maxAge: SESSION_MAX_AGE_MS,
+      },
+    }),
+  );
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+
+  api.get('/health', (_req, res) => {
+    res.json({ status: 'ok', time: now().toISOString() });
+  });
+  api.use(requireCsrfToken);
+  api.use('/auth', authRouter({ auth, passport, authorize }));
+  api.use('/invitations', invitationsRouter({ members, auth }));
+  api.use('/labs/:labId', labMembersRouter({ members, authorize }));
+  api.use('/labs/:labId', outboxRouter({ db, authorize }));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (config.clientDir && existsSync(join(config.clientDir, 'index.html'))) {
+    const clientDir = resolve(config.clientDir);
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get('/*splat', (_req, res) => {
+      res.set('Cache-Control', 'no-cache');
+      res.sendFile(join(clientDir, 'index.html'));
+    });
+  }
+  app.use(errorHandler(log));
+
+  return { app, sessions };
+}

@@ -1,0 +1,58 @@
+import type { RequestHandler } from 'express';
+import { idParam } from '../../shared/contracts/auth';
+import type { Role } from '../../shared/contracts/roles';
+import { forbidden, notFound, unauthenticated } from '../lib/errors';
+import type { LabsRepository } from '../labs/labs-repository';
+
+export interface SessionUser {
+  id: number;
+  email: string;
+  name: string;
+}
+
+export interface LabContext {
+  id: number;
+  roles: Role[];
+}
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    /** Set by `authorize` on routes under /api/labs/:labId. */
+    lab?: LabContext;
+  }
+}
+
+declare global {
+  namespace Express {
+    // passport's req.user
+    interface User extends SessionUser {}
+  }
+}
+
+/**
+ * The one authorization check every protected route uses.
+ * - `authorize.signedIn`: any signed-in, active user.
+ * - `authorize.lab(roles)`: the route has `:labId`; the user must be a member of that lab and hold
+ *   one of `roles` (or any role when `roles` is 'member'). A lab the user is not in answers 404,
+ *   so its existence is not revealed.
+ */
+export function createAuthorize(labs: LabsRepository) {
+  const signedIn: RequestHandler = (req, _res, next) => {
+    if (!req.user) throw unauthenticated();
+    next();
+  };
+  const lab =
+    (roles: readonly Role[] | 'member'): RequestHandler =>
+    async (req, _res, next) => {
+      if (!req.user) throw unauthenticated();
+      const parsed = idParam.safeParse(req.params.labId);
+      if (!parsed.success) throw notFound('The lab');
+      const held = await labs.rolesOf(req.user.id, parsed.data);
+      if (held.length === 0) throw notFound('The lab');
+      if (roles !== 'member' && !held.some((role) => roles.includes(role))) throw forbidden();
+      req.lab = { id: parsed.data, roles: held };
+      next();
+    };
+  return { signedIn, lab };
+}
+export type Authorize = ReturnType<typeof createAuthorize>;

@@ -1,0 +1,18 @@
+import type { Db } from '../db/connection';
+
+export interface PasswordResetRow {
+  id: number;
+  user_id: number;
+  token_hash: string;
+  created_at: string;
+  expires_at: string;
+  used_at: string | null;
+}
+
+export function passwordResetsRepository(db: Db) {
+  return {
+    insert: (row: Omit<PasswordResetRow, 'id' | 'used_at'>) => db('password_resets').insert(row),
+    findByTokenHash: (tokenHash: string): Promise<PasswordResetRow | undefined> => db('password_resets').where({ token_hash: tokenHash }).first(),
+    markUsed: (id: number, at: string, trx: Db = db) => trx('password_resets').where({ id }).whereNull('used_at').update({ used_at: at }),
+  };
+}

@@ -1,0 +1,40 @@
+import type { Role } from '../../shared/contracts/roles';
+import type { Db } from '../db/connection';
+
+export interface UserRow {
+  id: number;
+  email: string;
+  name: string;
+  password_hash: string;
+  active: number | boolean;
+  created_at: string;
+}
+
+export interface MembershipRow {
+  lab_id: number;
+  lab_name: string;
+  role: Role;
+}
+
+export function usersRepository(db: Db) {
+  return {
+    findByEmail: (email: string): Promise<UserRow | undefined> => db('users').where({ email: email.toLowerCase() }).first(),
+    findById: (id: number): Promise<UserRow | undefined> => db('users').where({ id }).first(),
+    async insert(user: { email: string; name: string; passwordHash: string; createdAt: string }, trx: Db = db): Promise<number> {
+      const [row] = await trx('users')
+        .insert({ email: user.email.toLowerCase(), name: user.name, password_hash: user.passwordHash, active: true, created_at: user.createdAt })
+        .returning('id');
+      return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+    },
+    setPassword: (id: number, passwordHash: string, trx: Db = db) => trx('users').where({ id }).update({ password_hash: passwordHash }),
+    setActive: (id: number, active: boolean, trx: Db = db) => trx('users').where({ id }).update({ active }),
+    count: async (): Promise<number> => Number((await db('users').count({ n: '*' }).first())?.n ?? 0),
+    memberships: (userId: number): Promise<MembershipRow[]> =>
+      db('memberships as m')
+        .join('labs as l', 'l.id', 'm.lab_id')
+        .where('m.user_id', userId)
+        .orderBy(['l.name', 'm.role'])
+        .select('m.lab_id', 'l.name as lab_name', 'm.role'),
+  };
+}
+export type UsersRepository = ReturnType<typeof usersRepository>;

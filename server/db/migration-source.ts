@@ -1,0 +1,16 @@
+import type { Knex } from 'knex';
+import * as foundation from '../../migrations/20261202010000_foundation';
+
+/**
+ * Migrations imported statically, so they run the same under tsx and Vitest
+ * (Knex's file loader cannot import .ts under Vitest). Add each new migration here, in order.
+ */
+const migrations: Record<string, Knex.Migration> = {
+  '20261202010000_foundation': foundation,
+};
+
+export const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(migrations).sort(),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => migrations[name],
+};

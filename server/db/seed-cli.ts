@@ -1,0 +1,17 @@
+import { loadEnv } from '../config/env';
+import { openDatabase } from './connection';
+import { SeedRefusedError, seedDemoLab } from './seed-demo';
+
+/** `npm run seed`: seeds the demo lab into the configured database, only if it has no users. */
+const env = loadEnv();
+const db = await openDatabase(env.DILUTRACE_DB);
+try {
+  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: new Date() });
+  console.log(`Demo lab seeded into ${env.DILUTRACE_DB}.`);
+} catch (error) {
+  if (!(error instanceof SeedRefusedError)) throw error;
+  console.error(error.message);
+  process.exitCode = 1;
+} finally {
+  await db.destroy();
+}

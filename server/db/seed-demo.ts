@@ -1,0 +1,47 @@
+import type { Role } from '../../shared/contracts/roles';
+import { hashPassword } from '../auth/password';
+import type { Db } from './connection';
+
+/** The invented demo lab (DESIGN.md §7). All names are made up. */
+export const DEMO_LAB = { name: 'Wellmere Regional Water Laboratory', slug: 'wellmere-water', domain: 'wellmere-water.example' };
+
+export const DEMO_PEOPLE: { local: string; name: string; roles: Role[] }[] = [
+  { local: 'admin', name: 'Rowan Achterberg', roles: ['admin'] },
+  { local: 'qa', name: 'Imogen Tasker', roles: ['qa'] },
+  { local: 'analyst', name: 'Dev Okonjo', roles: ['analyst'] },
+  { local: 'analyst2', name: 'Lucía Ferreira-Blom', roles: ['analyst'] },
+  { local: 'auditor', name: 'Harriet Vance', roles: ['auditor'] },
+];
+
+export const demoEmail = (local: string) => `${local}@${DEMO_LAB.domain}`;
+
+export class SeedRefusedError extends Error {}
+
+/** Creates the demo lab and its people in one transaction; refuses a database that already has users. */
+export async function seedDemoLab(db: Db, options: { password: string; now: Date }): Promise<{ labId: number }> {
+  const passwordHash = await hashPassword(options.password);
+  const at = options.now.toISOString();
+  return db.transaction(async (trx) => {
+    const users = Number((await trx('users').count({ n: '*' }).first())?.n ?? 0);
+    if (users > 0) throw new SeedRefusedError('The database already has users; the demo lab is only seeded into an empty database.');
+    const [lab] = await trx('labs').insert({ name: DEMO_LAB.name, slug: DEMO_LAB.slug, created_at: at }).returning('id');
+    const labId = typeof lab === 'object' ? (lab as { id: number }).id : (lab as number);
+    for (const person of DEMO_PEOPLE) {
+      const [user] = await trx('users')
+        .insert({ email: demoEmail(person.local), name: person.name, password_hash: passwordHash, active: true, created_at: at })
+        .returning('id');
+      const userId = typeof user === 'object' ? (user as { id: number }).id : (user as number);
+      for (const role of person.roles) await trx('memberships').insert({ user_id: userId, lab_id: labId, role, created_at: at });
+    }
+    await trx('audit_events').insert({
+      lab_id: labId,
+      actor_user_id: null,
+      action: 'lab.seeded',
+      entity_type: 'lab',
+      entity_id: String(labId),
+      summary: 'Demo lab created by the seed command',
+      created_at: at,
+    });
+    return { labId };
+  });
+}

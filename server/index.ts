@@ -1,0 +1,58 @@
+import type { AddressInfo } from 'node:net';
+import { createApp } from './app';
+import { loadEnv } from './config/env';
+import { openDatabase } from './db/connection';
+import { seedDemoLab } from './db/seed-demo';
+import { sessionSecret } from './db/settings-repository';
+import { systemClock } from './lib/clock';
+import { startCaptureServer } from './mail/capture-server';
+import { createSmtpMailer } from './mail/mailer';
+import { usersRepository } from './auth/users-repository';
+
+const env = loadEnv();
+const db = await openDatabase(env.DILUTRACE_DB);
+if (env.DILUTRACE_SEED_DEMO === '1' && (await usersRepository(db).count()) === 0) {
+  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: systemClock.now() });
+  console.log('Seeded the demo lab (Wellmere Regional Water Laboratory).');
+}
+
+const capture = env.SMTP_URL ? null : await startCaptureServer(db, () => systemClock.now());
+const mailer = createSmtpMailer(env.SMTP_URL ?? `smtp://127.0.0.1:${capture?.port}`, env.MAIL_FROM);
+const production = env.NODE_ENV === 'production';
+const publicUrl = env.DILUTRACE_PUBLIC_URL ?? `http://${env.HOST === '0.0.0.0' ? '127.0.0.1' : env.HOST}:${env.PORT}`;
+
+const { app, sessions } = createApp({
+  db,
+  mailer,
+  clock: systemClock,
+  config: {
+    sessionSecret: env.DILUTRACE_SESSION_SECRET ?? (await sessionSecret(db)),
+    publicUrl,
+    production,
+    trustProxy: env.DILUTRACE_TRUST_PROXY === '1',
+    clientDir: production ? 'dist/client' : undefined,
+  },
+});
+await sessions.prune();
+
+const server = app.listen(env.PORT, env.HOST, () => {
+  const { port } = server.address() as AddressInfo;
+  const url = env.DILUTRACE_PUBLIC_URL ?? `http://${env.HOST === '0.0.0.0' ? '127.0.0.1' : env.HOST}:${port}`;
+  console.log(`Dilutrace is running at ${url}${production ? '' : ' (API only; the client runs under Vite on :5173)'}`);
+  if (!env.SMTP_URL) console.log(`Mail is captured locally (SMTP on 127.0.0.1:${capture?.port}); admins read it on the Outbox page.`);
+});
+
+let stopping = false;
+async function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  console.log(`${signal} received, shutting down.`);
+  server.close();
+  server.closeAllConnections();
+  mailer.close();
+  await capture?.close();
+  await db.destroy();
+  process.exit(0);
+}
+process.on('SIGTERM', () => void shutdown('SIGTERM'));
+process.on('SIGINT', () => void shutdown('SIGINT'));

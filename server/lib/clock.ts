@@ -1,0 +1,6 @@
+/** Time source passed into the app so tests can move it. */
+export interface Clock {
+  now(): Date;
+}
+
+export const systemClock: Clock = { now: () => new Date() };

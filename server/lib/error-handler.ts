@@ -1,0 +1,49 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { AppError } from './errors';
+
+const STATUS: Record<AppError['kind'], number> = {
+  validation: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  too_large: 413,
+  rate_limited: 429,
+};
+
+export const apiNotFound: RequestHandler = (req, res) => {
+  res.status(404).json({ error: { code: 'not_found', message: `No API route ${req.method} ${req.path}.` } });
+};
+
+interface HttpishError {
+  status?: number;
+  statusCode?: number;
+  type?: string;
+  expose?: boolean;
+}
+
+/** Maps error classes to statuses and the one JSON error shape; never sends a stack. */
+export function errorHandler(log: (message: string, error: unknown) => void): ErrorRequestHandler {
+  return (error, _req, res, _next) => {
+    if (error instanceof AppError) {
+      res.status(STATUS[error.kind]).json({ error: { code: error.code, message: error.message, details: error.details } });
+      return;
+    }
+    const http = error as HttpishError;
+    const status = http.status ?? http.statusCode;
+    if (http.type === 'entity.parse.failed') {
+      res.status(400).json({ error: { code: 'malformed_json', message: 'The request body is not valid JSON.' } });
+      return;
+    }
+    if (http.type === 'entity.too.large') {
+      res.status(413).json({ error: { code: 'too_large', message: 'The request body is too large.' } });
+      return;
+    }
+    if (status && status >= 400 && status < 500 && http.expose) {
+      res.status(status).json({ error: { code: 'bad_request', message: (error as Error).message } });
+      return;
+    }
+    log('Unexpected error', error);
+    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on the server. The error has been logged.' } });
+  };
+}

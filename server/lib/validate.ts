@@ -1,0 +1,48 @@
+import type { RequestHandler } from 'express';
+import { z } from 'zod';
+import type { FieldIssue } from '../../shared/contracts/errors';
+import { validationError } from './errors';
+
+type Part = 'params' | 'query' | 'body';
+type Schemas = Partial<Record<Part, z.ZodType>>;
+type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType ? z.output<S[K]> : never };
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    /** The request parts after the route's schema parsed them; handlers read only these. */
+    valid?: unknown;
+  }
+}
+
+export function toFieldIssues(error: z.ZodError, prefix?: string): FieldIssue[] {
+  return error.issues.map((issue) => ({
+    path: [prefix, ...issue.path.map(String)].filter(Boolean).join('.'),
+    message: issue.message,
+  }));
+}
+
+/** Parses `{params, query, body}` with the route's schemas; a failure becomes one 400 naming each field. */
+export function validate<S extends Schemas>(schemas: S): RequestHandler {
+  return (req, _res, next) => {
+    const out: Record<string, unknown> = {};
+    const issues: FieldIssue[] = [];
+    for (const part of ['params', 'query', 'body'] as const) {
+      const schema = schemas[part];
+      if (!schema) continue;
+      const result = schema.safeParse(req[part] ?? {});
+      if (result.success) out[part] = result.data;
+      else issues.push(...toFieldIssues(result.error, part === 'body' ? undefined : part));
+    }
+    if (issues.length > 0) {
+      const first = issues[0];
+      throw validationError(first.path ? `${first.path}: ${first.message}` : first.message, issues);
+    }
+    req.valid = out;
+    next();
+  };
+}
+
+/** Reads what `validate` stored, typed by the same schemas. */
+export function valid<S extends Schemas>(req: { valid?: unknown }, _schemas: S): Parsed<S> {
+  return req.valid as Parsed<S>;
+}

@@ -1,0 +1,44 @@
+import { ROLE_LABELS, type Role } from '../../shared/contracts/roles';
+
+const escapeHtml = (text: string) =>
+  text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
+
+function layout(paragraphs: string[], link: { href: string; label: string }): { text: string; html: string } {
+  const text = [...paragraphs, '', `${link.label}: ${link.href}`, '', '— Dilutrace'].join('\n');
+  const html = [
+    '<div style="font-family:sans-serif;color:#17323b;max-width:560px">',
+    ...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
+    `<p><a href="${escapeHtml(link.href)}">${escapeHtml(link.label)}</a></p>`,
+    `<p style="color:#5b6b70;font-size:12px">${escapeHtml(link.href)}</p>`,
+    '<p>— Dilutrace</p></div>',
+  ].join('\n');
+  return { text, html };
+}
+
+export function invitationMessage(input: { name: string; labName: string; role: Role; invitedBy: string; link: string; expiresAt: string }) {
+  return {
+    subject: `You are invited to ${input.labName} on Dilutrace`,
+    ...layout(
+      [
+        `Hello ${input.name},`,
+        `${input.invitedBy} has invited you to join ${input.labName} on Dilutrace as ${ROLE_LABELS[input.role].toLowerCase()}.`,
+        `Open the link below to set your password. It works once and expires on ${input.expiresAt.slice(0, 10)}.`,
+      ],
+      { href: input.link, label: 'Accept the invitation' },
+    ),
+  };
+}
+
+export function passwordResetMessage(input: { name: string; link: string }) {
+  return {
+    subject: 'Reset your Dilutrace password',
+    ...layout(
+      [
+        `Hello ${input.name},`,
+        'Someone asked to reset the password of your Dilutrace account. If it was you, open the link below within one hour to choose a new password.',
+        'If it was not you, ignore this message; your password stays as it is.',
+      ],
+      { href: input.link, label: 'Choose a new password' },
+    ),
+  };
+}

@@ -1,0 +1,153 @@
+import { checkDistribution, degreesOfFreedom, evaluationType, standardUncertainty, type Distribution } from './distributions';
+import type { Checkpoint, CompiledModel, SourceCategory, SourceDefinition, TapeNode } from './model-types';
+import { PlanError, type PlanPathSegment } from './plan-error';
+
+/** Index of a node on the model's tape. */
+export type NodeReference = number;
+
+export interface SourceRequest {
+  id: string;
+  label: string;
+  category: SourceCategory;
+  estimate: number;
+  unit: string;
+  distribution: Distribution;
+  sharing: 'item' | 'use';
+  itemId?: string;
+  stepIndex: number;
+  /** Where the source's data sit in the plan, for error messages. */
+  path: PlanPathSegment[];
+}
+
+/**
+ * Records a measurement model as a tape while step code describes it.
+ * A source requested twice under one id (a shared item) becomes one source and one node.
+ */
+export class ModelBuilder {
+  private readonly sources: SourceDefinition[] = [];
+  private readonly sourceNodes = new Map<string, NodeReference>();
+  private readonly nodes: TapeNode[] = [];
+  private readonly checkpoints: Checkpoint[] = [];
+  private readonly warnings: string[] = [];
+
+  /** The node of a source; the same id always gives the same node. @throws PlanError on conflicting data */
+  source(request: SourceRequest): NodeReference {
+    const existing = this.sourceNodes.get(request.id);
+    if (existing !== undefined) {
+      const node = this.nodes[existing];
+      const definition = this.sources[node.operation === 'source' ? node.sourceIndex : -1];
+      if (definition.estimate !== request.estimate || JSON.stringify(definition.distribution) !== JSON.stringify(request.distribution)) {
+        throw new PlanError(request.path, `${request.label}: the same item appears twice with different data; give each physical item one description.`);
+      }
+      if (!definition.stepIndices.includes(request.stepIndex)) definition.stepIndices.push(request.stepIndex);
+      return existing;
+    }
+    checkDistribution(request.distribution, request.path);
+    const definition: SourceDefinition = {
+      id: request.id,
+      label: request.label,
+      category: request.category,
+      estimate: request.estimate,
+      unit: request.unit,
+      distribution: request.distribution,
+      standardUncertainty: standardUncertainty(request.distribution),
+      degreesOfFreedom: degreesOfFreedom(request.distribution),
+      evaluationType: evaluationType(request.distribution),
+      sharing: request.sharing,
+      stepIndices: [request.stepIndex],
+      ...(request.itemId === undefined ? {} : { itemId: request.itemId }),
+    };
+    this.sources.push(definition);
+    const node = this.push({ operation: 'source', sourceIndex: this.sources.length - 1 });
+    this.sourceNodes.set(request.id, node);
+    return node;
+  }
+
+  constant(value: number): NodeReference {
+    return this.push({ operation: 'constant', value });
+  }
+
+  add(left: NodeReference, right: NodeReference): NodeReference {
+    return this.binary('add', left, right);
+  }
+
+  subtract(left: NodeReference, right: NodeReference): NodeReference {
+    return this.binary('subtract', left, right);
+  }
+
+  multiply(left: NodeReference, right: NodeReference): NodeReference {
+    return this.binary('multiply', left, right);
+  }
+
+  divide(left: NodeReference, right: NodeReference): NodeReference {
+    return this.binary('divide', left, right);
+  }
+
+  /** left · value, for a known constant factor. */
+  scale(left: NodeReference, value: number): NodeReference {
+    return value === 1 ? left : this.multiply(left, this.constant(value));
+  }
+
+  /** Sum of the given nodes (at least one). */
+  sum(terms: NodeReference[]): NodeReference {
+    return terms.reduce((total, term) => this.add(total, term));
+  }
+
+  checkpoint(checkpoint: Checkpoint): void {
+    this.checkpoints.push(checkpoint);
+  }
+
+  warn(message: string): void {
+    this.warnings.push(message);
+  }
+
+  constantValue(node: NodeReference): number | undefined {
+    const entry = this.nodes[node];
+    return entry.operation === 'constant' ? entry.value : undefined;
+  }
+
+  build(outputNode: NodeReference, outputUnit: string, measurand: string): CompiledModel {
+    return {
+      modelFormat: 'dilutrace-model/1',
+      sources: this.sources.map((source) => ({ ...source, stepIndices: [...source.stepIndices] })),
+      nodes: [...this.nodes],
+      outputNode,
+      outputUnit,
+      measurand,
+      checkpoints: [...this.checkpoints],
+      warnings: [...this.warnings],
+    };
+  }
+
+  private binary(operation: 'add' | 'subtract' | 'multiply' | 'divide', left: NodeReference, right: NodeReference): NodeReference {
+    const leftValue = this.constantValue(left);
+    const rightValue = this.constantValue(right);
+    if (leftValue !== undefined && rightValue !== undefined) {
+      return this.constant(applyOperation(operation, leftValue, rightValue));
+    }
+    if ((operation === 'add' || operation === 'subtract') && rightValue === 0) return left;
+    if (operation === 'add' && leftValue === 0) return right;
+    if ((operation === 'multiply' || operation === 'divide') && rightValue === 1) return left;
+    if (operation === 'multiply' && leftValue === 1) return right;
+    return this.push({ operation, left, right });
+  }
+
+  private push(node: TapeNode): NodeReference {
+    this.nodes.push(node);
+    return this.nodes.length - 1;
+  }
+}
+
+/** The four operations of the tape on plain numbers. */
+export function applyOperation(operation: 'add' | 'subtract' | 'multiply' | 'divide', left: number, right: number): number {
+  switch (operation) {
+    case 'add':
+      return left + right;
+    case 'subtract':
+      return left - right;
+    case 'multiply':
+      return left * right;
+    case 'divide':
+      return left / right;
+  }
+}

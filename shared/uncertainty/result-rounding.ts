@@ -1,0 +1,63 @@
+/** A value and its uncertainty rounded for a report. */
+export interface RoundedResult {
+  value: number;
+  uncertainty: number;
+  /** Decimal places kept (negative when rounding to tens, hundreds…). */
+  decimals: number;
+  valueText: string;
+  uncertaintyText: string;
+}
+
+/**
+ * Rounds an uncertainty to `significantDigits` significant digits (two by default, JCGM 100 7.2.6)
+ * and the value to the same decimal place, rounding half away from zero.
+ * decimals = significantDigits − 1 − ⌊log₁₀ u⌋.
+ * @example roundToUncertainty(1002.6997, 1.6706) // { value: 1002.7, uncertainty: 1.7, decimals: 1, valueText: '1002.7', uncertaintyText: '1.7' }
+ */
+export function roundToUncertainty(value: number, uncertainty: number, significantDigits = 2): RoundedResult {
+  if (!(uncertainty > 0) || !Number.isFinite(uncertainty)) {
+    return { value, uncertainty, decimals: 0, valueText: String(value), uncertaintyText: String(uncertainty) };
+  }
+  let decimals = significantDigits - 1 - Math.floor(Math.log10(uncertainty));
+  let roundedUncertainty = roundToDecimals(uncertainty, decimals);
+  // 0.0996 to two digits is 0.10: one digit fewer after rounding up past a power of ten.
+  if (roundedUncertainty >= 10 ** (significantDigits - decimals)) {
+    decimals -= 1;
+    roundedUncertainty = roundToDecimals(uncertainty, decimals);
+  }
+  const roundedValue = roundToDecimals(value, decimals);
+  const places = Math.max(decimals, 0);
+  return {
+    value: roundedValue,
+    uncertainty: roundedUncertainty,
+    decimals,
+    valueText: roundedValue.toFixed(places),
+    uncertaintyText: roundedUncertainty.toFixed(places),
+  };
+}
+
+function roundToDecimals(value: number, decimals: number): number {
+  const factor = 10 ** Math.abs(decimals);
+  const scaled = decimals >= 0 ? value * factor : value / factor;
+  // Nudge by a few ulps so that 2.675 (stored as 2.67499999…) still rounds to 2.68.
+  const rounded = Math.sign(scaled) * Math.round(Math.abs(scaled) * (1 + 4 * Number.EPSILON));
+  return decimals >= 0 ? rounded / factor : rounded * factor;
+}
+
+/**
+ * The sentence that states a result, e.g.
+ * "c(Pb) = (10.012 ± 0.054) mg/L, k = 2.00, coverage probability ≈ 95.45 %".
+ * The expanded uncertainty is rounded to two significant digits and the value to match.
+ */
+export function formatResultStatement(input: {
+  measurand: string;
+  value: number;
+  expandedUncertainty: number;
+  unit: string;
+  coverageFactor: number;
+  coverageProbability: number;
+}): string {
+  const rounded = roundToUncertainty(input.value, input.expandedUncertainty);
+  const percent = (input.coverageProbability * 100).toFixed(2);
+  return `${input.measurand} = (${rounded.valueText} ± ${rounded.uncertaintyText}) ${input.unit}, k = ${input.coverageFactor.toFixed(2)}, coverage probability ≈ ${percent} %`;
+}

@@ -1,0 +1,107 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import request from 'supertest';
+import { createApp } from '../app';
+import { openDatabase, type Db } from '../db/connection';
+import { demoEmail, seedDemoLab } from '../db/seed-demo';
+import type { Clock } from '../lib/clock';
+import { startCaptureServer, type CaptureServer } from '../mail/capture-server';
+import { createSmtpMailer, type Mailer } from '../mail/mailer';
+
+export const DEMO_PASSWORD = 'test-demo-password-1';
+export const SESSION_SECRET = 'test-session-secret-that-is-long-enough-0123456789';
+
+/** A settable clock for tests. */
+export function testClock(start = new Date('2026-12-02T09:00:00Z')): Clock & { advance(ms: number): void } {
+  let t = start.getTime();
+  return { now: () => new Date(t), advance: (ms) => void (t += ms) };
+}
+
+export interface TestApp {
+  app: ReturnType<typeof createApp>['app'];
+  db: Db;
+  file: string;
+  clock: ReturnType<typeof testClock>;
+  close(): Promise<void>;
+  /** Builds a second app on the same database file, as after a server restart. */
+  restart(): Promise<TestApp>;
+}
+
+/** A fresh SQLite file with the demo lab seeded, the local SMTP capture, and the app. */
+export async function buildTestApp(options: { file?: string; seed?: boolean; clock?: ReturnType<typeof testClock> } = {}): Promise<TestApp> {
+  const dir = options.file ? null : mkdtempSync(join(tmpdir(), 'dilutrace-test-'));
+  const file = options.file ?? join(dir as string, 'test.sqlite');
+  const clock = options.clock ?? testClock();
+  const db = await openDatabase(file);
+  if (options.seed !== false) await seedDemoLab(db, { password: DEMO_PASSWORD, now: clock.now() });
+  const capture: CaptureServer = await startCaptureServer(db, () => clock.now());
+  const mailer: Mailer = createSmtpMailer(`smtp://127.0.0.1:${capture.port}`, 'Dilutrace <no-reply@dilutrace.test>');
+  const { app } = createApp({
+    db,
+    mailer,
+    clock,
+    config: { sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined },
+  });
+  const close = async () => {
+    mailer.close();
+    await capture.close();
+    await db.destroy();
+  };
+  return {
+    app,
+    db,
+    file,
+    clock,
+    close: async () => {
+      await close();
+      if (dir) rmSync(dir, { recursive: true, force: true });
+    },
+    restart: async () => {
+      await close();
+      const next = await buildTestApp({ file, seed: false, clock });
+      return { ...next, close: async () => { await next.close(); if (dir) rmSync(dir, { recursive: true, force: true }); } };
+    },
+  };
+}
+
+
+/** A cookie-keeping client with the session's CSRF token attached to every state-changing call. */
+export async function agentFor(app: TestApp['app']) {
+  const agent = request.agent(app);
+  let token = (await agent.get('/api/auth/csrf').expect(200)).body.csrfToken as string;
+  const send = <T extends 'post' | 'patch' | 'put' | 'delete'>(method: T, url: string, body?: object) =>
+    agent[method](url).set('x-csrf-token', token).send(body);
+  return {
+    agent,
+    get: (url: string) => agent.get(url),
+    post: (url: string, body?: object) => send('post', url, body),
+    patch: (url: string, body?: object) => send('patch', url, body),
+    delete: (url: string) => send('delete', url),
+    setToken: (next: string) => void (token = next),
+    get token() {
+      return token;
+    },
+  };
+}
+export type Client = Awaited<ReturnType<typeof agentFor>>;
+
+/** Signs in and keeps the new session's CSRF token. */
+export async function signIn(app: TestApp['app'], email: string, password = DEMO_PASSWORD): Promise<Client> {
+  const client = await agentFor(app);
+  const res = await client.post('/api/auth/login', { email, password });
+  if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  client.setToken(res.body.csrfToken);
+  return client;
+}
+
+export const demo = (local: 'admin' | 'qa' | 'analyst' | 'analyst2' | 'auditor') => demoEmail(local);
+
+/** The token in the newest captured mail to `to` whose link path starts with `prefix`. */
+export async function tokenFromOutbox(db: Db, to: string, prefix: '/invitation/' | '/reset-password/'): Promise<string> {
+  const rows: { to_address: string; text_body: string }[] = await db('outbox').orderBy('id', 'desc');
+  const mail = rows.find((row) => row.to_address.includes(to) && row.text_body.includes(prefix));
+  const match = mail?.text_body.match(new RegExp(`${prefix}([A-Za-z0-9_-]+)`));
+  if (!match) throw new Error(`no ${prefix} mail to ${to}`);
+  return match[1];
+}

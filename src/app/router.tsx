@@ -1,0 +1,33 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter } from 'react-router';
+import { RouteErrorBoundary } from '../components/errors/route-error-boundary';
+import { LoadingLine } from '../components/ui/loading-line';
+import { paths } from '../config/paths';
+import { toLazyRoute } from './route-module';
+
+/** The route table; each page is its own chunk, loaded when first visited. */
+export function createAppRouter(queryClient: QueryClient) {
+  const convert = toLazyRoute(queryClient);
+  return createBrowserRouter([
+    {
+      ErrorBoundary: RouteErrorBoundary,
+      HydrateFallback: () => <LoadingLine label="Opening Dilutrace…" />,
+      children: [
+        { path: paths.auth.signIn.path, lazy: () => import('./routes/sign-in').then(convert) },
+        { path: paths.auth.forgotPassword.path, lazy: () => import('./routes/forgot-password').then(convert) },
+        { path: paths.auth.resetPassword.path, lazy: () => import('./routes/reset-password').then(convert) },
+        { path: paths.auth.invitation.path, lazy: () => import('./routes/invitation').then(convert) },
+        {
+          path: paths.app.dashboard.path,
+          lazy: () => import('./routes/app/root').then(convert),
+          children: [
+            { index: true, lazy: () => import('./routes/app/dashboard').then(convert) },
+            { path: paths.app.members.path, lazy: () => import('./routes/app/members').then(convert) },
+            { path: paths.app.outbox.path, lazy: () => import('./routes/app/outbox').then(convert) },
+          ],
+        },
+        { path: '*', lazy: () => import('./routes/not-found').then(convert) },
+      ],
+    },
+  ]);
+}

@@ -1,0 +1,30 @@
+import { PageHeader } from '../../../components/ui/page-header';
+import { Alert } from '../../../components/ui/alert';
+import { useSignedInMe } from '../../../features/auth/api/get-me';
+import { RoleOverview } from '../../../features/dashboard/components/role-overview';
+import { activeMembership } from '../../../lib/authorization';
+
+export function Component() {
+  const me = useSignedInMe();
+  const membership = activeMembership(me);
+  return (
+    <>
+      <title>Dashboard · Dilutrace</title>
+      <PageHeader
+        title={`Welcome, ${me.user.name}`}
+        description={
+          membership
+            ? `${membership.name}. Here is what each of your roles will do in Dilutrace; the measurement work arrives step by step.`
+            : undefined
+        }
+      />
+      {membership ? (
+        <RoleOverview roles={membership.roles} />
+      ) : (
+        <Alert tone="info" title="No lab yet">
+          You are not an active member of any lab. A lab administrator can invite you by e-mail.
+        </Alert>
+      )}
+    </>
+  );
+}

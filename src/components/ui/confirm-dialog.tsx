@@ -1,0 +1,54 @@
+import { useEffect, useId, useRef, type ReactNode } from 'react';
+import { Button } from './button';
+
+type ConfirmDialogProps = {
+  open: boolean;
+  title: string;
+  children: ReactNode;
+  confirmLabel: string;
+  tone?: 'primary' | 'danger';
+  pending?: boolean;
+  onConfirm: () => void;
+  onCancel: () => void;
+};
+
+/**
+ * A modal question on the native `<dialog>`: focus moves into it, Escape cancels,
+ * and focus returns to the opener when it closes.
+ */
+export function ConfirmDialog({ open, title, children, confirmLabel, tone = 'primary', pending, onConfirm, onCancel }: ConfirmDialogProps) {
+  const dialogRef = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+
+  useEffect(() => {
+    const dialog = dialogRef.current;
+    if (!dialog) return;
+    if (open && !dialog.open) dialog.showModal();
+    if (!open && dialog.open) dialog.close();
+  }, [open]);
+
+  return (
+    <dialog
+      ref={dialogRef}
+      aria-labelledby={titleId}
+      onCancel={(event) => {
+        event.preventDefault();
+        onCancel();
+      }}
+      className="m-auto w-full max-w-md rounded-lg border border-line bg-surface p-6 text-ink shadow-xl"
+    >
+      <h2 id={titleId} className="mb-2 text-xl font-bold">
+        {title}
+      </h2>
+      <div className="mb-6 text-ink">{children}</div>
+      <div className="flex justify-end gap-2">
+        <Button variant="secondary" onClick={onCancel} disabled={pending}>
+          Cancel
+        </Button>
+        <Button variant={tone} onClick={onConfirm} pending={pending} pendingLabel="Saving…">
+          {confirmLabel}
+        </Button>
+      </div>
+    </dialog>
+  );
+}

@@ -1,0 +1,24 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { meSchema, type Me } from '../../../../shared/contracts/auth';
+import type { InvitationAccept } from '../../../../shared/contracts/members';
+import { api } from '../../../lib/api-client';
+import { authKeys } from './auth-keys';
+import { storeSignedInUser } from './get-me';
+
+type AcceptInvitationInput = { token: string } & InvitationAccept;
+
+/** Accepts an invitation; the answer is the now signed-in user. */
+export function acceptInvitation({ token, name, password }: AcceptInvitationInput): Promise<Me> {
+  return api.post(`/api/invitations/${encodeURIComponent(token)}/accept`, { name, password }, meSchema);
+}
+
+export function useAcceptInvitation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: acceptInvitation,
+    onSuccess: (me, { token }) => {
+      storeSignedInUser(queryClient, me);
+      queryClient.removeQueries({ queryKey: authKeys.invitation(token) });
+    },
+  });
+}

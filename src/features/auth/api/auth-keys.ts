@@ -1,0 +1,6 @@
+/** Query keys of the auth feature; `authKeys.all` reaches every one of them. */
+export const authKeys = {
+  all: ['auth'] as const,
+  me: () => [...authKeys.all, 'me'] as const,
+  invitation: (token: string) => [...authKeys.all, 'invitation', token] as const,
+};

@@ -1,0 +1,50 @@
+import { useState } from 'react';
+import type { Member } from '../../../../shared/contracts/members';
+import { Button } from '../../../components/ui/button';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
+import { isApiError } from '../../../lib/api-error';
+import { useUpdateMember } from '../api/update-member';
+
+/** Deactivates or reactivates a member after a confirmation. Nobody deactivates themselves. */
+export function MemberActivationCell({ labId, member, isCurrentUser }: { labId: number; member: Member; isCurrentUser: boolean }) {
+  const updateMember = useUpdateMember();
+  const [confirming, setConfirming] = useState(false);
+  if (isCurrentUser) return <span className="text-sm text-muted">This is you</span>;
+
+  const deactivating = member.active;
+  const close = () => {
+    setConfirming(false);
+    updateMember.reset();
+  };
+
+  return (
+    <>
+      <Button variant={deactivating ? 'secondary' : 'primary'} size="small" onClick={() => setConfirming(true)}>
+        {deactivating ? 'Deactivate' : 'Reactivate'}
+        <span className="sr-only"> {member.name}</span>
+      </Button>
+      <ConfirmDialog
+        open={confirming}
+        title={deactivating ? `Deactivate ${member.name}?` : `Reactivate ${member.name}?`}
+        confirmLabel={deactivating ? 'Deactivate' : 'Reactivate'}
+        tone={deactivating ? 'danger' : 'primary'}
+        pending={updateMember.isPending}
+        onCancel={close}
+        onConfirm={() =>
+          updateMember.mutate({ labId, userId: member.userId, change: { active: !deactivating } }, { onSuccess: close })
+        }
+      >
+        <p>
+          {deactivating
+            ? `${member.name} will no longer be able to sign in to this lab. Their past work and audit records stay as they are.`
+            : `${member.name} will be able to sign in to this lab again with the roles shown.`}
+        </p>
+        {updateMember.isError ? (
+          <p role="alert" className="mt-3 font-semibold text-danger">
+            {isApiError(updateMember.error) ? updateMember.error.message : 'The change could not be saved.'}
+          </p>
+        ) : null}
+      </ConfirmDialog>
+    </>
+  );
+}

@@ -1,0 +1,42 @@
+import { ROLE_LABELS, ROLES, type Role } from '../../../../shared/contracts/roles';
+import type { Member } from '../../../../shared/contracts/members';
+import { Checkbox } from '../../../components/ui/checkbox';
+import { isApiError } from '../../../lib/api-error';
+import { useUpdateMember } from '../api/update-member';
+
+/** One checkbox per role; each change is saved at once. The last remaining role cannot be cleared. */
+export function MemberRolesCell({ labId, member }: { labId: number; member: Member }) {
+  const updateMember = useUpdateMember();
+
+  const toggle = (role: Role, checked: boolean) => {
+    const roles = checked ? ROLES.filter((each) => each === role || member.roles.includes(each)) : member.roles.filter((each) => each !== role);
+    updateMember.mutate({ labId, userId: member.userId, change: { roles } });
+  };
+
+  return (
+    <fieldset aria-busy={updateMember.isPending || undefined}>
+      <legend className="sr-only">Roles of {member.name}</legend>
+      <div className="flex flex-wrap gap-x-4 gap-y-1">
+        {ROLES.map((role) => {
+          const checked = member.roles.includes(role);
+          const onlyRole = checked && member.roles.length === 1;
+          return (
+            <Checkbox
+              key={role}
+              label={ROLE_LABELS[role]}
+              checked={checked}
+              disabled={updateMember.isPending || onlyRole}
+              title={onlyRole ? 'A member keeps at least one role.' : undefined}
+              onChange={(event) => toggle(role, event.target.checked)}
+            />
+          );
+        })}
+      </div>
+      {updateMember.isError ? (
+        <p role="alert" className="mt-1 text-sm font-semibold text-danger">
+          {isApiError(updateMember.error) ? updateMember.error.message : 'The roles could not be saved.'}
+        </p>
+      ) : null}
+    </fieldset>
+  );
+}

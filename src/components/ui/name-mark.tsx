@@ -7,13 +7,9 @@ export function NameMark({ className = '' }: { className?: string }) {
   return (
     <span role="img" aria-label="Dilutrace" className={`inline-flex items-baseline font-bold tracking-tight ${className}`}>
       <span aria-hidden="true">Di</span>
-      <svg aria-hidden="true" viewBox="0 0 50 74" className="mx-[0.02em] h-[0.74em] w-[0.5em] self-baseline" style={{ verticalAlign: 'baseline' }}>
-        <path
-          d="M20 2h10v41c9 3 15 10 15 19 0 7-3 10-7 10H12c-4 0-7-3-7-10 0-9 6-16 15-19z"
-          fill="currentColor"
-        />
-        <rect x="13" y="16" width="24" height="5" rx="2.5" fill="var(--color-accent)" />
-        <path d="M9 61h32" stroke="var(--color-paper)" strokeWidth="3" strokeLinecap="round" opacity="0.55" />
+      <svg aria-hidden="true" viewBox="0 0 56 76" className="mx-[0.01em] h-[0.76em] w-[0.56em]">
+        <path d="M22 0h12v42c12 3 19 11 19 20 0 9-4 14-11 14H14C7 76 3 71 3 62c0-9 7-17 19-20z" fill="currentColor" />
+        <rect x="15" y="14" width="26" height="6" rx="3" fill="var(--color-accent)" />
       </svg>
       <span aria-hidden="true">utrace</span>
     </span>

@@ -26,7 +26,7 @@ export function LabSwitcher({ me }: { me: Me }) {
             onError: (error) => setProblem(isApiError(error) ? error.message : 'The lab could not be changed.'),
           });
         }}
-        className="max-w-64 rounded-md border border-paper/40 bg-ink px-2 py-1 text-paper"
+        className="max-w-[22rem] rounded-md border border-paper/40 bg-ink px-2 py-1 text-paper"
       >
         {me.activeLabId === null ? <option value="">Choose a lab</option> : null}
         {me.labs.map((lab) => (

@@ -4,6 +4,9 @@ import { Checkbox } from '../../../components/ui/checkbox';
 import { isApiError } from '../../../lib/api-error';
 import { useUpdateMember } from '../api/update-member';
 
+/** Short names that fit a table cell; the full name is the checkbox's tooltip. */
+const SHORT_ROLE_LABELS: Record<Role, string> = { admin: 'Admin', qa: 'QA', analyst: 'Analyst', auditor: 'Auditor' };
+
 /** One checkbox per role; each change is saved at once. The last remaining role cannot be cleared. */
 export function MemberRolesCell({ labId, member }: { labId: number; member: Member }) {
   const updateMember = useUpdateMember();
@@ -16,17 +19,17 @@ export function MemberRolesCell({ labId, member }: { labId: number; member: Memb
   return (
     <fieldset aria-busy={updateMember.isPending || undefined}>
       <legend className="sr-only">Roles of {member.name}</legend>
-      <div className="flex flex-wrap gap-x-4 gap-y-1">
+      <div className="flex flex-wrap gap-x-4 gap-y-1 whitespace-nowrap">
         {ROLES.map((role) => {
           const checked = member.roles.includes(role);
           const onlyRole = checked && member.roles.length === 1;
           return (
             <Checkbox
               key={role}
-              label={ROLE_LABELS[role]}
+              label={SHORT_ROLE_LABELS[role]}
               checked={checked}
               disabled={updateMember.isPending || onlyRole}
-              title={onlyRole ? 'A member keeps at least one role.' : undefined}
+              title={onlyRole ? `${ROLE_LABELS[role]} — a member keeps at least one role.` : ROLE_LABELS[role]}
               onChange={(event) => toggle(role, event.target.checked)}
             />
           );

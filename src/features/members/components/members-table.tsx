@@ -34,7 +34,11 @@ export function MembersTable({ labId, labName, members, currentUserId }: Members
         }),
         column.accessor('joinedAt', {
           header: 'Joined',
-          cell: (info) => <time dateTime={info.getValue()}>{formatDate(info.getValue())}</time>,
+          cell: (info) => (
+            <time dateTime={info.getValue()} className="whitespace-nowrap">
+              {formatDate(info.getValue())}
+            </time>
+          ),
         }),
         column.display({
           id: 'activation',

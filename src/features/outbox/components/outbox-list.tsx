@@ -7,7 +7,7 @@ import { formatDateTime } from '../../../lib/format-date';
 export function OutboxList({ messages, openMessageId }: { messages: OutboxMessage[]; openMessageId: number | null }) {
   if (messages.length === 0) return <p className="text-muted">No mail has been captured yet.</p>;
   return (
-    <ul aria-label="Captured mail" className="divide-y divide-line overflow-hidden rounded-lg border border-line bg-surface">
+    <ul aria-label="Captured mail" className="self-start divide-y divide-line overflow-hidden rounded-lg border border-line bg-surface">
       {messages.map((message) => {
         const open = message.id === openMessageId;
         return (

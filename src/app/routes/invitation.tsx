@@ -11,7 +11,8 @@ import { isApiError } from '../../lib/api-error';
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
-    await queryClient.ensureQueryData(invitationPreviewQueryOptions(params.token ?? ''));
+    // Always ask afresh: an invitation used or withdrawn a moment ago must not show its form again.
+    await queryClient.fetchQuery({ ...invitationPreviewQueryOptions(params.token ?? ''), staleTime: 0 });
     return null;
   };
 

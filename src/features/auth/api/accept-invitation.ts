@@ -2,7 +2,6 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { meSchema, type Me } from '../../../../shared/contracts/auth';
 import type { InvitationAccept } from '../../../../shared/contracts/members';
 import { api } from '../../../lib/api-client';
-import { authKeys } from './auth-keys';
 import { storeSignedInUser } from './get-me';
 
 type AcceptInvitationInput = { token: string } & InvitationAccept;
@@ -16,9 +15,7 @@ export function useAcceptInvitation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: acceptInvitation,
-    onSuccess: (me, { token }) => {
-      storeSignedInUser(queryClient, me);
-      queryClient.removeQueries({ queryKey: authKeys.invitation(token) });
-    },
+    // The used invitation's preview stays cached until the page unmounts; its loader always asks afresh.
+    onSuccess: (me) => storeSignedInUser(queryClient, me),
   });
 }

@@ -1,0 +1,210 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BrowserContext, Page } from 'playwright-core';
+import { launchChromium, screenshot, watchForPageProblems } from './support/chromium';
+import { startDilutraceServer, type RunningServer } from './support/dilutrace-server';
+
+/** Demo password for this run only; the seed gives it to every demo user. */
+const DEMO_PASSWORD = 'wellmere-e2e-password-1';
+const DEMO_DOMAIN = 'wellmere-water.example';
+const LAB_NAME = 'Wellmere Regional Water Laboratory';
+
+let server: RunningServer;
+let browser: Awaited<ReturnType<typeof launchChromium>>;
+let context: BrowserContext;
+
+beforeAll(async () => {
+  server = await startDilutraceServer(DEMO_PASSWORD);
+  browser = await launchChromium();
+  context = browser.context;
+}, 60_000);
+
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+async function openPage(): Promise<{ page: Page; problems: string[] }> {
+  const page = await context.newPage();
+  const problems = watchForPageProblems(page);
+  return { page, problems };
+}
+
+async function signIn(page: Page, email: string, password: string) {
+  await page.goto(`${server.baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+async function signOut(page: Page) {
+  await page.getByRole('button', { name: 'Sign out' }).click();
+  await page.getByRole('heading', { level: 1, name: 'Sign in' }).waitFor();
+}
+
+const mainNavigation = (page: Page) => page.getByRole('navigation', { name: 'Main' });
+
+describe('signing in', () => {
+  const roles = [
+    { local: 'admin', card: 'Lab administrator', admin: true },
+    { local: 'qa', card: 'Quality assurance', admin: false },
+    { local: 'analyst', card: 'Analyst', admin: false },
+    { local: 'analyst2', card: 'Analyst', admin: false },
+    { local: 'auditor', card: 'Auditor', admin: false },
+  ];
+
+  for (const role of roles) {
+    it(`shows ${role.local}@ the navigation and dashboard of their roles, then signs out`, async () => {
+      const { page, problems } = await openPage();
+      await signIn(page, `${role.local}@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+      await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+      expect(new URL(page.url()).pathname).toBe('/');
+
+      const navigation = mainNavigation(page);
+      await expect(navigation.getByRole('link', { name: 'Dashboard' }).count()).resolves.toBe(1);
+      await expect(navigation.getByRole('link', { name: 'Members' }).count()).resolves.toBe(role.admin ? 1 : 0);
+      await expect(navigation.getByRole('link', { name: 'Outbox' }).count()).resolves.toBe(role.admin ? 1 : 0);
+      await expect(page.getByRole('heading', { level: 2, name: role.card }).count()).resolves.toBe(1);
+      await expect(page.getByText(LAB_NAME).first().isVisible()).resolves.toBe(true);
+      await screenshot(page, `dashboard-${role.local}`);
+
+      await signOut(page);
+      expect(new URL(page.url()).pathname).toBe('/sign-in');
+      expect(problems).toEqual([]);
+      await page.close();
+    });
+  }
+
+  it('shows a wrong password as the server words it, in place, and stays on sign-in', async () => {
+    const { page, problems } = await openPage();
+    await signIn(page, `qa@${DEMO_DOMAIN}`, 'not-the-password');
+    const alert = page.getByRole('alert');
+    await alert.waitFor();
+    expect((await alert.innerText()).trim().length).toBeGreaterThan(0);
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+    await screenshot(page, 'sign-in-wrong-password');
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+
+  it('checks the form before asking the server', async () => {
+    const { page } = await openPage();
+    await page.goto(`${server.baseUrl}/sign-in`);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    const email = page.getByLabel('E-mail');
+    await expect(email.getAttribute('aria-invalid')).resolves.toBe('true');
+    const describedBy = (await email.getAttribute('aria-describedby')) ?? '';
+    await expect(page.locator(`[id="${describedBy}"]`).innerText()).resolves.toContain('e-mail address');
+    await page.close();
+  });
+
+  it('sends a signed-out visitor to sign-in and back to the page they asked for', async () => {
+    const { page, problems } = await openPage();
+    await page.goto(`${server.baseUrl}/members`);
+    await page.getByRole('heading', { level: 1, name: 'Sign in' }).waitFor();
+    expect(new URL(page.url()).searchParams.get('redirectTo')).toBe('/members');
+    await page.getByLabel('E-mail').fill(`admin@${DEMO_DOMAIN}`);
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Members' }).waitFor();
+    expect(new URL(page.url()).pathname).toBe('/members');
+    await signOut(page);
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+
+  it('tells an analyst the members page is not for them', async () => {
+    const { page } = await openPage();
+    await signIn(page, `analyst@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await page.goto(`${server.baseUrl}/members`);
+    await page.getByText('Not permitted').waitFor();
+    await expect(page.getByRole('table').count()).resolves.toBe(0);
+    await screenshot(page, 'members-not-permitted');
+    await signOut(page);
+    await page.close();
+  });
+});
+
+describe('inviting a new analyst', () => {
+  it('goes from the invite form through the outbox to a signed-in analyst', async () => {
+    const { page, problems } = await openPage();
+    const newEmail = `jory.trevail@${DEMO_DOMAIN}`;
+    const newName = 'Jory Trevail';
+    const newPassword = 'a burette of good coffee';
+
+    await signIn(page, `admin@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await mainNavigation(page).getByRole('link', { name: 'Members' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Members' }).waitFor();
+    await expect(page.getByRole('row').count()).resolves.toBe(6); // header + five demo members
+
+    const form = page.getByRole('form', { name: 'Invite a member' });
+    await form.getByLabel('Name').fill(newName);
+    await form.getByLabel('E-mail').fill(newEmail);
+    await form.getByLabel('Role').selectOption('analyst');
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    await page.getByText(`Invitation sent to ${newEmail}`).waitFor();
+    await page.getByText(newEmail, { exact: true }).waitFor(); // listed under pending invitations
+    await screenshot(page, 'members-after-invitation');
+
+    await mainNavigation(page).getByRole('link', { name: 'Outbox' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Outbox' }).waitFor();
+    const newest = page.getByRole('list', { name: 'Captured mail' }).getByRole('link').first();
+    await expect(newest.innerText()).resolves.toContain(newEmail);
+    await newest.click();
+    const invitationLink = page.getByRole('article').getByRole('link', { name: /\/invitation\// });
+    await invitationLink.waitFor();
+    await screenshot(page, 'outbox-invitation');
+
+    // The invitee's own browser session: sign the admin out first, then follow the mailed link.
+    const href = (await invitationLink.getAttribute('href')) ?? '';
+    expect(new URL(href).pathname).toMatch(/^\/invitation\/[A-Za-z0-9_-]{20,100}$/);
+    await signOut(page);
+    await page.goto(href);
+    await page.getByRole('heading', { level: 1, name: `Join ${LAB_NAME}` }).waitFor();
+    await expect(page.getByText(newEmail).count()).resolves.toBe(1);
+    await screenshot(page, 'invitation-accept');
+
+    await page.getByLabel('Your name').fill(newName);
+    await page.getByLabel('Choose a password').fill(newPassword);
+    await page.getByLabel('Password again').fill(newPassword);
+    await page.getByRole('button', { name: 'Join the lab' }).click();
+
+    await page.getByRole('heading', { level: 1, name: `Welcome, ${newName}` }).waitFor();
+    expect(new URL(page.url()).pathname).toBe('/');
+    await expect(page.getByRole('heading', { level: 2, name: 'Analyst' }).count()).resolves.toBe(1);
+    await expect(mainNavigation(page).getByRole('link', { name: 'Members' }).count()).resolves.toBe(0);
+    await screenshot(page, 'dashboard-new-analyst');
+
+    // The new password works for a later sign-in, too.
+    await signOut(page);
+    await signIn(page, newEmail, newPassword);
+    await page.getByRole('heading', { level: 1, name: `Welcome, ${newName}` }).waitFor();
+    await signOut(page);
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+});
+
+describe('pages without a session', () => {
+  it('renders the password reset request, the reset page and the 404 page', async () => {
+    const { page, problems } = await openPage();
+    await page.goto(`${server.baseUrl}/sign-in`);
+    await page.getByRole('link', { name: 'Forgot password?' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Reset your password' }).waitFor();
+    await page.getByLabel('E-mail').fill(`qa@${DEMO_DOMAIN}`);
+    await page.getByRole('button', { name: 'Send reset link' }).click();
+    await page.getByRole('status').filter({ hasText: /\S/ }).first().waitFor();
+    await screenshot(page, 'forgot-password-sent');
+
+    await page.goto(`${server.baseUrl}/reset-password/not-a-real-token-but-long-enough`);
+    await page.getByRole('heading', { level: 1, name: 'Choose a new password' }).waitFor();
+    await screenshot(page, 'reset-password');
+
+    await page.goto(`${server.baseUrl}/no/such/page`);
+    await page.getByRole('heading', { level: 1, name: 'Page not found' }).waitFor();
+    await screenshot(page, 'not-found');
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+});

@@ -19,6 +19,13 @@ import type { Mailer } from './mail/mailer';
 import { outboxRouter } from './mail/outbox-router';
 import { invitationsRouter, labMembersRouter } from './members/members-router';
 import { membersService } from './members/members-service';
+import { certificatesService } from './library/certificates-service';
+import { importService } from './library/import-service';
+import { libraryRepository } from './library/library-repository';
+import { libraryRouter } from './library/library-router';
+import { libraryService } from './library/library-service';
+import { policyRouter } from './policy/policy-router';
+import { policyService } from './policy/policy-service';
 
 export interface AppConfig {
   sessionSecret: string;
@@ -26,6 +33,8 @@ export interface AppConfig {
   publicUrl: string;
   production: boolean;
   trustProxy: boolean;
+  /** Folder for uploaded certificates, outside the web root. */
+  certificateDir: string;
   /** Built client to serve (production); omitted in development and API tests. */
   clientDir?: string;
   log?: (message: string, error?: unknown) => void;
@@ -49,9 +58,15 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   const users = usersRepository(db);
   const labs = labsRepository(db);
   const audit = auditRepository(db, now);
-  const sessions = new DatabaseSessionStore(db, () => now().getTime());
+  // express-session dates its cookies by the real clock, so the store compares with the same one.
+  const sessions = new DatabaseSessionStore(db, () => Date.now());
   const auth = authService({ db, users, audit, mailer, sessions, now, publicUrl });
   const members = membersService({ db, users, labs, audit, mailer, sessions, now, publicUrl });
+  const library = libraryRepository(db);
+  const items = libraryService({ db, library, audit, now });
+  const certificates = certificatesService({ library, audit, directory: config.certificateDir, now });
+  const imports = importService({ db, library, items });
+  const policy = policyService({ db, audit, now });
   const passport = createPassport(auth);
   const authorize = createAuthorize(labs);
 
@@ -112,6 +127,8 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   api.use('/invitations', invitationsRouter({ members, auth }));
   api.use('/labs/:labId', labMembersRouter({ members, authorize }));
   api.use('/labs/:labId', outboxRouter({ db, authorize }));
+  api.use('/labs/:labId', libraryRouter({ items, certificates, imports, authorize }));
+  api.use('/labs/:labId', policyRouter({ policy, authorize }));
   api.use(apiNotFound);
   app.use('/api', api);
 

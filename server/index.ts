@@ -1,4 +1,5 @@
 import type { AddressInfo } from 'node:net';
+import { dirname, join } from 'node:path';
 import { createApp } from './app';
 import { loadEnv } from './config/env';
 import { openDatabase } from './db/connection';
@@ -30,6 +31,7 @@ const { app, sessions } = createApp({
     publicUrl,
     production,
     trustProxy: env.DILUTRACE_TRUST_PROXY === '1',
+    certificateDir: join(dirname(env.DILUTRACE_DB), 'certificates'),
     clientDir: production ? 'dist/client' : undefined,
   },
 });

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import * as foundation from '../../migrations/20261202010000_foundation';
+import * as library from '../../migrations/20261202020000_library';
 
 /**
  * Migrations imported statically, so they run the same under tsx and Vitest
@@ -7,6 +8,7 @@ import * as foundation from '../../migrations/20261202010000_foundation';
  */
 const migrations: Record<string, Knex.Migration> = {
   '20261202010000_foundation': foundation,
+  '20261202020000_library': library,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

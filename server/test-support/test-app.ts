@@ -41,7 +41,7 @@ export async function buildTestApp(options: { file?: string; seed?: boolean; clo
     db,
     mailer,
     clock,
-    config: { sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined },
+    config: { certificateDir: join(file, '..', 'certificates'), sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined },
   });
   const close = async () => {
     mailer.close();

@@ -1,0 +1,81 @@
+import type { Distribution } from './distributions';
+import type { Balance } from './equipment-schema';
+import { minimumWeightG } from './minimum-weight';
+import type { NodeReference } from './model-builder';
+import type { SourceCategory } from './model-types';
+import { PlanError } from './plan-error';
+import { itemLabel, type StepContext } from './step-context';
+
+/**
+ * Net mass weighed by difference on a balance, in g:
+ * m = (m₀ + Σ e_gross − Σ e_tare)·(1 + δ_sensitivity), where each reading carries repeatability
+ * (normal, s), readability (rectangular, d/2) and linearity (rectangular, a), drawn afresh per reading,
+ * and δ_sensitivity (normal, U_rel/k) is one source for the balance, shared by all its weighings.
+ * Warns when m is below the USP <41> minimum weight; @throws PlanError when the load exceeds the capacity.
+ */
+export function weighByDifference(
+  context: StepContext,
+  balance: Balance,
+  netMassG: number,
+  containerMassG: number,
+  massField: string,
+): NodeReference {
+  const { builder, stepIndex, path } = context;
+  const name = itemLabel('Balance', balance.itemId);
+  if (containerMassG + netMassG > balance.capacityG) {
+    throw new PlanError([...path, massField], `${name} holds at most ${balance.capacityG} g; container ${containerMassG} g plus ${netMassG} g is more.`);
+  }
+  const minimum = minimumWeightG(balance.repeatabilityG, balance.readabilityG);
+  if (netMassG < minimum) {
+    builder.warn(
+      `Step ${stepIndex + 1}: ${netMassG} g is below the minimum weight of ${name} (${formatMass(minimum)} g by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`,
+    );
+  }
+  const readingErrors = (reading: 'gross' | 'tare') => {
+    const parts: [string, SourceCategory, Distribution, number][] = [
+      ['repeatability', 'balanceRepeatability', { shape: 'normal', standardUncertainty: balance.repeatabilityG }, balance.repeatabilityG],
+      ['readability', 'balanceReadability', { shape: 'rectangular', halfWidth: balance.readabilityG / 2 }, balance.readabilityG],
+      ['linearity', 'balanceLinearity', { shape: 'rectangular', halfWidth: balance.linearityG }, balance.linearityG],
+    ];
+    return parts
+      .filter(([, , , size]) => size > 0)
+      .map(([component, category, distribution]) =>
+        builder.source({
+          id: `step:${stepIndex}:${reading}:${component}`,
+          label: `Step ${stepIndex + 1}: ${name} ${component} (${reading} reading)`,
+          category,
+          estimate: 0,
+          unit: 'g',
+          distribution,
+          sharing: 'use',
+          itemId: balance.itemId,
+          stepIndex,
+          path: [...path, 'balance'],
+        }),
+      );
+  };
+  let net = builder.constant(netMassG);
+  for (const error of readingErrors('gross')) net = builder.add(net, error);
+  for (const error of readingErrors('tare')) net = builder.subtract(net, error);
+  const sensitivity = balance.sensitivity;
+  if (sensitivity !== undefined && sensitivity.relativeExpandedUncertainty > 0) {
+    const deviation = builder.source({
+      id: `item:${balance.itemId}:sensitivity`,
+      label: `${name}: sensitivity (calibration)`,
+      category: 'balanceSensitivity',
+      estimate: 0,
+      unit: '1',
+      distribution: { shape: 'normal', expandedUncertainty: sensitivity.relativeExpandedUncertainty, coverageFactor: sensitivity.coverageFactor },
+      sharing: 'item',
+      itemId: balance.itemId,
+      stepIndex,
+      path: [...path, 'balance', 'sensitivity'],
+    });
+    net = builder.multiply(net, builder.add(builder.constant(1), deviation));
+  }
+  return net;
+}
+
+function formatMass(massG: number): string {
+  return massG.toPrecision(3);
+}

@@ -1,0 +1,117 @@
+import { z } from 'zod';
+import { distributionSchema } from './distribution-schema';
+
+const positive = (what: string) => z.number().finite().positive(`${what} must be greater than zero.`);
+const nonNegative = (what: string) => z.number().finite().nonnegative(`${what} must be zero or positive.`);
+
+/** Fields every equipment item carries: a stable id for the physical item, and optional library references. */
+const itemFields = {
+  /** Stable id of the physical item (asset tag); systematic sources are keyed by it. */
+  itemId: z.string().min(1, 'Every item needs an itemId (its asset tag).'),
+  description: z.string().optional(),
+  /** Server only: the tolerance-library entry the inline data were resolved from. */
+  libraryId: z.string().optional(),
+  revisionId: z.string().optional(),
+};
+
+export const balanceSchema = z
+  .object({
+    kind: z.literal('balance'),
+    ...itemFields,
+    capacityG: positive('The balance capacity'),
+    /** Scale interval d. */
+    readabilityG: nonNegative('The readability d'),
+    /** Standard deviation s of repeated readings. */
+    repeatabilityG: nonNegative('The repeatability s'),
+    /** Linearity ± a, per reading, rectangular. */
+    linearityG: nonNegative('The linearity'),
+    /** Relative expanded uncertainty of the sensitivity (calibration) with its k, shared by every weighing on this balance. */
+    sensitivity: z
+      .object({ relativeExpandedUncertainty: nonNegative('The relative sensitivity uncertainty'), coverageFactor: positive('The coverage factor k') })
+      .strict()
+      .optional(),
+  })
+  .strict();
+
+const glasswareFields = {
+  ...itemFields,
+  nominalMl: positive('The nominal volume'),
+  toleranceClass: z.enum(['A', 'B', 'own']),
+  /** Maximum permissible error ± (ISO 1042 for flasks, ISO 648 for pipettes), or the item's own calibration. */
+  toleranceMl: nonNegative('The tolerance'),
+  /** Defaults to the plan's settings.defaultGlasswareDistribution. */
+  toleranceDistribution: z.enum(['triangular', 'rectangular']).optional(),
+  /** Standard deviation of filling to the mark, per use. */
+  fillRepeatabilityMl: nonNegative('The fill repeatability').default(0),
+  calibrationTemperatureC: z.number().default(20),
+};
+
+export const volumetricFlaskSchema = z.object({ kind: z.literal('volumetricFlask'), ...glasswareFields }).strict();
+export const glassPipetteSchema = z.object({ kind: z.literal('glassPipette'), ...glasswareFields }).strict();
+
+const errorAmountSchema = z.union([
+  z.object({ absoluteUl: nonNegative('The error') }).strict(),
+  z.object({ percent: nonNegative('The error') }).strict(),
+]);
+
+export const pistonPipetteSchema = z
+  .object({
+    kind: z.literal('pistonPipette'),
+    ...itemFields,
+    /** Selectable volumes; minimumUl = maximumUl for a fixed-volume pipette. */
+    volumeRangeUl: z.object({ minimumUl: positive('The smallest volume'), maximumUl: positive('The largest volume') }).strict(),
+    /**
+     * ISO 8655-2 maximum permissible errors at given volumes: systematic (± about the set volume)
+     * and random (a standard deviation), each in µL or % of that volume. Between listed volumes the
+     * errors in µL are interpolated linearly; beyond them the nearest entry's µL value applies.
+     */
+    errorSpecifications: z
+      .array(z.object({ volumeUl: positive('The volume'), systematicError: errorAmountSchema, randomError: errorAmountSchema }).strict())
+      .min(1, 'Give the maximum permissible errors for at least one volume.'),
+    systematicErrorDistribution: z.enum(['rectangular', 'triangular']).default('rectangular'),
+    calibrationTemperatureC: z.number().default(20),
+  })
+  .strict();
+
+export const solidMaterialSchema = z
+  .object({
+    kind: z.literal('solidMaterial'),
+    ...itemFields,
+    name: z.string().min(1),
+    formula: z.string().min(1),
+    purity: z
+      .object({
+        massFraction: z.number().gt(0, 'Purity must be greater than 0.').lte(1, 'Purity is a mass fraction and cannot exceed 1 (100 %).'),
+        uncertainty: distributionSchema,
+      })
+      .strict(),
+    /** Analyte units per formula unit; inferred from the formulas when left out. */
+    analyteCount: z.number().int().positive().optional(),
+    /** For the air-buoyancy correction. */
+    densityKgPerM3: positive('The density').optional(),
+  })
+  .strict();
+
+export const certifiedSolutionSchema = z
+  .object({
+    kind: z.literal('certifiedSolution'),
+    ...itemFields,
+    name: z.string().min(1),
+    certifiedValue: z.number().finite().positive('The certified value must be greater than zero.'),
+    /** A mass concentration (g/L, mg/L, µg/L, ng/L) or mass fraction (g/kg, mg/kg, µg/kg) unit. */
+    certifiedUnit: z.enum(['g/L', 'mg/L', 'µg/L', 'ng/L', 'g/kg', 'mg/kg', 'µg/kg'], {
+      error: 'A certified value is a mass concentration (g/L, mg/L, µg/L, ng/L) or a mass fraction (g/kg, mg/kg, µg/kg).',
+    }),
+    /** Certificate uncertainty, in certifiedUnit (usually normal with U and k). */
+    uncertainty: distributionSchema,
+    densityGPerMl: positive('The density').optional(),
+    densityStandardUncertaintyGPerMl: nonNegative('The density uncertainty').optional(),
+  })
+  .strict();
+
+export type Balance = z.infer<typeof balanceSchema>;
+export type VolumetricFlask = z.infer<typeof volumetricFlaskSchema>;
+export type GlassPipette = z.infer<typeof glassPipetteSchema>;
+export type PistonPipette = z.infer<typeof pistonPipetteSchema>;
+export type SolidMaterial = z.infer<typeof solidMaterialSchema>;
+export type CertifiedSolution = z.infer<typeof certifiedSolutionSchema>;

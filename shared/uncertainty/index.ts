@@ -1,0 +1,34 @@
+// Public entry point of the uncertainty engine, shared by the server and the client (and its Web Worker).
+export { ENGINE_VERSION } from './engine-version';
+export { PlanError, type PlanPathSegment } from './plan-error';
+export { planSchema, stepSchema, settingsSchema, coverageSchema, type Plan, type PlanInput, type PlanStep } from './plan-schema';
+export { distributionSchema, extraSourceSchema } from './distribution-schema';
+export {
+  balanceSchema,
+  volumetricFlaskSchema,
+  glassPipetteSchema,
+  pistonPipetteSchema,
+  solidMaterialSchema,
+  certifiedSolutionSchema,
+  type Balance,
+  type VolumetricFlask,
+  type GlassPipette,
+  type PistonPipette,
+  type SolidMaterial,
+  type CertifiedSolution,
+} from './equipment-schema';
+export { parsePlan } from './parse-plan';
+export { compilePlan, type CompileOptions } from './plan-compiler';
+export { evaluatePlan } from './evaluate-plan';
+export { propagate, type BudgetResult, type BudgetRow, type BudgetGroup } from './gum-budget';
+export type { CompiledModel, SourceDefinition, SourceCategory, TapeNode, Checkpoint } from './model-types';
+export { standardUncertainty, degreesOfFreedom, type Distribution } from './distributions';
+export { DualNumber } from './dual-number';
+export { coverageFactor, studentTQuantile, studentTCumulative, normalCumulative, twoSigmaProbability } from './coverage-factor';
+export type { CoverageSetting } from './coverage-setting';
+export { roundToUncertainty, formatResultStatement, type RoundedResult } from './result-rounding';
+export { parseFormula, molarMass, type Composition, type MolarMass } from './chemical-formula';
+export { standardAtomicWeights, atomicWeightSource, parseAtomicWeightTable, type AtomicWeight, type AtomicWeightTable } from './atomic-weights';
+export { waterDensityKgPerM3 } from './water-density';
+export { minimumWeightG } from './minimum-weight';
+export { concentrationUnits, concentrationUnitNames, unitOf, type ConcentrationUnit, type UnitDimension } from './units';

@@ -1,0 +1,265 @@
+import { standardAtomicWeights, type AtomicWeightTable } from './atomic-weights';
+import { weighByDifference } from './balance-weighing';
+import { parseFormula, type Composition } from './chemical-formula';
+import { analyteCountIn, molarMassNode } from './composition-nodes';
+import { addAbsoluteExtraSources, applyRelativeExtraSources } from './extra-sources';
+import { ModelBuilder, type NodeReference } from './model-builder';
+import type { CompiledModel } from './model-types';
+import { parsePlan } from './parse-plan';
+import { PlanError } from './plan-error';
+import type { Plan, PlanInput, PlanStep } from './plan-schema';
+import type { StepContext } from './step-context';
+import { unitOf } from './units';
+import { glasswareVolume, pistonVolume } from './volume-delivery';
+import { waterDensityKgPerM3 } from './water-density';
+
+/** Where the preparation stands between steps. */
+type ChainState =
+  | { kind: 'nothing' }
+  /** A quantity of analyte in hand (mg), e.g. a weighed solid or an aliquot not yet diluted. */
+  | { kind: 'portion'; amountMg: NodeReference; fromSolid: boolean }
+  /**
+   * A solution: mass concentration (mg/L), mass fraction (mg/kg) or molality (mol/kg);
+   * `densityGPerMl` converts between the first two; `containedMl` is the flask's volume, when known.
+   */
+  | { kind: 'solution'; basis: 'massConcentration' | 'massFraction' | 'molality'; value: NodeReference; densityGPerMl: NodeReference; containedMl?: number };
+
+const basisUnit = { massConcentration: 'mg/L', massFraction: 'mg/kg', molality: 'mol/kg' } as const;
+
+export interface CompileOptions {
+  atomicWeights?: AtomicWeightTable;
+}
+
+/**
+ * Turns a plan into its measurement model (sources + evaluation tape). Validates the plan first.
+ * Chain: weighSolid → amount (mg) = m·1000·P·f·(buoyancy), f = n·M(analyte)/M(compound);
+ * makeUpToVolume → c = amount·1000/V (mg/L); pipetteAliquot → amount = c·V/1000;
+ * weighAliquot → amount = w·m/1000; makeUpToMass → w = amount·1000/m (mg/kg);
+ * dissolveInSolvent → b = amount/(M(analyte)·m_solvent) (mol/kg); w = c/ρ, c = w·ρ.
+ * @throws PlanError for an invalid plan or an impossible sequence of steps
+ */
+export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {}): CompiledModel {
+  const plan = parsePlan(input);
+  const atomicWeights = options.atomicWeights ?? standardAtomicWeights;
+  const builder = new ModelBuilder();
+  const analyte = parseFormula(plan.analyte.formula, ['analyte', 'formula'], atomicWeights);
+  const analyteSymbol = plan.analyte.formula;
+  let analyteMolarMass: NodeReference | undefined;
+  const analyteMolarMassNode = (stepIndex: number) => {
+    analyteMolarMass ??= molarMassNode(builder, analyte, atomicWeights, stepIndex, ['analyte', 'formula']);
+    return analyteMolarMass;
+  };
+  const solutionDensity = solutionDensityNode(builder, plan);
+
+  let state = { kind: 'nothing' } as ChainState;
+  plan.steps.forEach((step, stepIndex) => {
+    const context: StepContext = { builder, settings: plan.settings, atomicWeights, stepIndex, path: ['steps', stepIndex] };
+    state = applyStep(context, step, state, { analyte, analyteMolarMassNode, solutionDensity });
+    if (state.kind === 'solution') {
+      builder.checkpoint({ stepIndex, label: `after step ${stepIndex + 1}`, node: state.value, unit: basisUnit[state.basis] });
+    }
+  });
+
+  const finalState = state;
+  if (finalState.kind !== 'solution') {
+    throw new PlanError(['steps', plan.steps.length - 1], 'The plan ends without a solution; finish with a make-up step (to volume, to mass, or in solvent).');
+  }
+  const output = unitOf(plan.settings.outputUnit, ['settings', 'outputUnit']);
+  const outputNode = convertToUnit(builder, finalState, output, () => analyteMolarMassNode(plan.steps.length - 1));
+  const symbol = { massConcentration: 'c', amountConcentration: 'c', massFraction: 'w', molality: 'b' }[output.dimension];
+  return builder.build(outputNode, output.name, `${symbol}(${analyteSymbol})`);
+}
+
+interface SharedNodes {
+  analyte: Composition;
+  analyteMolarMassNode: (stepIndex: number) => NodeReference;
+  solutionDensity: NodeReference;
+}
+
+function applyStep(context: StepContext, step: PlanStep, state: ChainState, shared: SharedNodes): ChainState {
+  const { builder, path } = context;
+  const requireState = (kind: ChainState['kind'], what: string) => {
+    if (state.kind !== kind) throw new PlanError([...path, 'kind'], `Step ${context.stepIndex + 1} (${step.kind}) ${what}.`);
+  };
+  switch (step.kind) {
+    case 'weighSolid': {
+      requireState('nothing', 'must be the first step: a plan starts from one weighed solid or one certified solution');
+      let mass = weighByDifference(context, step.balance, step.netMassG, step.containerMassG, 'netMassG');
+      mass = addAbsoluteExtraSources(context, mass, step.extraSources, 'g');
+      if (step.airBuoyancy !== undefined) {
+        const density = step.material.densityKgPerM3;
+        if (density === undefined) throw new PlanError([...path, 'material', 'densityKgPerM3'], 'The air-buoyancy correction needs the density of the material.');
+        const { airDensityKgPerM3: air, weightDensityKgPerM3: weights } = step.airBuoyancy;
+        mass = builder.scale(mass, (1 - air / weights) / (1 - air / density));
+      }
+      const purity = builder.source({
+        id: `item:${step.material.itemId}:purity`,
+        label: `${step.material.name} (${step.material.itemId}): purity`,
+        category: 'purity',
+        estimate: step.material.purity.massFraction,
+        unit: 'g/g',
+        distribution: step.material.purity.uncertainty,
+        sharing: 'item',
+        itemId: step.material.itemId,
+        stepIndex: context.stepIndex,
+        path: [...path, 'material', 'purity', 'uncertainty'],
+      });
+      const formulaPath = [...path, 'material', 'formula'];
+      const compound = parseFormula(step.material.formula, formulaPath, context.atomicWeights);
+      const count = analyteCountIn(compound, shared.analyte, step.material.analyteCount, [...path, 'material']);
+      const factor = builder.divide(
+        builder.scale(shared.analyteMolarMassNode(context.stepIndex), count),
+        molarMassNode(builder, compound, context.atomicWeights, context.stepIndex, formulaPath),
+      );
+      const amountMg = builder.multiply(builder.multiply(builder.scale(mass, 1000), purity), factor);
+      return { kind: 'portion', amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources), fromSolid: true };
+    }
+    case 'startFromCertifiedSolution': {
+      requireState('nothing', 'must be the first step: a plan starts from one weighed solid or one certified solution');
+      const material = step.material;
+      const unit = unitOf(material.certifiedUnit, [...path, 'material', 'certifiedUnit']);
+      let value = builder.add(
+        builder.constant(material.certifiedValue),
+        builder.source({
+          id: `item:${material.itemId}:certified-value`,
+          label: `${material.name} (${material.itemId}): certified value`,
+          category: 'certifiedValue',
+          estimate: 0,
+          unit: unit.name,
+          distribution: material.uncertainty,
+          sharing: 'item',
+          itemId: material.itemId,
+          stepIndex: context.stepIndex,
+          path: [...path, 'material', 'uncertainty'],
+        }),
+      );
+      value = addAbsoluteExtraSources(context, value, step.extraSources, unit.name);
+      value = applyRelativeExtraSources(context, builder.scale(value, unit.factorToBase), step.extraSources);
+      const density =
+        material.densityGPerMl === undefined
+          ? shared.solutionDensity
+          : builder.add(
+              builder.constant(material.densityGPerMl),
+              builder.source({
+                id: `item:${material.itemId}:density`,
+                label: `${material.name} (${material.itemId}): density`,
+                category: 'density',
+                estimate: 0,
+                unit: 'g/mL',
+                distribution: { shape: 'normal', standardUncertainty: material.densityStandardUncertaintyGPerMl ?? 0 },
+                sharing: 'item',
+                itemId: material.itemId,
+                stepIndex: context.stepIndex,
+                path: [...path, 'material', 'densityStandardUncertaintyGPerMl'],
+              }),
+            );
+      return { kind: 'solution', basis: unit.dimension === 'massFraction' ? 'massFraction' : 'massConcentration', value, densityGPerMl: density };
+    }
+    case 'makeUpToVolume': {
+      requireState('portion', 'makes up a weighed solid or an aliquot to volume; put a weighing or an aliquot before it');
+      if (state.kind !== 'portion') throw new Error('unreachable');
+      const volume = addAbsoluteExtraSources(context, glasswareVolume(context, step.flask, 'flask'), step.extraSources, 'mL');
+      const concentration = builder.scale(builder.divide(state.amountMg, volume), 1000);
+      return {
+        kind: 'solution',
+        basis: 'massConcentration',
+        value: applyRelativeExtraSources(context, concentration, step.extraSources),
+        densityGPerMl: shared.solutionDensity,
+        containedMl: step.flask.nominalMl,
+      };
+    }
+    case 'pipetteAliquot': {
+      requireState('solution', 'takes an aliquot of a solution; put a make-up step or a certified solution before it');
+      if (state.kind !== 'solution') throw new Error('unreachable');
+      if (state.basis === 'molality') throw new PlanError([...path, 'kind'], 'An aliquot by volume of a molality solution cannot be converted to an amount; weigh it instead.');
+      if (state.containedMl !== undefined && step.volumeMl >= state.containedMl) {
+        throw new PlanError([...path, 'volumeMl'], `The aliquot (${step.volumeMl} mL) is not smaller than the solution it is taken from (${state.containedMl} mL).`);
+      }
+      const pipette = step.pipette;
+      if (pipette.kind === 'glassPipette' && Math.abs(step.volumeMl - pipette.nominalMl) > 1e-9 * pipette.nominalMl) {
+        throw new PlanError([...path, 'volumeMl'], `A one-mark pipette delivers its nominal volume (${pipette.nominalMl} mL), not ${step.volumeMl} mL.`);
+      }
+      let volume = pipette.kind === 'glassPipette' ? glasswareVolume(context, pipette, 'pipette') : pistonVolume(context, pipette, step.volumeMl);
+      volume = addAbsoluteExtraSources(context, volume, step.extraSources, 'mL');
+      const massConcentration = state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, state.densityGPerMl);
+      const amountMg = builder.scale(builder.multiply(massConcentration, volume), 1e-3);
+      return { kind: 'portion', amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources), fromSolid: false };
+    }
+    case 'weighAliquot': {
+      requireState('solution', 'weighs an aliquot of a solution; put a make-up step or a certified solution before it');
+      if (state.kind !== 'solution') throw new Error('unreachable');
+      if (state.basis === 'molality') throw new PlanError([...path, 'kind'], 'Diluting a molality solution is not supported; prepare the molality directly.');
+      const mass = addAbsoluteExtraSources(context, weighByDifference(context, step.balance, step.netMassG, step.containerMassG, 'netMassG'), step.extraSources, 'g');
+      const massFraction = state.basis === 'massFraction' ? state.value : builder.divide(state.value, state.densityGPerMl);
+      const amountMg = builder.scale(builder.multiply(massFraction, mass), 1e-3);
+      return { kind: 'portion', amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources), fromSolid: false };
+    }
+    case 'makeUpToMass': {
+      requireState('portion', 'makes up a weighed solid or an aliquot to a final mass; put a weighing or an aliquot before it');
+      if (state.kind !== 'portion') throw new Error('unreachable');
+      const mass = addAbsoluteExtraSources(context, weighByDifference(context, step.balance, step.finalMassG, step.containerMassG, 'finalMassG'), step.extraSources, 'g');
+      const massFraction = builder.scale(builder.divide(state.amountMg, mass), 1000);
+      return { kind: 'solution', basis: 'massFraction', value: applyRelativeExtraSources(context, massFraction, step.extraSources), densityGPerMl: shared.solutionDensity };
+    }
+    case 'dissolveInSolvent': {
+      requireState('portion', 'dissolves a weighed solid in a weighed mass of solvent; put the weighing before it');
+      if (state.kind !== 'portion' || !state.fromSolid) {
+        throw new PlanError([...path, 'kind'], 'A molality is prepared by dissolving the weighed solid itself; an aliquot of a solution already contains solvent.');
+      }
+      const solvent = addAbsoluteExtraSources(context, weighByDifference(context, step.balance, step.solventMassG, step.containerMassG, 'solventMassG'), step.extraSources, 'g');
+      const molality = builder.divide(state.amountMg, builder.multiply(shared.analyteMolarMassNode(context.stepIndex), solvent));
+      return { kind: 'solution', basis: 'molality', value: applyRelativeExtraSources(context, molality, step.extraSources), densityGPerMl: shared.solutionDensity };
+    }
+  }
+}
+
+/** Density of prepared solutions (g/mL): the plan's stated value with its uncertainty, or water at the lab temperature (Tanaka 2001). */
+function solutionDensityNode(builder: ModelBuilder, plan: Plan): NodeReference {
+  const stated = plan.settings.solutionDensity;
+  if (stated === undefined) return builder.constant(waterDensityKgPerM3(plan.settings.labTemperatureC) / 1000);
+  return builder.add(
+    builder.constant(stated.densityGPerMl),
+    builder.source({
+      id: 'plan:solution-density',
+      label: 'Density of the prepared solutions',
+      category: 'density',
+      estimate: 0,
+      unit: 'g/mL',
+      distribution: { shape: 'normal', standardUncertainty: stated.standardUncertaintyGPerMl },
+      sharing: 'item',
+      stepIndex: 0,
+      path: ['settings', 'solutionDensity'],
+    }),
+  );
+}
+
+function convertToUnit(
+  builder: ModelBuilder,
+  state: Extract<ChainState, { kind: 'solution' }>,
+  unit: ReturnType<typeof unitOf>,
+  analyteMolarMass: () => NodeReference,
+): NodeReference {
+  const mismatch = () =>
+    new PlanError(['settings', 'outputUnit'], `The plan prepares a ${describeBasis(state.basis)}; it cannot be stated in ${unit.name}.`);
+  if (state.basis === 'molality') {
+    if (unit.dimension !== 'molality') throw mismatch();
+    return builder.scale(state.value, 1 / unit.factorToBase);
+  }
+  if (unit.dimension === 'molality') throw mismatch();
+  const massConcentration = () => (state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, state.densityGPerMl));
+  switch (unit.dimension) {
+    case 'massConcentration':
+      return builder.scale(massConcentration(), 1 / unit.factorToBase);
+    case 'amountConcentration':
+      // c[mol/L] = c[mg/L] / (1000 mg/g · M[g/mol])
+      return builder.scale(builder.divide(massConcentration(), analyteMolarMass()), 1e-3 / unit.factorToBase);
+    case 'massFraction': {
+      const massFraction = state.basis === 'massFraction' ? state.value : builder.divide(state.value, state.densityGPerMl);
+      return builder.scale(massFraction, 1 / unit.factorToBase);
+    }
+  }
+}
+
+function describeBasis(basis: 'massConcentration' | 'massFraction' | 'molality'): string {
+  return { massConcentration: 'mass concentration', massFraction: 'mass fraction', molality: 'molality (mol/kg of solvent)' }[basis];
+}

@@ -1,0 +1,125 @@
+import { z } from 'zod';
+import { extraSourceSchema } from './distribution-schema';
+import {
+  balanceSchema,
+  certifiedSolutionSchema,
+  glassPipetteSchema,
+  pistonPipetteSchema,
+  solidMaterialSchema,
+  volumetricFlaskSchema,
+} from './equipment-schema';
+import { concentrationUnitNames } from './units';
+
+const positive = (what: string) => z.number().finite().positive(`${what} must be greater than zero.`);
+const nonNegative = (what: string) => z.number().finite().nonnegative(`${what} must be zero or positive.`);
+const extraSources = z.array(extraSourceSchema).default([]);
+
+const weighSolidStep = z
+  .object({
+    kind: z.literal('weighSolid'),
+    material: solidMaterialSchema,
+    balance: balanceSchema,
+    /** Net mass weighed by difference (gross reading − tare reading). */
+    netMassG: positive('The net mass'),
+    /** Container on the pan, for the capacity check. */
+    containerMassG: nonNegative('The container mass').default(0),
+    /** Air-buoyancy correction m = W·(1 − ρ_air/ρ_weights)/(1 − ρ_air/ρ_material); needs material.densityKgPerM3. */
+    airBuoyancy: z
+      .object({ airDensityKgPerM3: positive('The air density').default(1.2), weightDensityKgPerM3: positive('The density of the weights').default(8000) })
+      .strict()
+      .optional(),
+    extraSources,
+  })
+  .strict();
+
+const startFromCertifiedSolutionStep = z.object({ kind: z.literal('startFromCertifiedSolution'), material: certifiedSolutionSchema, extraSources }).strict();
+
+const makeUpToVolumeStep = z.object({ kind: z.literal('makeUpToVolume'), flask: volumetricFlaskSchema, extraSources }).strict();
+
+const pipetteAliquotStep = z
+  .object({
+    kind: z.literal('pipetteAliquot'),
+    pipette: z.discriminatedUnion('kind', [glassPipetteSchema, pistonPipetteSchema]),
+    /** Delivered volume: the nominal volume of a glass pipette, the set volume of a piston pipette. */
+    volumeMl: positive('The aliquot volume'),
+    extraSources,
+  })
+  .strict();
+
+const weighAliquotStep = z
+  .object({
+    kind: z.literal('weighAliquot'),
+    balance: balanceSchema,
+    netMassG: positive('The aliquot mass'),
+    containerMassG: nonNegative('The container mass').default(0),
+    extraSources,
+  })
+  .strict();
+
+const makeUpToMassStep = z
+  .object({
+    kind: z.literal('makeUpToMass'),
+    balance: balanceSchema,
+    /** Total mass of the diluted solution, weighed by difference against the empty container. */
+    finalMassG: positive('The final solution mass'),
+    containerMassG: nonNegative('The container mass').default(0),
+    extraSources,
+  })
+  .strict();
+
+const dissolveInSolventStep = z
+  .object({
+    kind: z.literal('dissolveInSolvent'),
+    balance: balanceSchema,
+    solventMassG: positive('The solvent mass'),
+    containerMassG: nonNegative('The container mass').default(0),
+    extraSources,
+  })
+  .strict();
+
+export const stepSchema = z.discriminatedUnion('kind', [
+  weighSolidStep,
+  startFromCertifiedSolutionStep,
+  makeUpToVolumeStep,
+  pipetteAliquotStep,
+  weighAliquotStep,
+  makeUpToMassStep,
+  dissolveInSolventStep,
+]);
+
+export const coverageSchema = z.union([
+  z.object({ probability: z.union([z.literal(0.9545), z.literal(0.95)], { error: 'The coverage probability is 0.9545 (k = 2 for a normal distribution) or 0.95.' }) }).strict(),
+  z.object({ k: z.number().finite().positive('The coverage factor k must be greater than zero.') }).strict(),
+]);
+
+export const settingsSchema = z
+  .object({
+    /** Used for the density of water (Tanaka et al. 2001). */
+    labTemperatureC: z.number().min(0).max(40).default(20),
+    /** Half-range of the lab temperature about the glassware's calibration temperature; rectangular. */
+    temperatureHalfRangeC: nonNegative('The temperature half-range').default(3),
+    /** Volumetric expansion coefficient of the (aqueous) solution. */
+    solutionExpansionPerC: nonNegative('The expansion coefficient').default(2.1e-4),
+    coverage: coverageSchema.default({ probability: 0.9545 }),
+    defaultGlasswareDistribution: z.enum(['triangular', 'rectangular']).default('triangular'),
+    outputUnit: z.enum(concentrationUnitNames, { error: `Unknown unit. Use one of: ${concentrationUnitNames.join(', ')}.` }),
+    /** Density of the prepared solutions; water at labTemperatureC when left out. */
+    solutionDensity: z.object({ densityGPerMl: positive('The density'), standardUncertaintyGPerMl: nonNegative('The density uncertainty') }).strict().optional(),
+  })
+  .strict();
+
+/** The plan document: what is prepared, from what, with which equipment, step by step. */
+export const planSchema = z
+  .object({
+    formatVersion: z.literal(1),
+    title: z.string().optional(),
+    /** The element or ion whose concentration is stated, as a formula: "Pb", "Se", "NO3". */
+    analyte: z.object({ formula: z.string().min(1) }).strict(),
+    settings: settingsSchema,
+    steps: z.array(stepSchema).min(1, 'A plan needs at least one step.'),
+  })
+  .strict();
+
+export type Plan = z.infer<typeof planSchema>;
+export type PlanInput = z.input<typeof planSchema>;
+export type PlanStep = Plan['steps'][number];

@@ -1,7 +1,6 @@
 import type { AddressInfo } from 'node:net';
-import { dirname, join } from 'node:path';
 import { createApp } from './app';
-import { loadEnv } from './config/env';
+import { certificateDir, loadEnv } from './config/env';
 import { openDatabase } from './db/connection';
 import { seedDemoLab } from './db/seed-demo';
 import { sessionSecret } from './db/settings-repository';
@@ -13,7 +12,7 @@ import { usersRepository } from './auth/users-repository';
 const env = loadEnv();
 const db = await openDatabase(env.DILUTRACE_DB);
 if (env.DILUTRACE_SEED_DEMO === '1' && (await usersRepository(db).count()) === 0) {
-  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: systemClock.now() });
+  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: systemClock.now(), certificateDir: certificateDir(env.DILUTRACE_DB) });
   console.log('Seeded the demo lab (Wellmere Regional Water Laboratory).');
 }
 
@@ -31,7 +30,7 @@ const { app, sessions } = createApp({
     publicUrl,
     production,
     trustProxy: env.DILUTRACE_TRUST_PROXY === '1',
-    certificateDir: join(dirname(env.DILUTRACE_DB), 'certificates'),
+    certificateDir: certificateDir(env.DILUTRACE_DB),
     clientDir: production ? 'dist/client' : undefined,
   },
 });

@@ -1,3 +1,4 @@
+import { dirname, join } from 'node:path';
 import { z } from 'zod';
 
 /** Environment the server reads at boot; anything invalid stops it with a readable message. */
@@ -25,3 +26,6 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   }
   return parsed.data;
 }
+
+/** Uploaded certificates live beside the database file, outside the web root. */
+export const certificateDir = (databaseFile: string) => join(dirname(databaseFile), 'certificates');

@@ -1,4 +1,4 @@
-import { loadEnv } from '../config/env';
+import { certificateDir, loadEnv } from '../config/env';
 import { openDatabase } from './connection';
 import { SeedRefusedError, seedDemoLab } from './seed-demo';
 
@@ -6,7 +6,7 @@ import { SeedRefusedError, seedDemoLab } from './seed-demo';
 const env = loadEnv();
 const db = await openDatabase(env.DILUTRACE_DB);
 try {
-  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: new Date() });
+  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: new Date(), certificateDir: certificateDir(env.DILUTRACE_DB) });
   console.log(`Demo lab seeded into ${env.DILUTRACE_DB}.`);
 } catch (error) {
   if (!(error instanceof SeedRefusedError)) throw error;

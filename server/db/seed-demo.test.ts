@@ -1,3 +1,5 @@
+import { statSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { buildTestApp, type TestApp } from '../test-support/test-app';
 import { DEMO_PEOPLE, SeedRefusedError, seedDemoLab } from './seed-demo';
@@ -12,8 +14,21 @@ describe('demo lab seed', () => {
     t = await buildTestApp();
     const emails = (await t.db('users').orderBy('id')).map((u: { email: string }) => u.email);
     expect(emails).toEqual(DEMO_PEOPLE.map((p) => `${p.local}@wellmere-water.example`));
-    await expect(seedDemoLab(t.db, { password: 'another-password', now: new Date() })).rejects.toBeInstanceOf(SeedRefusedError);
+    await expect(seedDemoLab(t.db, { password: 'another-password', now: new Date(), certificateDir: '/nonexistent' })).rejects.toBeInstanceOf(SeedRefusedError);
     expect(await t.db('users').count({ n: '*' }).first()).toEqual({ n: DEMO_PEOPLE.length });
+  });
+
+  it('fills the demo library: two balances, class A and B flasks, glass and piston pipettes, two materials with certificates', async () => {
+    t = await buildTestApp();
+    const kinds = Object.fromEntries(
+      (await t.db('equipment_items').select('kind').count({ n: '*' }).groupBy('kind')).map((r: { kind: string; n: number }) => [r.kind, r.n]),
+    );
+    expect(kinds).toEqual({ balance: 2, flask: 11, 'glass-pipette': 6, 'piston-pipette': 3, 'solid-material': 1, 'solution-material': 1 });
+    const certificates = await t.db('certificates').select('stored_name', 'size_bytes');
+    expect(certificates).toHaveLength(3);
+    for (const c of certificates) expect(statSync(join(t.file, '..', 'certificates', c.stored_name)).size).toBe(c.size_bytes);
+    const lead = await t.db('equipment_revisions as r').join('equipment_items as i', 'i.id', 'r.item_id').where('i.code', 'RM-PBN-01').first();
+    expect(JSON.parse(lead.data_json).hazardNotes).toMatch(/toxic/);
   });
 
   it('runs every migration down and up again', async () => {

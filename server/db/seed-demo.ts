@@ -1,6 +1,7 @@
 import type { Role } from '../../shared/contracts/roles';
 import { hashPassword } from '../auth/password';
 import type { Db } from './connection';
+import { seedDemoLibrary } from './seed-demo-library';
 
 /** The invented demo lab (DESIGN.md §7). All names are made up. */
 export const DEMO_LAB = { name: 'Wellmere Regional Water Laboratory', slug: 'wellmere-water', domain: 'wellmere-water.example' };
@@ -18,7 +19,7 @@ export const demoEmail = (local: string) => `${local}@${DEMO_LAB.domain}`;
 export class SeedRefusedError extends Error {}
 
 /** Creates the demo lab and its people in one transaction; refuses a database that already has users. */
-export async function seedDemoLab(db: Db, options: { password: string; now: Date }): Promise<{ labId: number }> {
+export async function seedDemoLab(db: Db, options: { password: string; now: Date; certificateDir: string }): Promise<{ labId: number }> {
   const passwordHash = await hashPassword(options.password);
   const at = options.now.toISOString();
   return db.transaction(async (trx) => {
@@ -26,13 +27,16 @@ export async function seedDemoLab(db: Db, options: { password: string; now: Date
     if (users > 0) throw new SeedRefusedError('The database already has users; the demo lab is only seeded into an empty database.');
     const [lab] = await trx('labs').insert({ name: DEMO_LAB.name, slug: DEMO_LAB.slug, created_at: at }).returning('id');
     const labId = typeof lab === 'object' ? (lab as { id: number }).id : (lab as number);
+    const ids: Record<string, number> = {};
     for (const person of DEMO_PEOPLE) {
       const [user] = await trx('users')
         .insert({ email: demoEmail(person.local), name: person.name, password_hash: passwordHash, active: true, created_at: at })
         .returning('id');
       const userId = typeof user === 'object' ? (user as { id: number }).id : (user as number);
+      ids[person.local] = userId;
       for (const role of person.roles) await trx('memberships').insert({ user_id: userId, lab_id: labId, role, created_at: at });
     }
+    await seedDemoLibrary(trx, { labId, ownerId: ids.qa, now: options.now, certificateDir: options.certificateDir });
     await trx('audit_events').insert({
       lab_id: labId,
       actor_user_id: null,

@@ -8,7 +8,7 @@ const fixtures = join(import.meta.dirname, '..', '..', 'tests', 'fixtures', 'lib
 
 /** An invented class A 100 mL flask; the tolerance is ISO 1042 class A (REFERENCES.md, read). */
 const flask100 = {
-  code: 'VF-100-A1',
+  code: 'T-VF-100',
   description: '100 mL one-mark flask',
   nominalMl: 100,
   glassClass: 'A',
@@ -20,7 +20,7 @@ const flask100 = {
 
 /** An invented five-place balance. */
 const balance = {
-  code: 'BAL-05',
+  code: 'T-BAL-1',
   description: 'Five-place analytical balance',
   capacityG: 220,
   readabilityG: 0.00001,
@@ -55,7 +55,7 @@ describe('library items and roles', () => {
     for (const who of ['analyst', 'auditor'] as const) {
       const client = await signIn(t.app, demo(who));
       const list = (await client.get(url('/equipment')).expect(200)).body as { code: string }[];
-      expect(list.map((i) => i.code).sort()).toEqual(['BAL-05', 'VF-100-A1']);
+      expect(list.map((i) => i.code)).toEqual(expect.arrayContaining(['T-BAL-1', 'T-VF-100']));
       await client.get(url(`/equipment/${created.body.id}`)).expect(200);
       await client.post(url('/equipment'), { kind: 'flask', data: { ...flask100, code: 'X' } }).expect(403);
       await client.agent.put(url(`/equipment/${created.body.id}`)).set('x-csrf-token', client.token).send({ data: flask100, reason: 'try' }).expect(403);
@@ -81,8 +81,8 @@ describe('library items and roles', () => {
     expect(res.body.error.details[0].path).toBe('data.toleranceMl');
     expect(res.body.error.details[0].message).toMatch(/greater than zero/);
     const clash = await qa.post(url('/equipment'), { kind: 'flask', data: flask100 }).expect(201);
-    expect(clash.body.code).toBe('VF-100-A1');
-    const again = await qa.post(url('/equipment'), { kind: 'flask', data: { ...flask100, code: 'vf-100-a1' } }).expect(409);
+    expect(clash.body.code).toBe('T-VF-100');
+    const again = await qa.post(url('/equipment'), { kind: 'flask', data: { ...flask100, code: 't-vf-100' } }).expect(409);
     expect(again.body.error.code).toBe('code_taken');
   });
 });
@@ -112,14 +112,15 @@ describe('revisions, not overwrites', () => {
     const created = (await qa.post(url('/equipment'), { kind: 'flask', data: flask100 }).expect(201)).body;
     const retired = (await qa.post(url(`/equipment/${created.id}/retire`), { reason: 'Chipped neck' }).expect(200)).body;
     expect(retired.status).toBe('retired');
-    expect((await qa.get(url('/equipment')).expect(200)).body).toEqual([]);
+    const active = (await qa.get(url('/equipment?kind=flask')).expect(200)).body as { code: string }[];
+    expect(active.map((i) => i.code)).not.toContain('T-VF-100');
     expect((await qa.get(url('/equipment?status=retired')).expect(200)).body[0].flags).toContain('Retired: Chipped neck');
     await qa.agent.put(url(`/equipment/${created.id}`)).set('x-csrf-token', qa.token).send({ data: flask100, reason: 'fix' }).expect(409);
   });
 
   it('flags an expired reference material', async () => {
     const material = {
-      code: 'RM-PB-NITRATE',
+      code: 'T-RM-PB',
       name: 'Lead(II) nitrate, certified purity',
       lot: 'L-2291',
       supplier: 'Invented supplier',
@@ -149,7 +150,7 @@ describe('certificates', () => {
       .attach('file', pdf, { filename: 'calibration 2026.pdf', contentType: 'application/pdf' })
       .expect(201);
     expect(res.body).toMatchObject({ mediaType: 'application/pdf', revisionNumber: 1, originalName: 'calibration 2026.pdf' });
-    const stored = await t.db('certificates').first();
+    const stored = await t.db('certificates').where({ id: res.body.id }).first();
     expect(stored.stored_name).toMatch(/^[0-9a-f-]{36}\.pdf$/);
 
     const auditor = await signIn(t.app, demo('auditor'));
@@ -175,7 +176,7 @@ describe('certificates', () => {
       .set('x-csrf-token', qa.token)
       .attach('file', png, { filename: 'scan.txt', contentType: 'text/plain' })
       .expect(201);
-    expect(await t.db('certificates').count({ n: '*' }).first()).toEqual({ n: 1 });
+    expect(await t.db('certificates').where({ item_id: item.id }).count({ n: '*' }).first()).toEqual({ n: 1 });
   });
 
   it('refuses a file over the size limit', async () => {
@@ -199,9 +200,11 @@ describe('CSV import and export', () => {
       [3, 'create'],
       [4, 'create'],
     ]);
-    expect(await t.db('equipment_items').count({ n: '*' }).first()).toEqual({ n: 0 });
+    const countBefore = await t.db('equipment_items').count({ n: '*' }).first();
+    expect(await t.db('equipment_items').whereLike('code', 'VF-IMP-%').count({ n: '*' }).first()).toEqual({ n: 0 });
     const done = (await qa.post(url('/equipment-csv/import'), { kind: 'flask', csv, dryRun: false }).expect(200)).body;
     expect(done.written).toBe(true);
+    expect((await t.db('equipment_items').count({ n: '*' }).first())!.n).toBe(Number(countBefore!.n) + 3);
     const exported = (await qa.get(url('/equipment-csv/export?kind=flask')).expect(200)).text;
     expect(exported.split('\n')[0]).toBe(csv.split('\n')[0]);
     expect(exported).toContain('VF-IMP-500B');
@@ -220,7 +223,7 @@ describe('CSV import and export', () => {
     expect(byLine[6]).toEqual(expect.arrayContaining(['nominal_ml', 'calibration_due_on']));
     const refused = await qa.post(url('/equipment-csv/import'), { kind: 'flask', csv, dryRun: false }).expect(400);
     expect(refused.body.error.code).toBe('import_rejected');
-    expect(await t.db('equipment_items').count({ n: '*' }).first()).toEqual({ n: 0 });
+    expect(await t.db('equipment_items').whereLike('code', 'VF-OK-%').count({ n: '*' }).first()).toEqual({ n: 0 });
   });
 
   it('reports unknown and missing columns against the header line', async () => {

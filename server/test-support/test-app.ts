@@ -34,7 +34,7 @@ export async function buildTestApp(options: { file?: string; seed?: boolean; clo
   const file = options.file ?? join(dir as string, 'test.sqlite');
   const clock = options.clock ?? testClock();
   const db = await openDatabase(file);
-  if (options.seed !== false) await seedDemoLab(db, { password: DEMO_PASSWORD, now: clock.now() });
+  if (options.seed !== false) await seedDemoLab(db, { password: DEMO_PASSWORD, now: clock.now(), certificateDir: join(file, '..', 'certificates') });
   const capture: CaptureServer = await startCaptureServer(db, () => clock.now());
   const mailer: Mailer = createSmtpMailer(`smtp://127.0.0.1:${capture.port}`, 'Dilutrace <no-reply@dilutrace.test>');
   const { app } = createApp({

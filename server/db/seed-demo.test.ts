@@ -21,7 +21,7 @@ describe('demo lab seed', () => {
   it('fills the demo library: two balances, class A and B flasks, glass and piston pipettes, two materials with certificates', async () => {
     t = await buildTestApp();
     const kinds = Object.fromEntries(
-      (await t.db('equipment_items').select('kind').count({ n: '*' }).groupBy('kind')).map((r: { kind: string; n: number }) => [r.kind, r.n]),
+      ((await t.db('equipment_items').select('kind').count({ n: '*' }).groupBy('kind')) as { kind: string; n: number }[]).map((r) => [r.kind, r.n]),
     );
     expect(kinds).toEqual({ balance: 2, flask: 11, 'glass-pipette': 6, 'piston-pipette': 3, 'solid-material': 1, 'solution-material': 1 });
     const certificates = await t.db('certificates').select('stored_name', 'size_bytes');

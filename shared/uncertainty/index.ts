@@ -32,3 +32,7 @@ export { standardAtomicWeights, atomicWeightSource, parseAtomicWeightTable, type
 export { waterDensityKgPerM3 } from './water-density';
 export { minimumWeightG } from './minimum-weight';
 export { concentrationUnits, concentrationUnitNames, unitOf, type ConcentrationUnit, type UnitDimension } from './units';
+export { runMonteCarlo, startMonteCarlo, type MonteCarloOptions, type MonteCarloResult, type MonteCarloRun, type MonteCarloProgress } from './monte-carlo';
+export { validateAgainstGum, type GumValidation } from './validation';
+export { numericalTolerance, type Interval, type Histogram } from './coverage-interval';
+export { RandomGenerator } from './random-generator';

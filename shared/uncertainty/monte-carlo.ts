@@ -1,0 +1,236 @@
+import { ColumnEvaluator } from './column-evaluator';
+import { twoSigmaProbability } from './coverage-factor';
+import { coverageProbabilityOf } from './coverage-setting';
+import {
+  histogram,
+  meanAndStandardDeviation,
+  numericalTolerance,
+  shortestInterval,
+  symmetricInterval,
+  type Histogram,
+  type Interval,
+} from './coverage-interval';
+import { ENGINE_VERSION } from './engine-version';
+import type { CompiledModel } from './model-types';
+import { parsePlan } from './parse-plan';
+import { compilePlan } from './plan-compiler';
+import { PlanError } from './plan-error';
+import type { Plan, PlanInput } from './plan-schema';
+import { RandomGenerator } from './random-generator';
+import { fillSamples } from './samplers';
+
+export interface MonteCarloOptions {
+  /** 32-bit unsigned integer; the same seed gives the same numbers everywhere. */
+  seed: number;
+  /** Fixed number of trials M. Give this or `adaptive`. */
+  trials?: number;
+  /** The adaptive procedure of JCGM 101 7.9.4. */
+  adaptive?: { significantDigits?: 1 | 2; maximumTrials?: number };
+  /** Defaults to the plan's coverage setting, or 2Φ(2) − 1 for a compiled model. */
+  coverageProbability?: number;
+  histogramBins?: number;
+  /** Trials sampled and evaluated together (memory per chunk ≈ nodes × chunkSize × 8 bytes). */
+  chunkSize?: number;
+}
+
+export interface MonteCarloResult {
+  engineVersion: string;
+  measurand: string;
+  unit: string;
+  seed: number;
+  trials: number;
+  coverageProbability: number;
+  mean: number;
+  standardDeviation: number;
+  symmetricInterval: Interval;
+  shortestInterval: Interval;
+  histogram: Histogram;
+  /** Present for the adaptive procedure. */
+  adaptive?: { converged: boolean; batches: number; batchSize: number; numericalTolerance: number };
+}
+
+export interface MonteCarloProgress {
+  trialsDone: number;
+  /** Planned trials; for the adaptive procedure, the trials of the batches decided so far. */
+  trialsPlanned: number;
+  finished: boolean;
+}
+
+/** A Monte Carlo calculation that runs piece by piece, so a Web Worker can report progress and stop. */
+export interface MonteCarloRun {
+  /** Runs up to `maximumTrials` more trials (whole chunks) and reports where it stands. */
+  advance(maximumTrials: number): MonteCarloProgress;
+  /** The summary; @throws Error before the run has finished. */
+  result(): MonteCarloResult;
+}
+
+const defaultChunkSize = 8192;
+
+function isCompiledModel(input: CompiledModel | PlanInput | Plan): input is CompiledModel {
+  return (input as CompiledModel).modelFormat === 'dilutrace-model/1';
+}
+
+/**
+ * Starts a Monte Carlo propagation of distributions (JCGM 101): for each trial every source is drawn from
+ * its distribution (see fillSamples) with the seeded xoshiro128** generator, and the model is evaluated.
+ * Sources are drawn chunk by chunk in a fixed order (chunk, then source, then trial), so only the outputs
+ * are kept: one Float64Array of M values.
+ * @throws PlanError for an invalid plan or options
+ */
+export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options: MonteCarloOptions): MonteCarloRun {
+  let model: CompiledModel;
+  let coverageProbability = options.coverageProbability;
+  if (isCompiledModel(input)) {
+    model = input;
+  } else {
+    const plan = parsePlan(input);
+    model = compilePlan(plan);
+    coverageProbability ??= coverageProbabilityOf(plan.settings.coverage);
+  }
+  const probability = coverageProbability ?? twoSigmaProbability;
+  if (!(probability > 0 && probability < 1)) throw new PlanError(['coverageProbability'], 'The coverage probability must lie between 0 and 1.');
+  if (!Number.isInteger(options.seed) || options.seed < 0 || options.seed > 0xffffffff) {
+    throw new PlanError(['seed'], 'The seed must be a whole number from 0 to 4294967295.');
+  }
+  const chunkSize = options.chunkSize ?? defaultChunkSize;
+  const evaluator = new ColumnEvaluator(model, chunkSize);
+  const random = new RandomGenerator(options.seed);
+  const bins = options.histogramBins ?? 50;
+
+  const runChunk = (target: Float64Array, offset: number, count: number) => {
+    model.sources.forEach((source, index) => fillSamples(evaluator.sourceColumns[index], count, source.estimate, source.distribution, random));
+    target.set(evaluator.evaluate(count).subarray(0, count), offset);
+  };
+
+  const summarise = (outputs: Float64Array, adaptive?: MonteCarloResult['adaptive']): MonteCarloResult => {
+    const { mean, standardDeviation } = meanAndStandardDeviation(outputs);
+    outputs.sort();
+    return {
+      engineVersion: ENGINE_VERSION,
+      measurand: model.measurand,
+      unit: model.outputUnit,
+      seed: options.seed,
+      trials: outputs.length,
+      coverageProbability: probability,
+      mean,
+      standardDeviation,
+      symmetricInterval: symmetricInterval(outputs, probability),
+      shortestInterval: shortestInterval(outputs, probability),
+      histogram: histogram(outputs, bins),
+      ...(adaptive === undefined ? {} : { adaptive }),
+    };
+  };
+
+  if (options.adaptive === undefined) {
+    const trials = options.trials;
+    if (trials === undefined || !Number.isInteger(trials) || trials < 2) {
+      throw new PlanError(['trials'], 'Give a whole number of trials (at least 2), or ask for the adaptive procedure.');
+    }
+    const outputs = new Float64Array(trials);
+    let done = 0;
+    let summary: MonteCarloResult | undefined;
+    return {
+      advance(maximumTrials) {
+        const stop = Math.min(trials, done + Math.max(maximumTrials, 1));
+        while (done < stop) {
+          const count = Math.min(chunkSize, trials - done);
+          runChunk(outputs, done, count);
+          done += count;
+        }
+        if (done === trials) summary ??= summarise(outputs);
+        return { trialsDone: done, trialsPlanned: trials, finished: done === trials };
+      },
+      result() {
+        if (summary === undefined) throw new Error('The Monte Carlo run has not finished.');
+        return summary;
+      },
+    };
+  }
+  return startAdaptive(options.adaptive, probability, runChunk, summarise, chunkSize);
+}
+
+/**
+ * JCGM 101 7.9.4: batches of M = max(⌈100/(1 − p)⌉, 10⁴) trials; after each batch h ≥ 2 the standard deviations
+ * s = √(Σ(x⁽ʳ⁾ − x̄)²/(h(h − 1))) of the batch means, standard uncertainties and interval ends are compared with
+ * the numerical tolerance δ of u(y) from all trials; stop when 2s ≤ δ for all four.
+ */
+function startAdaptive(
+  settings: NonNullable<MonteCarloOptions['adaptive']>,
+  probability: number,
+  runChunk: (target: Float64Array, offset: number, count: number) => void,
+  summarise: (outputs: Float64Array, adaptive: MonteCarloResult['adaptive']) => MonteCarloResult,
+  chunkSize: number,
+): MonteCarloRun {
+  const significantDigits = settings.significantDigits ?? 2;
+  const batchSize = Math.max(Math.ceil(100 / (1 - probability)), 10_000);
+  const maximumTrials = Math.max(settings.maximumTrials ?? 10_000_000, 2 * batchSize);
+  let outputs = new Float64Array(4 * batchSize);
+  let done = 0;
+  const batchStatistics: number[][] = [];
+  let summary: MonteCarloResult | undefined;
+  let tolerance = Infinity;
+
+  const finishBatch = () => {
+    const batch = outputs.slice(done - batchSize, done);
+    const { mean, standardDeviation } = meanAndStandardDeviation(batch);
+    batch.sort();
+    const interval = symmetricInterval(batch, probability);
+    batchStatistics.push([mean, standardDeviation, interval.low, interval.high]);
+    const h = batchStatistics.length;
+    if (h < 2) return false;
+    tolerance = numericalTolerance(meanAndStandardDeviation(outputs, done).standardDeviation, significantDigits);
+    return [0, 1, 2, 3].every((column) => {
+      const values = batchStatistics.map((row) => row[column]);
+      const average = values.reduce((sum, value) => sum + value, 0) / h;
+      const spread = Math.sqrt(values.reduce((sum, value) => sum + (value - average) ** 2, 0) / (h * (h - 1)));
+      return 2 * spread <= tolerance;
+    });
+  };
+
+  return {
+    advance(maximumTrials_) {
+      let budget = Math.max(maximumTrials_, 1);
+      while (summary === undefined && budget > 0) {
+        const batchEnd = (batchStatistics.length + 1) * batchSize;
+        if (batchEnd > outputs.length) {
+          const grown = new Float64Array(Math.min(2 * outputs.length, maximumTrials + batchSize));
+          grown.set(outputs.subarray(0, done));
+          outputs = grown;
+        }
+        const count = Math.min(chunkSize, batchEnd - done, budget);
+        runChunk(outputs, done, count);
+        done += count;
+        budget -= count;
+        if (done === batchEnd) {
+          const converged = finishBatch();
+          if (converged || done + batchSize > maximumTrials) {
+            summary = summarise(outputs.slice(0, done), { converged, batches: batchStatistics.length, batchSize, numericalTolerance: tolerance });
+          }
+        }
+      }
+      return { trialsDone: done, trialsPlanned: (batchStatistics.length + (summary ? 0 : 1)) * batchSize, finished: summary !== undefined };
+    },
+    result() {
+      if (summary === undefined) throw new Error('The Monte Carlo run has not finished.');
+      return summary;
+    },
+  };
+}
+
+/**
+ * Runs a Monte Carlo calculation to the end (see startMonteCarlo), calling `onProgress` after each chunk;
+ * returning false from it cancels the run (the function then throws).
+ * @example runMonteCarlo(plan, { trials: 1_000_000, seed: 20240611 }).symmetricInterval
+ */
+export function runMonteCarlo(
+  input: CompiledModel | PlanInput | Plan,
+  options: MonteCarloOptions & { onProgress?: (progress: MonteCarloProgress) => boolean | void },
+): MonteCarloResult {
+  const run = startMonteCarlo(input, options);
+  const step = Math.max(options.chunkSize ?? defaultChunkSize, 65_536);
+  for (;;) {
+    const progress = run.advance(step);
+    if (options.onProgress?.(progress) === false && !progress.finished) throw new Error('The Monte Carlo run was cancelled.');
+    if (progress.finished) return run.result();
+  }
+}

@@ -1,0 +1,57 @@
+import type { RandomGenerator } from './random-generator';
+
+/**
+ * Standard normal deviates by the ziggurat method (Marsaglia & Tsang, J. Stat. Softw. 5(8), 2000) with 128
+ * layers, tables built at load time from the method's constants r = 3.442619855899 and v = 9.91256303526217e-3.
+ * The layer index and the value come from disjoint bits of one 32-bit word (7 low bits for the layer, the
+ * 25 high bits as a signed value), so they are not correlated (the flaw Doornik (2005) found when both use the
+ * same bits). About 99 % of draws cost one 32-bit integer, a multiply and a compare.
+ */
+const layerCount = 128;
+const tailStart = 3.442619855899;
+const layerArea = 9.91256303526217e-3;
+const scale = 16777216; // 2²⁴: the value is a signed 25-bit integer
+
+const acceptBound = new Float64Array(layerCount);
+const widthFactor = new Float64Array(layerCount);
+const density = new Float64Array(layerCount);
+{
+  let edge = tailStart;
+  let previous = edge;
+  const q = layerArea / Math.exp(-0.5 * edge * edge);
+  acceptBound[0] = (edge / q) * scale;
+  acceptBound[1] = 0;
+  widthFactor[0] = q / scale;
+  widthFactor[layerCount - 1] = edge / scale;
+  density[0] = 1;
+  density[layerCount - 1] = Math.exp(-0.5 * edge * edge);
+  for (let layer = layerCount - 2; layer >= 1; layer -= 1) {
+    edge = Math.sqrt(-2 * Math.log(layerArea / edge + Math.exp(-0.5 * edge * edge)));
+    acceptBound[layer + 1] = (edge / previous) * scale;
+    previous = edge;
+    density[layer] = Math.exp(-0.5 * edge * edge);
+    widthFactor[layer] = edge / scale;
+  }
+}
+
+/** One standard normal deviate. */
+export function nextStandardNormal(random: RandomGenerator): number {
+  for (;;) {
+    const bits = random.nextUint32();
+    const layer = bits & (layerCount - 1);
+    const word = (bits | 0) >> 7;
+    const x = word * widthFactor[layer];
+    if (Math.abs(word) < acceptBound[layer]) return x;
+    if (layer === 0) {
+      // Tail beyond r (Marsaglia 1964): x = −ln(U₁)/r, accept when −2 ln U₂ > x².
+      let tail: number;
+      let test: number;
+      do {
+        tail = -Math.log(random.nextUniform()) / tailStart;
+        test = -Math.log(random.nextUniform());
+      } while (test + test < tail * tail);
+      return word > 0 ? tailStart + tail : -tailStart - tail;
+    }
+    if (density[layer] + random.nextUniform() * (density[layer - 1] - density[layer]) < Math.exp(-0.5 * x * x)) return x;
+  }
+}

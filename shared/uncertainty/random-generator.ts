@@ -1,0 +1,51 @@
+/**
+ * xoshiro128** 1.1 (Blackman & Vigna, 2018): a 32-bit generator with 128 bits of state and period 2¹²⁸ − 1,
+ * written with 32-bit integer arithmetic (Math.imul, >>>) so that every JavaScript engine gives the same
+ * integers for the same seed. The 32-bit seed is expanded into the four state words by SplitMix32
+ * (a Weyl sequence with step 0x9E3779B9 passed through the MurmurHash3 32-bit finaliser).
+ */
+export class RandomGenerator {
+  /** The four 32-bit state words, kept in a typed array so they stay unboxed integers. */
+  private readonly state = new Int32Array(4);
+
+  constructor(seed: number) {
+    let weyl = seed >>> 0;
+    for (let index = 0; index < 4; index += 1) {
+      weyl = (weyl + 0x9e3779b9) | 0;
+      let mixed = weyl;
+      mixed = Math.imul(mixed ^ (mixed >>> 16), 0x85ebca6b);
+      mixed = Math.imul(mixed ^ (mixed >>> 13), 0xc2b2ae35);
+      this.state[index] = mixed ^ (mixed >>> 16);
+    }
+    if ((this.state[0] | this.state[1] | this.state[2] | this.state[3]) === 0) this.state[0] = 1;
+  }
+
+  /** A generator whose four state words are given directly (for checking against the reference algorithm). */
+  static fromState(words: [number, number, number, number]): RandomGenerator {
+    const generator = new RandomGenerator(0);
+    generator.state.set(words.map((word) => word | 0));
+    return generator;
+  }
+
+  /** Next 32-bit unsigned integer: rotl(s₁·5, 7)·9, then the xoshiro state update. */
+  nextUint32(): number {
+    const state = this.state;
+    const s1 = state[1];
+    const product = Math.imul(s1, 5);
+    const result = Math.imul((product << 7) | (product >>> 25), 9) >>> 0;
+    const shifted = s1 << 9;
+    state[2] ^= state[0];
+    state[3] ^= s1;
+    state[1] ^= state[2];
+    state[0] ^= state[3];
+    state[2] ^= shifted;
+    const s3 = state[3];
+    state[3] = (s3 << 11) | (s3 >>> 21);
+    return result;
+  }
+
+  /** Uniform on the open interval (0, 1): (k + ½)/2³², k the next 32-bit integer. */
+  nextUniform(): number {
+    return (this.nextUint32() + 0.5) * 2.3283064365386963e-10;
+  }
+}

@@ -4,6 +4,7 @@ import express from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
 import { auditRepository } from './audit/audit-repository';
+import { auditRouter } from './audit/audit-router';
 import { authRouter } from './auth/auth-router';
 import { authService } from './auth/auth-service';
 import { createAuthorize } from './auth/authorize';
@@ -129,6 +130,7 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   api.use('/labs/:labId', outboxRouter({ db, authorize }));
   api.use('/labs/:labId', libraryRouter({ items, certificates, imports, authorize }));
   api.use('/labs/:labId', policyRouter({ policy, authorize }));
+  api.use('/labs/:labId', auditRouter({ db, authorize }));
   api.use(apiNotFound);
   app.use('/api', api);
 

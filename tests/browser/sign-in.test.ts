@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { launchChromium, screenshot, watchForPageProblems } from './support/chromium';
 import { startDilutraceServer, type RunningServer } from './support/dilutrace-server';
@@ -18,12 +18,19 @@ beforeAll(async () => {
   context = browser.context;
 }, 60_000);
 
+// A test that fails midway leaves its tab open; close it so the next test starts clean.
+afterEach(async () => {
+  await Promise.all(context.pages().map((page) => page.close()));
+});
+
 afterAll(async () => {
   await browser?.close();
   await server?.stop();
 });
 
+/** A new tab with no session, so one failed test cannot leave the next signed in. */
 async function openPage(): Promise<{ page: Page; problems: string[] }> {
+  await context.clearCookies();
   const page = await context.newPage();
   const problems = watchForPageProblems(page);
   return { page, problems };
@@ -83,7 +90,6 @@ describe('signing in', () => {
     expect(new URL(page.url()).pathname).toBe('/sign-in');
     await screenshot(page, 'sign-in-wrong-password');
     expect(problems).toEqual([]);
-    await page.close();
   });
 
   it('checks the form before asking the server', async () => {
@@ -94,7 +100,6 @@ describe('signing in', () => {
     await expect(email.getAttribute('aria-invalid')).resolves.toBe('true');
     const describedBy = (await email.getAttribute('aria-describedby')) ?? '';
     await expect(page.locator(`[id="${describedBy}"]`).innerText()).resolves.toContain('e-mail address');
-    await page.close();
   });
 
   it('sends a signed-out visitor to sign-in and back to the page they asked for', async () => {
@@ -109,7 +114,6 @@ describe('signing in', () => {
     expect(new URL(page.url()).pathname).toBe('/members');
     await signOut(page);
     expect(problems).toEqual([]);
-    await page.close();
   });
 
   it('tells an analyst the members page is not for them', async () => {
@@ -121,7 +125,6 @@ describe('signing in', () => {
     await expect(page.getByRole('table').count()).resolves.toBe(0);
     await screenshot(page, 'members-not-permitted');
     await signOut(page);
-    await page.close();
   });
 });
 
@@ -182,7 +185,77 @@ describe('inviting a new analyst', () => {
     await page.getByRole('heading', { level: 1, name: `Welcome, ${newName}` }).waitFor();
     await signOut(page);
     expect(problems).toEqual([]);
-    await page.close();
+  });
+});
+
+describe('administering members', () => {
+  it('gives a member a second role and deactivates another after confirming', async () => {
+    const { page, problems } = await openPage();
+    await signIn(page, `admin@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await page.goto(`${server.baseUrl}/members`);
+
+    const analyst2Roles = page.getByRole('group', { name: /^Roles of Lucía/ });
+    const qaBox = analyst2Roles.getByRole('checkbox', { name: 'QA' });
+    const saved = page.waitForResponse((response) => response.request().method() === 'PATCH');
+    await qaBox.check();
+    expect((await saved).status()).toBe(200);
+    await expect(qaBox.isChecked()).resolves.toBe(true);
+
+    const auditorRow = page.getByRole('row').filter({ hasText: `auditor@${DEMO_DOMAIN}` });
+    await auditorRow.getByRole('button', { name: /^Deactivate/ }).click();
+    const dialog = page.getByRole('dialog', { name: /^Deactivate / });
+    await dialog.waitFor();
+    await screenshot(page, 'members-confirm-deactivate');
+    await dialog.getByRole('button', { name: 'Deactivate' }).click();
+    await dialog.waitFor({ state: 'hidden' });
+    await auditorRow.getByText('Deactivated').waitFor();
+    await signOut(page);
+
+    // Lucía now sees the QA card beside her analyst card.
+    await signIn(page, `analyst2@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await expect(page.getByRole('heading', { level: 2, name: 'Quality assurance' }).count()).resolves.toBe(1);
+    await expect(page.getByRole('heading', { level: 2, name: 'Analyst' }).count()).resolves.toBe(1);
+    await signOut(page);
+    expect(problems).toEqual([]);
+
+    // The deactivated auditor can no longer sign in; the refusal is shown in place.
+    await signIn(page, `auditor@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('alert').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+  });
+});
+
+describe('resetting a forgotten password', () => {
+  it('mails a link that sets a new password, and the new one signs in', async () => {
+    const { page, problems } = await openPage();
+    const newPassword = 'volumetric flask at twenty degrees';
+    await page.goto(`${server.baseUrl}/forgot-password`);
+    await page.getByLabel('E-mail').fill(`qa@${DEMO_DOMAIN}`);
+    await page.getByRole('button', { name: 'Send reset link' }).click();
+    await page.getByRole('status').filter({ hasText: /\S/ }).first().waitFor();
+
+    await signIn(page, `admin@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await page.goto(`${server.baseUrl}/outbox`);
+    await page.getByRole('list', { name: 'Captured mail' }).getByRole('link').filter({ hasText: `qa@${DEMO_DOMAIN}` }).first().click();
+    const resetLink = page.getByRole('article').getByRole('link', { name: /\/reset-password\// });
+    await resetLink.waitFor();
+    const href = (await resetLink.getAttribute('href')) ?? '';
+    await signOut(page);
+
+    await page.goto(href);
+    await page.getByLabel('New password', { exact: true }).fill(newPassword);
+    await page.getByLabel('New password again').fill(newPassword);
+    await page.getByRole('button', { name: 'Set new password' }).click();
+    await page.getByText('Password changed.').waitFor();
+    await screenshot(page, 'reset-password-done');
+
+    await signIn(page, `qa@${DEMO_DOMAIN}`, newPassword);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await signOut(page);
+    expect(problems).toEqual([]);
   });
 });
 
@@ -205,6 +278,5 @@ describe('pages without a session', () => {
     await page.getByRole('heading', { level: 1, name: 'Page not found' }).waitFor();
     await screenshot(page, 'not-found');
     expect(problems).toEqual([]);
-    await page.close();
   });
 });

@@ -42,22 +42,30 @@ function MembersPage({ labId, labName, currentUserId }: { labId: number; labName
   return (
     <>
       <title>Members · Dilutrace</title>
-      <PageHeader title="Members" description={`Who works in ${labName}, and what each person may do. Role changes are saved as you tick them.`} />
-      <div className="grid gap-8 lg:grid-cols-[1fr_20rem]">
-        <section aria-labelledby="members-heading">
-          <h2 id="members-heading" className="mb-3 text-xl font-bold">
-            {members.length} {members.length === 1 ? 'member' : 'members'}
-          </h2>
-          <MembersTable labId={labId} labName={labName} members={members} currentUserId={currentUserId} />
-        </section>
-        <div className="flex flex-col gap-6">
+      <PageHeader
+        title="Members"
+        description={`Who works in ${labName}, and what each person may do. Role changes are saved as you tick them.`}
+        actions={
+          <a href="#invite" className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper">
+            Invite a member
+          </a>
+        }
+      />
+      <section aria-labelledby="members-heading" className="mb-10">
+        <h2 id="members-heading" className="mb-3 text-xl font-bold">
+          {members.length} {members.length === 1 ? 'member' : 'members'}
+        </h2>
+        <MembersTable labId={labId} labName={labName} members={members} currentUserId={currentUserId} />
+      </section>
+      <div className="grid items-start gap-6 md:grid-cols-2">
+        <div id="invite" tabIndex={-1}>
           <Card title="Invite a member">
             <InviteMemberForm labId={labId} />
           </Card>
-          <Card title="Pending invitations">
-            <PendingInvitations invitations={invitations} />
-          </Card>
         </div>
+        <Card title="Pending invitations">
+          <PendingInvitations invitations={invitations} />
+        </Card>
       </div>
     </>
   );

@@ -8,30 +8,34 @@ import { useUpdateMember } from '../api/update-member';
 /** Deactivates or reactivates a member after a confirmation. Nobody deactivates themselves. */
 export function MemberActivationCell({ labId, member, isCurrentUser }: { labId: number; member: Member; isCurrentUser: boolean }) {
   const updateMember = useUpdateMember();
-  const [confirming, setConfirming] = useState(false);
+  // The activation the open dialog asks about, fixed when it opens so the question does not flip mid-save.
+  const [askingToActivate, setAskingToActivate] = useState<boolean | null>(null);
   if (isCurrentUser) return <span className="text-sm text-muted">This is you</span>;
 
-  const deactivating = member.active;
   const close = () => {
-    setConfirming(false);
+    setAskingToActivate(null);
     updateMember.reset();
   };
+  const deactivating = askingToActivate === false;
 
   return (
     <>
-      <Button variant={deactivating ? 'secondary' : 'primary'} size="small" onClick={() => setConfirming(true)}>
-        {deactivating ? 'Deactivate' : 'Reactivate'}
+      <Button variant={member.active ? 'secondary' : 'primary'} size="small" onClick={() => setAskingToActivate(!member.active)}>
+        {member.active ? 'Deactivate' : 'Reactivate'}
         <span className="sr-only"> {member.name}</span>
       </Button>
       <ConfirmDialog
-        open={confirming}
+        open={askingToActivate !== null}
         title={deactivating ? `Deactivate ${member.name}?` : `Reactivate ${member.name}?`}
         confirmLabel={deactivating ? 'Deactivate' : 'Reactivate'}
         tone={deactivating ? 'danger' : 'primary'}
         pending={updateMember.isPending}
         onCancel={close}
         onConfirm={() =>
-          updateMember.mutate({ labId, userId: member.userId, change: { active: !deactivating } }, { onSuccess: close })
+          updateMember.mutate(
+            { labId, userId: member.userId, change: { active: askingToActivate ?? member.active } },
+            { onSuccess: close },
+          )
         }
       >
         <p>

@@ -20,7 +20,7 @@ export function MembersTable({ labId, labName, members, currentUserId }: Members
           cell: (info) => (
             <div>
               <div className="font-semibold">{info.getValue()}</div>
-              <div className="text-sm text-muted">{info.row.original.email}</div>
+              <div className="text-sm break-all text-muted">{info.row.original.email}</div>
             </div>
           ),
         }),

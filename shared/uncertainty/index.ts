@@ -36,3 +36,4 @@ export { runMonteCarlo, startMonteCarlo, type MonteCarloOptions, type MonteCarlo
 export { validateAgainstGum, type GumValidation } from './validation';
 export { numericalTolerance, type Interval, type Histogram } from './coverage-interval';
 export { RandomGenerator } from './random-generator';
+export { findRoutes, routeRequestSchema, type RouteRequest, type Route, type RouteResult } from './route-finder';

@@ -7,7 +7,15 @@ import { planSchema, type Plan } from './plan-schema';
  * @throws PlanError pointing at the first offending field, with a message a chemist reads
  */
 export function parsePlan(input: unknown): Plan {
-  const parsed = planSchema.safeParse(input);
+  return parseWithSchema(planSchema, input);
+}
+
+/**
+ * Validates any engine input against its zod schema.
+ * @throws PlanError pointing at the first offending field
+ */
+export function parseWithSchema<Schema extends z.ZodType>(schema: Schema, input: unknown): z.output<Schema> {
+  const parsed = schema.safeParse(input);
   if (parsed.success) return parsed.data;
   const issue = deepestIssue(parsed.error.issues);
   const path = issue.path.filter((segment): segment is PlanPathSegment => typeof segment !== 'symbol');

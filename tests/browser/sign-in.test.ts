@@ -102,6 +102,20 @@ describe('signing in', () => {
     await expect(page.locator(`[id="${describedBy}"]`).innerText()).resolves.toContain('e-mail address');
   });
 
+  it('gives keyboard users a skip link first, then the form fields in order', async () => {
+    const { page } = await openPage();
+    await page.goto(`${server.baseUrl}/sign-in`);
+    await page.getByRole('heading', { level: 1, name: 'Sign in' }).waitFor();
+    const focusedText = () => page.evaluate(() => document.activeElement?.textContent ?? '');
+    const focusedLabel = () => page.evaluate(() => (document.activeElement as HTMLInputElement | null)?.labels?.[0]?.textContent ?? '');
+    await page.keyboard.press('Tab');
+    await expect(focusedText()).resolves.toBe('Skip to content');
+    await page.keyboard.press('Tab');
+    await expect(focusedLabel()).resolves.toBe('E-mail');
+    await page.keyboard.press('Tab');
+    await expect(focusedLabel()).resolves.toBe('Password');
+  });
+
   it('sends a signed-out visitor to sign-in and back to the page they asked for', async () => {
     const { page, problems } = await openPage();
     await page.goto(`${server.baseUrl}/members`);

@@ -21,9 +21,10 @@ export function AppLayout({ homeHref, account, navigation, busy, children }: App
       >
         Skip to content
       </a>
-      <header className="bg-ink text-paper">
+      {/* Inside the ink header, copper is the lighter tone so rings and marks keep their contrast. */}
+      <header className="bg-ink text-paper [--color-accent:var(--color-accent-on-ink)]">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-4 px-6 py-3">
-          <Link to={homeHref} className="text-2xl text-paper no-underline [--color-accent:#e0945a]">
+          <Link to={homeHref} className="text-2xl text-paper no-underline">
             <NameMark />
           </Link>
           <div className="flex flex-wrap items-center gap-4">{account}</div>

@@ -18,13 +18,16 @@ const twoDigits = (value: number) => Number(value.toPrecision(2));
 describe('route finder', () => {
   // A small library where every route can be listed by hand: 1000 mg/L Se certified solution → 10 mg/L
   // with flasks 100, 100, 10 mL and pipettes 10 mL, 1 mL glass and a 100–1000 µL piston pipette.
+  const smallFlasks = pick(library.flasks, ['F-100-A', 'F-100-B', 'F-10-A']) as RouteRequest['flasks'];
+  const smallPipettes = pick(library.pipettes, ['GP-10-A', 'GP-1-A', 'PP-07']) as NonNullable<RouteRequest['pipettes']>;
+  const certified = selenium.steps[0].material as Extract<RouteRequest['material'], { kind: 'certifiedSolution' }>;
   const small: RouteRequest = {
     target: { value: 10, unit: 'mg/L' },
     analyte: { formula: 'Se' },
-    material: selenium.steps[0].material,
+    material: certified,
     balances: [],
-    flasks: pick(library.flasks, ['F-100-A', 'F-100-B', 'F-10-A']) as RouteRequest['flasks'],
-    pipettes: pick(library.pipettes, ['GP-10-A', 'GP-1-A', 'PP-07']) as RouteRequest['pipettes'],
+    flasks: smallFlasks,
+    pipettes: smallPipettes,
     limit: 50,
     maximumDilutions: 2,
   };
@@ -34,9 +37,9 @@ describe('route finder', () => {
     // Exhaustive: one dilution by 100 (1 mL glass or 1000 µL piston into a 100 mL flask), or two by 10
     // (10 mL into 100 mL, then 10 mL into the other 100 mL); a 10 mL aliquot cannot come from the 10 mL flask.
     const exhaustive: PlanInput[] = [];
-    const start = { kind: 'startFromCertifiedSolution' as const, material: small.material };
-    const flask = (id: string) => ({ kind: 'makeUpToVolume' as const, flask: small.flasks.find((item) => item.itemId === id) as RouteRequest['flasks'][number] });
-    const aliquot = (id: string, volumeMl: number) => ({ kind: 'pipetteAliquot' as const, pipette: small.pipettes.find((item) => item.itemId === id) as RouteRequest['pipettes'][number], volumeMl });
+    const start = { kind: 'startFromCertifiedSolution' as const, material: certified };
+    const flask = (id: string) => ({ kind: 'makeUpToVolume' as const, flask: smallFlasks.find((item) => item.itemId === id) as RouteRequest['flasks'][number] });
+    const aliquot = (id: string, volumeMl: number) => ({ kind: 'pipetteAliquot' as const, pipette: smallPipettes.find((item) => item.itemId === id) as NonNullable<RouteRequest['pipettes']>[number], volumeMl });
     const plan = (steps: PlanInput['steps']): PlanInput => ({ formatVersion: 1, analyte: { formula: 'Se' }, settings: { outputUnit: 'mg/L' }, steps });
     for (const [pipette, volume] of [['GP-1-A', 1], ['PP-07', 1]] as const) for (const target of ['F-100-A', 'F-100-B']) exhaustive.push(plan([start, aliquot(pipette, volume), flask(target)]));
     exhaustive.push(plan([start, aliquot('GP-10-A', 10), flask('F-100-A'), aliquot('GP-10-A', 10), flask('F-100-B')]));

@@ -37,10 +37,14 @@ export async function screenshot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`) });
 }
 
-/** Collects uncaught page errors and failed requests other than the expected ones, for one assertion at the end. */
+/** Collects page errors, console errors, failed requests (other than 401) and off-host requests, for one assertion at the end. */
 export function watchForPageProblems(page: Page): string[] {
   const problems: string[] = [];
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
+  page.on('console', (message) => {
+    // Failed loads are judged by status below; any other console error (a CSP refusal, a React warning) counts.
+    if (message.type() === 'error' && !message.text().startsWith('Failed to load resource')) problems.push(`console: ${message.text()}`);
+  });
   page.on('response', (response) => {
     // 401 is the expected answer to "who is signed in?" on signed-out pages and to a wrong password.
     if (response.status() >= 400 && response.status() !== 401) problems.push(`${response.status()} from ${response.url()}`);

@@ -1,4 +1,4 @@
-import type { Invitation, InvitationPreview, Member, MemberUpdate } from '../../shared/contracts/members';
+import { invitationJoinNewSchema, type Invitation, type InvitationPreview, type Member, type MemberUpdate } from '../../shared/contracts/members';
 import type { Role } from '../../shared/contracts/roles';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
@@ -9,6 +9,7 @@ import type { UsersRepository } from '../auth/users-repository';
 import type { Db } from '../db/connection';
 import type { LabsRepository, MemberRow } from '../labs/labs-repository';
 import { conflict, notFound, validationError } from '../lib/errors';
+import { toFieldIssues } from '../lib/validate';
 import type { Mailer } from '../mail/mailer';
 import { invitationMessage } from '../mail/messages';
 import { invitationsRepository, type InvitationRow } from './invitations-repository';
@@ -131,7 +132,7 @@ export function membersService(deps: {
     },
 
     /** Joins the lab with the invited role: creates the account, or confirms an existing one by its password. */
-    async accept(token: string, input: { name: string; password: string }): Promise<SessionUser> {
+    async accept(token: string, input: { name?: string; password: string }): Promise<SessionUser> {
       const row = await openInvitation(token);
       const existing = await users.findByEmail(row.email);
       const at = now().toISOString();
@@ -149,9 +150,14 @@ export function membersService(deps: {
           await invitations.markAccepted(row.id, userId, at, trx);
         });
       } else {
-        const passwordHash = await hashPassword(input.password);
+        const parsed = invitationJoinNewSchema.safeParse(input);
+        if (!parsed.success) {
+          const issues = toFieldIssues(parsed.error);
+          throw validationError(`${issues[0].path}: ${issues[0].message}`, issues);
+        }
+        const passwordHash = await hashPassword(parsed.data.password);
         userId = await db.transaction(async (trx) => {
-          const id = await users.insert({ email: row.email, name: input.name, passwordHash, createdAt: at }, trx);
+          const id = await users.insert({ email: row.email, name: parsed.data.name, passwordHash, createdAt: at }, trx);
           await labs.addRole(id, row.lab_id, row.role, at, trx);
           await invitations.markAccepted(row.id, id, at, trx);
           return id;
@@ -166,7 +172,7 @@ export function membersService(deps: {
         summary: `${row.email} accepted the invitation as ${row.role}`,
       });
       const user = await users.findById(userId);
-      return { id: userId, email: row.email, name: user?.name ?? input.name };
+      return { id: userId, email: row.email, name: user?.name ?? '' };
     },
 
     /** Changes roles or deactivates; the lab always keeps at least one active admin. */

@@ -101,7 +101,10 @@ describe('invitations through the captured mail', () => {
     const preview = (await visitor.get(`/api/invitations/${token}`).expect(200)).body;
     expect(preview).toMatchObject({ labName: 'Wellmere Regional Water Laboratory', role: 'analyst', existingAccount: false });
 
-    await visitor.post(`/api/invitations/${token}/accept`, { name: 'Priya Nandakumar', password: 'short' }).expect(400);
+    const short = await visitor.post(`/api/invitations/${token}/accept`, { name: 'Priya Nandakumar', password: 'short' }).expect(400);
+    expect(short.body.error.details[0].path).toBe('password');
+    const nameless = await visitor.post(`/api/invitations/${token}/accept`, { password: 'bench-ready-2026' }).expect(400);
+    expect(nameless.body.error.details[0].path).toBe('name');
     const me = (await visitor.post(`/api/invitations/${token}/accept`, { name: 'Priya Nandakumar', password: 'bench-ready-2026' }).expect(200)).body;
     expect(me.user.email).toBe('priya.nandakumar@wellmere-water.example');
     expect(me.labs[0].roles).toEqual(['analyst']);
@@ -122,7 +125,7 @@ describe('invitations through the captured mail', () => {
     const visitor = await agentFor(t.app);
     expect((await visitor.get(`/api/invitations/${token}`)).body.existingAccount).toBe(true);
     await visitor.post(`/api/invitations/${token}/accept`, { name: 'Ode Marlow', password: 'wrong-password-123' }).expect(400);
-    const me = (await visitor.post(`/api/invitations/${token}/accept`, { name: 'Ode Marlow', password: DEMO_PASSWORD }).expect(200)).body;
+    const me = (await visitor.post(`/api/invitations/${token}/accept`, { password: DEMO_PASSWORD }).expect(200)).body;
     expect(me.labs.map((l: { name: string }) => l.name).sort()).toEqual(['Harrowgate Food Testing', 'Wellmere Regional Water Laboratory']);
   });
 

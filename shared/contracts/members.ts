@@ -43,10 +43,21 @@ export const invitationPreviewSchema = z.object({
 });
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 
-/** Accepting: a new person sets name and password; an existing account confirms with its password. */
-export const invitationAcceptSchema = z.object({
+/** A new person joining: their name and a new password. */
+export const invitationJoinNewSchema = z.object({
   name: personNameSchema,
   password: newPasswordSchema,
+});
+
+/** A person with an account elsewhere joining: confirms with their current password. */
+export const invitationJoinExistingSchema = z.object({
+  password: z.string().min(1, 'Enter the password of your existing account.').max(200),
+});
+
+/** The accept route takes either shape; the server applies the one that fits the account. */
+export const invitationAcceptSchema = z.object({
+  name: personNameSchema.optional(),
+  password: z.string().min(1, 'Enter a password.').max(200),
 });
 export type InvitationAccept = z.infer<typeof invitationAcceptSchema>;
 

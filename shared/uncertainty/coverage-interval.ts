@@ -5,14 +5,63 @@ export interface Interval {
 }
 
 /** q = pM if that is an integer, else ⌊pM + ½⌋ (JCGM 101 7.7.1). */
-function coveredCount(sortedLength: number, probability: number): number {
+export function coveredCount(sortedLength: number, probability: number): number {
   const product = probability * sortedLength;
   const rounded = Math.round(product);
   return Math.abs(product - rounded) < 1e-9 * Math.max(1, product) ? rounded : Math.floor(product + 0.5);
 }
 
 /**
- * Probabilistically symmetric coverage interval from sorted values (JCGM 101 7.7.2):
+ * Puts in order just what the coverage intervals read: after the call the M − q smallest values sit sorted
+ * in values[0 … M−q−1] and the M − q largest sorted in values[q … M−1] (q as in coveredCount). Two
+ * quickselect partitions and two small sorts replace a full sort (for p = 0.95 only 10 % of the values are
+ * sorted). Falls back to a full sort when the tails would overlap.
+ */
+export function orderTails(values: Float64Array, probability: number): void {
+  const count = values.length;
+  const q = coveredCount(count, probability);
+  const tail = count - q;
+  if (tail <= 0 || 2 * tail >= count) {
+    values.sort();
+    return;
+  }
+  selectInPlace(values, tail - 1, 0, count - 1);
+  selectInPlace(values, q, tail, count - 1);
+  values.subarray(0, tail).sort();
+  values.subarray(q, count).sort();
+}
+
+/** Quickselect (Hoare partition, median-of-three pivot): afterwards values[k] is the (k+1)-th smallest of [left, right], smaller ones before it, larger after. */
+function selectInPlace(values: Float64Array, k: number, left: number, right: number): void {
+  let low = left;
+  let high = right;
+  while (high > low) {
+    const middle = (low + high) >>> 1;
+    const a = values[low];
+    const b = values[middle];
+    const c = values[high];
+    const pivot = a < b ? (b < c ? b : a < c ? c : a) : a < c ? a : b < c ? c : b;
+    let i = low;
+    let j = high;
+    while (i <= j) {
+      while (values[i] < pivot) i += 1;
+      while (values[j] > pivot) j -= 1;
+      if (i <= j) {
+        const swap = values[i];
+        values[i] = values[j];
+        values[j] = swap;
+        i += 1;
+        j -= 1;
+      }
+    }
+    if (k <= j) high = j;
+    else if (k >= i) low = i;
+    else return;
+  }
+}
+
+/**
+ * Probabilistically symmetric coverage interval from sorted (or orderTails-ordered) values (JCGM 101 7.7.2):
  * r = (M − q)/2 if M − q is even, else (M − q + 1)/2; interval [y₍r₎, y₍r+q₎] (1-based).
  */
 export function symmetricInterval(sorted: Float64Array, probability: number): Interval {
@@ -23,7 +72,7 @@ export function symmetricInterval(sorted: Float64Array, probability: number): In
   return { low: sorted[low - 1], high: sorted[Math.min(low + q, count) - 1] };
 }
 
-/** Shortest coverage interval (JCGM 101 7.7.3): [y₍r*₎, y₍r*+q₎] with r* minimising y₍r+q₎ − y₍r₎ over r = 1…M − q. */
+/** Shortest coverage interval from sorted (or orderTails-ordered) values (JCGM 101 7.7.3): [y₍r*₎, y₍r*+q₎] with r* minimising y₍r+q₎ − y₍r₎ over r = 1…M − q. */
 export function shortestInterval(sorted: Float64Array, probability: number): Interval {
   const count = sorted.length;
   const q = Math.min(coveredCount(count, probability), count - 1);
@@ -39,13 +88,14 @@ export function shortestInterval(sorted: Float64Array, probability: number): Int
   return { low: sorted[best], high: sorted[best + q] };
 }
 
-/** Counts of sorted values in `bins` equal bins from the smallest to the largest value. */
+/** Counts of values in `bins` equal bins from the smallest to the largest value. */
 export interface Histogram {
   lowerEdge: number;
   binWidth: number;
   counts: number[];
 }
 
+/** Histogram of values whose smallest is values[0] and largest values[M − 1] (sorted or orderTails-ordered). */
 export function histogram(sorted: Float64Array, bins: number): Histogram {
   const lowerEdge = sorted[0];
   const span = sorted[sorted.length - 1] - lowerEdge;

@@ -37,3 +37,4 @@ export { validateAgainstGum, type GumValidation } from './validation';
 export { numericalTolerance, type Interval, type Histogram } from './coverage-interval';
 export { RandomGenerator } from './random-generator';
 export { findRoutes, routeRequestSchema, type RouteRequest, type Route, type RouteResult } from './route-finder';
+export { planJsonSchema } from './plan-json-schema';

@@ -144,3 +144,22 @@ describe('Monte Carlo on plans', () => {
     expect(result.histogram.counts.reduce((sum, count) => sum + count, 0)).toBe(10_001);
   });
 });
+
+describe('coverage intervals from partly ordered outputs', () => {
+  it('orderTails gives the same intervals as a full sort', async () => {
+    const { orderTails, shortestInterval, symmetricInterval } = await import('./coverage-interval');
+    const { RandomGenerator } = await import('./random-generator');
+    const random = new RandomGenerator(99);
+    for (const size of [10, 101, 5000, 100_003]) {
+      const values = Float64Array.from({ length: size }, () => random.nextUniform() ** 3);
+      const sorted = values.slice().sort();
+      for (const p of [0.95, 0.9545, 0.5, 0.99]) {
+        const ordered = values.slice();
+        orderTails(ordered, p);
+        expect(symmetricInterval(ordered, p)).toEqual(symmetricInterval(sorted, p));
+        expect(shortestInterval(ordered, p)).toEqual(shortestInterval(sorted, p));
+        expect([ordered[0], ordered[size - 1]]).toEqual([sorted[0], sorted[size - 1]]);
+      }
+    }
+  });
+});

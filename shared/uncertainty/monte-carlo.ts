@@ -5,6 +5,7 @@ import {
   histogram,
   meanAndStandardDeviation,
   numericalTolerance,
+  orderTails,
   shortestInterval,
   symmetricInterval,
   type Histogram,
@@ -74,7 +75,7 @@ function isCompiledModel(input: CompiledModel | PlanInput | Plan): input is Comp
  * Starts a Monte Carlo propagation of distributions (JCGM 101): for each trial every source is drawn from
  * its distribution (see fillSamples) with the seeded xoshiro128** generator, and the model is evaluated.
  * Sources are drawn chunk by chunk in a fixed order (chunk, then source, then trial), so only the outputs
- * are kept: one Float64Array of M values.
+ * are kept: one Float64Array of M values, whose tails are then put in order for the coverage intervals.
  * @throws PlanError for an invalid plan or options
  */
 export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options: MonteCarloOptions): MonteCarloRun {
@@ -97,14 +98,15 @@ export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options
   const random = new RandomGenerator(options.seed);
   const bins = options.histogramBins ?? 50;
 
+  const words = new Int32Array(2 * chunkSize);
   const runChunk = (target: Float64Array, offset: number, count: number) => {
-    model.sources.forEach((source, index) => fillSamples(evaluator.sourceColumns[index], count, source.estimate, source.distribution, random));
+    model.sources.forEach((source, index) => fillSamples(evaluator.sourceColumns[index], count, source.estimate, source.distribution, random, words));
     target.set(evaluator.evaluate(count).subarray(0, count), offset);
   };
 
   const summarise = (outputs: Float64Array, adaptive?: MonteCarloResult['adaptive']): MonteCarloResult => {
     const { mean, standardDeviation } = meanAndStandardDeviation(outputs);
-    outputs.sort();
+    orderTails(outputs, probability);
     return {
       engineVersion: ENGINE_VERSION,
       measurand: model.measurand,
@@ -173,7 +175,7 @@ function startAdaptive(
   const finishBatch = () => {
     const batch = outputs.slice(done - batchSize, done);
     const { mean, standardDeviation } = meanAndStandardDeviation(batch);
-    batch.sort();
+    orderTails(batch, probability);
     const interval = symmetricInterval(batch, probability);
     batchStatistics.push([mean, standardDeviation, interval.low, interval.high]);
     const h = batchStatistics.length;

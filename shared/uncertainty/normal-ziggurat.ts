@@ -34,10 +34,26 @@ const density = new Float64Array(layerCount);
   }
 }
 
-/** One standard normal deviate. */
-export function nextStandardNormal(random: RandomGenerator): number {
+/**
+ * Fills `target[0..count)` with estimate + u·z, z standard normal, one deviate per word of `words`
+ * (the fast path written out here so it stays in one tight loop; rare rejections draw more words from `random`).
+ */
+export function fillNormal(target: Float64Array, words: Int32Array, count: number, estimate: number, u: number, random: RandomGenerator): void {
+  for (let index = 0; index < count; index += 1) {
+    const bits = words[index];
+    const layer = bits & (layerCount - 1);
+    const word = bits >> 7;
+    target[index] = estimate + u * (Math.abs(word) < acceptBound[layer] ? word * widthFactor[layer] : standardNormalFrom(bits, random));
+  }
+}
+
+/**
+ * One standard normal deviate, starting from the 32-bit word `firstBits` (already drawn by the caller, so
+ * that words can be generated in bulk); any further words needed are drawn from `random`.
+ */
+export function standardNormalFrom(firstBits: number, random: RandomGenerator): number {
+  let bits = firstBits;
   for (;;) {
-    const bits = random.nextUint32();
     const layer = bits & (layerCount - 1);
     const word = (bits | 0) >> 7;
     const x = word * widthFactor[layer];
@@ -53,5 +69,6 @@ export function nextStandardNormal(random: RandomGenerator): number {
       return word > 0 ? tailStart + tail : -tailStart - tail;
     }
     if (density[layer] + random.nextUniform() * (density[layer - 1] - density[layer]) < Math.exp(-0.5 * x * x)) return x;
+    bits = random.nextUint32();
   }
 }

@@ -44,6 +44,33 @@ export class RandomGenerator {
     return result;
   }
 
+  /**
+   * Fills `target[0..count)` with the next `count` 32-bit words as signed integers (word | 0): the same
+   * sequence as `count` calls of nextUint32, with the state held in locals for speed.
+   */
+  fillInt32(target: Int32Array, count: number): void {
+    const state = this.state;
+    let s0 = state[0];
+    let s1 = state[1];
+    let s2 = state[2];
+    let s3 = state[3];
+    for (let index = 0; index < count; index += 1) {
+      const product = Math.imul(s1, 5);
+      target[index] = Math.imul((product << 7) | (product >>> 25), 9);
+      const shifted = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= shifted;
+      s3 = (s3 << 11) | (s3 >>> 21);
+    }
+    state[0] = s0;
+    state[1] = s1;
+    state[2] = s2;
+    state[3] = s3;
+  }
+
   /** Uniform on the open interval (0, 1): (k + ½)/2³², k the next 32-bit integer. */
   nextUniform(): number {
     return (this.nextUint32() + 0.5) * 2.3283064365386963e-10;

@@ -1,37 +1,52 @@
 import type { Distribution } from './distributions';
-import { nextStandardNormal } from './normal-ziggurat';
+import { fillNormal } from './normal-ziggurat';
 import type { RandomGenerator } from './random-generator';
 
 const twoPi = 2 * Math.PI;
+const wordToUniform = 2.3283064365386963e-10; // 2⁻³²
+const signOffset = 2147483648; // 2³¹: a signed word k plus 2³¹ is the unsigned word
 
 /**
  * Fills `target[0..count)` with draws of `estimate + deviation` for one source (JCGM 101 §6.4):
  * normal by the ziggurat method (normal-ziggurat.ts); rectangular a(2r − 1); symmetric triangular
  * a(r₁ + r₂ − 1); arcsine a·sin(2πr); Student t (Type A, JCGM 101 6.4.9) as scale·t_ν with ν = n − 1,
  * scale s/√n for a mean of n readings or s for a single reading, t_ν by Bailey's polar method.
+ * Uniforms r = (k + ½)/2³² come from 32-bit words k generated in bulk into `words` (signed, length ≥ 2·count).
  */
-export function fillSamples(target: Float64Array, count: number, estimate: number, distribution: Distribution, random: RandomGenerator): void {
+export function fillSamples(
+  target: Float64Array,
+  count: number,
+  estimate: number,
+  distribution: Distribution,
+  random: RandomGenerator,
+  words: Int32Array = new Int32Array(2 * count),
+): void {
   switch (distribution.shape) {
     case 'normal': {
       const u = 'standardUncertainty' in distribution ? distribution.standardUncertainty : distribution.expandedUncertainty / distribution.coverageFactor;
-      for (let index = 0; index < count; index += 1) target[index] = estimate + u * nextStandardNormal(random);
+      random.fillInt32(words, count);
+      fillNormal(target, words, count, estimate, u, random);
       return;
     }
     case 'rectangular': {
-      const width = 2 * distribution.halfWidth;
-      const low = estimate - distribution.halfWidth;
-      for (let index = 0; index < count; index += 1) target[index] = low + width * random.nextUniform();
+      const width = 2 * distribution.halfWidth * wordToUniform;
+      const low = estimate - distribution.halfWidth + (signOffset + 0.5) * width;
+      random.fillInt32(words, count);
+      for (let index = 0; index < count; index += 1) target[index] = low + width * words[index];
       return;
     }
     case 'triangular': {
       const a = distribution.halfWidth;
-      const low = estimate - a;
-      for (let index = 0; index < count; index += 1) target[index] = low + a * (random.nextUniform() + random.nextUniform());
+      const scale = a * wordToUniform;
+      const low = estimate - a + (2 * signOffset + 1) * scale;
+      random.fillInt32(words, 2 * count);
+      for (let index = 0; index < count; index += 1) target[index] = low + scale * (words[2 * index] + words[2 * index + 1]);
       return;
     }
     case 'arcsine': {
       const a = distribution.halfWidth;
-      for (let index = 0; index < count; index += 1) target[index] = estimate + a * Math.sin(twoPi * random.nextUniform());
+      random.fillInt32(words, count);
+      for (let index = 0; index < count; index += 1) target[index] = estimate + a * Math.sin(twoPi * (words[index] + signOffset + 0.5) * wordToUniform);
       return;
     }
     case 'studentT': {

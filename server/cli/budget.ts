@@ -1,0 +1,85 @@
+/**
+ * Batch CLI: the full uncertainty budget of one plan document as JSON on stdout.
+ *
+ *   npm run budget -- <plan.json> [--trials N] [--seed S]
+ *   npm run budget -- --schema        (prints the plan JSON Schema, as committed in docs/plan.schema.json)
+ *
+ * Exit codes: 0 success; 1 invalid plan (message and field path on stderr); 2 usage or unreadable file.
+ * Non-finite numbers (ν_eff = ∞) are written as null.
+ */
+import { readFileSync } from 'node:fs';
+import { evaluatePlan, parsePlan, PlanError, planJsonSchema, runMonteCarlo, validateAgainstGum } from '../../shared/uncertainty/index';
+
+const usage = 'usage: npm run budget -- <plan.json> [--trials N] [--seed S]   |   npm run budget -- --schema';
+
+function fail(code: number, message: string): never {
+  process.stderr.write(`${message}\n`);
+  process.exit(code);
+}
+
+function parseArguments(argv: string[]): { file?: string; trials: number; seed: number; schema: boolean } {
+  const options = { file: undefined as string | undefined, trials: 1_000_000, seed: 1, schema: false };
+  for (let index = 0; index < argv.length; index += 1) {
+    const argument = argv[index];
+    const numberAfter = (name: string) => {
+      const value = Number(argv[index + 1]);
+      index += 1;
+      if (!Number.isInteger(value) || value < 0) fail(2, `${name} needs a whole number.\n${usage}`);
+      return value;
+    };
+    if (argument === '--trials') options.trials = numberAfter('--trials');
+    else if (argument === '--seed') options.seed = numberAfter('--seed');
+    else if (argument === '--schema') options.schema = true;
+    else if (argument.startsWith('--')) fail(2, `Unknown option ${argument}.\n${usage}`);
+    else if (options.file === undefined) options.file = argument;
+    else fail(2, `Only one plan file at a time.\n${usage}`);
+  }
+  return options;
+}
+
+const options = parseArguments(process.argv.slice(2));
+if (options.schema) {
+  process.stdout.write(`${JSON.stringify(planJsonSchema(), null, 2)}\n`);
+  process.exit(0);
+}
+if (options.file === undefined) fail(2, usage);
+
+let document: unknown;
+try {
+  document = JSON.parse(readFileSync(options.file, 'utf8'));
+} catch (error) {
+  fail(2, `Cannot read ${options.file}: ${(error as Error).message}`);
+}
+
+try {
+  const plan = parsePlan(document);
+  const budget = evaluatePlan(plan);
+  const monteCarlo = options.trials >= 2 ? runMonteCarlo(plan, { trials: options.trials, seed: options.seed }) : undefined;
+  const output = {
+    engineVersion: budget.engineVersion,
+    title: plan.title,
+    measurand: budget.measurand,
+    value: budget.value,
+    unit: budget.unit,
+    standardUncertainty: budget.standardUncertainty,
+    relativeStandardUncertainty: budget.relativeStandardUncertainty,
+    effectiveDegreesOfFreedom: budget.effectiveDegreesOfFreedom,
+    coverageProbability: budget.coverageProbability,
+    coverageFactor: budget.coverageFactor,
+    expandedUncertainty: budget.expandedUncertainty,
+    relativeExpandedUncertainty: budget.relativeExpandedUncertainty,
+    rounded: budget.rounded,
+    statement: budget.statement,
+    contributions: budget.rows,
+    byStep: budget.byStep,
+    byCategory: budget.byCategory,
+    checkpoints: budget.checkpoints,
+    monteCarlo: monteCarlo ?? null,
+    validation: monteCarlo ? validateAgainstGum(budget, monteCarlo) : null,
+    warnings: budget.warnings,
+  };
+  process.stdout.write(`${JSON.stringify(output, (_key, value: unknown) => (typeof value === 'number' && !Number.isFinite(value) ? null : value), 2)}\n`);
+} catch (error) {
+  if (error instanceof PlanError) fail(1, `Invalid plan at ${error.path.join('.') || '(top level)'}: ${error.message}`);
+  throw error;
+}

@@ -26,6 +26,10 @@ import { libraryRepository } from './library/library-repository';
 import { libraryRouter } from './library/library-router';
 import { libraryService } from './library/library-service';
 import { policyRouter } from './policy/policy-router';
+import { preparationsRepository } from './preparations/preparations-repository';
+import { preparationsRouter } from './preparations/preparations-router';
+import { preparationsService } from './preparations/preparations-service';
+import { routeFinderService } from './preparations/route-finder-service';
 import { policyService } from './policy/policy-service';
 
 export interface AppConfig {
@@ -68,6 +72,8 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   const certificates = certificatesService({ library, audit, directory: config.certificateDir, now });
   const imports = importService({ db, library, items });
   const policy = policyService({ db, audit, now });
+  const preparations = preparationsService({ db, preparations: preparationsRepository(db), items, policy, audit, now });
+  const routes = routeFinderService({ items, policy });
   const passport = createPassport(auth);
   const authorize = createAuthorize(labs);
 
@@ -131,6 +137,7 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   api.use('/labs/:labId', libraryRouter({ items, certificates, imports, authorize }));
   api.use('/labs/:labId', policyRouter({ policy, authorize }));
   api.use('/labs/:labId', auditRouter({ db, authorize }));
+  api.use('/labs/:labId', preparationsRouter({ preparations, routes, authorize }));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,6 +1,7 @@
 import type { Knex } from 'knex';
 import * as foundation from '../../migrations/20261202010000_foundation';
 import * as library from '../../migrations/20261202020000_library';
+import * as preparations from '../../migrations/20261202030000_preparations';
 
 /**
  * Migrations imported statically, so they run the same under tsx and Vitest
@@ -9,6 +10,7 @@ import * as library from '../../migrations/20261202020000_library';
 const migrations: Record<string, Knex.Migration> = {
   '20261202010000_foundation': foundation,
   '20261202020000_library': library,
+  '20261202030000_preparations': preparations,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

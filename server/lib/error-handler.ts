@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { PlanError } from '../../shared/uncertainty';
 import { AppError } from './errors';
 
 const STATUS: Record<AppError['kind'], number> = {
@@ -27,6 +28,10 @@ export function errorHandler(log: (message: string, error: unknown) => void): Er
   return (error, _req, res, _next) => {
     if (error instanceof AppError) {
       res.status(STATUS[error.kind]).json({ error: { code: error.code, message: error.message, details: error.details } });
+      return;
+    }
+    if (error instanceof PlanError) {
+      res.status(400).json({ error: { code: 'plan_invalid', message: error.message, details: [{ path: error.path.join('.'), message: error.message }] } });
       return;
     }
     const http = error as HttpishError;

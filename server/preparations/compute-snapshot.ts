@@ -1,0 +1,39 @@
+import { policySettings } from '../../shared/contracts/engine-equipment';
+import type { LabPolicy } from '../../shared/contracts/library';
+import type { UsedItem, VersionDetail } from '../../shared/contracts/preparations';
+import { ENGINE_VERSION, evaluatePlan, parsePlan, runMonteCarlo, validateAgainstGum } from '../../shared/uncertainty';
+
+/** Monte Carlo trials for a stored budget: enough for two significant digits of u in typical chains. */
+export const SERVER_TRIALS = 200_000;
+
+export type Snapshot = NonNullable<VersionDetail['snapshot']>;
+
+/** The lab's policy decides coverage, glassware distribution and temperature range of every stored budget. */
+export function withPolicy(plan: Record<string, unknown>, policy: LabPolicy): Record<string, unknown> {
+  const settings = typeof plan.settings === 'object' && plan.settings !== null ? (plan.settings as Record<string, unknown>) : {};
+  return { ...plan, settings: { ...settings, ...policySettings(policy) } };
+}
+
+/**
+ * Runs the engine on a resolved plan: GUM budget, Monte Carlo with the given seed, and the JCGM 101 §8
+ * validation of one against the other. Throws the engine's PlanError for a plan it cannot compute.
+ */
+export function computeSnapshot(input: { plan: Record<string, unknown>; items: UsedItem[]; seed: number; computedAt: string; policy: LabPolicy }): Snapshot {
+  const plan = parsePlan(withPolicy(input.plan, input.policy));
+  const budget = evaluatePlan(plan);
+  const monteCarlo = runMonteCarlo(plan, { seed: input.seed, trials: SERVER_TRIALS });
+  const validation = validateAgainstGum(budget, monteCarlo);
+  const warnings = input.policy.minimumWeightRule ? budget.warnings : budget.warnings.filter((w) => !/minimum weight|USP/i.test(w));
+  return {
+    engineVersion: ENGINE_VERSION,
+    computedAt: input.computedAt,
+    seed: input.seed,
+    trials: monteCarlo.trials,
+    plan: plan as unknown as Record<string, unknown>,
+    items: input.items,
+    budget: budget as unknown as Record<string, unknown>,
+    monteCarlo: monteCarlo as unknown as Record<string, unknown>,
+    validation: validation as unknown as Record<string, unknown>,
+    warnings,
+  };
+}

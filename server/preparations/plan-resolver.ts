@@ -1,0 +1,79 @@
+import { toEngineEquipment } from '../../shared/contracts/engine-equipment';
+import type { EquipmentItem, EquipmentKind } from '../../shared/contracts/library';
+import type { Override, UsedItem } from '../../shared/contracts/preparations';
+import { PlanError, type PlanPathSegment } from '../../shared/uncertainty';
+import { AppError } from '../lib/errors';
+
+/** Which library kinds each equipment slot of a step accepts. */
+const SLOTS: Record<string, Record<string, EquipmentKind[]>> = {
+  weighSolid: { material: ['solid-material'], balance: ['balance'] },
+  startFromCertifiedSolution: { material: ['solution-material'] },
+  makeUpToVolume: { flask: ['flask'] },
+  pipetteAliquot: { pipette: ['glass-pipette', 'piston-pipette'] },
+  weighAliquot: { balance: ['balance'] },
+  makeUpToMass: { balance: ['balance'] },
+  dissolveInSolvent: { balance: ['balance'] },
+};
+
+export interface ResolvedPlan {
+  plan: Record<string, unknown>;
+  items: UsedItem[];
+}
+
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+
+/**
+ * Replaces every piece of equipment in the plan by the lab library's current revision of it.
+ * - An id that is not in this lab's library refuses the whole request (AppError): a plan never reads
+ *   another lab's equipment.
+ * - A retired item, or an overdue/expired one without a recorded override reason, is a PlanError at
+ *   that step, so a draft can still be kept and shown with the problem.
+ */
+export function resolvePlan(plan: Record<string, unknown>, library: Map<string, EquipmentItem>, overrides: Override[]): ResolvedPlan {
+  const steps = Array.isArray(plan.steps) ? plan.steps : [];
+  const used = new Map<string, UsedItem>();
+  const reasons = new Map(overrides.map((o) => [o.libraryId, o.reason]));
+  const problems: PlanError[] = [];
+
+  const resolvedSteps = steps.map((step: unknown, index: number) => {
+    if (!isRecord(step) || typeof step.kind !== 'string' || !SLOTS[step.kind]) return step;
+    const out: Record<string, unknown> = { ...step };
+    for (const [slot, kinds] of Object.entries(SLOTS[step.kind])) {
+      const given = step[slot];
+      const path: PlanPathSegment[] = ['steps', index, slot];
+      if (!isRecord(given)) continue; // the engine reports the missing slot
+      const libraryId = typeof given.libraryId === 'string' ? given.libraryId : undefined;
+      if (!libraryId) {
+        problems.push(new PlanError(path, `Step ${index + 1}: choose the ${slot} from the lab's library.`));
+        continue;
+      }
+      const item = library.get(libraryId);
+      if (!item) throw new AppError('validation', 'foreign_equipment', `Step ${index + 1}: that ${slot} is not in this lab's library.`, [{ path: path.join('.'), message: 'Not in this lab’s library.' }]);
+      if (!kinds.includes(item.kind)) {
+        problems.push(new PlanError(path, `Step ${index + 1}: ${item.code} is not a ${kinds.join(' or ').replace(/-/g, ' ')}.`));
+        continue;
+      }
+      const reason = reasons.get(libraryId) ?? null;
+      if (item.status === 'retired') problems.push(new PlanError(path, `Step ${index + 1}: ${item.code} is retired and cannot be used in a new plan.`));
+      else if ((item.calibration === 'overdue' || item.expiry === 'expired') && !reason) {
+        problems.push(new PlanError(path, `Step ${index + 1}: ${item.code}: ${item.flags.join('; ')}. Record a reason to use it anyway.`));
+      }
+      out[slot] = toEngineEquipment(item);
+      const data = item.current.data as { certificateReference?: string; hazardNotes?: string };
+      used.set(libraryId, {
+        libraryId,
+        code: item.code,
+        kind: item.kind,
+        revisionId: String(item.current.id),
+        revisionNumber: item.current.number,
+        certificateReference: data.certificateReference ?? '',
+        flags: item.flags,
+        override: reason,
+        hazardNotes: data.hazardNotes ?? '',
+      });
+    }
+    return out;
+  });
+  if (problems.length > 0) throw problems[0];
+  return { plan: { ...plan, steps: resolvedSteps }, items: [...used.values()] };
+}

@@ -1,0 +1,64 @@
+import { Router, type Request } from 'express';
+import { z } from 'zod';
+import { idParam } from '../../shared/contracts/auth';
+import { preparationListQuerySchema, preparationWriteSchema, routeFinderRequestSchema, titleSchema } from '../../shared/contracts/preparations';
+import type { Authorize, LabContext, SessionUser } from '../auth/authorize';
+import { valid, validate } from '../lib/validate';
+import type { PreparationsService } from './preparations-service';
+import type { routeFinderService } from './route-finder-service';
+
+const prepParams = z.object({ labId: idParam, preparationId: idParam });
+const versionParams = z.object({ labId: idParam, preparationId: idParam, number: idParam });
+const duplicateSchema = z.object({ title: titleSchema.optional() });
+
+/** Preparations of a lab: every member reads; analysts plan, save, version and duplicate. */
+export function preparationsRouter(deps: { preparations: PreparationsService; routes: ReturnType<typeof routeFinderService>; authorize: Authorize }) {
+  const { preparations, routes, authorize } = deps;
+  const router = Router({ mergeParams: true });
+  const read = authorize.lab('member');
+  const plan = authorize.lab(['analyst']);
+  const lab = (req: Request) => (req.lab as LabContext).id;
+  const actor = (req: Request) => req.user as SessionUser;
+
+  router.get('/preparations', read, validate({ query: preparationListQuerySchema }), async (req, res) => {
+    const { query } = valid(req, { query: preparationListQuerySchema });
+    res.json(await preparations.list(lab(req), query));
+  });
+
+  router.post('/preparations', plan, validate({ body: preparationWriteSchema }), async (req, res) => {
+    const { body } = valid(req, { body: preparationWriteSchema });
+    res.status(201).json(await preparations.create(lab(req), actor(req), body));
+  });
+
+  router.get('/preparations/:preparationId', read, validate({ params: prepParams }), async (req, res) => {
+    const { params } = valid(req, { params: prepParams });
+    res.json(await preparations.detail(lab(req), params.preparationId));
+  });
+
+  router.get('/preparations/:preparationId/versions/:number', read, validate({ params: versionParams }), async (req, res) => {
+    const { params } = valid(req, { params: versionParams });
+    res.json(await preparations.version(lab(req), params.preparationId, params.number));
+  });
+
+  router.put('/preparations/:preparationId/versions/:number', plan, validate({ params: versionParams, body: preparationWriteSchema }), async (req, res) => {
+    const { params, body } = valid(req, { params: versionParams, body: preparationWriteSchema });
+    res.json(await preparations.saveDraft(lab(req), actor(req), params.preparationId, params.number, body));
+  });
+
+  router.post('/preparations/:preparationId/versions', plan, validate({ params: prepParams }), async (req, res) => {
+    const { params } = valid(req, { params: prepParams });
+    res.status(201).json(await preparations.newVersion(lab(req), actor(req), params.preparationId));
+  });
+
+  router.post('/preparations/:preparationId/duplicate', plan, validate({ params: prepParams, body: duplicateSchema }), async (req, res) => {
+    const { params, body } = valid(req, { params: prepParams, body: duplicateSchema });
+    res.status(201).json(await preparations.duplicate(lab(req), actor(req), params.preparationId, body.title));
+  });
+
+  router.post('/route-finder', authorize.lab(['analyst', 'qa']), validate({ body: routeFinderRequestSchema }), async (req, res) => {
+    const { body } = valid(req, { body: routeFinderRequestSchema });
+    res.json(await routes.find(lab(req), body));
+  });
+
+  return router;
+}

@@ -1,0 +1,199 @@
+import { randomInt } from 'node:crypto';
+import type { EquipmentItem } from '../../shared/contracts/library';
+import type { Override, PlanProblem, PreparationDetail, PreparationSummary, PreparationWrite, VersionDetail, VersionSummary } from '../../shared/contracts/preparations';
+import { PlanError } from '../../shared/uncertainty';
+import type { AuditRepository } from '../audit/audit-repository';
+import type { SessionUser } from '../auth/authorize';
+import type { Db } from '../db/connection';
+import { canonicalJson, sha256Hex } from '../lib/canonical-json';
+import { conflict, forbidden, notFound } from '../lib/errors';
+import type { LibraryService } from '../library/library-service';
+import type { PolicyService } from '../policy/policy-service';
+import { computeSnapshot, type Snapshot } from './compute-snapshot';
+import { resolvePlan } from './plan-resolver';
+import type { PreparationRow, PreparationsRepository, VersionRow, VersionWrite } from './preparations-repository';
+
+const parse = <T>(json: string | null): T | null => (json === null ? null : (JSON.parse(json) as T));
+
+function toSummary(row: VersionRow): VersionSummary {
+  return { id: row.id, number: row.number, status: row.status, createdBy: row.created_by_name, createdAt: row.created_at, updatedAt: row.updated_at, resultStatement: row.result_statement };
+}
+
+export function toVersionDetail(row: VersionRow): VersionDetail {
+  return {
+    ...toSummary(row),
+    plan: JSON.parse(row.plan_json),
+    overrides: JSON.parse(row.overrides_json),
+    seed: Number(row.seed),
+    problem: parse<PlanProblem>(row.problem_json),
+    snapshot: parse<Snapshot>(row.snapshot_json),
+    snapshotSha256: row.snapshot_sha256,
+  };
+}
+
+function preparationSummary(prep: PreparationRow, latest: VersionRow): PreparationSummary {
+  return {
+    id: prep.id,
+    title: prep.title,
+    analyte: prep.analyte,
+    materialCode: prep.material_code,
+    createdBy: prep.created_by_name,
+    createdById: prep.created_by,
+    createdAt: prep.created_at,
+    updatedAt: prep.updated_at,
+    latestVersion: toSummary(latest),
+    value: latest.value,
+    unit: latest.unit,
+    relativeExpandedUncertainty: latest.relative_expanded_uncertainty,
+  };
+}
+
+const analyteOf = (plan: Record<string, unknown>) => String((plan.analyte as { formula?: unknown } | undefined)?.formula ?? '').slice(0, 40);
+
+export function preparationsService(deps: { db: Db; preparations: PreparationsRepository; items: LibraryService; policy: PolicyService; audit: AuditRepository; now: () => Date }) {
+  const { db, preparations, items, policy, audit, now } = deps;
+
+  async function libraryOf(labId: number): Promise<Map<string, EquipmentItem>> {
+    return new Map((await items.list(labId, { status: 'all' })).map((item) => [String(item.id), item]));
+  }
+
+  /** Resolves against the library and computes; a plan the engine refuses is kept with its problem. */
+  async function compute(labId: number, plan: Record<string, unknown>, overrides: Override[], seed: number): Promise<VersionWrite & { materialCode: string | null }> {
+    const at = now().toISOString();
+    const library = await libraryOf(labId);
+    const base = { plan_json: JSON.stringify(plan), overrides_json: JSON.stringify(overrides), seed, updated_at: at };
+    try {
+      const resolved = resolvePlan(plan, library, overrides);
+      const snapshot = computeSnapshot({ plan: resolved.plan, items: resolved.items, seed, computedAt: at, policy: await policy.read(labId) });
+      const budget = snapshot.budget as { statement: string; value: number; unit: string; relativeExpandedUncertainty: number };
+      const snapshotJson = canonicalJson(snapshot);
+      const material = resolved.items.find((i) => i.kind.endsWith('-material'));
+      return {
+        ...base,
+        problem_json: null,
+        snapshot_json: snapshotJson,
+        snapshot_sha256: sha256Hex(snapshotJson),
+        result_statement: budget.statement,
+        value: budget.value,
+        unit: budget.unit,
+        relative_expanded_uncertainty: budget.relativeExpandedUncertainty,
+        materialCode: material?.code ?? null,
+      };
+    } catch (error) {
+      if (!(error instanceof PlanError)) throw error;
+      return {
+        ...base,
+        problem_json: JSON.stringify({ path: error.path, message: error.message }),
+        snapshot_json: null,
+        snapshot_sha256: null,
+        result_statement: null,
+        value: null,
+        unit: null,
+        relative_expanded_uncertainty: null,
+        materialCode: null,
+      };
+    }
+  }
+
+  async function detail(labId: number, id: number): Promise<PreparationDetail> {
+    const prep = await preparations.find(labId, id);
+    if (!prep) throw notFound('The preparation');
+    const versions = await preparations.versionsOf(id);
+    return { ...preparationSummary(prep, versions[0]), versions: versions.map(toSummary), current: toVersionDetail(versions[0]) };
+  }
+
+  return {
+    detail,
+
+    async list(labId: number, filter: Parameters<PreparationsRepository['list']>[1]): Promise<PreparationSummary[]> {
+      const rows = await preparations.list(labId, filter);
+      const latest = new Map((await preparations.versionsByIds(rows.map((r) => r.latest_version_id))).map((v) => [v.id, v]));
+      return rows.map((row) => preparationSummary(row, latest.get(row.latest_version_id) as VersionRow));
+    },
+
+    async version(labId: number, id: number, number: number): Promise<VersionDetail> {
+      if (!(await preparations.find(labId, id))) throw notFound('The preparation');
+      const row = await preparations.version(id, number);
+      if (!row) throw notFound(`Version ${number}`);
+      return toVersionDetail(row);
+    },
+
+    async create(labId: number, actor: SessionUser, input: PreparationWrite & { overrides: Override[] }): Promise<PreparationDetail> {
+      const seed = input.seed ?? randomInt(0, 2 ** 32);
+      const computed = await compute(labId, input.plan, input.overrides, seed);
+      const { materialCode, ...write } = computed;
+      const at = now().toISOString();
+      const id = await db.transaction(async (trx) => {
+        const preparationId = await preparations.insertPreparation({ labId, title: input.title, analyte: analyteOf(input.plan), materialCode, createdBy: actor.id, at }, trx);
+        await preparations.insertVersion(preparationId, 1, { ...write, created_by: actor.id, created_at: at }, trx);
+        await audit.record(
+          { labId, actorUserId: actor.id, action: 'preparation.created', entityType: 'preparation', entityId: preparationId, summary: `${actor.name} created “${input.title}”`, after: { statement: write.result_statement } },
+          trx,
+        );
+        return preparationId;
+      });
+      return detail(labId, id);
+    },
+
+    /** Saves (and recomputes) the draft version; only its author may, and only while it is a draft. */
+    async saveDraft(labId: number, actor: SessionUser, id: number, number: number, input: PreparationWrite & { overrides: Override[] }): Promise<PreparationDetail> {
+      const prep = await preparations.find(labId, id);
+      if (!prep) throw notFound('The preparation');
+      const current = await preparations.version(id, number);
+      if (!current) throw notFound(`Version ${number}`);
+      if (current.status !== 'draft') throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
+      if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can change its draft. Duplicate it to make your own variant.');
+      const computed = await compute(labId, input.plan, input.overrides, input.seed ?? Number(current.seed));
+      const { materialCode, ...write } = computed;
+      await db.transaction(async (trx) => {
+        const changed = await preparations.updateDraft(current.id, write, trx);
+        if (changed === 0) throw conflict('not_draft', `Version ${number} is no longer a draft.`);
+        await preparations.touchPreparation(id, { title: input.title, analyte: analyteOf(input.plan), materialCode, at: write.updated_at }, trx);
+        await audit.record(
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'preparation.computed',
+            entityType: 'preparation',
+            entityId: id,
+            summary: `${actor.name} saved version ${number} of “${input.title}”${write.result_statement ? `: ${write.result_statement}` : ' (not computable yet)'}`,
+            before: { statement: current.result_statement },
+            after: { statement: write.result_statement },
+          },
+          trx,
+        );
+      });
+      return detail(labId, id);
+    },
+
+    /** Starts a new draft version from the latest one (after approval or return). */
+    async newVersion(labId: number, actor: SessionUser, id: number): Promise<PreparationDetail> {
+      const prep = await preparations.find(labId, id);
+      if (!prep) throw notFound('The preparation');
+      const [latest] = await preparations.versionsOf(id);
+      if (latest.status === 'draft') throw conflict('draft_exists', `Version ${latest.number} is still a draft: change that one.`);
+      const computed = await compute(labId, JSON.parse(latest.plan_json), JSON.parse(latest.overrides_json), Number(latest.seed));
+      const { materialCode: _material, ...write } = computed;
+      await db.transaction(async (trx) => {
+        await preparations.insertVersion(id, latest.number + 1, { ...write, created_by: actor.id, created_at: write.updated_at }, trx);
+        await preparations.touchPreparation(id, { title: prep.title, analyte: prep.analyte, materialCode: prep.material_code, at: write.updated_at }, trx);
+        await audit.record({ labId, actorUserId: actor.id, action: 'preparation.versioned', entityType: 'preparation', entityId: id, summary: `${actor.name} started version ${latest.number + 1} of “${prep.title}”` }, trx);
+      });
+      return detail(labId, id);
+    },
+
+    /** A new preparation with a copy of this one's plan, for comparing variants. */
+    async duplicate(labId: number, actor: SessionUser, id: number, title?: string): Promise<PreparationDetail> {
+      const prep = await preparations.find(labId, id);
+      if (!prep) throw notFound('The preparation');
+      const [latest] = await preparations.versionsOf(id);
+      return this.create(labId, actor, {
+        title: title ?? `${prep.title} (variant)`.slice(0, 200),
+        plan: JSON.parse(latest.plan_json),
+        overrides: JSON.parse(latest.overrides_json),
+        seed: Number(latest.seed),
+      });
+    },
+  };
+}
+export type PreparationsService = ReturnType<typeof preparationsService>;

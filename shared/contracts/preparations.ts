@@ -1,0 +1,125 @@
+import { z } from 'zod';
+
+/**
+ * Preparations and their versions. The plan is the engine's plan document (shared/uncertainty
+ * planSchema) with every library item carrying its libraryId; the server resolves those to the
+ * lab's current revisions before computing, so the stored numbers come from the library, not
+ * from the browser.
+ */
+
+export const PREPARATION_STATUSES = ['draft', 'submitted', 'approved', 'returned'] as const;
+export const preparationStatusSchema = z.enum(PREPARATION_STATUSES);
+export type PreparationStatus = z.infer<typeof preparationStatusSchema>;
+
+export const titleSchema = z.string().trim().min(1, 'Give the preparation a title.').max(200, 'Use at most 200 characters.');
+
+/** Using an overdue or expired item needs a recorded reason. */
+export const overrideSchema = z.object({
+  libraryId: z.string().min(1),
+  reason: z.string().trim().min(3, 'Say why this item may be used, in a few words.').max(500),
+});
+export type Override = z.infer<typeof overrideSchema>;
+
+export const seedSchema = z.number().int().min(0).max(4294967295, 'The seed is a whole number from 0 to 4294967295.');
+
+/** What the planner saves (autosave sends the same). The plan is checked by the engine, not here. */
+export const preparationWriteSchema = z.object({
+  title: titleSchema,
+  plan: z.record(z.string(), z.unknown()),
+  overrides: z.array(overrideSchema).max(50).default([]),
+  seed: seedSchema.optional(),
+});
+export type PreparationWrite = z.input<typeof preparationWriteSchema>;
+
+export const preparationListQuerySchema = z.object({
+  status: preparationStatusSchema.optional(),
+  analyst: z.coerce.number().int().positive().optional(),
+  material: z.string().trim().max(40).optional(),
+  from: z.iso.date({ message: 'Give the date as YYYY-MM-DD.' }).optional(),
+  to: z.iso.date({ message: 'Give the date as YYYY-MM-DD.' }).optional(),
+  q: z.string().trim().max(200).optional(),
+});
+
+/** One library item as a computed version used it. */
+export const usedItemSchema = z.object({
+  libraryId: z.string(),
+  code: z.string(),
+  kind: z.string(),
+  revisionId: z.string(),
+  revisionNumber: z.number().int(),
+  certificateReference: z.string(),
+  flags: z.array(z.string()),
+  override: z.string().nullable(),
+  hazardNotes: z.string(),
+});
+export type UsedItem = z.infer<typeof usedItemSchema>;
+
+/** Where the plan is wrong, when it cannot be computed (the draft is kept as it is). */
+export const planProblemSchema = z.object({ path: z.array(z.union([z.string(), z.number()])), message: z.string() });
+export type PlanProblem = z.infer<typeof planProblemSchema>;
+
+export const versionSummarySchema = z.object({
+  id: z.number().int(),
+  number: z.number().int(),
+  status: preparationStatusSchema,
+  createdBy: z.string(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  resultStatement: z.string().nullable(),
+});
+export type VersionSummary = z.infer<typeof versionSummarySchema>;
+
+export const preparationSummarySchema = z.object({
+  id: z.number().int(),
+  title: z.string(),
+  analyte: z.string(),
+  materialCode: z.string().nullable(),
+  createdBy: z.string(),
+  createdById: z.number().int(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  latestVersion: versionSummarySchema,
+  value: z.number().nullable(),
+  unit: z.string().nullable(),
+  relativeExpandedUncertainty: z.number().nullable(),
+});
+export type PreparationSummary = z.infer<typeof preparationSummarySchema>;
+
+/** A version in full: the plan as saved, and the computed snapshot (null while the plan has a problem). */
+export const versionDetailSchema = versionSummarySchema.extend({
+  plan: z.record(z.string(), z.unknown()),
+  overrides: z.array(overrideSchema),
+  seed: z.number().int(),
+  problem: planProblemSchema.nullable(),
+  snapshot: z
+    .object({
+      engineVersion: z.string(),
+      computedAt: z.string(),
+      seed: z.number().int(),
+      trials: z.number().int(),
+      /** The plan exactly as computed, with the library data inline. */
+      plan: z.record(z.string(), z.unknown()),
+      items: z.array(usedItemSchema),
+      budget: z.record(z.string(), z.unknown()),
+      monteCarlo: z.record(z.string(), z.unknown()),
+      validation: z.record(z.string(), z.unknown()),
+      warnings: z.array(z.string()),
+    })
+    .nullable(),
+  snapshotSha256: z.string().nullable(),
+});
+export type VersionDetail = z.infer<typeof versionDetailSchema>;
+
+export const preparationDetailSchema = preparationSummarySchema.extend({
+  versions: z.array(versionSummarySchema),
+  current: versionDetailSchema,
+});
+export type PreparationDetail = z.infer<typeof preparationDetailSchema>;
+
+export const routeFinderRequestSchema = z.object({
+  target: z.object({ value: z.number().positive('The target must be greater than zero.'), unit: z.string().min(1) }),
+  analyte: z.string().trim().min(1, 'Enter the analyte, e.g. Pb.'),
+  materialLibraryId: z.string().min(1, 'Choose the reference material.'),
+  maximumDilutions: z.number().int().min(0).max(3).default(3),
+  limit: z.number().int().min(1).max(50).default(10),
+});

@@ -1,4 +1,4 @@
-import { policySettings } from '../../shared/contracts/engine-equipment';
+import { withPolicy } from '../../shared/contracts/engine-equipment';
 import type { LabPolicy } from '../../shared/contracts/library';
 import type { UsedItem, VersionDetail } from '../../shared/contracts/preparations';
 import { ENGINE_VERSION, evaluatePlan, parsePlan, runMonteCarlo, validateAgainstGum } from '../../shared/uncertainty';
@@ -7,12 +7,6 @@ import { ENGINE_VERSION, evaluatePlan, parsePlan, runMonteCarlo, validateAgainst
 export const SERVER_TRIALS = 200_000;
 
 export type Snapshot = NonNullable<VersionDetail['snapshot']>;
-
-/** The lab's policy decides coverage, glassware distribution and temperature range of every stored budget. */
-export function withPolicy(plan: Record<string, unknown>, policy: LabPolicy): Record<string, unknown> {
-  const settings = typeof plan.settings === 'object' && plan.settings !== null ? (plan.settings as Record<string, unknown>) : {};
-  return { ...plan, settings: { ...settings, ...policySettings(policy) } };
-}
 
 /**
  * Runs the engine on a resolved plan: GUM budget, Monte Carlo with the given seed, and the JCGM 101 §8

@@ -90,3 +90,9 @@ export function policySettings(policy: LabPolicy): Pick<PlanInput['settings'], '
     temperatureHalfRangeC: policy.temperatureHalfRangeC,
   };
 }
+
+/** The plan with the lab policy's settings in force; client (live budget) and server (stored budget) both apply it. */
+export function withPolicy(plan: Record<string, unknown>, policy: LabPolicy): Record<string, unknown> {
+  const settings = typeof plan.settings === 'object' && plan.settings !== null ? (plan.settings as Record<string, unknown>) : {};
+  return { ...plan, settings: { ...settings, ...policySettings(policy) } };
+}

@@ -30,6 +30,8 @@ import { preparationsRepository } from './preparations/preparations-repository';
 import { preparationsRouter } from './preparations/preparations-router';
 import { preparationsService } from './preparations/preparations-service';
 import { routeFinderService } from './preparations/route-finder-service';
+import { reviewRouter } from './reviews/review-router';
+import { reviewService } from './reviews/review-service';
 import { policyService } from './policy/policy-service';
 
 export interface AppConfig {
@@ -72,7 +74,9 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   const certificates = certificatesService({ library, audit, directory: config.certificateDir, now });
   const imports = importService({ db, library, items });
   const policy = policyService({ db, audit, now });
-  const preparations = preparationsService({ db, preparations: preparationsRepository(db), items, policy, audit, now });
+  const preparationRows = preparationsRepository(db);
+  const preparations = preparationsService({ db, preparations: preparationRows, items, policy, audit, now });
+  const reviews = reviewService({ db, preparations: preparationRows, users, labs, audit, mailer, now, publicUrl, log });
   const routes = routeFinderService({ items, policy });
   const passport = createPassport(auth);
   const authorize = createAuthorize(labs);
@@ -138,6 +142,7 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   api.use('/labs/:labId', policyRouter({ policy, authorize }));
   api.use('/labs/:labId', auditRouter({ db, authorize }));
   api.use('/labs/:labId', preparationsRouter({ preparations, routes, authorize }));
+  api.use('/labs/:labId', reviewRouter({ reviews, preparations, authorize }));
   api.use(apiNotFound);
   app.use('/api', api);
 

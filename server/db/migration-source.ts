@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import * as foundation from '../../migrations/20261202010000_foundation';
 import * as library from '../../migrations/20261202020000_library';
 import * as preparations from '../../migrations/20261202030000_preparations';
+import * as reviews from '../../migrations/20261202040000_reviews';
 
 /**
  * Migrations imported statically, so they run the same under tsx and Vitest
@@ -11,6 +12,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202010000_foundation': foundation,
   '20261202020000_library': library,
   '20261202030000_preparations': preparations,
+  '20261202040000_reviews': reviews,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

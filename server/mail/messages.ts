@@ -42,3 +42,35 @@ export function passwordResetMessage(input: { name: string; link: string }) {
     ),
   };
 }
+
+export function submittedMessage(input: { reviewerName: string; analyst: string; title: string; version: number; statement: string | null; comment: string; link: string }) {
+  return {
+    subject: `Review requested: ${input.title} (version ${input.version})`,
+    ...layout(
+      [
+        `Hello ${input.reviewerName},`,
+        `${input.analyst} has submitted version ${input.version} of “${input.title}” for review.`,
+        input.statement ? `Result: ${input.statement}` : 'The version has no computed result.',
+        ...(input.comment ? [`Note from ${input.analyst}: ${input.comment}`] : []),
+      ],
+      { href: input.link, label: 'Open the record' },
+    ),
+  };
+}
+
+export function decisionMessage(input: { analystName: string; reviewer: string; title: string; version: number; decision: 'approved' | 'returned'; comment: string; link: string }) {
+  const approved = input.decision === 'approved';
+  return {
+    subject: `${approved ? 'Approved' : 'Returned'}: ${input.title} (version ${input.version})`,
+    ...layout(
+      [
+        `Hello ${input.analystName},`,
+        approved
+          ? `${input.reviewer} approved version ${input.version} of “${input.title}”. The approved record can no longer change; later changes go into a new version.`
+          : `${input.reviewer} returned version ${input.version} of “${input.title}” with comments. You can change it and submit it again.`,
+        `${approved ? 'Statement' : 'Comments'}: ${input.comment}`,
+      ],
+      { href: input.link, label: 'Open the record' },
+    ),
+  };
+}

@@ -34,6 +34,20 @@ export interface VersionRow {
   updated_at: string;
 }
 
+export interface ReviewRow {
+  id: number;
+  version_id: number;
+  action: 'submitted' | 'returned' | 'approved';
+  actor_user_id: number;
+  actor_name: string;
+  at: string;
+  comment: string;
+  snapshot_sha256: string | null;
+}
+
+/** The statuses in which the author may still change a version. */
+export const EDITABLE_STATUSES: PreparationStatus[] = ['draft', 'returned'];
+
 export type VersionWrite = Pick<
   VersionRow,
   'plan_json' | 'overrides_json' | 'seed' | 'problem_json' | 'snapshot_json' | 'snapshot_sha256' | 'result_statement' | 'value' | 'unit' | 'relative_expanded_uncertainty' | 'updated_at'
@@ -80,8 +94,13 @@ export function preparationsRepository(db: Db) {
       const [inserted] = await trx('preparation_versions').insert({ preparation_id: preparationId, number, status: 'draft', ...row }).returning('id');
       return idOf(inserted);
     },
-    /** Only a draft changes in place; the WHERE makes that hold even if two requests race. */
-    updateDraft: (versionId: number, row: VersionWrite, trx: Db) => trx('preparation_versions').where({ id: versionId, status: 'draft' }).update(row),
+    /** Only a draft (or a returned version) changes in place; the WHERE makes that hold even if two requests race. */
+    updateDraft: (versionId: number, row: VersionWrite, trx: Db) => trx('preparation_versions').where({ id: versionId }).whereIn('status', EDITABLE_STATUSES).update(row),
+    /** Moves a version between statuses; returns 0 when it was not in `from` any more. */
+    setStatus: (versionId: number, from: PreparationStatus, to: PreparationStatus, trx: Db) => trx('preparation_versions').where({ id: versionId, status: from }).update({ status: to }),
+    reviewsOf: (versionId: number, trx: Db = db): Promise<ReviewRow[]> =>
+      trx('version_reviews as r').join('users as u', 'u.id', 'r.actor_user_id').where('r.version_id', versionId).orderBy('r.id').select('r.*', 'u.name as actor_name'),
+    insertReview: (row: Omit<ReviewRow, 'id' | 'actor_name'>, trx: Db) => trx('version_reviews').insert(row),
   };
 }
 export type PreparationsRepository = ReturnType<typeof preparationsRepository>;

@@ -11,17 +11,30 @@ import type { LibraryService } from '../library/library-service';
 import type { PolicyService } from '../policy/policy-service';
 import { computeSnapshot, type Snapshot } from './compute-snapshot';
 import { resolvePlan } from './plan-resolver';
-import type { PreparationRow, PreparationsRepository, VersionRow, VersionWrite } from './preparations-repository';
+import { EDITABLE_STATUSES, type PreparationRow, type PreparationsRepository, type ReviewRow, type VersionRow, type VersionWrite } from './preparations-repository';
+import type { Review } from '../../shared/contracts/reviews';
 
 const parse = <T>(json: string | null): T | null => (json === null ? null : (JSON.parse(json) as T));
 
 function toSummary(row: VersionRow): VersionSummary {
-  return { id: row.id, number: row.number, status: row.status, createdBy: row.created_by_name, createdAt: row.created_at, updatedAt: row.updated_at, resultStatement: row.result_statement };
+  return {
+    id: row.id,
+    number: row.number,
+    status: row.status,
+    createdBy: row.created_by_name,
+    createdAt: row.created_at,
+    updatedAt: row.updated_at,
+    resultStatement: row.result_statement,
+    editable: EDITABLE_STATUSES.includes(row.status),
+  };
 }
 
-export function toVersionDetail(row: VersionRow): VersionDetail {
+const toReview = (row: ReviewRow): Review => ({ id: row.id, action: row.action, actor: row.actor_name, at: row.at, comment: row.comment, snapshotSha256: row.snapshot_sha256 });
+
+export function toVersionDetail(row: VersionRow, reviews: ReviewRow[]): VersionDetail {
   return {
     ...toSummary(row),
+    reviews: reviews.map(toReview),
     plan: JSON.parse(row.plan_json),
     overrides: JSON.parse(row.overrides_json),
     seed: Number(row.seed),
@@ -99,7 +112,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     const prep = await preparations.find(labId, id);
     if (!prep) throw notFound('The preparation');
     const versions = await preparations.versionsOf(id);
-    return { ...preparationSummary(prep, versions[0]), versions: versions.map(toSummary), current: toVersionDetail(versions[0]) };
+    return { ...preparationSummary(prep, versions[0]), versions: versions.map(toSummary), current: toVersionDetail(versions[0], await preparations.reviewsOf(versions[0].id)) };
   }
 
   return {
@@ -115,7 +128,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       if (!(await preparations.find(labId, id))) throw notFound('The preparation');
       const row = await preparations.version(id, number);
       if (!row) throw notFound(`Version ${number}`);
-      return toVersionDetail(row);
+      return toVersionDetail(row, await preparations.reviewsOf(row.id));
     },
 
     async create(labId: number, actor: SessionUser, input: PreparationWrite & { overrides: Override[] }): Promise<PreparationDetail> {
@@ -141,7 +154,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       if (!prep) throw notFound('The preparation');
       const current = await preparations.version(id, number);
       if (!current) throw notFound(`Version ${number}`);
-      if (current.status !== 'draft') throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
+      if (!EDITABLE_STATUSES.includes(current.status)) throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
       if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can change its draft. Duplicate it to make your own variant.');
       const computed = await compute(labId, input.plan, input.overrides, input.seed ?? Number(current.seed));
       const { materialCode, ...write } = computed;
@@ -171,7 +184,8 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const [latest] = await preparations.versionsOf(id);
-      if (latest.status === 'draft') throw conflict('draft_exists', `Version ${latest.number} is still a draft: change that one.`);
+      if (EDITABLE_STATUSES.includes(latest.status)) throw conflict('draft_exists', `Version ${latest.number} can still be edited: change that one.`);
+      if (latest.status === 'submitted') throw conflict('under_review', `Version ${latest.number} is waiting for review; a new version can start once it is approved or returned.`);
       const computed = await compute(labId, JSON.parse(latest.plan_json), JSON.parse(latest.overrides_json), Number(latest.seed));
       const { materialCode: _material, ...write } = computed;
       await db.transaction(async (trx) => {

@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem } from '../../shared/contracts/library';
 import { hashPassword } from '../auth/password';
+import { leadPlan, libraryByCode } from '../test-support/demo-plans';
 import { buildTestApp, demo, signIn, type Client, type TestApp } from '../test-support/test-app';
 
 let t: TestApp;
@@ -14,36 +15,20 @@ beforeEach(async () => {
   t = await buildTestApp();
   labId = (await t.db('labs').first()).id;
   analyst = await signIn(t.app, demo('analyst'));
-  const items = (await analyst.get(`/api/labs/${labId}/equipment?status=all`).expect(200)).body as EquipmentItem[];
-  library = new Map(items.map((item) => [item.code, item]));
+  library = await libraryByCode(analyst, labId);
 });
 afterEach(async () => {
   await t.close();
 });
 
 const use = (code: string) => toEngineEquipment(library.get(code)!);
-
-/** Lead standard from solid lead nitrate (demo items): 0.1599 g to 100 mL, then 10 mL to 100 mL. */
-function leadPlan(overrides: { balance?: string; aliquotFlask?: string } = {}) {
-  return {
-    formatVersion: 1,
-    title: 'Pb 100 mg/L intermediate',
-    analyte: { formula: 'Pb' },
-    settings: { outputUnit: 'mg/L', labTemperatureC: 20 },
-    steps: [
-      { kind: 'weighSolid', material: use('RM-PBN-01'), balance: use(overrides.balance ?? 'BAL-05'), netMassG: 0.1599 },
-      { kind: 'makeUpToVolume', flask: use('VF-100-A') },
-      { kind: 'pipetteAliquot', pipette: use('GP-10-A'), volumeMl: 10 },
-      { kind: 'makeUpToVolume', flask: use(overrides.aliquotFlask ?? 'VF-100-B') },
-    ],
-  };
-}
+const leadPlanWith = (choice: { balance?: string; aliquotFlask?: string } = {}) => leadPlan(library, choice);
 
 const url = (path: string) => `/api/labs/${labId}${path}`;
 
 describe('saving a preparation computes and stores its snapshot', () => {
   it('stores value, budget, Monte Carlo, the revisions used, engine version, seed and a SHA-256 of the snapshot', async () => {
-    const res = await analyst.post(url('/preparations'), { title: 'Pb 100 mg/L intermediate', plan: leadPlan(), seed: 20261202 }).expect(201);
+    const res = await analyst.post(url('/preparations'), { title: 'Pb 100 mg/L intermediate', plan: leadPlanWith(), seed: 20261202 }).expect(201);
     const version = res.body.current;
     expect(version.status).toBe('draft');
     expect(version.problem).toBeNull();
@@ -66,7 +51,7 @@ describe('saving a preparation computes and stores its snapshot', () => {
   });
 
   it('computes from the library, not from equipment data sent by the browser', async () => {
-    const plan = leadPlan();
+    const plan = leadPlanWith();
     (plan.steps[1] as { flask: { toleranceMl: number } }).flask.toleranceMl = 0.000001;
     const res = await analyst.post(url('/preparations'), { title: 'Forged tolerance', plan }).expect(201);
     expect(res.body.current.snapshot.plan.steps[1].flask.toleranceMl).toBe(0.1);
@@ -78,7 +63,7 @@ describe('saving a preparation computes and stores its snapshot', () => {
     const otherLab = typeof other === 'object' ? other.id : other;
     const [owner] = await t.db('users').insert({ email: 'o@other.example', name: 'O', password_hash: await hashPassword('x-password-1'), active: true, created_at: at }).returning('id');
     const [item] = await t.db('equipment_items').insert({ lab_id: otherLab, kind: 'flask', code: 'FOREIGN-1', status: 'active', created_at: at, created_by: typeof owner === 'object' ? owner.id : owner }).returning('id');
-    const plan = leadPlan();
+    const plan = leadPlanWith();
     (plan.steps[1] as { flask: { libraryId: string } }).flask.libraryId = String(typeof item === 'object' ? item.id : item);
     const res = await analyst.post(url('/preparations'), { title: 'Sneaky', plan }).expect(400);
     expect(res.body.error.code).toBe('foreign_equipment');
@@ -87,7 +72,7 @@ describe('saving a preparation computes and stores its snapshot', () => {
   });
 
   it('keeps a draft the engine cannot compute, with the problem and its path', async () => {
-    const plan = leadPlan();
+    const plan = leadPlanWith();
     (plan.steps[2] as { pipette: unknown }).pipette = use('GP-25-A');
     (plan.steps[2] as { volumeMl: number }).volumeMl = 25;
     (plan.steps[1] as { flask: unknown }).flask = use('VF-10-A');
@@ -103,18 +88,18 @@ describe('saving a preparation computes and stores its snapshot', () => {
     const items = (await analyst.get(url('/equipment?status=all')).expect(200)).body as EquipmentItem[];
     library = new Map(items.map((item) => [item.code, item]));
     expect(library.get('BAL-04')!.calibration).toBe('overdue');
-    const blocked = await analyst.post(url('/preparations'), { title: 'On the old balance', plan: leadPlan({ balance: 'BAL-04' }) }).expect(201);
+    const blocked = await analyst.post(url('/preparations'), { title: 'On the old balance', plan: leadPlanWith({ balance: 'BAL-04' }) }).expect(201);
     expect(blocked.body.current.problem.message).toMatch(/BAL-04.*overdue.*reason/);
     const libraryId = String(library.get('BAL-04')!.id);
     const allowed = await analyst
-      .post(url('/preparations'), { title: 'On the old balance', plan: leadPlan({ balance: 'BAL-04' }), overrides: [{ libraryId, reason: 'BAL-05 out for service; BAL-04 checked with 10 g weight today' }] })
+      .post(url('/preparations'), { title: 'On the old balance', plan: leadPlanWith({ balance: 'BAL-04' }), overrides: [{ libraryId, reason: 'BAL-05 out for service; BAL-04 checked with 10 g weight today' }] })
       .expect(201);
     expect(allowed.body.current.problem).toBeNull();
     expect(allowed.body.current.snapshot.items.find((i: { code: string }) => i.code === 'BAL-04').override).toMatch(/out for service/);
   });
 
   it('keeps what a stored budget read when the library item is revised later', async () => {
-    const res = await analyst.post(url('/preparations'), { title: 'Pinned revisions', plan: leadPlan() }).expect(201);
+    const res = await analyst.post(url('/preparations'), { title: 'Pinned revisions', plan: leadPlanWith() }).expect(201);
     const before = await t.db('preparation_versions').where({ id: res.body.current.id }).first();
     const qa = await signIn(t.app, demo('qa'));
     const flask = library.get('VF-100-A')!;
@@ -129,16 +114,16 @@ describe('saving a preparation computes and stores its snapshot', () => {
 
 describe('drafts, versions, variants and roles', () => {
   it('autosaves the draft in place, refuses another analyst, and lists with filters', async () => {
-    const created = (await analyst.post(url('/preparations'), { title: 'Pb working', plan: leadPlan() }).expect(201)).body;
+    const created = (await analyst.post(url('/preparations'), { title: 'Pb working', plan: leadPlanWith() }).expect(201)).body;
     const saved = (
-      await analyst.agent.put(url(`/preparations/${created.id}/versions/1`)).set('x-csrf-token', analyst.token).send({ title: 'Pb working standard', plan: leadPlan({ aliquotFlask: 'VF-100-A' }) }).expect(200)
+      await analyst.agent.put(url(`/preparations/${created.id}/versions/1`)).set('x-csrf-token', analyst.token).send({ title: 'Pb working standard', plan: leadPlanWith({ aliquotFlask: 'VF-100-A' }) }).expect(200)
     ).body;
     expect(saved.title).toBe('Pb working standard');
     expect(saved.versions).toHaveLength(1);
     expect(saved.current.seed).toBe(created.current.seed);
 
     const other = await signIn(t.app, demo('analyst2'));
-    await other.agent.put(url(`/preparations/${created.id}/versions/1`)).set('x-csrf-token', other.token).send({ title: 'Mine now', plan: leadPlan() }).expect(403);
+    await other.agent.put(url(`/preparations/${created.id}/versions/1`)).set('x-csrf-token', other.token).send({ title: 'Mine now', plan: leadPlanWith() }).expect(403);
     const variant = (await other.post(url(`/preparations/${created.id}/duplicate`), {}).expect(201)).body;
     expect(variant.title).toBe('Pb working standard (variant)');
     expect(variant.createdBy).toBe('Lucía Ferreira-Blom');
@@ -151,11 +136,11 @@ describe('drafts, versions, variants and roles', () => {
   });
 
   it('lets QA and auditors read but not plan', async () => {
-    const created = (await analyst.post(url('/preparations'), { title: 'Pb', plan: leadPlan() }).expect(201)).body;
+    const created = (await analyst.post(url('/preparations'), { title: 'Pb', plan: leadPlanWith() }).expect(201)).body;
     for (const who of ['qa', 'auditor'] as const) {
       const client = await signIn(t.app, demo(who));
       await client.get(url(`/preparations/${created.id}`)).expect(200);
-      await client.post(url('/preparations'), { title: 'x', plan: leadPlan() }).expect(403);
+      await client.post(url('/preparations'), { title: 'x', plan: leadPlanWith() }).expect(403);
     }
   });
 

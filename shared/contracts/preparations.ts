@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { reviewSchema } from './reviews';
 
 /**
  * Preparations and their versions. The plan is the engine's plan document (shared/uncertainty
@@ -66,6 +67,8 @@ export const versionSummarySchema = z.object({
   createdAt: z.string(),
   updatedAt: z.string(),
   resultStatement: z.string().nullable(),
+  /** A returned or draft version can be edited by its author. */
+  editable: z.boolean(),
 });
 export type VersionSummary = z.infer<typeof versionSummarySchema>;
 
@@ -107,6 +110,8 @@ export const versionDetailSchema = versionSummarySchema.extend({
     })
     .nullable(),
   snapshotSha256: z.string().nullable(),
+  /** Submissions, returns with their comments, and the signed approval, oldest first. */
+  reviews: z.array(reviewSchema).default([]),
 });
 export type VersionDetail = z.infer<typeof versionDetailSchema>;
 

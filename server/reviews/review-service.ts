@@ -1,0 +1,194 @@
+import type { ApprovedRecord, ReviewQueueItem, SnapshotVerification } from '../../shared/contracts/reviews';
+import type { AuditRepository } from '../audit/audit-repository';
+import type { SessionUser } from '../auth/authorize';
+import { verifyPassword } from '../auth/password';
+import type { UsersRepository } from '../auth/users-repository';
+import type { Db } from '../db/connection';
+import type { LabsRepository } from '../labs/labs-repository';
+import { sha256Hex } from '../lib/canonical-json';
+import { conflict, forbidden, notFound, validationError } from '../lib/errors';
+import type { Mailer } from '../mail/mailer';
+import { decisionMessage, submittedMessage } from '../mail/messages';
+import type { PreparationsRepository, VersionRow } from '../preparations/preparations-repository';
+
+/**
+ * The review workflow of a computed version: draft or returned → submitted (its author) → approved
+ * (signed with the reviewer's password) or returned with comments (QA, never the submitter).
+ */
+export function reviewService(deps: {
+  db: Db;
+  preparations: PreparationsRepository;
+  users: UsersRepository;
+  labs: LabsRepository;
+  audit: AuditRepository;
+  mailer: Mailer;
+  now: () => Date;
+  publicUrl: (path: string) => string;
+  log: (message: string, error?: unknown) => void;
+}) {
+  const { db, preparations, users, labs, audit, mailer, now } = deps;
+
+  async function load(labId: number, preparationId: number, number: number) {
+    const prep = await preparations.find(labId, preparationId);
+    if (!prep) throw notFound('The preparation');
+    const version = await preparations.version(preparationId, number);
+    if (!version) throw notFound(`Version ${number}`);
+    return { prep, version };
+  }
+
+  /** Mail goes out after the change is committed; a mail failure is logged, never undoes a decision. */
+  async function notify(send: () => Promise<void>) {
+    try {
+      await send();
+    } catch (error) {
+      deps.log('Notification mail failed', error);
+    }
+  }
+
+  const lastSubmission = async (version: VersionRow) => [...(await preparations.reviewsOf(version.id))].reverse().find((r) => r.action === 'submitted');
+
+  return {
+    async submit(labId: number, actor: SessionUser, preparationId: number, number: number, comment: string): Promise<void> {
+      const { prep, version } = await load(labId, preparationId, number);
+      if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can submit it.');
+      if (version.status !== 'draft' && version.status !== 'returned') throw conflict('not_draft', `Version ${number} is ${version.status}; only a draft or returned version can be submitted.`);
+      if (!version.snapshot_json) throw validationError('This version has no computed budget yet: fix the problem shown in the plan, then submit.');
+      const at = now().toISOString();
+      await db.transaction(async (trx) => {
+        if ((await preparations.setStatus(version.id, version.status, 'submitted', trx)) === 0) throw conflict('not_draft', 'The version changed meanwhile; reload it.');
+        await preparations.insertReview({ version_id: version.id, action: 'submitted', actor_user_id: actor.id, at, comment, snapshot_sha256: version.snapshot_sha256 }, trx);
+        await audit.record({ labId, actorUserId: actor.id, action: 'preparation.submitted', entityType: 'preparation', entityId: preparationId, summary: `${actor.name} submitted version ${number} of “${prep.title}”`, before: { status: version.status }, after: { status: 'submitted' } }, trx);
+      });
+      const reviewers = (await labs.members(labId)).filter((m) => m.role === 'qa' && m.active && m.user_id !== actor.id);
+      for (const reviewer of reviewers) {
+        await notify(() =>
+          mailer.send({
+            to: reviewer.email,
+            labId,
+            ...submittedMessage({ reviewerName: reviewer.name, analyst: actor.name, title: prep.title, version: number, statement: version.result_statement, comment, link: deps.publicUrl(`/preparations/${preparationId}`) }),
+          }),
+        );
+      }
+    },
+
+    async decide(
+      labId: number,
+      actor: SessionUser,
+      preparationId: number,
+      number: number,
+      decision: { kind: 'approved'; password: string; statement: string } | { kind: 'returned'; comment: string },
+    ): Promise<void> {
+      const { prep, version } = await load(labId, preparationId, number);
+      if (version.status !== 'submitted') throw conflict('not_submitted', `Version ${number} is ${version.status}; only a submitted version can be reviewed.`);
+      const submission = await lastSubmission(version);
+      if (submission?.actor_user_id === actor.id || prep.created_by === actor.id) throw forbidden('You submitted this version; another member of QA must review it.');
+      if (decision.kind === 'approved') {
+        const account = await users.findById(actor.id);
+        if (!account || !(await verifyPassword(decision.password, account.password_hash))) {
+          await audit.record({ labId, actorUserId: actor.id, action: 'preparation.approval_refused', entityType: 'preparation', entityId: preparationId, summary: `Approval of “${prep.title}” v${number} refused: password not confirmed` });
+          throw validationError('The password is not right; the approval was not signed.', [{ path: 'password', message: 'This is not your password.' }]);
+        }
+        if (!version.snapshot_json || sha256Hex(version.snapshot_json) !== version.snapshot_sha256) throw conflict('snapshot_mismatch', 'The stored snapshot does not match its hash; it cannot be approved. Tell your administrator.');
+      }
+      const at = now().toISOString();
+      const comment = decision.kind === 'approved' ? decision.statement : decision.comment;
+      await db.transaction(async (trx) => {
+        if ((await preparations.setStatus(version.id, 'submitted', decision.kind, trx)) === 0) throw conflict('not_submitted', 'The version changed meanwhile; reload it.');
+        await preparations.insertReview({ version_id: version.id, action: decision.kind, actor_user_id: actor.id, at, comment, snapshot_sha256: version.snapshot_sha256 }, trx);
+        await audit.record(
+          {
+            labId,
+            actorUserId: actor.id,
+            action: decision.kind === 'approved' ? 'preparation.approved' : 'preparation.returned',
+            entityType: 'preparation',
+            entityId: preparationId,
+            summary: `${actor.name} ${decision.kind} version ${number} of “${prep.title}”: ${comment}`,
+            before: { status: 'submitted' },
+            after: { status: decision.kind, snapshotSha256: version.snapshot_sha256 },
+          },
+          trx,
+        );
+      });
+      const analyst = await users.findById(prep.created_by);
+      if (analyst?.active) {
+        await notify(() =>
+          mailer.send({
+            to: analyst.email,
+            labId,
+            ...decisionMessage({ analystName: analyst.name, reviewer: actor.name, title: prep.title, version: number, decision: decision.kind, comment, link: deps.publicUrl(`/preparations/${preparationId}`) }),
+          }),
+        );
+      }
+    },
+
+    async queue(labId: number): Promise<ReviewQueueItem[]> {
+      const rows: (VersionRow & { title: string; submitted_at: string; submitted_by: string; comment: string })[] = await db('preparation_versions as v')
+        .join('preparations as p', 'p.id', 'v.preparation_id')
+        .join('version_reviews as r', (j) => j.on('r.version_id', 'v.id').andOnVal('r.action', '=', 'submitted'))
+        .join('users as u', 'u.id', 'r.actor_user_id')
+        .where({ 'p.lab_id': labId, 'v.status': 'submitted' })
+        .select('v.*', 'p.title', 'r.at as submitted_at', 'u.name as submitted_by', 'r.comment')
+        .orderBy('r.at', 'asc');
+      const latest = new Map<number, (typeof rows)[number]>();
+      for (const row of rows) latest.set(row.id, row);
+      const t = now().getTime();
+      return [...latest.values()].map((row) => ({
+        preparationId: row.preparation_id,
+        title: row.title,
+        versionNumber: row.number,
+        submittedBy: row.submitted_by,
+        submittedAt: row.submitted_at,
+        waitingHours: Math.max(0, (t - Date.parse(row.submitted_at)) / 3_600_000),
+        resultStatement: row.result_statement,
+        comment: row.comment,
+      }));
+    },
+
+    async approvedRecords(labId: number, q?: string): Promise<ApprovedRecord[]> {
+      const query = db('preparation_versions as v')
+        .join('preparations as p', 'p.id', 'v.preparation_id')
+        .join('users as a', 'a.id', 'p.created_by')
+        .join('version_reviews as r', (j) => j.on('r.version_id', 'v.id').andOnVal('r.action', '=', 'approved'))
+        .join('users as u', 'u.id', 'r.actor_user_id')
+        .where({ 'p.lab_id': labId, 'v.status': 'approved' })
+        .select('p.id as preparation_id', 'p.title', 'p.analyte', 'v.number', 'a.name as analyst', 'u.name as approved_by', 'r.at as approved_at', 'v.result_statement', 'v.snapshot_sha256')
+        .orderBy('r.at', 'desc')
+        .limit(500);
+      if (q) query.andWhere((w) => w.whereLike('p.title', `%${q}%`).orWhereLike('p.analyte', `%${q}%`).orWhereLike('a.name', `%${q}%`).orWhereLike('p.material_code', `%${q}%`));
+      const rows: { preparation_id: number; title: string; analyte: string; number: number; analyst: string; approved_by: string; approved_at: string; result_statement: string | null; snapshot_sha256: string }[] = await query;
+      return rows.map((r) => ({
+        preparationId: r.preparation_id,
+        title: r.title,
+        analyte: r.analyte,
+        versionNumber: r.number,
+        analyst: r.analyst,
+        approvedBy: r.approved_by,
+        approvedAt: r.approved_at,
+        resultStatement: r.result_statement,
+        snapshotSha256: r.snapshot_sha256,
+      }));
+    },
+
+    /** Recomputes the SHA-256 of the stored snapshot and compares it with the hash stored and the hash signed. */
+    async verify(labId: number, preparationId: number, number: number): Promise<SnapshotVerification> {
+      const { version } = await load(labId, preparationId, number);
+      if (!version.snapshot_json) throw validationError('This version has no computed snapshot to verify.');
+      const computedSha256 = sha256Hex(version.snapshot_json);
+      const approval = (await preparations.reviewsOf(version.id)).find((r) => r.action === 'approved');
+      const approvedSha256 = approval?.snapshot_sha256 ?? null;
+      const intact = computedSha256 === version.snapshot_sha256 && (approvedSha256 === null || approvedSha256 === computedSha256);
+      return {
+        computedSha256,
+        storedSha256: version.snapshot_sha256,
+        approvedSha256,
+        intact,
+        message: intact
+          ? approvedSha256
+            ? 'The stored snapshot is exactly the one that was approved.'
+            : 'The stored snapshot matches its recorded hash.'
+          : 'The stored snapshot does NOT match its recorded hash: the record has been altered since it was computed or signed.',
+      };
+    },
+  };
+}
+export type ReviewService = ReturnType<typeof reviewService>;

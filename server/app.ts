@@ -30,6 +30,7 @@ import { preparationsRepository } from './preparations/preparations-repository';
 import { preparationsRouter } from './preparations/preparations-router';
 import { preparationsService } from './preparations/preparations-service';
 import { routeFinderService } from './preparations/route-finder-service';
+import { recordRouter } from './pdf/record-router';
 import { reviewRouter } from './reviews/review-router';
 import { reviewService } from './reviews/review-service';
 import { policyService } from './policy/policy-service';
@@ -143,6 +144,7 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   api.use('/labs/:labId', auditRouter({ db, authorize }));
   api.use('/labs/:labId', preparationsRouter({ preparations, routes, authorize }));
   api.use('/labs/:labId', reviewRouter({ reviews, preparations, authorize }));
+  api.use('/labs/:labId', recordRouter({ preparations, labs, authorize, clock }));
   api.use(apiNotFound);
   app.use('/api', api);
 

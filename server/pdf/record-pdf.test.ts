@@ -1,0 +1,88 @@
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { leadPlan, libraryByCode } from '../test-support/demo-plans';
+import { buildTestApp, demo, DEMO_PASSWORD, signIn, type Client, type TestApp } from '../test-support/test-app';
+
+let t: TestApp;
+let labId: number;
+let analyst: Client;
+let preparationId: number;
+const work = mkdtempSync(join(tmpdir(), 'dilutrace-pdf-'));
+
+const url = (path: string) => `/api/labs/${labId}${path}`;
+const binary = (res: NodeJS.ReadableStream & { setEncoding(e: string): void; on(e: string, cb: (c?: unknown) => void): void }, cb: (e: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (chunk) => chunks.push(chunk as Buffer));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+
+async function downloadPdf(client: Client, number = 1): Promise<Buffer> {
+  const res = await client.agent.get(url(`/preparations/${preparationId}/versions/${number}/record.pdf`)).buffer(true).parse(binary as never).expect(200);
+  expect(res.headers['content-type']).toBe('application/pdf');
+  return res.body as Buffer;
+}
+
+/** Text of a PDF through poppler's pdftotext (Debian poppler-utils, installed by the test command). */
+function pdfText(pdf: Buffer, name: string): string {
+  const file = join(work, `${name}.pdf`);
+  writeFileSync(file, pdf);
+  execFileSync('pdftotext', ['-layout', file, join(work, `${name}.txt`)]);
+  return readFileSync(join(work, `${name}.txt`), 'utf8');
+}
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  labId = (await t.db('labs').first()).id;
+  analyst = await signIn(t.app, demo('analyst'));
+  const library = await libraryByCode(analyst, labId);
+  preparationId = (await analyst.post(url('/preparations'), { title: 'Pb 100 mg/L intermediate', plan: leadPlan(library), seed: 77 }).expect(201)).body.id;
+});
+afterEach(async () => {
+  await t.close();
+});
+
+describe('the PDF record', () => {
+  it('marks an unapproved version as a draft on every page', async () => {
+    const text = pdfText(await downloadPdf(analyst), 'draft');
+    expect(text).toContain('DRAFT — not approved');
+    expect(text).toMatch(/page 1 of \d/);
+  });
+
+  it('holds the result statement, budget rows, signatures, hash and cautions of an approved version, and page 1 is not blank', async () => {
+    await analyst.post(url(`/preparations/${preparationId}/versions/1/submit`), {}).expect(200);
+    const qa = await signIn(t.app, demo('qa'));
+    const approved = (await qa.post(url(`/preparations/${preparationId}/versions/1/approve`), { password: DEMO_PASSWORD, statement: 'Reviewed against SOP-CHEM-014.' }).expect(200)).body;
+    const auditor = await signIn(t.app, demo('auditor'));
+    const pdf = await downloadPdf(auditor);
+    const text = pdfText(pdf, 'approved');
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).toContain(approved.current.snapshot.budget.statement.replace(/\s+/g, ' '));
+    expect(flat).not.toContain('DRAFT');
+    expect(flat).toContain('Wellmere Regional Water Laboratory');
+    for (const row of approved.current.snapshot.budget.rows.slice(0, 5)) expect(flat).toContain(row.label);
+    expect(flat).toContain('BAL-05 (revision 1, certificate WCS-26-0412)');
+    expect(flat).toContain('Approved and signed (password confirmed) by Imogen Tasker');
+    expect(flat).toContain(approved.current.snapshotSha256);
+    expect(flat).toContain('safety data sheet');
+    expect(flat).toMatch(/Lead compounds are toxic/);
+    expect(flat).toMatch(/seed 77/);
+
+    const png = join(work, 'page');
+    execFileSync('pdftoppm', ['-png', '-r', '40', '-f', '1', '-l', '1', join(work, 'approved.pdf'), png]);
+    const image = readFileSync(`${png}-1.png`);
+    // A blank A4 page at 40 dpi compresses to well under 1 kB; text, tables and lines make it several kB.
+    expect(image.length).toBeGreaterThan(4000);
+  });
+
+  it('is refused for a version with no computed budget', async () => {
+    const library = await libraryByCode(analyst, labId);
+    const plan = leadPlan(library);
+    (plan.steps[0] as { netMassG: number }).netMassG = 1000;
+    const broken = (await analyst.post(url('/preparations'), { title: 'Too much', plan }).expect(201)).body;
+    const res = await analyst.get(url(`/preparations/${broken.id}/versions/1/record.pdf`)).expect(400);
+    expect(res.body.error.message).toMatch(/no record to print/);
+  });
+});

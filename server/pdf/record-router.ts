@@ -1,0 +1,29 @@
+import { Router, type Request } from 'express';
+import { z } from 'zod';
+import { idParam } from '../../shared/contracts/auth';
+import type { Authorize, LabContext } from '../auth/authorize';
+import type { LabsRepository } from '../labs/labs-repository';
+import type { Clock } from '../lib/clock';
+import { validationError } from '../lib/errors';
+import { valid, validate } from '../lib/validate';
+import type { PreparationsService } from '../preparations/preparations-service';
+import { renderRecordPdf } from './record-pdf';
+
+const versionParams = z.object({ labId: idParam, preparationId: idParam, number: idParam });
+
+/** GET …/versions/:number/record.pdf — the signed record (or a watermarked draft) for any lab member. */
+export function recordRouter(deps: { preparations: PreparationsService; labs: LabsRepository; authorize: Authorize; clock: Clock }) {
+  const router = Router({ mergeParams: true });
+  router.get('/preparations/:preparationId/versions/:number/record.pdf', deps.authorize.lab('member'), validate({ params: versionParams }), async (req: Request, res) => {
+    const { params } = valid(req, { params: versionParams });
+    const labId = (req.lab as LabContext).id;
+    const preparation = await deps.preparations.detail(labId, params.preparationId);
+    const version = await deps.preparations.version(labId, params.preparationId, params.number);
+    if (!version.snapshot) throw validationError('This version has no computed budget yet, so there is no record to print.');
+    const lab = await deps.labs.findById(labId);
+    const pdf = await renderRecordPdf({ labName: lab?.name ?? '', preparation, version, generatedAt: deps.clock.now().toISOString() });
+    const name = `dilutrace-${params.preparationId}-v${params.number}${version.status === 'approved' ? '' : '-draft'}.pdf`;
+    res.set('X-Content-Type-Options', 'nosniff').attachment(name).type('application/pdf').send(pdf);
+  });
+  return router;
+}

@@ -5,20 +5,20 @@ const labels = (roles: Parameters<typeof navigationFor>[0]) => navigationFor(rol
 
 describe('navigationFor', () => {
   it('gives an administrator the member and outbox pages', () => {
-    expect(labels(['admin'])).toEqual(['Dashboard', 'Members', 'Outbox']);
+    expect(labels(['admin'])).toEqual(['Dashboard', 'Library', 'Lab policy', 'Members', 'Outbox']);
   });
 
-  it('gives analysts, QA and auditors the dashboard only, for now', () => {
-    expect(labels(['analyst'])).toEqual(['Dashboard']);
-    expect(labels(['qa'])).toEqual(['Dashboard']);
-    expect(labels(['auditor'])).toEqual(['Dashboard']);
+  it('gives analysts, QA and auditors the library and the lab policy (read-only unless QA)', () => {
+    expect(labels(['analyst'])).toEqual(['Dashboard', 'Library', 'Lab policy']);
+    expect(labels(['qa'])).toEqual(['Dashboard', 'Library', 'Lab policy']);
+    expect(labels(['auditor'])).toEqual(['Dashboard', 'Library', 'Lab policy']);
   });
 
   it('takes the union of several roles without repeating an entry', () => {
-    expect(labels(['analyst', 'admin', 'qa'])).toEqual(['Dashboard', 'Members', 'Outbox']);
+    expect(labels(['analyst', 'admin', 'qa'])).toEqual(['Dashboard', 'Library', 'Lab policy', 'Members', 'Outbox']);
   });
 
-  it('still shows the dashboard to someone with no role in the active lab', () => {
+  it('shows only the dashboard to someone with no role in the active lab (there is no library to read)', () => {
     expect(labels([])).toEqual(['Dashboard']);
   });
 });

@@ -2,15 +2,21 @@ import type { Role } from '../../shared/contracts/roles';
 import { paths } from '../config/paths';
 import { can, type Permission } from '../lib/authorization';
 
-export type NavigationItem = { label: string; href: string; permission: Permission | null };
+/** `null`: everyone signed in; `'member'`: anyone with a role in the active lab; otherwise that permission. */
+export type NavigationItem = { label: string; href: string; permission: Permission | 'member' | null };
 
 const NAVIGATION: readonly NavigationItem[] = [
   { label: 'Dashboard', href: paths.app.dashboard.href(), permission: null },
+  // Every member reads the library and the policy; only QA (and admins, for the library) change them.
+  { label: 'Library', href: paths.app.library.href(), permission: 'member' },
+  { label: 'Lab policy', href: paths.app.policy.href(), permission: 'member' },
   { label: 'Members', href: paths.app.members.href(), permission: 'manageMembers' },
   { label: 'Outbox', href: paths.app.outbox.href(), permission: 'readOutbox' },
 ];
 
 /** The navigation entries the given roles (in the active lab) may use, in display order. */
 export function navigationFor(roles: readonly Role[]): NavigationItem[] {
-  return NAVIGATION.filter((item) => item.permission === null || can(roles, item.permission));
+  return NAVIGATION.filter(
+    (item) => item.permission === null || (item.permission === 'member' ? roles.length > 0 : can(roles, item.permission)),
+  );
 }

@@ -22,6 +22,12 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: () => import('./routes/app/root').then(convert),
           children: [
             { index: true, lazy: () => import('./routes/app/dashboard').then(convert) },
+            { path: paths.app.library.path, lazy: () => import('./routes/app/library').then(convert) },
+            { path: paths.app.libraryNew.path, lazy: () => import('./routes/app/library-new').then(convert) },
+            { path: paths.app.libraryImport.path, lazy: () => import('./routes/app/library-import').then(convert) },
+            { path: paths.app.libraryItem.path, lazy: () => import('./routes/app/library-item').then(convert) },
+            { path: paths.app.libraryItemEdit.path, lazy: () => import('./routes/app/library-item-edit').then(convert) },
+            { path: paths.app.policy.path, lazy: () => import('./routes/app/policy').then(convert) },
             { path: paths.app.members.path, lazy: () => import('./routes/app/members').then(convert) },
             { path: paths.app.outbox.path, lazy: () => import('./routes/app/outbox').then(convert) },
           ],

@@ -14,6 +14,17 @@ describe('paths', () => {
   });
 });
 
+describe('library paths', () => {
+  it('keeps the kind tab and status filter in the address', () => {
+    expect(paths.app.library.href()).toBe('/library');
+    expect(paths.app.library.href({ kind: 'glass-pipette', status: 'retired' })).toBe('/library?kind=glass-pipette&status=retired');
+    expect(paths.app.libraryNew.href('flask')).toBe('/library/new?kind=flask');
+    expect(paths.app.libraryItem.href(12)).toBe('/library/12');
+    expect(paths.app.libraryItem.href(12, 1)).toBe('/library/12?revision=1');
+    expect(paths.app.libraryItemEdit.href(12)).toBe('/library/12/edit');
+  });
+});
+
 describe('safeRedirectPath', () => {
   it('keeps paths inside the app', () => {
     expect(safeRedirectPath('/outbox?message=3')).toBe('/outbox?message=3');

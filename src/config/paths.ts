@@ -1,3 +1,16 @@
+import type { EquipmentKind } from '../../shared/contracts/library';
+
+/** The library list's status filter, as the API's `status` query takes it. */
+export type EquipmentStatusFilter = 'active' | 'retired' | 'all';
+
+/** `path` with the defined values of `query` as its search string. */
+function withQuery(path: string, query: Record<string, string | number | undefined>): string {
+  const search = new URLSearchParams();
+  for (const [name, value] of Object.entries(query)) if (value !== undefined) search.set(name, String(value));
+  const text = search.toString();
+  return text ? `${path}?${text}` : path;
+}
+
 /** Every client route: its router `path` and an `href()` that builds a link to it. */
 export const paths = {
   auth: {
@@ -28,6 +41,32 @@ export const paths = {
     members: {
       path: '/members',
       href: () => '/members',
+    },
+    library: {
+      path: '/library',
+      /** Opens one kind's tab, optionally with a status filter other than "active". */
+      href: (options: { kind?: EquipmentKind; status?: EquipmentStatusFilter } = {}) => withQuery('/library', options),
+    },
+    libraryNew: {
+      path: '/library/new',
+      href: (kind: EquipmentKind) => withQuery('/library/new', { kind }),
+    },
+    libraryImport: {
+      path: '/library/import',
+      href: (kind?: EquipmentKind) => withQuery('/library/import', { kind }),
+    },
+    libraryItem: {
+      path: '/library/:itemId',
+      /** `revision` opens one earlier revision's data in the history. */
+      href: (itemId: number, revision?: number) => withQuery(`/library/${itemId}`, { revision }),
+    },
+    libraryItemEdit: {
+      path: '/library/:itemId/edit',
+      href: (itemId: number) => `/library/${itemId}/edit`,
+    },
+    policy: {
+      path: '/policy',
+      href: () => '/policy',
     },
     outbox: {
       path: '/outbox',

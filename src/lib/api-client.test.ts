@@ -57,6 +57,31 @@ describe('api client', () => {
     expect(calls.map((call) => call.csrf)).toEqual(['stale', null, 'fresh']);
   });
 
+  it('sends a multipart upload as FormData with the CSRF header and no JSON content type', async () => {
+    rememberCsrfToken('token');
+    const sent: RequestInit[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init: RequestInit) => {
+        sent.push(init);
+        return json(201, { ok: true });
+      }),
+    );
+    const form = new FormData();
+    form.append('file', new Blob(['%PDF-1.4'], { type: 'application/pdf' }), 'certificate.pdf');
+    await expect(api.postForm('/api/labs/1/upload', form, okSchema)).resolves.toEqual({ ok: true });
+    const headers = new Headers(sent[0].headers);
+    expect([sent[0].method, headers.get('X-CSRF-Token'), headers.get('Content-Type')]).toEqual(['POST', 'token', null]);
+    expect(sent[0].body).toBe(form);
+  });
+
+  it('sends PUT with a JSON body', async () => {
+    rememberCsrfToken('token');
+    const calls = stubFetch(() => json(200, { ok: true }));
+    await api.put('/api/labs/1/policy', { k: 2 }, okSchema);
+    expect(calls).toEqual([{ method: 'PUT', url: '/api/labs/1/policy', csrf: 'token', body: '{"k":2}' }]);
+  });
+
   it('does not retry a 403 for any other reason', async () => {
     rememberCsrfToken('token');
     const calls = stubFetch(() => json(403, { error: { code: 'forbidden', message: 'Administrators only.' } }));

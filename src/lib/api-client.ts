@@ -16,13 +16,15 @@ export function rememberCsrfToken(token: string | null): void {
 
 async function send(method: 'GET' | StateChangingMethod, path: string, body: unknown, token: string | null) {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // A FormData body sets its own multipart Content-Type with the boundary.
+  const isForm = body instanceof FormData;
+  if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
   if (token) headers[CSRF_HEADER] = token;
   try {
     return await fetch(path, {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
       credentials: 'same-origin',
     });
   } catch {
@@ -72,7 +74,7 @@ async function mutate<S extends z.ZodType>(method: StateChangingMethod, path: st
 }
 
 /**
- * The one fetch wrapper: JSON in and out, same-origin cookies, the CSRF header on every
+ * The one fetch wrapper: JSON in and out (or a multipart upload), same-origin cookies, the CSRF header on every
  * state-changing request (fetching a token first when none is known, and retrying once
  * with a fresh one after `403 csrf_invalid`), responses checked against the shared zod
  * schema, and an {@link ApiError} thrown on any non-2xx answer. No toasts, no redirects.
@@ -84,6 +86,11 @@ export const api = {
     (await mutate('POST', path, body, schema)) as z.output<S>,
   patch: async <S extends z.ZodType>(path: string, body: unknown, schema: S): Promise<z.output<S>> =>
     (await mutate('PATCH', path, body, schema)) as z.output<S>,
+  put: async <S extends z.ZodType>(path: string, body: unknown, schema: S): Promise<z.output<S>> =>
+    (await mutate('PUT', path, body, schema)) as z.output<S>,
+  /** A multipart upload (a file field and any others), with the same CSRF handling as the JSON writes. */
+  postForm: async <S extends z.ZodType>(path: string, form: FormData, schema: S): Promise<z.output<S>> =>
+    (await mutate('POST', path, form, schema)) as z.output<S>,
   /** A state-changing request whose success has no body (`204`) or a body the caller ignores. */
   postWithoutResult: async (path: string, body?: unknown): Promise<void> => {
     await mutate('POST', path, body ?? {}, null);

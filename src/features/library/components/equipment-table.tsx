@@ -1,0 +1,97 @@
+import { useTable } from '@tanstack/react-table';
+import { useState, type ReactNode } from 'react';
+import type { EquipmentItem, EquipmentKind } from '../../../../shared/contracts/library';
+import { EQUIPMENT_COLUMNS, equipmentTableFeatures, NUMERIC_COLUMN_IDS, SEARCHED_COLUMN_IDS } from './equipment-columns';
+
+type EquipmentTableProps = {
+  kind: EquipmentKind;
+  /** What the table lists, e.g. "active flasks", for its caption and empty message. */
+  caption: string;
+  items: EquipmentItem[];
+  /** Controls beside the search box (status filter, actions). */
+  toolbar?: ReactNode;
+};
+
+const SORT_WORDS = { asc: 'ascending', desc: 'descending' } as const;
+
+/** The items of one kind, sortable by any column with a value and searchable by ID and description. */
+export function EquipmentTable({ kind, caption, items, toolbar }: EquipmentTableProps) {
+  const [search, setSearch] = useState('');
+  const table = useTable({
+    features: equipmentTableFeatures,
+    columns: EQUIPMENT_COLUMNS[kind],
+    data: items,
+    getRowId: (item) => String(item.id),
+    state: { globalFilter: search },
+    onGlobalFilterChange: (updater) => setSearch((previous) => (typeof updater === 'function' ? updater(previous) : updater) ?? ''),
+    globalFilterFn: 'includesString',
+    getColumnCanGlobalFilter: (candidate) => SEARCHED_COLUMN_IDS.has(candidate.id),
+  });
+  const rows = table.getRowModel().rows;
+
+  return (
+    <div>
+      <div className="mb-3 flex flex-wrap items-end gap-4">
+        <div className="flex flex-col gap-1">
+          <label htmlFor="library-search" className="font-semibold">
+            Search ID or description
+          </label>
+          <input
+            id="library-search"
+            type="search"
+            value={search}
+            onChange={(event) => setSearch(event.target.value)}
+            className="w-64 rounded-md border border-line-strong bg-surface px-3 py-2 text-ink"
+          />
+        </div>
+        {toolbar}
+      </div>
+      <div className="overflow-x-auto rounded-lg border border-line bg-surface">
+        <table className="w-full text-left">
+          <caption className="sr-only">{caption}</caption>
+          <thead className="border-b border-line bg-paper text-sm text-muted">
+            {table.getHeaderGroups().map((headerGroup) => (
+              <tr key={headerGroup.id}>
+                {headerGroup.headers.map((header) => {
+                  const sorted = header.column.getIsSorted();
+                  const align = NUMERIC_COLUMN_IDS.has(header.column.id) ? 'text-right' : '';
+                  return (
+                    <th key={header.id} scope="col" aria-sort={sorted ? SORT_WORDS[sorted] : undefined} className={`px-3 py-2 align-bottom font-semibold ${align}`}>
+                      {header.isPlaceholder ? null : header.column.getCanSort() ? (
+                        <button type="button" onClick={header.column.getToggleSortingHandler()} className={`inline-flex items-end gap-1 font-semibold hover:text-ink ${align}`}>
+                          <table.FlexRender header={header} />
+                          <span aria-hidden="true" className="w-3 text-ink">
+                            {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
+                          </span>
+                        </button>
+                      ) : (
+                        <table.FlexRender header={header} />
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {rows.map((row) => (
+              <tr key={row.id} className="border-b border-line align-top last:border-b-0">
+                {row.getAllCells().map((cell) => (
+                  <td key={cell.id} className={`px-3 py-2 ${NUMERIC_COLUMN_IDS.has(cell.column.id) ? 'text-right' : ''}`}>
+                    <table.FlexRender cell={cell} />
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        {rows.length === 0 ? (
+          <p className="p-4 text-muted">{search ? `No ${caption} match “${search}”.` : `No ${caption} yet.`}</p>
+        ) : null}
+      </div>
+      <p className="mt-2 text-sm text-muted">
+        {rows.length} of {items.length} {caption}. Select a column heading to sort by it.
+      </p>
+    </div>
+  );
+}

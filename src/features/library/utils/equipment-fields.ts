@@ -1,0 +1,113 @@
+import type { EquipmentKind } from '../../../../shared/contracts/library';
+import { formatQuantity } from './format-quantity';
+
+type Data = Record<string, unknown>;
+
+/** One stored field of an item: its label, its unit, and how its value reads. */
+export type EquipmentField = {
+  key: string;
+  label: string;
+  unit?: string | ((data: Data) => string);
+  format?: (value: unknown) => string;
+};
+
+const yesNo = (value: unknown) => (value ? 'Yes' : 'No');
+const CLASS_WORDS: Record<string, string> = { A: 'Class A', B: 'Class B', own: 'Own calibration' };
+const BASIS_WORDS: Record<string, string> = { 'iso-8655': 'ISO 8655-2 limits', own: 'Own calibration' };
+const number = (value: unknown) => (typeof value === 'number' ? formatQuantity(value) : String(value));
+
+type PistonPoint = { volumeUl: number; systematicErrorUl: number; randomErrorUl: number };
+const formatPoints = (value: unknown) =>
+  (value as PistonPoint[])
+    .map((point) => `at ${number(point.volumeUl)} µL: ± ${number(point.systematicErrorUl)} µL systematic, ${number(point.randomErrorUl)} µL random (s)`)
+    .join('; ');
+
+type PurityUncertainty = { shape: 'normal'; expandedUncertainty: number; coverageFactor: number } | { shape: 'rectangular'; halfWidth: number };
+const formatPurityUncertainty = (value: unknown) => {
+  const uncertainty = value as PurityUncertainty;
+  return uncertainty.shape === 'normal'
+    ? `U = ${number(uncertainty.expandedUncertainty)} (k = ${number(uncertainty.coverageFactor)}), normal`
+    : `± ${number(uncertainty.halfWidth)}, rectangular`;
+};
+
+const COMMON: EquipmentField[] = [
+  { key: 'code', label: 'ID' },
+  { key: 'description', label: 'Description' },
+  { key: 'certificateReference', label: 'Certificate reference' },
+];
+const CALIBRATION: EquipmentField[] = [
+  { key: 'calibratedOn', label: 'Calibrated on' },
+  { key: 'calibrationDueOn', label: 'Calibration due on' },
+];
+const GLASSWARE: EquipmentField[] = [
+  ...COMMON,
+  { key: 'glassClass', label: 'Class', format: (value) => CLASS_WORDS[String(value)] ?? String(value) },
+  { key: 'nominalMl', label: 'Nominal volume', unit: 'mL' },
+  { key: 'toleranceMl', label: 'Tolerance (±)', unit: 'mL' },
+  { key: 'toleranceDistribution', label: 'Tolerance distribution', format: (value) => (value ? String(value) : 'as the lab policy says') },
+  { key: 'fillRepeatabilityMl', label: 'Fill repeatability s', unit: 'mL' },
+  { key: 'calibrationTemperatureC', label: 'Calibration temperature', unit: '°C' },
+  ...CALIBRATION,
+];
+const MATERIAL: EquipmentField[] = [
+  { key: 'code', label: 'ID' },
+  { key: 'name', label: 'Name' },
+  { key: 'description', label: 'Description' },
+  { key: 'lot', label: 'Lot' },
+  { key: 'supplier', label: 'Supplier' },
+  { key: 'certificateReference', label: 'Certificate reference' },
+  { key: 'expiresOn', label: 'Expires on' },
+];
+const certifiedUnit = (data: Data) => String(data.certifiedUnit ?? '');
+
+/** The fields of each kind, in the order the item page lists them. */
+export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
+  balance: [
+    ...COMMON,
+    { key: 'capacityG', label: 'Capacity', unit: 'g' },
+    { key: 'readabilityG', label: 'Readability d', unit: 'g' },
+    { key: 'repeatabilityG', label: 'Repeatability s', unit: 'g' },
+    { key: 'linearityG', label: 'Linearity (±)', unit: 'g' },
+    { key: 'sensitivityRelativeExpanded', label: 'Calibration uncertainty U, relative', format: (value) => `${number(value)} (${number(Number(value) * 1e6)} ppm)` },
+    { key: 'sensitivityCoverageFactor', label: 'Coverage factor k of U' },
+    ...CALIBRATION,
+  ],
+  flask: GLASSWARE,
+  'glass-pipette': GLASSWARE,
+  'piston-pipette': [
+    ...COMMON,
+    { key: 'adjustable', label: 'Adjustable volume', format: yesNo },
+    { key: 'minVolumeUl', label: 'Smallest volume', unit: 'µL' },
+    { key: 'maxVolumeUl', label: 'Nominal (largest) volume', unit: 'µL' },
+    { key: 'errorBasis', label: 'Error basis', format: (value) => BASIS_WORDS[String(value)] ?? String(value) },
+    { key: 'points', label: 'Calibration points', format: formatPoints },
+    ...CALIBRATION,
+  ],
+  'solid-material': [
+    ...MATERIAL,
+    { key: 'formula', label: 'Formula' },
+    { key: 'analyte', label: 'Analyte' },
+    { key: 'purity', label: 'Purity (mass fraction)' },
+    { key: 'purityUncertainty', label: 'Purity uncertainty', format: formatPurityUncertainty },
+  ],
+  'solution-material': [
+    ...MATERIAL,
+    { key: 'analyte', label: 'Analyte' },
+    { key: 'certifiedValue', label: 'Certified value', unit: certifiedUnit },
+    { key: 'expandedUncertainty', label: 'Expanded uncertainty U', unit: certifiedUnit },
+    { key: 'coverageFactor', label: 'Coverage factor k' },
+    { key: 'matrix', label: 'Matrix' },
+    { key: 'densityGPerMl', label: 'Density', unit: 'g/mL' },
+    { key: 'densityUncertaintyGPerMl', label: 'Density standard uncertainty', unit: 'g/mL' },
+    { key: 'openedOn', label: 'Opened on' },
+  ],
+};
+
+/** The value of one field as text with its unit; "—" when it is empty. */
+export function formatFieldValue(field: EquipmentField, data: Data): string {
+  const value = data[field.key];
+  if (value === null || value === undefined || value === '') return '—';
+  const text = field.format ? field.format(value) : typeof value === 'boolean' ? yesNo(value) : number(value);
+  const unit = typeof field.unit === 'function' ? field.unit(data) : field.unit;
+  return unit ? `${text} ${unit}` : text;
+}

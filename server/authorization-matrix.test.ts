@@ -53,6 +53,7 @@ const ACCESS: Record<string, Access> = {
   'POST /api/labs/:labId/preparations/:preparationId/versions': ['analyst'],
   'POST /api/labs/:labId/preparations/:preparationId/duplicate': ['analyst'],
   'POST /api/labs/:labId/route-finder': ['analyst', 'qa'],
+  'POST /api/labs/:labId/compute': ['analyst', 'qa'],
   'POST /api/labs/:labId/preparations/:preparationId/versions/:number/submit': ['analyst'],
   'POST /api/labs/:labId/preparations/:preparationId/versions/:number/approve': ['qa'],
   'POST /api/labs/:labId/preparations/:preparationId/versions/:number/return': ['qa'],

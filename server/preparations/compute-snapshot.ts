@@ -12,10 +12,10 @@ export type Snapshot = NonNullable<VersionDetail['snapshot']>;
  * Runs the engine on a resolved plan: GUM budget, Monte Carlo with the given seed, and the JCGM 101 §8
  * validation of one against the other. Throws the engine's PlanError for a plan it cannot compute.
  */
-export function computeSnapshot(input: { plan: Record<string, unknown>; items: UsedItem[]; seed: number; computedAt: string; policy: LabPolicy }): Snapshot {
+export function computeSnapshot(input: { plan: Record<string, unknown>; items: UsedItem[]; seed: number; computedAt: string; policy: LabPolicy; trials?: number }): Snapshot {
   const plan = parsePlan(withPolicy(input.plan, input.policy));
   const budget = evaluatePlan(plan);
-  const monteCarlo = runMonteCarlo(plan, { seed: input.seed, trials: SERVER_TRIALS });
+  const monteCarlo = runMonteCarlo(plan, { seed: input.seed, trials: input.trials ?? SERVER_TRIALS });
   const validation = validateAgainstGum(budget, monteCarlo);
   const warnings = input.policy.minimumWeightRule ? budget.warnings : budget.warnings.filter((w) => !/minimum weight|USP/i.test(w));
   return {

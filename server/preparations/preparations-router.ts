@@ -1,7 +1,7 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
-import { preparationListQuerySchema, preparationWriteSchema, routeFinderRequestSchema, titleSchema } from '../../shared/contracts/preparations';
+import { computeRequestSchema, preparationListQuerySchema, preparationWriteSchema, routeFinderRequestSchema, titleSchema } from '../../shared/contracts/preparations';
 import type { Authorize, LabContext, SessionUser } from '../auth/authorize';
 import { valid, validate } from '../lib/validate';
 import type { PreparationsService } from './preparations-service';
@@ -53,6 +53,11 @@ export function preparationsRouter(deps: { preparations: PreparationsService; ro
   router.post('/preparations/:preparationId/duplicate', plan, validate({ params: prepParams, body: duplicateSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: prepParams, body: duplicateSchema });
     res.status(201).json(await preparations.duplicate(lab(req), actor(req), params.preparationId, body.title));
+  });
+
+  router.post('/compute', authorize.lab(['analyst', 'qa']), validate({ body: computeRequestSchema }), async (req, res) => {
+    const { body } = valid(req, { body: computeRequestSchema });
+    res.json(await preparations.computeOnly(lab(req), body));
   });
 
   router.post('/route-finder', authorize.lab(['analyst', 'qa']), validate({ body: routeFinderRequestSchema }), async (req, res) => {

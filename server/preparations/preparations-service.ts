@@ -1,12 +1,12 @@
 import { randomInt } from 'node:crypto';
 import type { EquipmentItem } from '../../shared/contracts/library';
 import type { Override, PlanProblem, PreparationDetail, PreparationSummary, PreparationWrite, VersionDetail, VersionSummary } from '../../shared/contracts/preparations';
-import { PlanError } from '../../shared/uncertainty';
+import { parsePlan, PlanError } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
 import type { Db } from '../db/connection';
 import { canonicalJson, sha256Hex } from '../lib/canonical-json';
-import { conflict, forbidden, notFound } from '../lib/errors';
+import { AppError, conflict, forbidden, notFound } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
 import type { PolicyService } from '../policy/policy-service';
 import { computeSnapshot, type Snapshot } from './compute-snapshot';
@@ -70,8 +70,24 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     return new Map((await items.list(labId, { status: 'all' })).map((item) => [String(item.id), item]));
   }
 
+  /**
+   * A plan must at least have the plan document's shape (types, units, required fields); one that
+   * does not is refused without writing anything. A well-formed plan the engine cannot compute
+   * (an aliquot larger than its flask, an overdue item without a reason) is kept as a draft with
+   * its problem, so the analyst's work is never lost.
+   */
+  function assertWellFormed(plan: Record<string, unknown>) {
+    try {
+      parsePlan(plan);
+    } catch (error) {
+      if (!(error instanceof PlanError)) throw error;
+      throw new AppError('validation', 'plan_invalid', error.message, [{ path: ['plan', ...error.path].join('.'), message: error.message }]);
+    }
+  }
+
   /** Resolves against the library and computes; a plan the engine refuses is kept with its problem. */
   async function compute(labId: number, plan: Record<string, unknown>, overrides: Override[], seed: number): Promise<VersionWrite & { materialCode: string | null }> {
+    assertWellFormed(plan);
     const at = now().toISOString();
     const library = await libraryOf(labId);
     const base = { plan_json: JSON.stringify(plan), overrides_json: JSON.stringify(overrides), seed, updated_at: at };
@@ -117,6 +133,13 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
 
   return {
     detail,
+
+    /** Computes a plan against the lab's library without saving anything (for integrations and load tests). */
+    async computeOnly(labId: number, input: { plan: Record<string, unknown>; overrides: Override[]; seed: number; trials: number }) {
+      assertWellFormed(input.plan);
+      const resolved = resolvePlan(input.plan, await libraryOf(labId), input.overrides);
+      return computeSnapshot({ plan: resolved.plan, items: resolved.items, seed: input.seed, computedAt: now().toISOString(), policy: await policy.read(labId), trials: input.trials });
+    },
 
     async list(labId: number, filter: Parameters<PreparationsRepository['list']>[1]): Promise<PreparationSummary[]> {
       const rows = await preparations.list(labId, filter);

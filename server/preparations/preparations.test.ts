@@ -112,6 +112,30 @@ describe('saving a preparation computes and stores its snapshot', () => {
   });
 });
 
+describe('malformed plans and the compute-only route', () => {
+  it('refuses a plan that is not a plan document, names the field and writes nothing', async () => {
+    const plan = leadPlanWith();
+    (plan.steps[0] as { netMassG: unknown }).netMassG = 'a spoonful';
+    const res = await analyst.post(url('/preparations'), { title: 'Bad', plan }).expect(400);
+    expect(res.body.error.code).toBe('plan_invalid');
+    expect(res.body.error.details[0].path).toBe('plan.steps.0.netMassG');
+    const unit = leadPlanWith();
+    (unit.settings as { outputUnit: string }).outputUnit = 'ppm-ish';
+    const refused = await analyst.post(url('/preparations'), { title: 'Bad unit', plan: unit }).expect(400);
+    expect(refused.body.error.message).toMatch(/unit/i);
+    expect(await t.db('preparations').count({ n: '*' }).first()).toEqual({ n: 0 });
+  });
+
+  it('computes without saving, with the trials asked for', async () => {
+    const res = (await analyst.post(url('/compute'), { plan: leadPlanWith(), seed: 5, trials: 20_000 }).expect(200)).body;
+    expect(res.monteCarlo.trials).toBe(20_000);
+    expect(res.monteCarlo.seed).toBe(5);
+    expect(res.budget.unit).toBe('mg/L');
+    expect(await t.db('preparations').count({ n: '*' }).first()).toEqual({ n: 0 });
+    await analyst.post(url('/compute'), { plan: leadPlanWith(), trials: 5_000_000 }).expect(400);
+  });
+});
+
 describe('drafts, versions, variants and roles', () => {
   it('autosaves the draft in place, refuses another analyst, and lists with filters', async () => {
     const created = (await analyst.post(url('/preparations'), { title: 'Pb working', plan: leadPlanWith() }).expect(201)).body;

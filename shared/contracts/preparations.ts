@@ -128,3 +128,11 @@ export const routeFinderRequestSchema = z.object({
   maximumDilutions: z.number().int().min(0).max(3).default(3),
   limit: z.number().int().min(1).max(50).default(10),
 });
+
+/** POST /compute: a budget for a plan, nothing stored. */
+export const computeRequestSchema = z.object({
+  plan: z.record(z.string(), z.unknown()),
+  overrides: z.array(overrideSchema).max(50).default([]),
+  seed: seedSchema.default(1),
+  trials: z.number().int().min(1000, 'Use at least 1000 trials.').max(1_000_000, 'Use at most 10⁶ trials.').default(100_000),
+});

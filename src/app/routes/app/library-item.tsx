@@ -23,7 +23,7 @@ export const clientLoader =
   async ({ params }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
     const itemId = Number(params.itemId);
-    if (me?.activeLabId && Number.isInteger(itemId)) await queryClient.ensureQueryData(equipmentItemQueryOptions(me.activeLabId, itemId));
+    if (me?.activeLabId && Number.isInteger(itemId)) await queryClient.fetchQuery(equipmentItemQueryOptions(me.activeLabId, itemId));
     return null;
   };
 
@@ -83,12 +83,12 @@ function ItemPage({ labId, itemId, keeper }: { labId: number; itemId: number; ke
       </div>
       <div className="mb-10 grid items-start gap-6 lg:grid-cols-[1fr_22rem]">
         <Card title={`Current data · revision ${item.current.number}`}>
-          <ItemDataList kind={item.kind} data={data} />
           {item.minimumWeightG !== null ? (
-            <div className="mt-4">
+            <div className="mb-4">
               <MinimumWeightNote minimumWeightG={item.minimumWeightG} />
             </div>
           ) : null}
+          <ItemDataList kind={item.kind} data={data} />
         </Card>
         <Card title="Certificates">
           <CertificateList labId={labId} certificates={item.certificates} />

@@ -19,7 +19,8 @@ export const clientLoader =
     const me = await queryClient.ensureQueryData(meQueryOptions());
     const search = new URL(request.url).searchParams;
     if (me?.activeLabId) {
-      await queryClient.ensureQueryData(equipmentListQueryOptions(me.activeLabId, kindFromSearch(search.get('kind')), statusFromSearch(search.get('status'))));
+      // fetchQuery, not ensureQueryData: a list marked stale by a change elsewhere is read again before showing.
+      await queryClient.fetchQuery(equipmentListQueryOptions(me.activeLabId, kindFromSearch(search.get('kind')), statusFromSearch(search.get('status'))));
     }
     return null;
   };
@@ -50,7 +51,8 @@ function LibraryPage({ labId, keeper }: { labId: number; keeper: boolean }) {
   const status = statusFromSearch(searchParams.get('status'));
   const items = useEquipmentList(labId, kind, status);
   const tab = KIND_TABS.find((each) => each.kind === kind) ?? KIND_TABS[0];
-  const statusWords = { active: 'in use', retired: 'retired', all: '' }[status];
+  const plural = tab.label.toLowerCase();
+  const caption = { active: `${plural} in use`, retired: `retired ${plural}`, all: plural }[status];
 
   return (
     <>
@@ -67,7 +69,7 @@ function LibraryPage({ labId, keeper }: { labId: number; keeper: boolean }) {
       <EquipmentTable
         key={`${kind}-${status}`}
         kind={kind}
-        caption={[statusWords, tab.label.toLowerCase()].filter(Boolean).join(' ')}
+        caption={caption}
         items={items}
         toolbar={
           <>

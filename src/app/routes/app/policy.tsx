@@ -43,7 +43,7 @@ function PolicyPage({ labId, labName, editable }: { labId: number; labName: stri
         description={`How every budget in ${labName} states its uncertainty. ${editable ? 'A change applies to budgets computed after it; stored budgets keep theirs.' : 'Quality assurance sets it.'}`}
       />
       <p className="mb-6 text-sm text-muted">{updated}</p>
-      {editable ? <PolicyForm key={updatedAt ?? 'default'} labId={labId} policy={policy} /> : <PolicySummary policy={policy} />}
+      {editable ? <PolicyForm labId={labId} policy={policy} /> : <PolicySummary policy={policy} />}
     </>
   );
 }

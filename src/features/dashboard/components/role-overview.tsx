@@ -14,8 +14,8 @@ const COMING_FOR_ROLE: Record<Role, { summary: string; items: string[] }> = {
   qa: {
     summary: 'Keep the equipment the budgets rest on, and decide what is approved.',
     items: [
-      'The tolerance library: balances, flasks, pipettes and reference materials with their certificates',
-      'Lab policy: coverage probability, glassware distribution, temperature range, minimum-weight rule',
+      'The tolerance library: balances, flasks, pipettes and reference materials with their certificates — available now under Library',
+      'Lab policy: coverage probability, glassware distribution, temperature range, minimum-weight rule — available now under Lab policy',
       'The review queue: approve budgets or return them with comments',
     ],
   },
@@ -39,7 +39,13 @@ export function RoleOverview({ roles }: { roles: readonly Role[] }) {
             <h2 id={`role-${role}`} className="text-xl font-bold">
               {ROLE_LABELS[role]}
             </h2>
-            {role === 'admin' ? <Badge tone="ok">Available</Badge> : <Badge tone="accent">Coming</Badge>}
+            {role === 'admin' ? (
+              <Badge tone="ok">Available</Badge>
+            ) : role === 'qa' ? (
+              <Badge tone="ok">Partly available</Badge>
+            ) : (
+              <Badge tone="accent">Coming</Badge>
+            )}
           </div>
           <p className="mb-3 text-ink">{COMING_FOR_ROLE[role].summary}</p>
           <ul className="list-disc space-y-1 pl-5 text-muted">

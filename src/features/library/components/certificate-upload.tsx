@@ -38,7 +38,7 @@ export function CertificateUpload({ labId, itemId, revisionNumber }: { labId: nu
       <label htmlFor="certificate-file" className="font-semibold">
         Upload a certificate to revision {revisionNumber}
       </label>
-      <input id="certificate-file" ref={inputRef} type="file" accept="application/pdf,image/png,image/jpeg,.pdf,.png,.jpg,.jpeg" aria-describedby="certificate-file-hint" className="text-sm" />
+      <input id="certificate-file" ref={inputRef} type="file" accept="application/pdf,image/png,image/jpeg,.pdf,.png,.jpg,.jpeg" aria-describedby="certificate-file-hint" className="text-sm file:mr-3 file:rounded-md file:border file:border-line-strong file:bg-surface file:px-3 file:py-1.5 file:font-semibold file:text-ink hover:file:bg-paper" />
       <p id="certificate-file-hint" className="text-sm text-muted">
         PDF, PNG or JPEG, at most 10 MB.
       </p>

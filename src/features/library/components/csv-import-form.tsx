@@ -77,7 +77,7 @@ export function CsvImportForm({ labId, kind }: { labId: number; kind: EquipmentK
           <label htmlFor="csv-file" className="font-semibold">
             CSV file
           </label>
-          <input id="csv-file" ref={fileRef} type="file" accept=".csv,text/csv" className="text-sm" onChange={() => setChecked(null)} />
+          <input id="csv-file" ref={fileRef} type="file" accept=".csv,text/csv" className="text-sm file:mr-3 file:rounded-md file:border file:border-line-strong file:bg-surface file:px-3 file:py-1.5 file:font-semibold file:text-ink hover:file:bg-paper" onChange={() => setChecked(null)} />
         </div>
         <Button type="submit" pending={importCsv.isPending && !checked} pendingLabel="Checking…">
           Check the file

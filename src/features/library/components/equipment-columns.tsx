@@ -1,7 +1,9 @@
 import { createColumnHelper, createFilteredRowModel, createSortedRowModel, columnFilteringFeature, filterFn_includesString, globalFilteringFeature, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures } from '@tanstack/react-table';
+import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { EquipmentItem, EquipmentKind } from '../../../../shared/contracts/library';
 import { paths } from '../../../config/paths';
+import { formatFormula } from '../utils/format-formula';
 import { formatQuantity } from '../utils/format-quantity';
 import { HazardMarker } from './hazard-marker';
 import { ItemStatusBadges } from './item-status-badges';
@@ -38,7 +40,14 @@ const shownNumber = (value: number | undefined | null) => (value === undefined |
 const firstPoint = (item: EquipmentItem) =>
   (field(item, 'points') as { volumeUl: number; systematicErrorUl: number; randomErrorUl: number }[] | undefined)?.[0];
 
-const numeric = (id: string, header: string, read: (item: EquipmentItem) => number | undefined) =>
+/** A heading whose unit never breaks from itself: "Tolerance" over "(± mL)" when the column is narrow. */
+const withUnit = (label: string, unit: string) => () => (
+  <>
+    {label} <span className="whitespace-nowrap">({unit})</span>
+  </>
+);
+
+const numeric = (id: string, header: string | (() => ReactNode), read: (item: EquipmentItem) => number | undefined) =>
   column.accessor(read, { id, header, sortFn: 'basic', sortUndefined: 'last', cell: (info) => shownNumber(info.getValue()) });
 
 const codeColumn = column.accessor('code', {
@@ -86,6 +95,12 @@ const hazardColumn = column.accessor((item) => textOf(item, 'hazardNotes'), {
     return notes ? <HazardMarker notes={notes} /> : <span className="text-muted">none noted</span>;
   },
 });
+const lotColumn = column.accessor((item) => textOf(item, 'lot'), {
+  id: 'lot',
+  header: 'Lot',
+  sortFn: 'alphanumeric',
+  cell: (info) => <span className="whitespace-nowrap">{info.getValue() ?? '—'}</span>,
+});
 const statusColumn = column.display({
   id: 'status',
   header: 'Status',
@@ -98,9 +113,9 @@ const glasswareColumns = [
   codeColumn,
   descriptionColumn,
   column.accessor((item) => textOf(item, 'glassClass'), { id: 'glassClass', header: 'Class', sortFn: 'alphanumeric', cell: (info) => (info.getValue() === 'own' ? 'own' : info.getValue()) }),
-  numeric('nominalMl', 'Nominal (mL)', (item) => numberOf(item, 'nominalMl')),
-  numeric('toleranceMl', 'Tolerance (± mL)', (item) => numberOf(item, 'toleranceMl')),
-  numeric('fillRepeatabilityMl', 'Fill repeatability s (mL)', (item) => numberOf(item, 'fillRepeatabilityMl')),
+  numeric('nominalMl', withUnit('Nominal', 'mL'), (item) => numberOf(item, 'nominalMl')),
+  numeric('toleranceMl', withUnit('Tolerance', '± mL'), (item) => numberOf(item, 'toleranceMl')),
+  numeric('fillRepeatabilityMl', withUnit('Fill repeatability s', 'mL'), (item) => numberOf(item, 'fillRepeatabilityMl')),
   calibrationDueColumn,
   certificatesColumn,
   statusColumn,
@@ -111,10 +126,10 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
   balance: column.columns([
     codeColumn,
     descriptionColumn,
-    numeric('capacityG', 'Capacity (g)', (item) => numberOf(item, 'capacityG')),
-    numeric('readabilityG', 'Readability d (g)', (item) => numberOf(item, 'readabilityG')),
-    numeric('repeatabilityG', 'Repeatability s (g)', (item) => numberOf(item, 'repeatabilityG')),
-    numeric('minimumWeightG', 'Minimum weight (g)', (item) => item.minimumWeightG ?? undefined),
+    numeric('capacityG', withUnit('Capacity', 'g'), (item) => numberOf(item, 'capacityG')),
+    numeric('readabilityG', withUnit('Readability d', 'g'), (item) => numberOf(item, 'readabilityG')),
+    numeric('repeatabilityG', withUnit('Repeatability s', 'g'), (item) => numberOf(item, 'repeatabilityG')),
+    numeric('minimumWeightG', withUnit('Minimum weight', 'g'), (item) => item.minimumWeightG ?? undefined),
     calibrationDueColumn,
     certificatesColumn,
     statusColumn,
@@ -126,7 +141,7 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
     descriptionColumn,
     column.accessor((item) => numberOf(item, 'maxVolumeUl'), {
       id: 'range',
-      header: 'Range (µL)',
+      header: withUnit('Range', 'µL'),
       sortFn: 'basic',
       cell: (info) => {
         const min = numberOf(info.row.original, 'minVolumeUl');
@@ -134,9 +149,9 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
         return <span className="whitespace-nowrap">{min === max ? shownNumber(max) : `${shownNumber(min)}–${shownNumber(max)}`}</span>;
       },
     }),
-    numeric('pointVolumeUl', 'Errors at (µL)', (item) => firstPoint(item)?.volumeUl),
-    numeric('systematicErrorUl', 'Systematic (± µL)', (item) => firstPoint(item)?.systematicErrorUl),
-    numeric('randomErrorUl', 'Random s (µL)', (item) => firstPoint(item)?.randomErrorUl),
+    numeric('pointVolumeUl', withUnit('Errors at', 'µL'), (item) => firstPoint(item)?.volumeUl),
+    numeric('systematicErrorUl', withUnit('Systematic', '± µL'), (item) => firstPoint(item)?.systematicErrorUl),
+    numeric('randomErrorUl', withUnit('Random s', 'µL'), (item) => firstPoint(item)?.randomErrorUl),
     calibrationDueColumn,
     certificatesColumn,
     statusColumn,
@@ -144,9 +159,9 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
   'solid-material': column.columns([
     codeColumn,
     materialNameColumn,
-    column.accessor((item) => textOf(item, 'formula'), { id: 'formula', header: 'Formula', enableSorting: false, cell: (info) => info.getValue() ?? '—' }),
-    column.accessor((item) => textOf(item, 'lot'), { id: 'lot', header: 'Lot', sortFn: 'alphanumeric', cell: (info) => info.getValue() ?? '—' }),
-    numeric('purity', 'Purity (mass fraction)', (item) => numberOf(item, 'purity')),
+    column.accessor((item) => textOf(item, 'formula'), { id: 'formula', header: 'Formula', enableSorting: false, cell: (info) => formatFormula(info.getValue() ?? '—') }),
+    lotColumn,
+    numeric('purity', withUnit('Purity', 'g/g'), (item) => numberOf(item, 'purity')),
     dateColumn('expiresOn', 'Expires'),
     hazardColumn,
     certificatesColumn,
@@ -155,7 +170,7 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
   'solution-material': column.columns([
     codeColumn,
     materialNameColumn,
-    column.accessor((item) => textOf(item, 'lot'), { id: 'lot', header: 'Lot', sortFn: 'alphanumeric', cell: (info) => info.getValue() ?? '—' }),
+    lotColumn,
     column.accessor((item) => numberOf(item, 'certifiedValue'), {
       id: 'certifiedValue',
       header: 'Certified value',

@@ -22,6 +22,8 @@ export function EquipmentTable({ kind, caption, items, toolbar }: EquipmentTable
     columns: EQUIPMENT_COLUMNS[kind],
     data: items,
     getRowId: (item) => String(item.id),
+    // IDs in natural order (VF-10-A before VF-100-A) until someone sorts by another column.
+    initialState: { sorting: [{ id: 'code', desc: false }] },
     state: { globalFilter: search },
     onGlobalFilterChange: (updater) => setSearch((previous) => (typeof updater === 'function' ? updater(previous) : updater) ?? ''),
     globalFilterFn: 'includesString',
@@ -54,13 +56,26 @@ export function EquipmentTable({ kind, caption, items, toolbar }: EquipmentTable
               <tr key={headerGroup.id}>
                 {headerGroup.headers.map((header) => {
                   const sorted = header.column.getIsSorted();
-                  const align = NUMERIC_COLUMN_IDS.has(header.column.id) ? 'text-right' : '';
+                  const numeric = NUMERIC_COLUMN_IDS.has(header.column.id);
+                  const width = header.column.id === 'description' ? 'min-w-48' : '';
                   return (
-                    <th key={header.id} scope="col" aria-sort={sorted ? SORT_WORDS[sorted] : undefined} className={`px-3 py-2 align-bottom font-semibold ${align}`}>
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={sorted ? SORT_WORDS[sorted] : undefined}
+                      className={`px-3 py-2 align-bottom font-semibold ${numeric ? 'text-right' : ''} ${width}`}
+                    >
                       {header.isPlaceholder ? null : header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className={`inline-flex items-end gap-1 font-semibold hover:text-ink ${align}`}>
-                          <table.FlexRender header={header} />
-                          <span aria-hidden="true" className="w-3 text-ink">
+                        // Numbers: the arrow goes left of the heading, so the heading's right edge lines up with the figures.
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className={`inline-flex items-end gap-1 font-semibold hover:text-ink ${numeric ? 'flex-row-reverse text-right' : 'text-left'}`}
+                        >
+                          <span>
+                            <table.FlexRender header={header} />
+                          </span>
+                          <span aria-hidden="true" className="w-3 shrink-0 text-ink">
                             {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
                           </span>
                         </button>
@@ -86,7 +101,7 @@ export function EquipmentTable({ kind, caption, items, toolbar }: EquipmentTable
           </tbody>
         </table>
         {rows.length === 0 ? (
-          <p className="p-4 text-muted">{search ? `No ${caption} match “${search}”.` : `No ${caption} yet.`}</p>
+          <p className="p-4 text-muted">{search ? `Nothing matches “${search}”.` : `No ${caption}.`}</p>
         ) : null}
       </div>
       <p className="mt-2 text-sm text-muted">

@@ -28,7 +28,7 @@ const columns = column.columns([
         <ul className="flex flex-col gap-1">
           {info.getValue().map((error) => (
             <li key={`${error.column}-${error.message}`}>
-              <code className="font-semibold">{error.column}</code>: {error.message}
+              <code className="text-sm font-semibold">{error.column}</code>: {error.message}
             </li>
           ))}
         </ul>

@@ -10,5 +10,5 @@ export function ItemStatusBadges({ item }: { item: Pick<EquipmentItem, 'status' 
     item.expiry === 'expired' ? <Badge key="expiry" tone="danger">Expired</Badge> : null,
     item.expiry === 'expires-soon' ? <Badge key="expiry" tone="caution">Expires soon</Badge> : null,
   ].filter(Boolean);
-  return <div className="flex flex-wrap gap-1">{badges.length > 0 ? badges : <Badge tone="ok">In use</Badge>}</div>;
+  return <div className="flex flex-wrap gap-1 whitespace-nowrap">{badges.length > 0 ? badges : <Badge tone="ok">In use</Badge>}</div>;
 }

@@ -1,4 +1,5 @@
 import type { EquipmentKind } from '../../../../shared/contracts/library';
+import { formatFormula } from './format-formula';
 import { formatQuantity } from './format-quantity';
 
 type Data = Record<string, unknown>;
@@ -9,12 +10,17 @@ export type EquipmentField = {
   label: string;
   unit?: string | ((data: Data) => string);
   format?: (value: unknown) => string;
+  /** Shown when the value is empty (default "—"). */
+  emptyText?: string;
 };
 
 const yesNo = (value: unknown) => (value ? 'Yes' : 'No');
 const CLASS_WORDS: Record<string, string> = { A: 'Class A', B: 'Class B', own: 'Own calibration' };
 const BASIS_WORDS: Record<string, string> = { 'iso-8655': 'ISO 8655-2 limits', own: 'Own calibration' };
 const number = (value: unknown) => (typeof value === 'number' ? formatQuantity(value) : String(value));
+/** Small masses also in mg, as balance certificates state them: "0.00001 g (0.01 mg)". */
+const gramsAndMilligrams = (value: unknown) =>
+  typeof value === 'number' && value < 0.1 ? `${formatQuantity(value)} g (${formatQuantity(Number((value * 1000).toPrecision(6)))} mg)` : `${number(value)} g`;
 
 type PistonPoint = { volumeUl: number; systematicErrorUl: number; randomErrorUl: number };
 const formatPoints = (value: unknown) =>
@@ -44,7 +50,7 @@ const GLASSWARE: EquipmentField[] = [
   { key: 'glassClass', label: 'Class', format: (value) => CLASS_WORDS[String(value)] ?? String(value) },
   { key: 'nominalMl', label: 'Nominal volume', unit: 'mL' },
   { key: 'toleranceMl', label: 'Tolerance (±)', unit: 'mL' },
-  { key: 'toleranceDistribution', label: 'Tolerance distribution', format: (value) => (value ? String(value) : 'as the lab policy says') },
+  { key: 'toleranceDistribution', label: 'Tolerance distribution', emptyText: 'as the lab policy says' },
   { key: 'fillRepeatabilityMl', label: 'Fill repeatability s', unit: 'mL' },
   { key: 'calibrationTemperatureC', label: 'Calibration temperature', unit: '°C' },
   ...CALIBRATION,
@@ -65,9 +71,9 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
   balance: [
     ...COMMON,
     { key: 'capacityG', label: 'Capacity', unit: 'g' },
-    { key: 'readabilityG', label: 'Readability d', unit: 'g' },
-    { key: 'repeatabilityG', label: 'Repeatability s', unit: 'g' },
-    { key: 'linearityG', label: 'Linearity (±)', unit: 'g' },
+    { key: 'readabilityG', label: 'Readability d', format: gramsAndMilligrams },
+    { key: 'repeatabilityG', label: 'Repeatability s', format: gramsAndMilligrams },
+    { key: 'linearityG', label: 'Linearity (±)', format: gramsAndMilligrams },
     { key: 'sensitivityRelativeExpanded', label: 'Calibration uncertainty U, relative', format: (value) => `${number(value)} (${number(Number(value) * 1e6)} ppm)` },
     { key: 'sensitivityCoverageFactor', label: 'Coverage factor k of U' },
     ...CALIBRATION,
@@ -85,7 +91,7 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
   ],
   'solid-material': [
     ...MATERIAL,
-    { key: 'formula', label: 'Formula' },
+    { key: 'formula', label: 'Formula', format: (value) => formatFormula(String(value)) },
     { key: 'analyte', label: 'Analyte' },
     { key: 'purity', label: 'Purity (mass fraction)' },
     { key: 'purityUncertainty', label: 'Purity uncertainty', format: formatPurityUncertainty },
@@ -106,7 +112,7 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
 /** The value of one field as text with its unit; "—" when it is empty. */
 export function formatFieldValue(field: EquipmentField, data: Data): string {
   const value = data[field.key];
-  if (value === null || value === undefined || value === '') return '—';
+  if (value === null || value === undefined || value === '') return field.emptyText ?? '—';
   const text = field.format ? field.format(value) : typeof value === 'boolean' ? yesNo(value) : number(value);
   const unit = typeof field.unit === 'function' ? field.unit(data) : field.unit;
   return unit ? `${text} ${unit}` : text;

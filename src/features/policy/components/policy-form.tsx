@@ -64,7 +64,9 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
       {formError ? <Alert tone="danger">{formError}</Alert> : null}
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 text-lg font-bold">Coverage</legend>
-        <p className="text-muted">How the expanded uncertainty U = k·u_c is stated on every budget.</p>
+        <p className="text-muted">
+          How the expanded uncertainty U = k·u<sub>c</sub> is stated on every budget.
+        </p>
         <label className="flex items-start gap-2">
           <input type="radio" value="probability" className={`${RADIO} mt-1.5`} {...register('coverage.mode')} />
           <span>
@@ -129,7 +131,7 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
         <label className="flex items-center gap-2">
           <input type="radio" value="triangular" className={RADIO} {...register('glasswareDistribution')} />
           <span>
-            <span className="font-semibold">Triangular</span>, u = a/√6: values near nominal are likelier (EURACHEM/CITAC CG4 practice for class A glassware)
+            <span className="font-semibold">Triangular</span>, u = a/√6: values near nominal are likelier (as in the EURACHEM/CITAC CG4 worked examples)
           </span>
         </label>
         <label className="flex items-center gap-2">

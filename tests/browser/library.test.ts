@@ -173,6 +173,46 @@ describe('the tolerance library, kept by QA', () => {
     expect(problems).toEqual([]);
   });
 
+  it('gives each kind its own form: piston points from ISO 8655-2, purity as U and k or a half-width, errors on the fields', async () => {
+    const { page, problems } = await openPage();
+    await signIn(page, 'qa');
+    await openLibraryTab(page, 'Piston pipettes');
+    await page.getByRole('link', { name: 'Add piston pipette' }).click();
+    // ISO 8655-2 at 100 µL: ± 0.8 µL systematic, 0.3 µL random (the shared template table; recalled, so the form says so).
+    await page.getByLabel('Template').selectOption({ label: 'ISO 8655-2, 100 µL (± 0.8 µL, s 0.3 µL)' });
+    await expect(page.getByLabel('Nominal (largest) volume').inputValue()).resolves.toBe('100');
+    await expect(page.getByLabel('Systematic error (±)').inputValue()).resolves.toBe('0.8');
+    await expect(page.getByLabel('Random error s').inputValue()).resolves.toBe('0.3');
+    await page.getByText('Value recalled, check against your copy of ISO 8655-2.').waitFor();
+    await page.getByRole('button', { name: 'Add a point' }).click();
+    await expect(page.getByLabel('Set volume').count()).resolves.toBe(2);
+    await screenshot(page, 'library-add-piston');
+
+    await openLibraryTab(page, 'Solid materials');
+    await page.getByRole('link', { name: 'Add solid reference material' }).click();
+    await page.getByLabel('Purity uncertainty').selectOption('rectangular');
+    await page.getByLabel('Half-width (±)').waitFor();
+    await expect(page.getByLabel('Expanded uncertainty U').count()).resolves.toBe(0);
+    await page.getByRole('button', { name: 'Add to library' }).click();
+    // Checked in the browser with the shared schema before anything is sent.
+    await page.getByText('Enter the lot number.').waitFor();
+    await page.getByText('Enter the chemical formula, e.g. Pb(NO3)2.').waitFor();
+    await screenshot(page, 'library-add-solid-errors');
+
+    // An ID already in the library comes back from the server (409 code_taken) and lands on the ID field.
+    await openLibraryTab(page, 'Flasks');
+    await page.getByRole('link', { name: 'Add volumetric flask' }).click();
+    await page.getByLabel('Template').selectOption({ label: 'ISO 1042 class A, 100 mL (± 0.1 mL)' });
+    await page.getByLabel('ID', { exact: true }).fill('VF-100-A');
+    await page.getByLabel('Fill repeatability s').fill('0.02');
+    await page.getByRole('button', { name: 'Add to library' }).click();
+    const id = page.getByLabel('ID', { exact: true });
+    await page.getByText('The ID VF-100-A is already used by another item').waitFor();
+    await expect(id.getAttribute('aria-invalid')).resolves.toBe('true');
+    expect(problems).toHaveLength(1);
+    expect(problems[0]).toMatch(/^409 from .+\/api\/labs\/\d+\/equipment$/);
+  });
+
   it('checks a CSV file first and names the line of the broken row', async () => {
     const { page, problems } = await openPage();
     await signIn(page, 'qa');

@@ -39,7 +39,7 @@ export function EquipmentFormShell({ labId, kind, item, schema, defaultValues, c
   const reviseEquipment = useReviseEquipment();
   const [formError, setFormError] = useState<string | null>(null);
   const [unchanged, setUnchanged] = useState(false);
-  const form = useForm<EquipmentFormValues, unknown, EquipmentFormValues>({ resolver: zodResolver(schema), defaultValues, mode: 'onTouched' });
+  const form = useForm<EquipmentFormValues, unknown, EquipmentFormValues>({ resolver: zodResolver(schema), defaultValues });
   const { handleSubmit, setError, getValues, register, formState } = form;
 
   const showError = (error: unknown) => {

@@ -236,6 +236,16 @@ describe('the tolerance library, kept by QA', () => {
     expect(rows[1]).toContain('tolerance_ml');
     await expect(page.getByRole('button', { name: /^Import \d+ rows?$/ }).isDisabled()).resolves.toBe(true);
     await screenshot(page, 'library-import-dry-run');
+
+    // The corrected file passes its check; only then can it be imported, both rows in one go.
+    const corrected = csv.replace('zero point one', '0.10');
+    await page.getByLabel('CSV file', { exact: true }).setInputFiles({ name: 'flasks-corrected.csv', mimeType: 'text/csv', buffer: Buffer.from(corrected) });
+    await page.getByRole('button', { name: 'Check the file' }).click();
+    await page.getByRole('heading', { name: 'Check of flasks-corrected.csv' }).waitFor();
+    await page.getByRole('button', { name: 'Import 2 rows' }).click();
+    await page.getByText('2 new items and 0 new revisions were saved').waitFor();
+    await openLibraryTab(page, 'Flasks');
+    await page.getByRole('link', { name: 'VF-QA-CSV-2' }).waitFor();
     expect(problems).toEqual([]);
   });
 

@@ -15,6 +15,7 @@ import { usersRepository } from './auth/users-repository';
 import type { Db } from './db/connection';
 import { labsRepository } from './labs/labs-repository';
 import type { Clock } from './lib/clock';
+import { limitBodyDepth, requireJsonBody } from './lib/body-guards';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import type { Mailer } from './mail/mailer';
 import { outboxRouter } from './mail/outbox-router';
@@ -107,7 +108,9 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   );
 
   const api = express.Router();
+  api.use(requireJsonBody);
   api.use(express.json({ limit: '1mb', strict: true }));
+  api.use(limitBodyDepth);
   api.use(
     session({
       name: 'dilutrace.sid',

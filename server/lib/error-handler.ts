@@ -9,6 +9,7 @@ const STATUS: Record<AppError['kind'], number> = {
   not_found: 404,
   conflict: 409,
   too_large: 413,
+  unsupported_media_type: 415,
   rate_limited: 429,
 };
 

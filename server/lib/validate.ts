@@ -16,7 +16,7 @@ declare module 'express-serve-static-core' {
 
 export function toFieldIssues(error: z.ZodError, prefix?: string): FieldIssue[] {
   return error.issues.map((issue) => ({
-    path: [prefix, ...issue.path.map(String)].filter(Boolean).join('.'),
+    path: [prefix, ...issue.path.map(String)].filter(Boolean).join('.') || prefix || 'body',
     message: issue.message,
   }));
 }

@@ -32,6 +32,7 @@ export function auditQuery(db: Db) {
     if (query.actor) q.andWhere((w) => w.whereLike('u.name', `%${query.actor}%`).orWhereLike('u.email', `%${query.actor}%`));
     if (query.action) q.andWhereLike('e.action', `${query.action}%`);
     if (query.entityType) q.andWhere('e.entity_type', query.entityType);
+    if (query.entityId) q.andWhere('e.entity_id', query.entityId);
     if (query.from) q.andWhere('e.created_at', '>=', `${query.from}T00:00:00.000Z`);
     if (query.to) q.andWhere('e.created_at', '<=', `${query.to}T23:59:59.999Z`);
     return q;

@@ -26,6 +26,9 @@ describe('audit trail', () => {
     const byActor = (await auditor.get(`/api/labs/${labId}/audit-events?actor=Okonjo&action=auth.sign_in`).expect(200)).body;
     expect(byActor.events.every((e: { actor: string }) => e.actor === 'Dev Okonjo')).toBe(true);
 
+    const seeded = (await auditor.get(`/api/labs/${labId}/audit-events?entityType=lab&entityId=${labId}`).expect(200)).body;
+    expect(seeded.events.map((e: { action: string }) => e.action)).toEqual(['lab.seeded']);
+
     const csv = await auditor.get(`/api/labs/${labId}/audit-events.csv?action=auth`).expect(200);
     expect(csv.headers['content-disposition']).toMatch(/attachment/);
     expect(csv.text.split('\n')[0]).toBe('id,time_utc,actor,action,entity_type,entity_id,summary,before,after');

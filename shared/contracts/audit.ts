@@ -21,6 +21,7 @@ export const auditQuerySchema = z
     actor: z.string().trim().max(200).optional(),
     action: z.string().trim().max(60).optional(),
     entityType: z.string().trim().max(60).optional(),
+    entityId: z.string().trim().max(60).optional(),
     from: day.optional(),
     to: day.optional(),
     limit: z.coerce.number().int().min(1).max(500).default(100),

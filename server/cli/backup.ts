@@ -1,0 +1,16 @@
+import { join, dirname } from 'node:path';
+import { loadEnv } from '../config/env';
+import { backupDatabase } from '../db/backup';
+
+/** `npm run backup [-- <file>]`: an online, consistent copy of the database (default data/backups/…). */
+const env = loadEnv();
+const stamp = new Date().toISOString().replace(/[:.]/g, '-');
+const destination = process.argv[2] ?? join(dirname(env.DILUTRACE_DB), 'backups', `dilutrace-${stamp}.sqlite`);
+try {
+  const { pages } = await backupDatabase(env.DILUTRACE_DB, destination);
+  console.log(`Backed up ${env.DILUTRACE_DB} to ${destination} (${pages} pages, integrity ok).`);
+  console.log('Certificates are files: copy the certificates folder beside the database too.');
+} catch (error) {
+  console.error((error as Error).message);
+  process.exitCode = 1;
+}

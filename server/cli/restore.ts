@@ -1,0 +1,17 @@
+import { loadEnv } from '../config/env';
+import { restoreDatabase } from '../db/backup';
+
+/** `npm run restore -- <backup file>`: replaces DILUTRACE_DB with the backup. Stop Dilutrace first. */
+const env = loadEnv();
+const backup = process.argv[2];
+if (!backup) {
+  console.error('Name the backup file: npm run restore -- data/backups/dilutrace-….sqlite');
+  process.exit(2);
+}
+try {
+  await restoreDatabase(backup, env.DILUTRACE_DB);
+  console.log(`Restored ${env.DILUTRACE_DB} from ${backup} (integrity ok). Start Dilutrace again.`);
+} catch (error) {
+  console.error((error as Error).message);
+  process.exitCode = 1;
+}

@@ -13,9 +13,12 @@ export function coveredCount(sortedLength: number, probability: number): number 
 
 /**
  * Puts in order just what the coverage intervals read: after the call the M − q smallest values sit sorted
- * in values[0 … M−q−1] and the M − q largest sorted in values[q … M−1] (q as in coveredCount). Two
- * quickselect partitions and two small sorts replace a full sort (for p = 0.95 only 10 % of the values are
- * sorted). Falls back to a full sort when the tails would overlap.
+ * in values[0 … M−q−1] and the M − q largest sorted in values[q … M−1] (q as in coveredCount).
+ * Method: one pass for the smallest and largest value; one pass counting values in C equal cells between them
+ * (cell ⌊(y − y_min)·C/(y_max − y_min)⌋); the cells that hold the (M − q)-th smallest and the (M − q)-th largest
+ * value fix a low and a high group; one three-way partition pass moves the low group to the front and the high
+ * group to the back; the two groups (a little more than M − q values each) are sorted. For p = 0.95 about 10 %
+ * of the values are sorted. Falls back to a full sort when the tails would overlap or a value is not finite.
  */
 export function orderTails(values: Float64Array, probability: number): void {
   const count = values.length;
@@ -25,39 +28,76 @@ export function orderTails(values: Float64Array, probability: number): void {
     values.sort();
     return;
   }
-  selectInPlace(values, tail - 1, 0, count - 1);
-  selectInPlace(values, q, tail, count - 1);
-  values.subarray(0, tail).sort();
-  values.subarray(q, count).sort();
+  let smallest = values[0];
+  let largest = values[0];
+  for (let index = 1; index < count; index += 1) {
+    const value = values[index];
+    if (value < smallest) smallest = value;
+    else if (value > largest) largest = value;
+  }
+  const cells = new Int32Array(Math.min(maximumCells, count));
+  const cellsPerUnit = cells.length / (largest - smallest);
+  if (!Number.isFinite(cellsPerUnit)) {
+    values.sort();
+    return;
+  }
+  if (countCells(values, smallest, cellsPerUnit, cells) < count) {
+    // A NaN falls in no cell; sort as a whole, as for overlapping tails.
+    values.sort();
+    return;
+  }
+  let lowCell = 0;
+  for (let below = cells[0]; below < tail; below += cells[lowCell]) lowCell += 1;
+  let highCell = cells.length - 1;
+  for (let above = cells[highCell]; above < tail; above += cells[highCell]) highCell -= 1;
+  if (lowCell >= highCell) {
+    values.sort();
+    return;
+  }
+  const { front, back } = partitionByCell(values, smallest, cellsPerUnit, cells.length - 1, lowCell, highCell);
+  values.subarray(0, front).sort();
+  values.subarray(back, count).sort();
 }
 
-/** Quickselect (Hoare partition, median-of-three pivot): afterwards values[k] is the (k+1)-th smallest of [left, right], smaller ones before it, larger after. */
-function selectInPlace(values: Float64Array, k: number, left: number, right: number): void {
-  let low = left;
-  let high = right;
-  while (high > low) {
-    const middle = (low + high) >>> 1;
-    const a = values[low];
-    const b = values[middle];
-    const c = values[high];
-    const pivot = a < b ? (b < c ? b : a < c ? c : a) : a < c ? a : b < c ? c : b;
-    let i = low;
-    let j = high;
-    while (i <= j) {
-      while (values[i] < pivot) i += 1;
-      while (values[j] > pivot) j -= 1;
-      if (i <= j) {
-        const swap = values[i];
-        values[i] = values[j];
-        values[j] = swap;
-        i += 1;
-        j -= 1;
-      }
-    }
-    if (k <= j) high = j;
-    else if (k >= i) low = i;
-    else return;
+/** Cells of the counting pass in orderTails: fine enough that the groups it sorts are barely larger than the tails. */
+const maximumCells = 4096;
+
+/** cells[k] = number of values with min(C − 1, ⌊(y − y_min)·cellsPerUnit⌋) = k, C the number of cells; returns the number counted. */
+function countCells(values: Float64Array, smallest: number, cellsPerUnit: number, cells: Int32Array): number {
+  const lastCell = cells.length - 1;
+  for (let index = 0; index < values.length; index += 1) {
+    cells[Math.min(lastCell, Math.floor((values[index] - smallest) * cellsPerUnit))] += 1;
   }
+  let counted = 0;
+  for (let cell = 0; cell <= lastCell; cell += 1) counted += cells[cell];
+  return counted;
+}
+
+/**
+ * Dijkstra's three-way partition by cell (as in countCells): afterwards values[0, front) lie in cells ≤ lowCell,
+ * values[back, M) in cells ≥ highCell, and the rest between them.
+ */
+function partitionByCell(values: Float64Array, smallest: number, cellsPerUnit: number, lastCell: number, lowCell: number, highCell: number) {
+  let front = 0;
+  let next = 0;
+  let back = values.length;
+  while (next < back) {
+    const value = values[next];
+    const cell = Math.min(lastCell, Math.floor((value - smallest) * cellsPerUnit));
+    if (cell <= lowCell) {
+      values[next] = values[front];
+      values[front] = value;
+      front += 1;
+      next += 1;
+    } else if (cell >= highCell) {
+      back -= 1;
+      values[next] = values[back];
+      values[back] = value;
+    } else {
+      next += 1;
+    }
+  }
+  return { front, back };
 }
 
 /**

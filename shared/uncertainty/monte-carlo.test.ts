@@ -162,4 +162,28 @@ describe('coverage intervals from partly ordered outputs', () => {
       }
     }
   });
+
+  // The postcondition itself (M − q smallest sorted in front, M − q largest sorted at the back), also for ties,
+  // a constant output and a narrow spike on a wide range, where the counting cells are very uneven.
+  it('orderTails leaves both tails exactly as a full sort would', async () => {
+    const { coveredCount, orderTails } = await import('./coverage-interval');
+    const { RandomGenerator } = await import('./random-generator');
+    const random = new RandomGenerator(7);
+    const cases = [
+      Float64Array.from({ length: 20_000 }, () => Math.floor(random.nextUniform() * 5)),
+      new Float64Array(1000).fill(2.5),
+      Float64Array.from({ length: 30_001 }, (_, index) => (index % 1000 === 0 ? 1e6 * (random.nextUniform() - 0.5) : random.nextUniform())),
+    ];
+    for (const values of cases) {
+      const sorted = values.slice().sort();
+      for (const p of [0.95, 0.9545, 0.99]) {
+        const ordered = values.slice();
+        orderTails(ordered, p);
+        const tail = values.length - coveredCount(values.length, p);
+        expect(Array.from(ordered.subarray(0, tail))).toEqual(Array.from(sorted.subarray(0, tail)));
+        expect(Array.from(ordered.subarray(values.length - tail))).toEqual(Array.from(sorted.subarray(values.length - tail)));
+        expect(ordered.slice().sort()).toEqual(sorted);
+      }
+    }
+  });
 });

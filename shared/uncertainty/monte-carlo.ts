@@ -99,9 +99,12 @@ export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options
   const bins = options.histogramBins ?? 50;
 
   const words = new Int32Array(2 * chunkSize);
+  const { sources } = model;
   const runChunk = (target: Float64Array, offset: number, count: number) => {
-    model.sources.forEach((source, index) => fillSamples(evaluator.sourceColumns[index], count, source.estimate, source.distribution, random, words));
-    target.set(evaluator.evaluate(count).subarray(0, count), offset);
+    for (let index = 0; index < sources.length; index += 1) {
+      fillSamples(evaluator.sourceColumns[index], count, sources[index].estimate, sources[index].distribution, random, words);
+    }
+    evaluator.evaluate(count, target, offset);
   };
 
   const summarise = (outputs: Float64Array, adaptive?: MonteCarloResult['adaptive']): MonteCarloResult => {

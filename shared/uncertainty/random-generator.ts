@@ -5,8 +5,11 @@
  * (a Weyl sequence with step 0x9E3779B9 passed through the MurmurHash3 32-bit finaliser).
  */
 export class RandomGenerator {
-  /** The four 32-bit state words, kept in a typed array so they stay unboxed integers. */
-  private readonly state = new Int32Array(4);
+  /**
+   * The four 32-bit state words s₀…s₃, kept in a typed array so they stay unboxed integers. Read and written
+   * only by this class and by the ziggurat (normal-ziggurat.ts), which runs the same step inline in its loop.
+   */
+  readonly state = new Int32Array(4);
 
   constructor(seed: number) {
     let weyl = seed >>> 0;
@@ -64,6 +67,72 @@ export class RandomGenerator {
       s0 ^= s3;
       s2 ^= shifted;
       s3 = (s3 << 11) | (s3 >>> 21);
+    }
+    state[0] = s0;
+    state[1] = s1;
+    state[2] = s2;
+    state[3] = s3;
+  }
+
+  /**
+   * Fills `target[0..count)` with offset + scale·kᵢ, kᵢ the next `count` words as signed integers: the same
+   * numbers as fillInt32 followed by that multiply-add, in one loop (no buffer of words between them).
+   * With scale = w·2⁻³² and offset = low + (2³¹ + ½)·scale this is low + w·rᵢ, rᵢ = (kᵢ + 2³¹ + ½)/2³² ∈ (0, 1).
+   */
+  fillAffine(target: Float64Array, count: number, offset: number, scale: number): void {
+    const state = this.state;
+    let s0 = state[0];
+    let s1 = state[1];
+    let s2 = state[2];
+    let s3 = state[3];
+    for (let index = 0; index < count; index += 1) {
+      const product = Math.imul(s1, 5);
+      const word = Math.imul((product << 7) | (product >>> 25), 9);
+      const shifted = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= shifted;
+      s3 = (s3 << 11) | (s3 >>> 21);
+      target[index] = offset + scale * word;
+    }
+    state[0] = s0;
+    state[1] = s1;
+    state[2] = s2;
+    state[3] = s3;
+  }
+
+  /**
+   * Fills `target[0..count)` with offset + scale·(k₂ᵢ + k₂ᵢ₊₁), kⱼ the next 2·count words as signed integers (the
+   * sum of two words is exact in a double): the numbers fillInt32 then that multiply-add would give, in one loop.
+   */
+  fillAffineOfPairSums(target: Float64Array, count: number, offset: number, scale: number): void {
+    const state = this.state;
+    let s0 = state[0];
+    let s1 = state[1];
+    let s2 = state[2];
+    let s3 = state[3];
+    for (let index = 0; index < count; index += 1) {
+      let product = Math.imul(s1, 5);
+      const first = Math.imul((product << 7) | (product >>> 25), 9);
+      let shifted = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= shifted;
+      s3 = (s3 << 11) | (s3 >>> 21);
+      product = Math.imul(s1, 5);
+      const second = Math.imul((product << 7) | (product >>> 25), 9);
+      shifted = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= shifted;
+      s3 = (s3 << 11) | (s3 >>> 21);
+      target[index] = offset + scale * (first + second);
     }
     state[0] = s0;
     state[1] = s1;

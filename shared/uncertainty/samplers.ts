@@ -11,7 +11,9 @@ const signOffset = 2147483648; // 2³¹: a signed word k plus 2³¹ is the unsig
  * normal by the ziggurat method (normal-ziggurat.ts); rectangular a(2r − 1); symmetric triangular
  * a(r₁ + r₂ − 1); arcsine a·sin(2πr); Student t (Type A, JCGM 101 6.4.9) as scale·t_ν with ν = n − 1,
  * scale s/√n for a mean of n readings or s for a single reading, t_ν by Bailey's polar method.
- * Uniforms r = (k + ½)/2³² come from 32-bit words k generated in bulk into `words` (signed, length ≥ 2·count).
+ * Uniforms r = (k + ½)/2³² come from the generator's 32-bit words k, in order: for each source `count` words
+ * (2·count for triangular), then any extra words the ziggurat's rare slow path or the polar method needs.
+ * `words` is scratch of length ≥ 2·count (bulk words, or the ziggurat's set-aside draws).
  */
 export function fillSamples(
   target: Float64Array,
@@ -24,23 +26,20 @@ export function fillSamples(
   switch (distribution.shape) {
     case 'normal': {
       const u = 'standardUncertainty' in distribution ? distribution.standardUncertainty : distribution.expandedUncertainty / distribution.coverageFactor;
-      random.fillInt32(words, count);
-      fillNormal(target, words, count, estimate, u, random);
+      fillNormal(target, count, estimate, u, random, words);
       return;
     }
     case 'rectangular': {
       const width = 2 * distribution.halfWidth * wordToUniform;
       const low = estimate - distribution.halfWidth + (signOffset + 0.5) * width;
-      random.fillInt32(words, count);
-      for (let index = 0; index < count; index += 1) target[index] = low + width * words[index];
+      random.fillAffine(target, count, low, width);
       return;
     }
     case 'triangular': {
       const a = distribution.halfWidth;
       const scale = a * wordToUniform;
       const low = estimate - a + (2 * signOffset + 1) * scale;
-      random.fillInt32(words, 2 * count);
-      for (let index = 0; index < count; index += 1) target[index] = low + scale * (words[2 * index] + words[2 * index + 1]);
+      random.fillAffineOfPairSums(target, count, low, scale);
       return;
     }
     case 'arcsine': {

@@ -5,17 +5,17 @@ const labels = (roles: Parameters<typeof navigationFor>[0]) => navigationFor(rol
 
 describe('navigationFor', () => {
   it('gives an administrator the member and outbox pages', () => {
-    expect(labels(['admin'])).toEqual(['Dashboard', 'Library', 'Lab policy', 'Members', 'Outbox']);
+    expect(labels(['admin'])).toEqual(['Dashboard', 'Preparations', 'Library', 'Lab policy', 'Members', 'Outbox']);
   });
 
-  it('gives analysts, QA and auditors the library and the lab policy (read-only unless QA)', () => {
-    expect(labels(['analyst'])).toEqual(['Dashboard', 'Library', 'Lab policy']);
-    expect(labels(['qa'])).toEqual(['Dashboard', 'Library', 'Lab policy']);
-    expect(labels(['auditor'])).toEqual(['Dashboard', 'Library', 'Lab policy']);
+  it('gives analysts, QA and auditors the preparations, the library and the lab policy (read-only unless QA)', () => {
+    expect(labels(['analyst'])).toEqual(['Dashboard', 'Preparations', 'Route finder', 'Library', 'Lab policy']);
+    expect(labels(['qa'])).toEqual(['Dashboard', 'Preparations', 'Route finder', 'Library', 'Lab policy']);
+    expect(labels(['auditor'])).toEqual(['Dashboard', 'Preparations', 'Library', 'Lab policy']);
   });
 
   it('takes the union of several roles without repeating an entry', () => {
-    expect(labels(['analyst', 'admin', 'qa'])).toEqual(['Dashboard', 'Library', 'Lab policy', 'Members', 'Outbox']);
+    expect(labels(['analyst', 'admin', 'qa'])).toEqual(['Dashboard', 'Preparations', 'Route finder', 'Library', 'Lab policy', 'Members', 'Outbox']);
   });
 
   it('shows only the dashboard to someone with no role in the active lab (there is no library to read)', () => {

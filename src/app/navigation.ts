@@ -7,6 +7,8 @@ export type NavigationItem = { label: string; href: string; permission: Permissi
 
 const NAVIGATION: readonly NavigationItem[] = [
   { label: 'Dashboard', href: paths.app.dashboard.href(), permission: null },
+  { label: 'Preparations', href: paths.app.preparations.href(), permission: 'member' },
+  { label: 'Route finder', href: paths.app.routeFinder.href(), permission: 'findRoutes' },
   // Every member reads the library and the policy; only QA (and admins, for the library) change them.
   { label: 'Library', href: paths.app.library.href(), permission: 'member' },
   { label: 'Lab policy', href: paths.app.policy.href(), permission: 'member' },

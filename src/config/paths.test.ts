@@ -25,6 +25,16 @@ describe('library paths', () => {
   });
 });
 
+describe('preparation paths', () => {
+  it('keeps list filters, the original of a variant and the compared ids in the address', () => {
+    expect(paths.app.preparations.href({ status: 'draft', analyst: 4, material: undefined })).toBe('/preparations?status=draft&analyst=4');
+    expect(paths.app.preparation.href(7)).toBe('/preparations/7');
+    expect(paths.app.preparation.href(8, 7)).toBe('/preparations/8?variantOf=7');
+    expect(paths.app.benchSheet.href(7)).toBe('/preparations/7/bench-sheet');
+    expect(paths.app.compare.href([7, 8])).toBe('/compare?ids=7,8');
+  });
+});
+
 describe('safeRedirectPath', () => {
   it('keeps paths inside the app', () => {
     expect(safeRedirectPath('/outbox?message=3')).toBe('/outbox?message=3');

@@ -73,6 +73,33 @@ export const paths = {
       /** `messageId` opens one captured message beside the list. */
       href: (messageId?: number) => (messageId === undefined ? '/outbox' : `/outbox?message=${messageId}`),
     },
+    preparations: {
+      path: '/preparations',
+      /** The list, with its filters in the address. */
+      href: (filter: Record<string, string | number | undefined> = {}) => withQuery('/preparations', filter),
+    },
+    preparationNew: {
+      path: '/preparations/new',
+      href: () => '/preparations/new',
+    },
+    preparation: {
+      path: '/preparations/:preparationId',
+      /** `variantOf` names the preparation this one was duplicated from, for "compare with the original". */
+      href: (preparationId: number, variantOf?: number) => withQuery(`/preparations/${preparationId}`, { variantOf }),
+    },
+    benchSheet: {
+      path: '/preparations/:preparationId/bench-sheet',
+      href: (preparationId: number) => `/preparations/${preparationId}/bench-sheet`,
+    },
+    compare: {
+      path: '/compare',
+      /** Two to four preparations side by side. */
+      href: (preparationIds: readonly number[]) => `/compare?ids=${preparationIds.join(',')}`,
+    },
+    routeFinder: {
+      path: '/route-finder',
+      href: () => '/route-finder',
+    },
   },
 } as const;
 

@@ -5,6 +5,8 @@ import type { Me } from '../../shared/contracts/auth';
 export const PERMISSIONS = {
   manageMembers: ['admin'],
   readOutbox: ['admin'],
+  planPreparations: ['analyst'],
+  findRoutes: ['analyst', 'qa'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -1,0 +1,159 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Link, useLocation, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
+import type { PreparationDetail } from '../../../../shared/contracts/preparations';
+import type { BudgetResult, PlanInput } from '../../../../shared/uncertainty';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { paths } from '../../../config/paths';
+import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
+import { useDuplicatePreparation } from '../../../features/preparations/api/duplicate-preparation';
+import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
+import { labPolicyQueryOptions, useLabPolicy } from '../../../features/preparations/api/get-lab-policy';
+import { preparationQueryOptions, usePreparation } from '../../../features/preparations/api/get-preparation';
+import { saveDraft } from '../../../features/preparations/api/save-draft';
+import { useStartNewVersion } from '../../../features/preparations/api/start-new-version';
+import { Workspace, writeOf } from '../../../features/preparations/components/workspace';
+import { WorkspaceHeader } from '../../../features/preparations/components/workspace-header';
+import { draftFromPlan, type PlanDraft } from '../../../features/preparations/utils/plan-draft';
+import { activeMembership, can } from '../../../lib/authorization';
+
+const idFrom = (value: string | undefined) => {
+  const id = Number(value);
+  return Number.isInteger(id) && id > 0 ? id : null;
+};
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const me = await queryClient.ensureQueryData(meQueryOptions());
+    const id = idFrom(params.preparationId);
+    if (me?.activeLabId && id) {
+      await Promise.all([
+        queryClient.ensureQueryData(preparationQueryOptions(me.activeLabId, id)),
+        queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)),
+        queryClient.ensureQueryData(labPolicyQueryOptions(me.activeLabId)),
+      ]);
+    }
+    return null;
+  };
+
+/**
+ * What the new-preparation page hands over when its first save created this preparation: the draft as typed
+ * meanwhile. Used only while the server still holds that first save (history state survives a reload).
+ */
+type HandOver = { preparationId: number; updatedAt: string; draft: PlanDraft; savedKey: string };
+
+export function Component() {
+  const me = useSignedInMe();
+  const membership = activeMembership(me);
+  const id = idFrom(useParams().preparationId);
+  if (!membership || !id) {
+    return (
+      <>
+        <title>Preparation · Dilutrace</title>
+        <Alert tone="info" title="No such preparation">
+          Open a preparation from the list of your lab’s preparations.
+        </Alert>
+      </>
+    );
+  }
+  return <PreparationPage labId={membership.id} preparationId={id} userId={me.user.id} planner={can(membership.roles, 'planPreparations')} />;
+}
+
+function PreparationPage({ labId, preparationId, userId, planner }: { labId: number; preparationId: number; userId: number; planner: boolean }) {
+  const detail = usePreparation(labId, preparationId);
+  const library = useLabEquipment(labId);
+  const policy = useLabPolicy(labId);
+  // A new version or another preparation starts the workspace afresh from the server's plan.
+  return <PreparationWorkspace key={`${detail.id}-${detail.current.number}`} labId={labId} detail={detail} library={library} policy={policy} userId={userId} planner={planner} />;
+}
+
+type PreparationWorkspaceProps = { labId: number; detail: PreparationDetail; library: EquipmentItem[]; policy: LabPolicy; userId: number; planner: boolean };
+
+function PreparationWorkspace({ labId, detail, library, policy, userId, planner }: PreparationWorkspaceProps) {
+  const location = useLocation();
+  const navigate = useNavigate();
+  const [searchParams] = useSearchParams();
+  const variantOf = idFrom(searchParams.get('variantOf') ?? undefined);
+  const duplicate = useDuplicatePreparation(labId, detail.id);
+  const newVersion = useStartNewVersion(labId, detail.id);
+  const version = detail.current;
+  const owner = detail.createdById === userId;
+  const editable = planner && owner && version.editable;
+
+  // The workspace reads the plan once, when it opens; from then on it owns the draft.
+  const [{ initialDraft, savedKey }] = useState(() => {
+    const handOver = location.state as HandOver | null;
+    if (handOver?.preparationId === detail.id && handOver.updatedAt === version.updatedAt) return { initialDraft: handOver.draft, savedKey: handOver.savedKey };
+    const fromServer = draftFromPlan(version.plan, { title: detail.title, overrides: version.overrides, seed: version.seed });
+    const libraryById = new Map(library.map((item) => [String(item.id), item]));
+    return { initialDraft: fromServer, savedKey: JSON.stringify(writeOf(fromServer, libraryById).write) };
+  });
+  const stored = !editable && version.snapshot ? { budget: version.snapshot.budget as unknown as BudgetResult, plan: version.snapshot.plan as unknown as PlanInput } : null;
+
+  const failure = duplicate.error ?? newVersion.error;
+  const note = failure ? (
+    <Alert tone="danger">{failure.message}</Alert>
+  ) : !editable ? (
+    <Alert tone="info">
+      {!version.editable
+        ? `Version ${version.number} is ${version.status} and cannot change.${planner ? ' Start a new version to change the plan.' : ''}`
+        : planner
+          ? `Only ${detail.createdBy} can change this draft. Duplicate it to make your own variant.`
+          : 'You can read this preparation; analysts plan and change preparations.'}
+    </Alert>
+  ) : null;
+
+  return (
+    <>
+      <title>{`${detail.title} · Dilutrace`}</title>
+      <Workspace
+        initialDraft={initialDraft}
+        savedKey={savedKey}
+        library={library}
+        policy={policy}
+        editable={editable}
+        stored={stored}
+        save={(write) => saveDraft(labId, detail.id, version.number, write)}
+        header={(saveLine, draft) => (
+          <WorkspaceHeader
+            title={draft.title.trim() || detail.title}
+            status={version.status}
+            versionNumber={version.number}
+            saveLine={saveLine}
+            note={note}
+            actions={
+              <>
+                {variantOf ? (
+                  <Link to={paths.app.compare.href([variantOf, detail.id])} className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper">
+                    Compare with the original
+                  </Link>
+                ) : null}
+                <Link to={paths.app.benchSheet.href(detail.id)} className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper">
+                  Bench sheet
+                </Link>
+                {planner ? (
+                  <Button
+                    variant="secondary"
+                    pending={duplicate.isPending}
+                    pendingLabel="Duplicating…"
+                    onClick={() => duplicate.mutate(undefined, { onSuccess: (copy) => navigate(paths.app.preparation.href(copy.id, detail.id)) })}
+                  >
+                    Duplicate as a variant
+                  </Button>
+                ) : null}
+                {planner && !version.editable ? (
+                  <Button pending={newVersion.isPending} pendingLabel="Starting…" onClick={() => newVersion.mutate()}>
+                    Start a new version
+                  </Button>
+                ) : null}
+              </>
+            }
+          />
+        )}
+      />
+    </>
+  );
+}

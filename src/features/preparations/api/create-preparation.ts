@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { preparationDetailSchema, type PreparationDetail, type PreparationWrite } from '../../../../shared/contracts/preparations';
+import { api } from '../../../lib/api-client';
+import { preparationsKeys } from './preparations-keys';
+
+export function createPreparation(labId: number, write: PreparationWrite): Promise<PreparationDetail> {
+  return api.post(`/api/labs/${labId}/preparations`, write, preparationDetailSchema);
+}
+
+/** Creates a preparation (its first draft version), puts it in the cache and refreshes the lists. */
+export function useCreatePreparation(labId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (write: PreparationWrite) => createPreparation(labId, write),
+    onSuccess: async (detail) => {
+      queryClient.setQueryData(preparationsKeys.detail(labId, detail.id), detail);
+      await queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) });
+    },
+  });
+}

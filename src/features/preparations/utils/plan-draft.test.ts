@@ -1,0 +1,82 @@
+import { describe, expect, it } from 'vitest';
+import { DEMO_LIBRARY_BY_ID, DEMO_POLICY } from '../test-support/demo-library';
+import { evaluateDraft } from './evaluate-draft';
+import { draftFromPlan, emptyStep, overridesToSave, storedPlan, type PlanDraft } from './plan-draft';
+import { problemField } from './problem-field';
+
+/** The demo lead standard: 0.1599 g of Pb(NO3)2 on BAL-05 into VF-100-A, then 10 mL (GP-10-A) into VF-100-B. */
+function leadStandard(): PlanDraft {
+  const step = (kind: Parameters<typeof emptyStep>[0], equipmentId: string, quantity = '') => ({ ...emptyStep(kind), equipmentId, quantity });
+  return {
+    title: 'Pb 100 mg/L',
+    materialId: '8',
+    analyte: 'Pb',
+    outputUnit: 'mg/L',
+    labTemperatureC: '20',
+    overrides: {},
+    seed: 42,
+    steps: [step('weighSolid', '1', '0.1599'), step('makeUpToVolume', '3'), step('pipetteAliquot', '6', '10'), step('makeUpToVolume', '4')],
+  };
+}
+
+describe('the live budget of a draft', () => {
+  it('computes the demo lead standard with the library items inline and the lab policy applied', () => {
+    const evaluation = evaluateDraft(leadStandard(), DEMO_LIBRARY_BY_ID, DEMO_POLICY);
+    if (!evaluation.ok) throw new Error(evaluation.problem.message);
+    // c = m·P·M(Pb)/M(Pb(NO3)2) / V₁ · V_a / V₂ with M(Pb) = 207.04 (midpoint of the CIAAW 2021 interval
+    // [206.14, 207.94]), N 14.0069, O 15.9994 (CIAAW 2021 abridged values, from memory):
+    // 0.1599 g · 0.9998 · 207.04 / 331.2141 / 0.1 L · 10/100 · 1000 mg/g = 99.9821 mg/L. Tolerance 0.001 mg/L: rounding of the hand value.
+    expect(evaluation.budget.value).toBeCloseTo(99.9821, 3);
+    expect(evaluation.budget.rounded.valueText).toBe('99.98');
+    // The policy's ±4 °C half-range reaches the engine (withPolicy), so each volume carries a temperature source.
+    expect(evaluation.plan.settings.temperatureHalfRangeC).toBe(4);
+    expect(evaluation.budget.checkpoints.map((checkpoint) => checkpoint.stepIndex)).toEqual([1, 3]);
+  });
+
+  it('puts an unreadable mass on its field and keeps nothing from the engine', () => {
+    const draft = leadStandard();
+    draft.steps[0] = { ...draft.steps[0], quantity: '0.16 g' };
+    const evaluation = evaluateDraft(draft, DEMO_LIBRARY_BY_ID, DEMO_POLICY);
+    expect(evaluation.ok).toBe(false);
+    if (evaluation.ok) return;
+    expect(problemField(evaluation.problem)).toBe('step-0-quantity');
+    expect(evaluation.problem.message).toBe('Enter the net mass as a number, e.g. 0.1600.');
+  });
+
+  it('refuses an overdue balance until a reason is recorded, then sends that reason', () => {
+    const draft = leadStandard();
+    draft.steps[0] = { ...draft.steps[0], equipmentId: '2' };
+    const refused = evaluateDraft(draft, DEMO_LIBRARY_BY_ID, DEMO_POLICY);
+    expect(refused.ok ? null : problemField(refused.problem)).toBe('step-0-override');
+    const reasoned = { ...draft, overrides: { '2': 'Checked with a 100 g weight today', '5': 'VF-250-A is not in this plan' } };
+    expect(evaluateDraft(reasoned, DEMO_LIBRARY_BY_ID, DEMO_POLICY).ok).toBe(true);
+    expect(overridesToSave(reasoned)).toEqual([{ libraryId: '2', reason: 'Checked with a 100 g weight today' }]);
+  });
+
+  it('lets the engine point at the step it cannot compute: a load above the balance capacity', () => {
+    const draft = leadStandard();
+    draft.steps[0] = { ...draft.steps[0], containerMassG: '250' }; // BAL-05 weighs at most 220 g
+    const evaluation = evaluateDraft(draft, DEMO_LIBRARY_BY_ID, DEMO_POLICY);
+    expect(evaluation.ok ? null : [problemField(evaluation.problem), evaluation.problem.message]).toEqual([
+      'step-0-quantity',
+      'Balance BAL-05 holds at most 220 g; container 250 g plus 0.1599 g is more.',
+    ]);
+  });
+});
+
+describe('saving and reopening', () => {
+  it('reopens a saved plan as the same draft (same write, same numbers)', () => {
+    const draft = leadStandard();
+    const plan = storedPlan(draft, DEMO_LIBRARY_BY_ID);
+    const reopened = draftFromPlan(JSON.parse(JSON.stringify(plan)), { title: draft.title, overrides: [], seed: 42 });
+    expect(storedPlan(reopened, DEMO_LIBRARY_BY_ID)).toEqual(plan);
+    expect(reopened.steps.map((step) => [step.kind, step.equipmentId, step.quantity])).toEqual([
+      ['weighSolid', '1', '0.1599'],
+      ['makeUpToVolume', '3', ''],
+      ['pipetteAliquot', '6', '10'],
+      ['makeUpToVolume', '4', ''],
+    ]);
+    const steps = plan.steps as { balance?: { libraryId: string; revisionId: string } }[];
+    expect(steps[0].balance).toMatchObject({ libraryId: '1', revisionId: '10' });
+  });
+});

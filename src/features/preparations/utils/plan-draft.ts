@@ -1,0 +1,167 @@
+import { toEngineEquipment } from '../../../../shared/contracts/engine-equipment';
+import type { EquipmentItem } from '../../../../shared/contracts/library';
+import type { PlanInput } from '../../../../shared/uncertainty';
+import { isStartKind, STEP_KINDS, type StepKind } from './step-kinds';
+import { parseDecimal } from './parse-decimal';
+
+export type ExtraSourceShape = 'normal' | 'rectangular' | 'triangular' | 'arcsine';
+
+/** An extra named source as the editor holds it: the width as typed. */
+export type DraftExtraSource = {
+  key: string;
+  name: string;
+  effect: 'relative' | 'absolute';
+  shape: ExtraSourceShape;
+  /** Standard uncertainty for a normal source, half-width for the others. */
+  amount: string;
+};
+
+/** One step as the editor holds it: library ids and the numbers as typed. */
+export type DraftStep = {
+  key: string;
+  kind: StepKind;
+  /** Library id of the balance, flask or pipette ('' while none is chosen). */
+  equipmentId: string;
+  /** Mass or volume as typed (see STEP_KINDS[kind].quantity). */
+  quantity: string;
+  containerMassG: string;
+  extraSources: DraftExtraSource[];
+};
+
+/** Everything the plan editor edits; turned into the engine's plan document for the budget and the server. */
+export type PlanDraft = {
+  title: string;
+  materialId: string;
+  analyte: string;
+  outputUnit: string;
+  labTemperatureC: string;
+  steps: DraftStep[];
+  /** Reasons for using an overdue or expired item, by library id. */
+  overrides: Record<string, string>;
+  seed: number;
+};
+
+let keyCounter = 0;
+/** A key for a new step or source, unique within the page (React lists and focus). */
+export const newKey = (prefix: string) => `${prefix}-${Date.now().toString(36)}-${(keyCounter += 1)}`;
+
+/** A fresh 32-bit Monte Carlo seed. */
+export function randomSeed(): number {
+  return crypto.getRandomValues(new Uint32Array(1))[0];
+}
+
+export function emptyStep(kind: StepKind): DraftStep {
+  return { key: newKey('step'), kind, equipmentId: '', quantity: '', containerMassG: '', extraSources: [] };
+}
+
+export function emptyDraft(seed: number = randomSeed()): PlanDraft {
+  return { title: '', materialId: '', analyte: '', outputUnit: 'mg/L', labTemperatureC: '20', steps: [], overrides: {}, seed };
+}
+
+const isRecord = (value: unknown): value is Record<string, unknown> => typeof value === 'object' && value !== null && !Array.isArray(value);
+const text = (value: unknown) => (typeof value === 'number' && Number.isFinite(value) ? String(value) : typeof value === 'string' ? value : '');
+const libraryIdOf = (value: unknown) => (isRecord(value) && typeof value.libraryId === 'string' ? value.libraryId : '');
+
+function extraSourceFromPlan(source: unknown): DraftExtraSource | null {
+  if (!isRecord(source) || !isRecord(source.distribution)) return null;
+  const distribution = source.distribution;
+  const shape = distribution.shape;
+  if (shape !== 'normal' && shape !== 'rectangular' && shape !== 'triangular' && shape !== 'arcsine') return null;
+  const amount =
+    shape === 'normal'
+      ? typeof distribution.standardUncertainty === 'number'
+        ? distribution.standardUncertainty
+        : Number(distribution.expandedUncertainty) / Number(distribution.coverageFactor)
+      : distribution.halfWidth;
+  return { key: newKey('source'), name: text(source.name), effect: source.effect === 'absolute' ? 'absolute' : 'relative', shape, amount: text(amount) };
+}
+
+/** Reads a stored plan document (or a route finder's plan) back into the editor, exactly as it was saved. */
+export function draftFromPlan(plan: Record<string, unknown>, extras: { title: string; overrides: { libraryId: string; reason: string }[]; seed: number }): PlanDraft {
+  const settings = isRecord(plan.settings) ? plan.settings : {};
+  const steps = Array.isArray(plan.steps) ? plan.steps.filter(isRecord) : [];
+  const start = steps.find((step) => step.kind === 'weighSolid' || step.kind === 'startFromCertifiedSolution');
+  return {
+    title: extras.title,
+    materialId: libraryIdOf(start?.material),
+    analyte: isRecord(plan.analyte) ? text(plan.analyte.formula) : '',
+    outputUnit: text(settings.outputUnit) || 'mg/L',
+    labTemperatureC: text(settings.labTemperatureC) || '20',
+    overrides: Object.fromEntries(extras.overrides.map((override) => [override.libraryId, override.reason])),
+    seed: extras.seed,
+    steps: steps
+      .filter((step): step is Record<string, unknown> & { kind: StepKind } => typeof step.kind === 'string' && step.kind in STEP_KINDS)
+      .map((step) => {
+        const info = STEP_KINDS[step.kind];
+        return {
+          key: newKey('step'),
+          kind: step.kind,
+          equipmentId: info.slot ? libraryIdOf(step[info.slot]) : '',
+          quantity: info.quantity ? text(step[info.quantity.field]) : '',
+          containerMassG: step.containerMassG === undefined || step.containerMassG === 0 ? '' : text(step.containerMassG),
+          extraSources: (Array.isArray(step.extraSources) ? step.extraSources : []).map(extraSourceFromPlan).filter((source) => source !== null),
+        };
+      }),
+  };
+}
+
+
+function extraSourceToPlan(source: DraftExtraSource) {
+  const amount = parseDecimal(source.amount) ?? Number.NaN;
+  const distribution = source.shape === 'normal' ? { shape: 'normal', standardUncertainty: amount } : { shape: source.shape, halfWidth: amount };
+  return { name: source.name.trim(), effect: source.effect, distribution };
+}
+
+function buildPlan(draft: PlanDraft, library: Map<string, EquipmentItem>, withTitle: boolean): PlanInput {
+  // Each item inline from the library's current revision, with its libraryId and revisionId (an unknown id stays a bare reference).
+  const writeEquipment = (id: string) => {
+    const item = library.get(id);
+    return item ? (toEngineEquipment(item) as unknown as Record<string, unknown>) : { libraryId: id };
+  };
+  const material = draft.materialId ? writeEquipment(draft.materialId) : undefined;
+  const steps = draft.steps.map((step) => {
+    const info = STEP_KINDS[step.kind];
+    const out: Record<string, unknown> = { kind: step.kind };
+    if (isStartKind(step.kind) && material) out.material = material;
+    if (info.slot && step.equipmentId) out[info.slot] = writeEquipment(step.equipmentId);
+    if (info.quantity) {
+      const item = library.get(step.equipmentId);
+      // A one-mark glass pipette delivers its nominal volume, whatever was typed.
+      const glassVolume = step.kind === 'pipetteAliquot' && item?.kind === 'glass-pipette' ? (item.current.data.nominalMl as number) : undefined;
+      const typed = parseDecimal(step.quantity);
+      out[info.quantity.field] = glassVolume ?? (typed === null ? undefined : typed);
+    }
+    if (info.container) {
+      const container = parseDecimal(step.containerMassG);
+      if (container !== null) out.containerMassG = container;
+    }
+    out.extraSources = step.extraSources.map(extraSourceToPlan);
+    return out;
+  });
+  const temperature = parseDecimal(draft.labTemperatureC);
+  return {
+    formatVersion: 1,
+    ...(withTitle && draft.title.trim() ? { title: draft.title.trim() } : {}),
+    analyte: { formula: draft.analyte.trim() },
+    settings: { outputUnit: draft.outputUnit as PlanInput['settings']['outputUnit'], ...(temperature === null ? {} : { labTemperatureC: temperature }) },
+    steps: steps as PlanInput['steps'],
+  };
+}
+
+/** The plan with every item inline from the library's current revision, as the engine (and the server, after resolving) computes it; the title is left out, so renaming never restarts a calculation. */
+export function enginePlan(draft: PlanDraft, library: Map<string, EquipmentItem>): PlanInput {
+  return buildPlan(draft, library, false);
+}
+
+/** The plan to save, with its title; the server resolves every libraryId to the current revision again before computing. */
+export function storedPlan(draft: PlanDraft, library: Map<string, EquipmentItem>): Record<string, unknown> {
+  return buildPlan(draft, library, true) as unknown as Record<string, unknown>;
+}
+
+/** The override reasons worth sending: items the plan uses, with a reason the server accepts (≥ 3 characters). */
+export function overridesToSave(draft: PlanDraft): { libraryId: string; reason: string }[] {
+  const used = new Set([draft.materialId, ...draft.steps.map((step) => step.equipmentId)]);
+  return Object.entries(draft.overrides)
+    .filter(([libraryId, reason]) => used.has(libraryId) && reason.trim().length >= 3)
+    .map(([libraryId, reason]) => ({ libraryId, reason: reason.trim() }));
+}

@@ -1,0 +1,144 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Locator, Page } from 'playwright-core';
+import { launchChromium, screenshot, watchForPageProblems } from './support/chromium';
+import { startDilutraceServer, type RunningServer } from './support/dilutrace-server';
+
+/** Demo password for this run only; the seed gives it to every demo user. */
+const DEMO_PASSWORD = 'wellmere-planner-e2e-1';
+const ANALYST = 'analyst@wellmere-water.example';
+
+let server: RunningServer;
+let browser: Awaited<ReturnType<typeof launchChromium>>;
+let page: Page;
+let problems: string[];
+/** Ids of the lead standard and its variant, as the tests create them. */
+const created: { lead?: number; variant?: number } = {};
+
+beforeAll(async () => {
+  server = await startDilutraceServer(DEMO_PASSWORD);
+  browser = await launchChromium();
+  page = await browser.context.newPage();
+  problems = watchForPageProblems(page);
+  await page.goto(`${server.baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(ANALYST);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+}, 60_000);
+
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+/** Chooses the library item whose option starts with `code` (options read "GP-10-A (10 mL, class A, …)"). */
+async function chooseItem(select: Locator, code: string) {
+  const value = await select.evaluate((element, wanted) => {
+    const option = [...(element as HTMLSelectElement).options].find((each) => each.text.startsWith(`${wanted} `));
+    return option?.value ?? null;
+  }, code);
+  if (value === null) throw new Error(`No option ${code} in the select`);
+  await select.selectOption(value);
+}
+
+const steps = () => page.locator('section[aria-labelledby="plan-heading"] ol > li');
+const statement = () => page.getByTestId('result-statement');
+const saveState = () => page.getByTestId('save-state');
+
+async function addStep(kindLabel: string) {
+  await page.getByLabel('Next step').selectOption({ label: kindLabel });
+  await page.getByRole('button', { name: 'Add step' }).click();
+}
+
+describe('the analyst plans a lead standard', () => {
+  it('builds the two-step plan from the library and sees the live budget', async () => {
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Preparations' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Preparations' }).waitFor();
+    await page.getByRole('link', { name: 'New preparation' }).click();
+    await page.getByRole('heading', { level: 1, name: 'New preparation' }).waitFor();
+
+    await page.getByLabel('Title').fill('Pb 100 mg/L working standard');
+    await chooseItem(page.getByLabel('Reference material'), 'RM-PBN-01');
+    await expect(page.getByLabel('Analyte').inputValue()).resolves.toBe('Pb');
+    await expect(page.getByText('Hazards of RM-PBN-01').isVisible()).resolves.toBe(true);
+
+    // Step 1 weighs on BAL-05, step 2 makes up in VF-100-A (both steps come with the material).
+    await chooseItem(steps().nth(0).getByLabel('Balance'), 'BAL-05');
+    await steps().nth(0).getByLabel('Net mass (g)').fill('0.1599');
+    await chooseItem(steps().nth(1).getByLabel('Volumetric flask'), 'VF-100-A');
+    await expect(statement().innerText()).resolves.toContain('mg/L');
+    const stockStatement = await statement().innerText();
+    expect(stockStatement).toMatch(/c\(Pb\) = \(999\.\d+ ± /);
+
+    // Then a 10 mL aliquot with GP-10-A into VF-100-B.
+    await addStep('Pipette an aliquot');
+    await chooseItem(steps().nth(2).getByLabel('Pipette'), 'GP-10-A');
+    await expect(steps().nth(2).getByLabel('Volume (mL)').inputValue()).resolves.toBe('10');
+    await addStep('Make up to volume');
+    await chooseItem(steps().nth(3).getByLabel('Volumetric flask'), 'VF-100-B');
+
+    // 0.1599 g · 0.9998 · 207.04/331.2 (CIAAW interval midpoint for Pb, engine docs) / 0.1 L / 10 ≈ 99.98 mg/L.
+    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(99\.98 ± 0\.\d\d\) mg\/L, k = 2\.00, coverage probability ≈ 95\.45 %$/);
+    await expect(steps().nth(1).innerText()).resolves.toMatch(/after step 2\s+999\.8 mg\/L/i);
+    const table = page.getByRole('table', { name: /Uncertainty budget of c\(Pb\)/ });
+    await expect(table.getByRole('rowheader', { name: /^Step 3 · Pipette an aliquot \(GP-10-A\)$/ }).count()).resolves.toBe(1);
+    await expect(table.getByText('Atomic weight of Pb').count()).resolves.toBe(1);
+
+    await saveState().filter({ hasText: /Saved/ }).waitFor({ timeout: 15_000 });
+    expect(new URL(page.url()).pathname).toMatch(/^\/preparations\/\d+$/);
+    created.lead = Number(new URL(page.url()).pathname.split('/')[2]);
+    await screenshot(page, 'planner-lead-standard');
+  });
+
+  it('flags an invalid mass on its field and keeps the last valid budget greyed', async () => {
+    const mass = steps().nth(0).getByLabel('Net mass (g)');
+    await mass.fill('0,1599x');
+    await expect(mass.getAttribute('aria-invalid')).resolves.toBe('true');
+    await page.getByText('Last valid result, shown until the marked field is fixed.').waitFor();
+    await screenshot(page, 'planner-invalid-mass');
+    await mass.fill('0.1599');
+    await expect(mass.getAttribute('aria-invalid')).resolves.toBeNull();
+  });
+
+  it('runs Monte Carlo in a worker while the title stays responsive, and states the verdict', async () => {
+    await page.getByRole('button', { name: 'Run Monte Carlo' }).click();
+    await page.getByRole('button', { name: 'Cancel Monte Carlo' }).waitFor();
+    // Input latency while 10⁶ trials run: keydown to the next painted frame, per key.
+    await page.evaluate(() => {
+      const latencies: number[] = [];
+      (window as unknown as { latencies: number[] }).latencies = latencies;
+      document.addEventListener('keydown', (event) => {
+        const start = event.timeStamp;
+        requestAnimationFrame(() => setTimeout(() => latencies.push(performance.now() - start), 0));
+      });
+    });
+    await page.getByLabel('Title').press('End');
+    await page.getByLabel('Title').pressSequentially(' (lot PBN-24117)', { delay: 15 });
+    const latencies = await page.evaluate(() => (window as unknown as { latencies: number[] }).latencies);
+    const worst = Math.max(...latencies);
+    console.log(`Input latency during the Monte Carlo run: ${latencies.length} keys, median ${latencies.sort((a, b) => a - b)[latencies.length >> 1].toFixed(1)} ms, worst ${worst.toFixed(1)} ms`);
+    expect(worst).toBeLessThan(200);
+
+    const verdict = page.getByTestId('validation-verdict');
+    await verdict.waitFor({ timeout: 60_000 });
+    await expect(verdict.innerText()).resolves.toMatch(/^The GUM interval (is confirmed by Monte Carlo within δ = |is not confirmed)/);
+    await page.getByText('1,000,000 trials', { exact: false }).first().waitFor();
+    await saveState().filter({ hasText: /Saved at/ }).waitFor({ timeout: 15_000 });
+    await page.getByRole('heading', { name: 'Monte Carlo check' }).scrollIntoViewIfNeeded();
+    await screenshot(page, 'planner-monte-carlo');
+  });
+
+  it('reopens exactly after a reload', async () => {
+    const before = await statement().innerText();
+    const seed = await page.getByLabel('Seed').inputValue();
+    await page.reload();
+    await statement().waitFor();
+    await expect(statement().innerText()).resolves.toBe(before);
+    await expect(page.getByLabel('Title').inputValue()).resolves.toBe('Pb 100 mg/L working standard (lot PBN-24117)');
+    await expect(steps().count()).resolves.toBe(4);
+    await expect(steps().nth(0).getByLabel('Net mass (g)').inputValue()).resolves.toBe('0.1599');
+    await expect(page.getByLabel('Seed').inputValue()).resolves.toBe(seed);
+    await expect(saveState().innerText()).resolves.toContain('Saved');
+    expect(problems).toEqual([]);
+  });
+});

@@ -28,13 +28,7 @@ export function orderTails(values: Float64Array, probability: number): void {
     values.sort();
     return;
   }
-  let smallest = values[0];
-  let largest = values[0];
-  for (let index = 1; index < count; index += 1) {
-    const value = values[index];
-    if (value < smallest) smallest = value;
-    else if (value > largest) largest = value;
-  }
+  const { smallest, largest } = rangeOf(values);
   const cells = new Int32Array(Math.min(maximumCells, count));
   const cellsPerUnit = cells.length / (largest - smallest);
   if (!Number.isFinite(cellsPerUnit)) {
@@ -61,6 +55,18 @@ export function orderTails(values: Float64Array, probability: number): void {
 
 /** Cells of the counting pass in orderTails: fine enough that the groups it sorts are barely larger than the tails. */
 const maximumCells = 4096;
+
+/** The smallest and the largest value (each hot loop sits in a function of its own, so it is optimised as a whole). */
+function rangeOf(values: Float64Array): { smallest: number; largest: number } {
+  let smallest = values[0];
+  let largest = values[0];
+  for (let index = 1; index < values.length; index += 1) {
+    const value = values[index];
+    if (value < smallest) smallest = value;
+    else if (value > largest) largest = value;
+  }
+  return { smallest, largest };
+}
 
 /** cells[k] = number of values with min(C − 1, ⌊(y − y_min)·cellsPerUnit⌋) = k, C the number of cells; returns the number counted. */
 function countCells(values: Float64Array, smallest: number, cellsPerUnit: number, cells: Int32Array): number {

@@ -22,6 +22,10 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: () => import('./routes/app/root').then(convert),
           children: [
             { index: true, lazy: () => import('./routes/app/dashboard').then(convert) },
+            { path: paths.app.reviewQueue.path, lazy: () => import('./routes/app/review-queue').then(convert) },
+            { path: paths.app.records.path, lazy: () => import('./routes/app/records').then(convert) },
+            { path: paths.app.record.path, lazy: () => import('./routes/app/record').then(convert) },
+            { path: paths.app.audit.path, lazy: () => import('./routes/app/audit').then(convert) },
             { path: paths.app.library.path, lazy: () => import('./routes/app/library').then(convert) },
             { path: paths.app.libraryNew.path, lazy: () => import('./routes/app/library-new').then(convert) },
             { path: paths.app.libraryImport.path, lazy: () => import('./routes/app/library-import').then(convert) },
@@ -33,6 +37,7 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.app.preparations.path, lazy: () => import('./routes/app/preparations').then(convert) },
             { path: paths.app.preparationNew.path, lazy: () => import('./routes/app/preparations-new').then(convert) },
             { path: paths.app.preparation.path, lazy: () => import('./routes/app/preparations-workspace').then(convert) },
+            { path: paths.app.compare.path, lazy: () => import('./routes/app/compare').then(convert) },
           ],
         },
         { path: '*', lazy: () => import('./routes/not-found').then(convert) },

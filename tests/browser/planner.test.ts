@@ -141,4 +141,31 @@ describe('the analyst plans a lead standard', () => {
     await expect(saveState().innerText()).resolves.toContain('Saved');
     expect(problems).toEqual([]);
   });
+
+  it('duplicates the plan into a variant with one more dilution and compares the two', async () => {
+    await page.getByRole('button', { name: 'Duplicate as a variant' }).click();
+    await page.getByRole('link', { name: 'Compare with the original' }).waitFor();
+    created.variant = Number(new URL(page.url()).pathname.split('/')[2]);
+    expect(created.variant).not.toBe(created.lead);
+    await page.getByLabel('Title').fill('Pb 10 mg/L via 25 mL into 250 mL, then 10 mL into 100 mL');
+    await chooseItem(steps().nth(2).getByLabel('Pipette'), 'GP-25-A');
+    await chooseItem(steps().nth(3).getByLabel('Volumetric flask'), 'VF-250-A');
+    await addStep('Pipette an aliquot');
+    await chooseItem(steps().nth(4).getByLabel('Pipette'), 'GP-10-A');
+    await addStep('Make up to volume');
+    await chooseItem(steps().nth(5).getByLabel('Volumetric flask'), 'VF-100-B');
+    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(9\.998 ± 0\.0\d+\) mg\/L/);
+    await saveState().filter({ hasText: /Saved at/ }).waitFor({ timeout: 15_000 });
+
+    await page.getByRole('link', { name: 'Compare with the original' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Compare preparations' }).waitFor();
+    const answer = page.getByTestId('dilution-answer');
+    await expect(answer.innerText()).resolves.toMatch(/uses 1 more dilution step than “Pb 100 mg\/L working standard \(lot PBN-24117\)” \(2 against 1\); relative U \d\.\d+ % against \d\.\d+ %: the extra step (raises|lowers|does not change) the total uncertainty\./);
+    const table = page.getByRole('table', { name: 'The preparations compared' });
+    await expect(table.getByRole('row', { name: /^Material consumed/ }).innerText()).resolves.toMatch(/0\.1599 g of RM-PBN-01\s+0\.1599 g of RM-PBN-01/);
+    // Waste: the original throws away 90 mL of stock; the variant 75 mL of stock and 240 mL of the intermediate.
+    await expect(table.getByRole('row', { name: /^Waste/ }).innerText()).resolves.toMatch(/90 mL\s+315 mL/);
+    await screenshot(page, 'planner-compare');
+    expect(problems).toEqual([]);
+  });
 });

@@ -34,6 +34,7 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.app.preparationNew.path, lazy: () => import('./routes/app/preparations-new').then(convert) },
             { path: paths.app.preparation.path, lazy: () => import('./routes/app/preparations-workspace').then(convert) },
             { path: paths.app.compare.path, lazy: () => import('./routes/app/compare').then(convert) },
+            { path: paths.app.routeFinder.path, lazy: () => import('./routes/app/route-finder').then(convert) },
           ],
         },
         { path: '*', lazy: () => import('./routes/not-found').then(convert) },

@@ -12,7 +12,7 @@ let browser: Awaited<ReturnType<typeof launchChromium>>;
 let page: Page;
 let problems: string[];
 /** Ids of the lead standard and its variant, as the tests create them. */
-const created: { lead?: number; variant?: number } = {};
+const created: { lead?: number; variant?: number; route?: number } = {};
 
 beforeAll(async () => {
   server = await startDilutraceServer(DEMO_PASSWORD);
@@ -166,6 +166,33 @@ describe('the analyst plans a lead standard', () => {
     // Waste: the original throws away 90 mL of stock; the variant 75 mL of stock and 240 mL of the intermediate.
     await expect(table.getByRole('row', { name: /^Waste/ }).innerText()).resolves.toMatch(/90 mL\s+315 mL/);
     await screenshot(page, 'planner-compare');
+    expect(problems).toEqual([]);
+  });
+
+  it('finds the routes to 10 µg/L Se from the 1000 mg/L standard and plans the best one', async () => {
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Route finder' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Route finder' }).waitFor();
+    const form = page.getByRole('form', { name: 'Find routes' });
+    await form.getByLabel('Target concentration').fill('10');
+    await form.getByLabel('Unit').selectOption('µg/L');
+    await chooseItem(form.getByLabel('Reference material'), 'RM-SE-1000');
+    await expect(form.getByLabel('Analyte').inputValue()).resolves.toBe('Se');
+    await form.getByRole('button', { name: 'Find routes' }).click();
+    const table = page.getByRole('table', { name: 'Routes to the target, best first' });
+    await table.waitFor({ timeout: 30_000 });
+    const rows = table.locator('tbody tr');
+    expect(await rows.count()).toBeGreaterThan(1);
+    // Ranked by relative expanded uncertainty, smallest first.
+    const shares = await rows.evaluateAll((each) => each.map((row) => Number.parseFloat(row.children[1].textContent ?? '')));
+    expect([...shares].sort((a, b) => a - b)).toEqual(shares);
+    await screenshot(page, 'route-finder');
+
+    await page.getByRole('button', { name: 'Plan route 1', exact: true }).click();
+    await page.getByRole('heading', { level: 1, name: /^Se 10 µg\/L, route 1/ }).waitFor({ timeout: 15_000 });
+    await expect(statement().innerText()).resolves.toMatch(/^c\(Se\) = \((9\.9\d*|10\.0\d*) ± 0\.\d+\) µg\/L/);
+    await expect(page.getByText('Hazards of RM-SE-1000').isVisible()).resolves.toBe(true);
+    created.route = Number(new URL(page.url()).pathname.split('/')[2]);
+    await screenshot(page, 'route-finder-planned');
     expect(problems).toEqual([]);
   });
 });

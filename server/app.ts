@@ -4,6 +4,7 @@ import express from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
 import { auditRepository } from './audit/audit-repository';
+import { createComputePool, type Computer } from './compute/compute-pool';
 import { auditRouter } from './audit/audit-router';
 import { authRouter } from './auth/auth-router';
 import { authService } from './auth/auth-service';
@@ -54,12 +55,14 @@ export interface AppDeps {
   mailer: Mailer;
   clock: Clock;
   config: AppConfig;
+  /** Where budgets are computed; a pool of worker threads unless a test passes its own. */
+  computer?: Computer;
 }
 
 const SESSION_MAX_AGE_MS = 12 * 60 * 60 * 1000;
 
 /** Builds the Express app; `server/index.ts` only listens. Tests drive it with supertest. */
-export function createApp({ db, mailer, clock, config }: AppDeps) {
+export function createApp({ db, mailer, clock, config, computer = createComputePool() }: AppDeps) {
   const log = config.log ?? ((message: string, error?: unknown) => console.error(message, error));
   const now = () => clock.now();
   const publicUrl = (path: string) => `${config.publicUrl.replace(/\/$/, '')}${path}`;
@@ -77,7 +80,7 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   const imports = importService({ db, library, items });
   const policy = policyService({ db, audit, now });
   const preparationRows = preparationsRepository(db);
-  const preparations = preparationsService({ db, preparations: preparationRows, items, policy, audit, now });
+  const preparations = preparationsService({ db, preparations: preparationRows, items, policy, audit, computer, now });
   const reviews = reviewService({ db, preparations: preparationRows, users, labs, audit, mailer, now, publicUrl, log });
   const routes = routeFinderService({ items, policy });
   const passport = createPassport(auth);
@@ -161,5 +164,5 @@ export function createApp({ db, mailer, clock, config }: AppDeps) {
   }
   app.use(errorHandler(log));
 
-  return { app, sessions };
+  return { app, sessions, close: () => computer.close() };
 }

@@ -21,7 +21,7 @@ const mailer = createSmtpMailer(env.SMTP_URL ?? `smtp://127.0.0.1:${capture?.por
 const production = env.NODE_ENV === 'production';
 const publicUrl = env.DILUTRACE_PUBLIC_URL ?? `http://${env.HOST === '0.0.0.0' ? '127.0.0.1' : env.HOST}:${env.PORT}`;
 
-const { app, sessions } = createApp({
+const { app, sessions, close: closeApp } = createApp({
   db,
   mailer,
   clock: systemClock,
@@ -51,6 +51,7 @@ async function shutdown(signal: string) {
   server.close();
   server.closeAllConnections();
   mailer.close();
+  await closeApp();
   await capture?.close();
   await db.destroy();
   process.exit(0);

@@ -9,7 +9,8 @@ import { canonicalJson, sha256Hex } from '../lib/canonical-json';
 import { AppError, conflict, forbidden, notFound } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
 import type { PolicyService } from '../policy/policy-service';
-import { computeSnapshot, type Snapshot } from './compute-snapshot';
+import type { Computer } from '../compute/compute-pool';
+import type { Snapshot } from './compute-snapshot';
 import { resolvePlan } from './plan-resolver';
 import { EDITABLE_STATUSES, type PreparationRow, type PreparationsRepository, type ReviewRow, type VersionRow, type VersionWrite } from './preparations-repository';
 import type { Review } from '../../shared/contracts/reviews';
@@ -63,8 +64,8 @@ function preparationSummary(prep: PreparationRow, latest: VersionRow): Preparati
 
 const analyteOf = (plan: Record<string, unknown>) => String((plan.analyte as { formula?: unknown } | undefined)?.formula ?? '').slice(0, 40);
 
-export function preparationsService(deps: { db: Db; preparations: PreparationsRepository; items: LibraryService; policy: PolicyService; audit: AuditRepository; now: () => Date }) {
-  const { db, preparations, items, policy, audit, now } = deps;
+export function preparationsService(deps: { db: Db; preparations: PreparationsRepository; items: LibraryService; policy: PolicyService; audit: AuditRepository; computer: Computer; now: () => Date }) {
+  const { db, preparations, items, policy, audit, computer, now } = deps;
 
   async function libraryOf(labId: number): Promise<Map<string, EquipmentItem>> {
     return new Map((await items.list(labId, { status: 'all' })).map((item) => [String(item.id), item]));
@@ -93,7 +94,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     const base = { plan_json: JSON.stringify(plan), overrides_json: JSON.stringify(overrides), seed, updated_at: at };
     try {
       const resolved = resolvePlan(plan, library, overrides);
-      const snapshot = computeSnapshot({ plan: resolved.plan, items: resolved.items, seed, computedAt: at, policy: await policy.read(labId) });
+      const snapshot = await computer.run({ plan: resolved.plan, items: resolved.items, seed, computedAt: at, policy: await policy.read(labId) });
       const budget = snapshot.budget as { statement: string; value: number; unit: string; relativeExpandedUncertainty: number };
       const snapshotJson = canonicalJson(snapshot);
       const material = resolved.items.find((i) => i.kind.endsWith('-material'));
@@ -138,7 +139,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     async computeOnly(labId: number, input: { plan: Record<string, unknown>; overrides: Override[]; seed: number; trials: number }) {
       assertWellFormed(input.plan);
       const resolved = resolvePlan(input.plan, await libraryOf(labId), input.overrides);
-      return computeSnapshot({ plan: resolved.plan, items: resolved.items, seed: input.seed, computedAt: now().toISOString(), policy: await policy.read(labId), trials: input.trials });
+      return computer.run({ plan: resolved.plan, items: resolved.items, seed: input.seed, computedAt: now().toISOString(), policy: await policy.read(labId), trials: input.trials });
     },
 
     async list(labId: number, filter: Parameters<PreparationsRepository['list']>[1]): Promise<PreparationSummary[]> {

@@ -37,13 +37,14 @@ export async function buildTestApp(options: { file?: string; seed?: boolean; clo
   if (options.seed !== false) await seedDemoLab(db, { password: DEMO_PASSWORD, now: clock.now(), certificateDir: join(file, '..', 'certificates') });
   const capture: CaptureServer = await startCaptureServer(db, () => clock.now());
   const mailer: Mailer = createSmtpMailer(`smtp://127.0.0.1:${capture.port}`, 'Dilutrace <no-reply@dilutrace.test>');
-  const { app } = createApp({
+  const { app, close: closeApp } = createApp({
     db,
     mailer,
     clock,
     config: { certificateDir: join(file, '..', 'certificates'), sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined },
   });
   const close = async () => {
+    await closeApp();
     mailer.close();
     await capture.close();
     await db.destroy();

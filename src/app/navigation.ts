@@ -12,6 +12,10 @@ const NAVIGATION: readonly NavigationItem[] = [
   // Every member reads the library and the policy; only QA (and admins, for the library) change them.
   { label: 'Library', href: paths.app.library.href(), permission: 'member' },
   { label: 'Lab policy', href: paths.app.policy.href(), permission: 'member' },
+  { label: 'Review queue', href: paths.app.reviewQueue.href(), permission: 'reviewRecords' },
+  // Approved records are every member's to read, and the auditor's main screen.
+  { label: 'Approved records', href: paths.app.records.href(), permission: 'member' },
+  { label: 'Audit trail', href: paths.app.audit.href(), permission: 'readAuditTrail' },
   { label: 'Members', href: paths.app.members.href(), permission: 'manageMembers' },
   { label: 'Outbox', href: paths.app.outbox.href(), permission: 'readOutbox' },
 ];

@@ -22,6 +22,10 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: () => import('./routes/app/root').then(convert),
           children: [
             { index: true, lazy: () => import('./routes/app/dashboard').then(convert) },
+            { path: paths.app.reviewQueue.path, lazy: () => import('./routes/app/review-queue').then(convert) },
+            { path: paths.app.records.path, lazy: () => import('./routes/app/records').then(convert) },
+            { path: paths.app.record.path, lazy: () => import('./routes/app/record').then(convert) },
+            { path: paths.app.audit.path, lazy: () => import('./routes/app/audit').then(convert) },
             { path: paths.app.library.path, lazy: () => import('./routes/app/library').then(convert) },
             { path: paths.app.libraryNew.path, lazy: () => import('./routes/app/library-new').then(convert) },
             { path: paths.app.libraryImport.path, lazy: () => import('./routes/app/library-import').then(convert) },

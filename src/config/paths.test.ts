@@ -35,6 +35,16 @@ describe('preparation paths', () => {
   });
 });
 
+describe('record, review and audit paths', () => {
+  it('puts the version in the record address and the search and filters in the query string', () => {
+    expect(paths.app.record.href(7, 2)).toBe('/records/7/v/2');
+    expect(paths.app.records.href()).toBe('/records');
+    expect(paths.app.records.href('Pb nitrate')).toBe('/records?q=Pb+nitrate');
+    expect(paths.app.reviewQueue.href()).toBe('/review');
+    expect(paths.app.audit.href({ action: 'preparation.approved', actor: undefined, offset: 50 })).toBe('/audit?action=preparation.approved&offset=50');
+  });
+});
+
 describe('safeRedirectPath', () => {
   it('keeps paths inside the app', () => {
     expect(safeRedirectPath('/outbox?message=3')).toBe('/outbox?message=3');

@@ -38,6 +38,24 @@ export const paths = {
       path: '/',
       href: () => '/',
     },
+    reviewQueue: {
+      path: '/review',
+      href: () => '/review',
+    },
+    records: {
+      path: '/records',
+      /** The approved records, optionally searched (title, analyte, analyst or material). */
+      href: (search?: string) => withQuery('/records', { q: search || undefined }),
+    },
+    record: {
+      path: '/records/:preparationId/v/:versionNumber',
+      href: (preparationId: number, versionNumber: number) => `/records/${preparationId}/v/${versionNumber}`,
+    },
+    audit: {
+      path: '/audit',
+      /** The audit trail with its filters and page in the address. */
+      href: (filter: Record<string, string | number | undefined> = {}) => withQuery('/audit', filter),
+    },
     members: {
       path: '/members',
       href: () => '/members',

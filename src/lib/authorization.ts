@@ -4,6 +4,8 @@ import type { Me } from '../../shared/contracts/auth';
 /** What a member may do in a lab, and which roles grant it (DESIGN.md §2). */
 export const PERMISSIONS = {
   manageMembers: ['admin'],
+  reviewRecords: ['qa'],
+  readAuditTrail: ['auditor', 'qa', 'admin'],
   readOutbox: ['admin'],
   planPreparations: ['analyst'],
   findRoutes: ['analyst', 'qa'],

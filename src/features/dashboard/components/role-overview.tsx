@@ -1,5 +1,7 @@
 import { ROLE_LABELS, ROLES, type Role } from '../../../../shared/contracts/roles';
+import { Link } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
+import { paths } from '../../../config/paths';
 
 /** What each role will find here as Dilutrace grows, said plainly (DESIGN.md §2). */
 const COMING_FOR_ROLE: Record<Role, { summary: string; items: string[] }> = {
@@ -16,17 +18,35 @@ const COMING_FOR_ROLE: Record<Role, { summary: string; items: string[] }> = {
     items: [
       'The tolerance library: balances, flasks, pipettes and reference materials with their certificates — available now under Library',
       'Lab policy: coverage probability, glassware distribution, temperature range, minimum-weight rule — available now under Lab policy',
-      'The review queue: approve budgets or return them with comments',
+      'The review queue: approve and sign budgets, or return them with comments — available now under Review queue',
     ],
   },
   auditor: {
     summary: 'Read what was approved, and how it got there.',
-    items: ['Approved preparation records, read-only', 'The audit trail: who changed what, and when', 'Signed PDF records to download'],
+    items: [
+      'Approved preparation records, read-only, with their fingerprint check — available now under Approved records',
+      'The audit trail: who changed what, and when — available now under Audit trail',
+      'Signed PDF records and stored snapshots to download, from each approved record',
+    ],
   },
   admin: {
     summary: 'Look after the lab itself and the people in it.',
     items: ['Members and their roles — available now under Members', 'Invitations by e-mail — captured in the Outbox for now'],
   },
+};
+
+/** Where each role's daily work starts. */
+const SHORTCUTS: Record<Role, { label: string; href: string }[]> = {
+  analyst: [],
+  qa: [
+    { label: 'Open the review queue', href: paths.app.reviewQueue.href() },
+    { label: 'Audit trail', href: paths.app.audit.href() },
+  ],
+  auditor: [
+    { label: 'Open the approved records', href: paths.app.records.href() },
+    { label: 'Audit trail', href: paths.app.audit.href() },
+  ],
+  admin: [],
 };
 
 export function RoleOverview({ roles }: { roles: readonly Role[] }) {
@@ -39,10 +59,8 @@ export function RoleOverview({ roles }: { roles: readonly Role[] }) {
             <h2 id={`role-${role}`} className="text-xl font-bold">
               {ROLE_LABELS[role]}
             </h2>
-            {role === 'admin' ? (
+            {role === 'admin' || role === 'qa' || role === 'auditor' ? (
               <Badge tone="ok">Available</Badge>
-            ) : role === 'qa' ? (
-              <Badge tone="ok">Partly available</Badge>
             ) : (
               <Badge tone="accent">Coming</Badge>
             )}
@@ -53,6 +71,15 @@ export function RoleOverview({ roles }: { roles: readonly Role[] }) {
               <li key={item}>{item}</li>
             ))}
           </ul>
+          {SHORTCUTS[role].length > 0 ? (
+            <p className="mt-4 flex flex-wrap gap-4">
+              {SHORTCUTS[role].map((shortcut) => (
+                <Link key={shortcut.href} to={shortcut.href} className="font-semibold">
+                  {shortcut.label} →
+                </Link>
+              ))}
+            </p>
+          ) : null}
         </section>
       ))}
     </div>

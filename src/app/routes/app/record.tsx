@@ -1,0 +1,218 @@
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import { Link, useNavigate, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router';
+import type { PreparationDetail, VersionDetail } from '../../../../shared/contracts/preparations';
+import type { Role } from '../../../../shared/contracts/roles';
+import { Alert } from '../../../components/ui/alert';
+import { paths } from '../../../config/paths';
+import { auditKeys } from '../../../features/audit/api/audit-keys';
+import { auditEventsQueryOptions, preparationHistoryQuery } from '../../../features/audit/api/get-audit-events';
+import { RecordAuditHistory } from '../../../features/audit/components/record-audit-history';
+import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
+import { preparationsKeys } from '../../../features/preparations/api/preparations-keys';
+import { recordQueryOptions, useRecord } from '../../../features/records/api/get-record';
+import { recordVersionQueryOptions, useRecordVersion } from '../../../features/records/api/get-record-version';
+import { useRecordRefresh } from '../../../features/records/api/use-record-refresh';
+import { BudgetSummary } from '../../../features/records/components/budget-summary';
+import { EquipmentUsed } from '../../../features/records/components/equipment-used';
+import { HazardCautions } from '../../../features/records/components/hazard-cautions';
+import { MonteCarloVerdict } from '../../../features/records/components/monte-carlo-verdict';
+import { RecordDownloads } from '../../../features/records/components/record-downloads';
+import { RecordHeader } from '../../../features/records/components/record-header';
+import { ResultStatementPanel } from '../../../features/records/components/result-statement-panel';
+import { ReviewTrail } from '../../../features/records/components/review-trail';
+import { SnapshotHash } from '../../../features/records/components/snapshot-hash';
+import { StartNewVersionButton } from '../../../features/records/components/start-new-version-button';
+import { VersionSwitcher } from '../../../features/records/components/version-switcher';
+import { readSnapshot } from '../../../features/records/utils/snapshot-view';
+import { ApproveButton } from '../../../features/reviews/components/approve-button';
+import { ReturnButton } from '../../../features/reviews/components/return-button';
+import { SubmitForReviewButton } from '../../../features/reviews/components/submit-for-review-button';
+import { isApiError } from '../../../lib/api-error';
+import { activeMembership, activeRoles, can } from '../../../lib/authorization';
+import { formatDateTime } from '../../../lib/format-date';
+
+const idFrom = (value: string | undefined) => {
+  const id = Number(value);
+  return Number.isInteger(id) && id > 0 ? id : null;
+};
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const me = await queryClient.ensureQueryData(meQueryOptions());
+    const preparationId = idFrom(params.preparationId);
+    const versionNumber = idFrom(params.versionNumber);
+    if (me?.activeLabId && preparationId && versionNumber) {
+      const labId = me.activeLabId;
+      // fetchQuery: a record changed by someone else since it was last read is read again before showing.
+      await Promise.all([
+        queryClient.fetchQuery(recordQueryOptions(labId, preparationId)),
+        queryClient.fetchQuery(recordVersionQueryOptions(labId, preparationId, versionNumber)),
+        can(activeRoles(me), 'readAuditTrail') ? queryClient.fetchQuery(auditEventsQueryOptions(labId, preparationHistoryQuery(preparationId))) : null,
+      ]);
+    }
+    return null;
+  };
+
+export function ErrorBoundary() {
+  const error = useRouteError();
+  return (
+    <>
+      <title>Record · Dilutrace</title>
+      <h1 className="mb-6 text-3xl font-bold">Preparation record</h1>
+      <Alert tone={isApiError(error) && error.status === 404 ? 'info' : 'danger'} title="This record cannot be shown">
+        <p>{isApiError(error) ? error.message : 'Something went wrong while reading the record.'}</p>
+        <p className="mt-2">
+          <Link to={paths.app.records.href()}>Go to the approved records</Link>
+        </p>
+      </Alert>
+    </>
+  );
+}
+
+export function Component() {
+  const me = useSignedInMe();
+  const membership = activeMembership(me);
+  const params = useParams();
+  const preparationId = idFrom(params.preparationId);
+  const versionNumber = idFrom(params.versionNumber);
+  if (!membership || !preparationId || !versionNumber) {
+    return (
+      <>
+        <title>Record · Dilutrace</title>
+        <Alert tone="info" title="No such record">
+          Open a record from the approved records or the review queue.
+        </Alert>
+      </>
+    );
+  }
+  return <RecordPage labId={membership.id} preparationId={preparationId} versionNumber={versionNumber} userId={me.user.id} roles={membership.roles} />;
+}
+
+type RecordPageProps = { labId: number; preparationId: number; versionNumber: number; userId: number; roles: readonly Role[] };
+
+function RecordPage({ labId, preparationId, versionNumber, userId, roles }: RecordPageProps) {
+  const preparation = useRecord(labId, preparationId);
+  const version = useRecordVersion(labId, preparationId, versionNumber);
+  const snapshot = readSnapshot(version.snapshot);
+  const reference = { labId, preparationId, versionNumber };
+
+  return (
+    <>
+      <title>{`${preparation.title} · v${version.number} · Dilutrace`}</title>
+      <p className="mb-2">
+        <BackLink approved={version.status === 'approved'} reviewing={version.status === 'submitted' && can(roles, 'reviewRecords')} />
+      </p>
+      <RecordHeader
+        preparation={preparation}
+        version={version}
+        actions={
+          <>
+            <Link to={paths.app.preparation.href(preparationId)} className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper">
+              Open in the planner
+            </Link>
+            <RecordActions labId={labId} preparation={preparation} version={version} userId={userId} roles={roles} />
+          </>
+        }
+      />
+      <VersionSwitcher versions={preparation.versions} current={version.number} hrefOf={(number) => paths.app.record.href(preparationId, number)} />
+      <div className="flex flex-col gap-6">
+        <ReturnNotice version={version} />
+        {snapshot ? <HazardCautions items={snapshot.items} /> : null}
+        {snapshot ? (
+          <ResultStatementPanel budget={snapshot.budget} />
+        ) : (
+          <Alert tone="info" title="Not computed">
+            {version.problem ? `The plan cannot be computed yet: ${version.problem.message}` : 'This version has no computed budget yet.'} Open it in the planner to fix it.
+          </Alert>
+        )}
+        {snapshot?.warnings.length ? (
+          <Alert tone="info" title="Warnings recorded with the budget">
+            <ul className="list-disc pl-5">
+              {snapshot.warnings.map((warning) => (
+                <li key={warning}>{warning}</li>
+              ))}
+            </ul>
+          </Alert>
+        ) : null}
+        <div className="grid items-start gap-6 lg:grid-cols-[1fr_22rem]">
+          <div className="flex min-w-0 flex-col gap-8">
+            {snapshot ? <BudgetSummary budget={snapshot.budget} /> : null}
+            {snapshot ? <EquipmentUsed items={snapshot.items} /> : null}
+            <ReviewTrail reviews={version.reviews} />
+          </div>
+          <div className="flex flex-col gap-6">
+            {snapshot ? <MonteCarloVerdict monteCarlo={snapshot.monteCarlo} validation={snapshot.validation} unit={snapshot.budget.unit} /> : null}
+            {version.snapshotSha256 ? <SnapshotHash {...reference} sha256={version.snapshotSha256} /> : null}
+            {snapshot ? <RecordDownloads {...reference} approved={version.status === 'approved'} /> : null}
+          </div>
+        </div>
+        {can(roles, 'readAuditTrail') ? <RecordAuditHistory labId={labId} preparationId={preparationId} /> : null}
+      </div>
+    </>
+  );
+}
+
+/** Back to where such a record is usually opened from: the approved records, the review queue or the preparations. */
+function BackLink({ approved, reviewing }: { approved: boolean; reviewing: boolean }) {
+  if (approved) return <Link to={paths.app.records.href()}>← Approved records</Link>;
+  if (reviewing) return <Link to={paths.app.reviewQueue.href()}>← Review queue</Link>;
+  return <Link to={paths.app.preparations.href()}>← Preparations</Link>;
+}
+
+/** The last return's comments, on top, while the version waits for the analyst. */
+function ReturnNotice({ version }: { version: VersionDetail }) {
+  const lastReturn = version.status === 'returned' ? version.reviews.findLast((review) => review.action === 'returned') : undefined;
+  if (!lastReturn) return null;
+  return (
+    <Alert tone="info" title={`Returned by ${lastReturn.actor}, ${formatDateTime(lastReturn.at)}`}>
+      <p className="whitespace-pre-line">{lastReturn.comment}</p>
+    </Alert>
+  );
+}
+
+type RecordActionsProps = { labId: number; preparation: PreparationDetail; version: VersionDetail; userId: number; roles: readonly Role[] };
+
+/** Only the actions the viewer's roles and the version's state allow; an auditor gets none. */
+function RecordActions({ labId, preparation, version, userId, roles }: RecordActionsProps) {
+  const queryClient = useQueryClient();
+  const navigate = useNavigate();
+  const refreshRecord = useRecordRefresh(labId);
+  const reference = { labId, preparationId: preparation.id, versionNumber: version.number };
+  // The planner keeps its own copy of the preparation (it never refetches an open draft): hand it the new state.
+  const syncPlanner = async (detail: PreparationDetail) => {
+    queryClient.setQueryData(preparationsKeys.detail(labId, detail.id), detail);
+    await queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) });
+  };
+  const onReviewed = async (detail: PreparationDetail) => {
+    await Promise.all([refreshRecord(detail), syncPlanner(detail), queryClient.invalidateQueries({ queryKey: auditKeys.lab(labId) })]);
+  };
+  const owner = preparation.createdById === userId;
+  const analyst = roles.includes('analyst');
+  const latestNumber = Math.max(...preparation.versions.map((each) => each.number));
+  const actions: ReactNode[] = [];
+
+  if (analyst && owner && (version.status === 'draft' || version.status === 'returned') && version.snapshot) {
+    actions.push(<SubmitForReviewButton key="submit" version={reference} onReviewed={onReviewed} />);
+  }
+  if (can(roles, 'reviewRecords') && version.status === 'submitted') {
+    if (owner) {
+      actions.push(
+        <p key="own" className="max-w-xs text-sm text-muted">
+          You submitted this version; another member of QA must review it.
+        </p>,
+      );
+    } else {
+      actions.push(<ReturnButton key="return" version={reference} onReviewed={onReviewed} />, <ApproveButton key="approve" version={reference} onReviewed={onReviewed} />);
+    }
+  }
+  if (analyst && version.status === 'approved' && version.number === latestNumber) {
+    const openPlanner = async (detail: PreparationDetail) => {
+      await syncPlanner(detail);
+      navigate(paths.app.preparation.href(preparation.id));
+    };
+    actions.push(<StartNewVersionButton key="new" labId={labId} preparationId={preparation.id} onStarted={openPlanner} />);
+  }
+  return <>{actions}</>;
+}

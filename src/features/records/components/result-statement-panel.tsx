@@ -1,0 +1,32 @@
+import { formatDegreesOfFreedom, formatSignificant } from '../utils/format-figures';
+import type { BudgetView } from '../utils/snapshot-view';
+
+/** The result as the GUM asks for it (JCGM 100 7.2.3), prominently, with the figures it is made of. */
+export function ResultStatementPanel({ budget }: { budget: BudgetView }) {
+  const facts: [string, string][] = [
+    [budget.measurand, `${budget.rounded.valueText} ${budget.unit}`],
+    ['Expanded uncertainty U', `${budget.rounded.uncertaintyText} ${budget.unit}`],
+    ['Relative U', `${formatSignificant(budget.relativeExpandedUncertainty * 100)} %`],
+    ['Coverage factor k', budget.coverageFactor.toFixed(2)],
+    ['Coverage probability', `${(budget.coverageProbability * 100).toFixed(2)} %`],
+    ['Effective degrees of freedom', formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)],
+  ];
+  return (
+    <section aria-labelledby="result-heading" className="rounded-lg border-2 border-ink bg-surface p-6">
+      <h2 id="result-heading" className="text-sm font-semibold tracking-wide text-muted uppercase">
+        Result
+      </h2>
+      <p className="mt-1 text-2xl font-bold" data-testid="record-result-statement">
+        {budget.statement}
+      </p>
+      <dl className="mt-4 grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-3 lg:grid-cols-6">
+        {facts.map(([term, value]) => (
+          <div key={term}>
+            <dt className="text-xs font-semibold tracking-wide text-muted uppercase">{term}</dt>
+            <dd className="numeric text-lg font-semibold">{value}</dd>
+          </div>
+        ))}
+      </dl>
+    </section>
+  );
+}

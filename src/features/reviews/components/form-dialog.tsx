@@ -1,0 +1,55 @@
+import { useEffect, useId, useRef, type FormEventHandler, type ReactNode } from 'react';
+import { Button } from '../../../components/ui/button';
+
+type FormDialogProps = {
+  open: boolean;
+  title: string;
+  submitLabel: string;
+  pending: boolean;
+  onSubmit: FormEventHandler<HTMLFormElement>;
+  onClose: () => void;
+  children: ReactNode;
+};
+
+/**
+ * A modal form on the native `<dialog>`: focus moves to its first field, Escape or Cancel closes it,
+ * and the browser returns focus to the button that opened it.
+ */
+export function FormDialog({ open, title, submitLabel, pending, onSubmit, onClose, children }: FormDialogProps) {
+  const dialogRef = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+
+  useEffect(() => {
+    const dialog = dialogRef.current;
+    if (!dialog) return;
+    if (open && !dialog.open) dialog.showModal();
+    if (!open && dialog.open) dialog.close();
+  }, [open]);
+
+  return (
+    <dialog
+      ref={dialogRef}
+      aria-labelledby={titleId}
+      onCancel={(event) => {
+        event.preventDefault();
+        if (!pending) onClose();
+      }}
+      className="m-auto w-full max-w-lg rounded-lg border border-line bg-surface p-6 text-ink shadow-xl"
+    >
+      <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
+        <h2 id={titleId} className="text-xl font-bold">
+          {title}
+        </h2>
+        {children}
+        <div className="flex justify-end gap-2">
+          <Button variant="secondary" onClick={onClose} disabled={pending}>
+            Cancel
+          </Button>
+          <Button type="submit" pending={pending} pendingLabel="Saving…">
+            {submitLabel}
+          </Button>
+        </div>
+      </form>
+    </dialog>
+  );
+}

@@ -1,0 +1,69 @@
+import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
+import { Link } from 'react-router';
+import type { ReviewQueueItem } from '../../../../shared/contracts/reviews';
+import { paths } from '../../../config/paths';
+import { formatDateTime } from '../../../lib/format-date';
+import { waitingTimeInWords } from '../utils/waiting-time';
+
+const features = tableFeatures({});
+const column = createColumnHelper<typeof features, ReviewQueueItem>();
+
+const columns = column.columns([
+  column.accessor('waitingHours', {
+    header: 'Waiting',
+    cell: (info) => (
+      <span className="font-semibold whitespace-nowrap" title={`Submitted ${formatDateTime(info.row.original.submittedAt)}`}>
+        {waitingTimeInWords(info.getValue())}
+      </span>
+    ),
+  }),
+  column.accessor('title', {
+    header: 'Preparation',
+    cell: (info) => (
+      <Link to={paths.app.record.href(info.row.original.preparationId, info.row.original.versionNumber)} className="font-semibold">
+        {info.getValue()}
+        <span className="font-normal"> · version {info.row.original.versionNumber}</span>
+      </Link>
+    ),
+  }),
+  column.accessor('submittedBy', { header: 'Submitted by' }),
+  column.accessor('resultStatement', { header: 'Result', cell: (info) => info.getValue() ?? '—' }),
+  column.accessor('comment', { header: 'Note', cell: (info) => (info.getValue() ? <span className="whitespace-pre-line">{info.getValue()}</span> : <span className="text-muted">—</span>) }),
+]);
+
+/** What waits for review, oldest first; the title opens the record, where it is approved or returned. */
+export function ReviewQueueTable({ items }: { items: ReviewQueueItem[] }) {
+  // Oldest first, whatever order the answer came in.
+  const data = [...items].sort((a, b) => b.waitingHours - a.waitingHours);
+  const table = useTable({ features, columns, data, getRowId: (item) => `${item.preparationId}-${item.versionNumber}` });
+  if (items.length === 0) return <p className="rounded-lg border border-line bg-surface p-6 text-muted">Nothing is waiting for review.</p>;
+  return (
+    <div className="overflow-x-auto rounded-lg border border-line bg-surface">
+      <table className="w-full text-left">
+        <caption className="sr-only">Versions waiting for review, oldest first</caption>
+        <thead className="border-b border-line bg-paper text-sm text-muted">
+          {table.getHeaderGroups().map((headerGroup) => (
+            <tr key={headerGroup.id}>
+              {headerGroup.headers.map((header) => (
+                <th key={header.id} scope="col" className="px-3 py-2 font-semibold">
+                  <table.FlexRender header={header} />
+                </th>
+              ))}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="border-b border-line align-top last:border-b-0">
+              {row.getAllCells().map((cell) => (
+                <td key={cell.id} className={`px-3 py-2 ${cell.column.id === 'resultStatement' ? 'min-w-72' : ''}`}>
+                  <table.FlexRender cell={cell} />
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -43,6 +43,8 @@ export interface AppConfig {
   publicUrl: string;
   production: boolean;
   trustProxy: boolean;
+  /** Sign-in attempts per address and e-mail in 15 minutes; 10 unless set. */
+  signInLimit?: number;
   /** Folder for uploaded certificates, outside the web root. */
   certificateDir: string;
   /** Built client to serve (production); omitted in development and API tests. */
@@ -141,7 +143,7 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
     res.json({ status: 'ok', time: now().toISOString() });
   });
   api.use(requireCsrfToken);
-  api.use('/auth', authRouter({ auth, passport, authorize }));
+  api.use('/auth', authRouter({ auth, passport, authorize, signInLimit: config.signInLimit ?? 10 }));
   api.use('/invitations', invitationsRouter({ members, auth }));
   api.use('/labs/:labId', labMembersRouter({ members, authorize }));
   api.use('/labs/:labId', outboxRouter({ db, authorize }));

@@ -30,6 +30,7 @@ const { app, sessions, close: closeApp } = createApp({
     publicUrl,
     production,
     trustProxy: env.DILUTRACE_TRUST_PROXY === '1',
+    signInLimit: env.DILUTRACE_SIGNIN_LIMIT,
     certificateDir: certificateDir(env.DILUTRACE_DB),
     clientDir: production ? 'dist/client' : undefined,
   },

@@ -30,7 +30,7 @@ function logIn(req: Request, user: SessionUser): Promise<void> {
   return new Promise((resolve, reject) => req.login(user, (error) => (error ? reject(error) : resolve())));
 }
 
-export function authRouter(deps: { auth: AuthService; passport: InstanceType<typeof Passport>; authorize: Authorize }) {
+export function authRouter(deps: { auth: AuthService; passport: InstanceType<typeof Passport>; authorize: Authorize; signInLimit: number }) {
   const { auth, passport, authorize } = deps;
   const router = Router();
   const me = (req: Request) => auth.me(req.user as SessionUser, req.session.activeLabId, csrfToken(req));
@@ -41,7 +41,7 @@ export function authRouter(deps: { auth: AuthService; passport: InstanceType<typ
 
   router.post(
     '/login',
-    limited(10, 'Too many sign-in attempts. Wait 15 minutes, then try again.'),
+    limited(deps.signInLimit, 'Too many sign-in attempts. Wait 15 minutes, then try again.'),
     validate({ body: loginRequestSchema }),
     async (req, res) => {
       const { body } = valid(req, { body: loginRequestSchema });

@@ -39,6 +39,7 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.app.preparation.path, lazy: () => import('./routes/app/preparations-workspace').then(convert) },
             { path: paths.app.compare.path, lazy: () => import('./routes/app/compare').then(convert) },
             { path: paths.app.routeFinder.path, lazy: () => import('./routes/app/route-finder').then(convert) },
+            { path: paths.app.benchSheet.path, lazy: () => import('./routes/app/bench-sheet').then(convert) },
           ],
         },
         { path: '*', lazy: () => import('./routes/not-found').then(convert) },

@@ -195,4 +195,21 @@ describe('the analyst plans a lead standard', () => {
     await screenshot(page, 'route-finder-planned');
     expect(problems).toEqual([]);
   });
+
+  it('prints a bench sheet with targets to the balance readability, the hazards and blanks for the readings', async () => {
+    await page.goto(`${server.baseUrl}/preparations/${created.lead}`);
+    await statement().waitFor();
+    await page.getByRole('link', { name: 'Bench sheet' }).click();
+    const sheet = page.getByRole('article');
+    await sheet.getByText('Bench sheet', { exact: true }).waitFor();
+    await expect(sheet.innerText()).resolves.toContain('Weigh 0.15990 g of Lead(II) nitrate, certified reference material (RM-PBN-01) by difference on BAL-05.');
+    await expect(sheet.innerText()).resolves.toContain('Pipette 10 mL with GP-10-A (one mark, class A) from the solution of step 2.');
+    await expect(sheet.getByText('Follow the safety data sheet, your lab’s chemical hygiene plan and local regulations.').count()).resolves.toBe(1);
+    await expect(sheet.getByRole('table', { name: 'Readings for step 1' }).getByRole('columnheader').allInnerTexts()).resolves.toEqual(['Tare (g)', 'Gross (g)', 'Net (g)', 'Time', 'Initials']);
+    await page.emulateMedia({ media: 'print' });
+    await expect(page.getByRole('navigation', { name: 'Main' }).isVisible()).resolves.toBe(false);
+    await screenshot(page, 'bench-sheet-print');
+    await page.emulateMedia({ media: 'screen' });
+    expect(problems).toEqual([]);
+  });
 });

@@ -22,7 +22,7 @@ export function AppLayout({ homeHref, account, navigation, busy, children }: App
         Skip to content
       </a>
       {/* Inside the ink header, copper is the lighter tone so rings and marks keep their contrast. */}
-      <header className="bg-ink text-paper [--color-accent:var(--color-accent-on-ink)]">
+      <header className="bg-ink text-paper [--color-accent:var(--color-accent-on-ink)] print:hidden">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-4 px-6 py-3">
           <Link to={homeHref} className="text-2xl text-paper no-underline">
             <NameMark />
@@ -32,7 +32,7 @@ export function AppLayout({ homeHref, account, navigation, busy, children }: App
         <div className="mx-auto max-w-6xl px-6">{navigation}</div>
         <div aria-hidden="true" className={`h-1 bg-accent transition-opacity ${busy ? 'opacity-100' : 'opacity-0'}`} />
       </header>
-      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-6 py-8">
+      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-6 py-8 print:max-w-none print:p-0">
         {children}
       </main>
       <footer className="border-t border-line py-4 text-center text-sm text-muted">

@@ -1,4 +1,4 @@
-import type { QueryClient } from '@tanstack/react-query';
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
@@ -12,6 +12,7 @@ import { useDuplicatePreparation } from '../../../features/preparations/api/dupl
 import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
 import { labPolicyQueryOptions, useLabPolicy } from '../../../features/preparations/api/get-lab-policy';
 import { preparationQueryOptions, usePreparation } from '../../../features/preparations/api/get-preparation';
+import { preparationsKeys } from '../../../features/preparations/api/preparations-keys';
 import { saveDraft } from '../../../features/preparations/api/save-draft';
 import { useStartNewVersion } from '../../../features/preparations/api/start-new-version';
 import { Workspace, writeOf } from '../../../features/preparations/components/workspace';
@@ -75,6 +76,7 @@ type PreparationWorkspaceProps = { labId: number; detail: PreparationDetail; lib
 function PreparationWorkspace({ labId, detail, library, policy, userId, planner }: PreparationWorkspaceProps) {
   const location = useLocation();
   const navigate = useNavigate();
+  const queryClient = useQueryClient();
   const [searchParams] = useSearchParams();
   const variantOf = idFrom(searchParams.get('variantOf') ?? undefined);
   const duplicate = useDuplicatePreparation(labId, detail.id);
@@ -117,6 +119,11 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
         editable={editable}
         stored={stored}
         save={(write) => saveDraft(labId, detail.id, version.number, write)}
+        onSaved={(saved) => {
+          // Whoever opens this preparation next (the list, the bench sheet, this page again) reads what was saved.
+          queryClient.setQueryData(preparationsKeys.detail(labId, saved.id), saved);
+          void queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) });
+        }}
         header={(saveLine, draft) => (
           <WorkspaceHeader
             title={draft.title.trim() || detail.title}

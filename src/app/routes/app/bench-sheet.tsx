@@ -1,0 +1,57 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Alert } from '../../../components/ui/alert';
+import { paths } from '../../../config/paths';
+import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
+import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
+import { preparationQueryOptions, usePreparation } from '../../../features/preparations/api/get-preparation';
+import { BenchSheet } from '../../../features/preparations/components/bench-sheet';
+import { activeMembership } from '../../../lib/authorization';
+
+const idFrom = (value: string | undefined) => {
+  const id = Number(value);
+  return Number.isInteger(id) && id > 0 ? id : null;
+};
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const me = await queryClient.ensureQueryData(meQueryOptions());
+    const id = idFrom(params.preparationId);
+    if (me?.activeLabId && id) {
+      await Promise.all([
+        // The sheet prints what the server holds now, not a copy cached before the last autosave.
+        queryClient.fetchQuery({ ...preparationQueryOptions(me.activeLabId, id), staleTime: 0 }),
+        queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)),
+      ]);
+    }
+    return null;
+  };
+
+export function Component() {
+  const me = useSignedInMe();
+  const membership = activeMembership(me);
+  const id = idFrom(useParams().preparationId);
+  if (!membership || !id) {
+    return (
+      <Alert tone="info" title="No such preparation">
+        Open a preparation from the list first.
+      </Alert>
+    );
+  }
+  return <BenchSheetPage labId={membership.id} preparationId={id} />;
+}
+
+function BenchSheetPage({ labId, preparationId }: { labId: number; preparationId: number }) {
+  const detail = usePreparation(labId, preparationId);
+  const library = useLabEquipment(labId);
+  return (
+    <>
+      <title>{`Bench sheet · ${detail.title} · Dilutrace`}</title>
+      <p className="mb-3 print:hidden">
+        <Link to={paths.app.preparation.href(detail.id)}>← Back to the workspace</Link>
+      </p>
+      <BenchSheet detail={detail} library={library} />
+    </>
+  );
+}

@@ -67,6 +67,7 @@ export async function httpClient(url: string) {
   token = (await request('GET', '/api/auth/csrf')).body.csrfToken;
   return {
     request,
+    cookie: () => cookie,
     async signIn(email: string, password: string) {
       const res = await request('POST', '/api/auth/login', { email, password });
       if (res.status !== 200) throw new Error(`sign-in failed: ${res.status}`);

@@ -1,0 +1,104 @@
+/**
+ * Load test against a real server process on loopback (bounded: about a minute in all).
+ * `npm run load` starts Dilutrace on a fresh SQLite file, then measures sign-in, the library
+ * list, a compute with 10⁵ Monte Carlo trials, the PDF record, and the library list while
+ * computes run, and writes the figures to docs/performance.md.
+ */
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { cpus, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import autocannon from 'autocannon';
+import type { EquipmentItem } from '../shared/contracts/library';
+import { leadPlan } from '../server/test-support/demo-plans';
+import { httpClient, startServer } from '../tests/system/server-process';
+
+const SECONDS = Number(process.env.LOAD_SECONDS ?? 8);
+const PASSWORD = 'load-test-password-1';
+
+interface Figures {
+  name: string;
+  requests: number;
+  perSecond: number;
+  p50: number;
+  p99: number;
+  errors: number;
+}
+
+async function cannon(name: string, options: autocannon.Options): Promise<Figures> {
+  const result = await autocannon({ duration: SECONDS, connections: 4, ...options });
+  const bad = result.non2xx + result.errors + result.timeouts;
+  return { name, requests: result.requests.total, perSecond: result.requests.average, p50: result.latency.p50, p99: result.latency.p99, errors: bad };
+}
+
+/** Sign-in needs a fresh session and CSRF token per attempt, so it is driven by its own loop. */
+async function signInLoad(url: string, email: string): Promise<Figures> {
+  const latencies: number[] = [];
+  let errors = 0;
+  const end = Date.now() + SECONDS * 1000;
+  await Promise.all(
+    Array.from({ length: 4 }, async () => {
+      while (Date.now() < end) {
+        const client = await httpClient(url);
+        const started = performance.now();
+        try {
+          await client.signIn(email, PASSWORD);
+        } catch {
+          errors += 1;
+        }
+        latencies.push(performance.now() - started);
+      }
+    }),
+  );
+  latencies.sort((a, b) => a - b);
+  const at = (q: number) => latencies[Math.min(latencies.length - 1, Math.floor(q * latencies.length))];
+  return { name: 'sign-in (POST /api/auth/login, bcrypt cost 11)', requests: latencies.length, perSecond: latencies.length / SECONDS, p50: at(0.5), p99: at(0.99), errors };
+}
+
+const file = join(mkdtempSync(join(tmpdir(), 'dilutrace-load-')), 'load.sqlite');
+const server = await startServer({ DILUTRACE_DB: file, DILUTRACE_DEMO_PASSWORD: PASSWORD, DILUTRACE_SIGNIN_LIMIT: '1000000' });
+try {
+  const analyst = await httpClient(server.url);
+  const me = await analyst.signIn('analyst@wellmere-water.example', PASSWORD);
+  const lab = `/api/labs/${me.activeLabId}`;
+  const items = (await analyst.request('GET', `${lab}/equipment`)).body as EquipmentItem[];
+  const library = new Map(items.map((item) => [item.code, item]));
+  const plan = leadPlan(library);
+  const created = await analyst.request('POST', `${lab}/preparations`, { title: 'Load test Pb standard', plan });
+  // The raw cookie and token of the analyst's session, for autocannon's fixed headers.
+  const session = await analyst.request('GET', '/api/auth/me');
+  const headers = { cookie: analyst.cookie(), 'x-csrf-token': session.body.csrfToken, 'content-type': 'application/json' };
+
+  const figures: Figures[] = [];
+  figures.push(await signInLoad(server.url, 'qa@wellmere-water.example'));
+  figures.push(await cannon('library list (GET …/equipment, 24 items)', { url: `${server.url}${lab}/equipment`, headers }));
+  const computeBody = JSON.stringify({ plan, trials: 100_000, seed: 1 });
+  figures.push(await cannon('compute, 10⁵ Monte Carlo trials (POST …/compute)', { url: `${server.url}${lab}/compute`, method: 'POST', headers, body: computeBody }));
+  figures.push(await cannon('PDF record (GET …/record.pdf)', { url: `${server.url}${lab}/preparations/${created.body.id}/versions/1/record.pdf`, headers, connections: 2 }));
+  const [listUnderLoad] = await Promise.all([
+    cannon('library list while 4 computes run', { url: `${server.url}${lab}/equipment`, headers, connections: 2 }),
+    cannon('(computes running meanwhile)', { url: `${server.url}${lab}/compute`, method: 'POST', headers, body: computeBody }),
+  ]);
+  figures.push(listUnderLoad);
+
+  const rows = figures.map((f) => `| ${f.name} | ${f.requests} | ${f.perSecond.toFixed(1)} | ${f.p50.toFixed(1)} | ${f.p99.toFixed(1)} | ${f.errors} |`);
+  const cpu = cpus()[0]?.model ?? 'unknown CPU';
+  const text = `# Performance under load
+
+Measured by \`npm run load\` (bench/load.ts) on ${new Date().toISOString().slice(0, 10)}: one Dilutrace server process
+(\`server/index.ts\`, SQLite in WAL mode, synchronous = FULL, Monte Carlo in a pool of worker threads) on
+loopback, ${cpus().length} cores (${cpu}), Node ${process.version}. Each line ran for ${SECONDS} s with 4 concurrent
+connections (2 for the PDF and for the list measured under compute load). Latencies in milliseconds.
+
+| what | requests | requests/s | p50 ms | p99 ms | non-2xx or errors |
+|---|---|---|---|---|---|
+${rows.join('\n')}
+
+The last line is the library list measured while four clients keep the compute route busy: Monte Carlo
+runs in worker threads, so the request thread stays free to answer other users. Sign-in is dominated by
+bcrypt (cost 11) on purpose. Run it again with \`npm run load\`; \`LOAD_SECONDS\` sets the duration.
+`;
+  writeFileSync(join(import.meta.dirname, '..', 'docs', 'performance.md'), text);
+  console.log(text);
+} finally {
+  server.process.kill('SIGTERM');
+}

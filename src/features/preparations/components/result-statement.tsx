@@ -6,12 +6,12 @@ import { formatDegreesOfFreedom, formatPercent } from '../utils/format-number';
 export const ResultStatement = memo(function ResultStatement({ budget }: { budget: BudgetResult }) {
   const { rounded } = budget;
   const facts: [string, string][] = [
-    [budget.measurand, `${rounded.valueText} ${budget.unit}`],
+    [`Value ${budget.measurand}`, `${rounded.valueText} ${budget.unit}`],
     ['Expanded uncertainty U', `${rounded.uncertaintyText} ${budget.unit}`],
     ['Relative U', formatPercent(budget.relativeExpandedUncertainty)],
     ['Coverage factor k', budget.coverageFactor.toFixed(2)],
     ['Coverage probability', `${(budget.coverageProbability * 100).toFixed(2)} %`],
-    ['ν_eff', formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)],
+    ['Degrees of freedom ν_eff', formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)],
   ];
   return (
     <div>
@@ -21,7 +21,7 @@ export const ResultStatement = memo(function ResultStatement({ budget }: { budge
       <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-3">
         {facts.map(([term, value]) => (
           <div key={term}>
-            <dt className="text-xs font-semibold tracking-wide text-muted uppercase">{term}</dt>
+            <dt className="text-xs font-semibold text-muted">{term}</dt>
             <dd className="numeric text-lg font-semibold">{value}</dd>
           </div>
         ))}

@@ -51,6 +51,7 @@ const ACCESS: Record<string, Access> = {
   'GET /api/labs/:labId/preparations/:preparationId/versions/:number': 'member',
   'PUT /api/labs/:labId/preparations/:preparationId/versions/:number': ['analyst'],
   'POST /api/labs/:labId/preparations/:preparationId/versions': ['analyst'],
+  'POST /api/labs/:labId/preparations/:preparationId/versions/:number/readings': ['analyst'],
   'POST /api/labs/:labId/preparations/:preparationId/duplicate': ['analyst'],
   'POST /api/labs/:labId/route-finder': ['analyst', 'qa'],
   'POST /api/labs/:labId/compute': ['analyst', 'qa'],

@@ -3,6 +3,7 @@ import * as foundation from '../../migrations/20261202010000_foundation';
 import * as library from '../../migrations/20261202020000_library';
 import * as preparations from '../../migrations/20261202030000_preparations';
 import * as reviews from '../../migrations/20261202040000_reviews';
+import * as readings from '../../migrations/20261202050000_readings';
 
 /**
  * Migrations imported statically, so they run the same under tsx and Vitest
@@ -13,6 +14,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202020000_library': library,
   '20261202030000_preparations': preparations,
   '20261202040000_reviews': reviews,
+  '20261202050000_readings': readings,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

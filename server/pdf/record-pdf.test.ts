@@ -52,6 +52,7 @@ describe('the PDF record', () => {
   });
 
   it('holds the result statement, budget rows, signatures, hash and cautions of an approved version, and page 1 is not blank', async () => {
+    await analyst.post(url(`/preparations/${preparationId}/versions/1/readings`), { readings: [{ stepIndex: 0, actualMassG: 0.16011 }], deviations: 'None.' }).expect(200);
     await analyst.post(url(`/preparations/${preparationId}/versions/1/submit`), {}).expect(200);
     const qa = await signIn(t.app, demo('qa'));
     const approved = (await qa.post(url(`/preparations/${preparationId}/versions/1/approve`), { password: DEMO_PASSWORD, statement: 'Reviewed against SOP-CHEM-014.' }).expect(200)).body;
@@ -69,6 +70,7 @@ describe('the PDF record', () => {
     expect(flat).toContain('safety data sheet');
     expect(flat).toMatch(/Lead compounds are toxic/);
     expect(flat).toMatch(/seed 77/);
+    expect(flat).toContain('Step 1: planned 0.1599 g, weighed 0.16011 g.');
 
     const png = join(work, 'page');
     execFileSync('pdftoppm', ['-png', '-r', '40', '-f', '1', '-l', '1', join(work, 'approved.pdf'), png]);

@@ -127,6 +127,16 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
       { size: 8, color: '#4a5a60' },
     );
 
+    if (version.readings) {
+      heading('Actual readings');
+      paragraph(`Recorded at the bench by ${version.readings.recordedBy}, ${utc(version.readings.recordedAt)}. The budget above is computed on these masses.`, { size: 8.5 });
+      for (const reading of version.readings.readings) {
+        const parts = [reading.tareG !== null ? `tare ${reading.tareG} g` : '', reading.grossG !== null ? `gross ${reading.grossG} g` : ''].filter(Boolean).join(', ');
+        paragraph(`Step ${reading.stepIndex + 1}: planned ${reading.plannedG} g, weighed ${reading.actualG} g${parts ? ` (${parts})` : ''}.`);
+      }
+      if (version.readings.deviations) paragraph(`Deviations: ${version.readings.deviations}`);
+    }
+
     // Inputs
     heading('Inputs');
     drawTable(doc, {

@@ -24,6 +24,7 @@ export interface VersionRow {
   problem_json: string | null;
   snapshot_json: string | null;
   snapshot_sha256: string | null;
+  readings_json: string | null;
   result_statement: string | null;
   value: number | null;
   unit: string | null;
@@ -74,7 +75,7 @@ export function preparationsRepository(db: Db) {
       if (filter.material) query.andWhereRaw('lower(p.material_code) = lower(?)', [filter.material]);
       if (filter.from) query.andWhere('p.updated_at', '>=', `${filter.from}T00:00:00.000Z`);
       if (filter.to) query.andWhere('p.updated_at', '<=', `${filter.to}T23:59:59.999Z`);
-      if (filter.q) query.andWhereLike('p.title', `%${filter.q}%`);
+      if (filter.q) query.andWhereILike('p.title', `%${filter.q}%`); // case-blind on SQLite and PostgreSQL alike
       return query;
     },
     find: (labId: number, id: number, trx: Db = db): Promise<PreparationRow | undefined> =>
@@ -96,6 +97,9 @@ export function preparationsRepository(db: Db) {
     },
     /** Only a draft (or a returned version) changes in place; the WHERE makes that hold even if two requests race. */
     updateDraft: (versionId: number, row: VersionWrite, trx: Db) => trx('preparation_versions').where({ id: versionId }).whereIn('status', EDITABLE_STATUSES).update(row),
+    /** Stores the actual readings and their recomputed result; only before the version is submitted. */
+    recordReadings: (versionId: number, row: VersionWrite & { readings_json: string; status: 'prepared' }, trx: Db) =>
+      trx('preparation_versions').where({ id: versionId }).whereIn('status', [...EDITABLE_STATUSES, 'prepared']).update(row),
     /** Moves a version between statuses; returns 0 when it was not in `from` any more. */
     setStatus: (versionId: number, from: PreparationStatus, to: PreparationStatus, trx: Db) => trx('preparation_versions').where({ id: versionId, status: from }).update({ status: to }),
     reviewsOf: (versionId: number, trx: Db = db): Promise<ReviewRow[]> =>

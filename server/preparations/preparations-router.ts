@@ -1,7 +1,7 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
-import { computeRequestSchema, preparationListQuerySchema, preparationWriteSchema, routeFinderRequestSchema, titleSchema } from '../../shared/contracts/preparations';
+import { computeRequestSchema, preparationListQuerySchema, readingsRequestSchema, preparationWriteSchema, routeFinderRequestSchema, titleSchema } from '../../shared/contracts/preparations';
 import type { Authorize, LabContext, SessionUser } from '../auth/authorize';
 import { valid, validate } from '../lib/validate';
 import type { PreparationsService } from './preparations-service';
@@ -43,6 +43,11 @@ export function preparationsRouter(deps: { preparations: PreparationsService; ro
   router.put('/preparations/:preparationId/versions/:number', plan, validate({ params: versionParams, body: preparationWriteSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: versionParams, body: preparationWriteSchema });
     res.json(await preparations.saveDraft(lab(req), actor(req), params.preparationId, params.number, body));
+  });
+
+  router.post('/preparations/:preparationId/versions/:number/readings', plan, validate({ params: versionParams, body: readingsRequestSchema }), async (req, res) => {
+    const { params, body } = valid(req, { params: versionParams, body: readingsRequestSchema });
+    res.json(await preparations.recordReadings(lab(req), actor(req), params.preparationId, params.number, body));
   });
 
   router.post('/preparations/:preparationId/versions', plan, validate({ params: prepParams }), async (req, res) => {

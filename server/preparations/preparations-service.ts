@@ -1,12 +1,12 @@
 import { randomInt } from 'node:crypto';
 import type { EquipmentItem } from '../../shared/contracts/library';
-import type { Override, PlanProblem, PreparationDetail, PreparationSummary, PreparationWrite, VersionDetail, VersionSummary } from '../../shared/contracts/preparations';
+import type { Override, PlanProblem, ReadingsRequest, RecordedReadings, PreparationDetail, PreparationSummary, PreparationWrite, VersionDetail, VersionSummary } from '../../shared/contracts/preparations';
 import { parsePlan, PlanError } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
 import type { Db } from '../db/connection';
 import { canonicalJson, sha256Hex } from '../lib/canonical-json';
-import { AppError, conflict, forbidden, notFound } from '../lib/errors';
+import { AppError, conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
 import type { PolicyService } from '../policy/policy-service';
 import type { Computer } from '../compute/compute-pool';
@@ -36,6 +36,7 @@ export function toVersionDetail(row: VersionRow, reviews: ReviewRow[]): VersionD
   return {
     ...toSummary(row),
     reviews: reviews.map(toReview),
+    readings: parse<RecordedReadings>(row.readings_json),
     plan: JSON.parse(row.plan_json),
     overrides: JSON.parse(row.overrides_json),
     seed: Number(row.seed),
@@ -61,6 +62,14 @@ function preparationSummary(prep: PreparationRow, latest: VersionRow): Preparati
     relativeExpandedUncertainty: latest.relative_expanded_uncertainty,
   };
 }
+
+/** The mass a reading replaces, per kind of weighing step. */
+const MASS_FIELDS: Record<string, RecordedReadings['readings'][number]['field']> = {
+  weighSolid: 'netMassG',
+  weighAliquot: 'netMassG',
+  makeUpToMass: 'finalMassG',
+  dissolveInSolvent: 'solventMassG',
+};
 
 const analyteOf = (plan: Record<string, unknown>) => String((plan.analyte as { formula?: unknown } | undefined)?.formula ?? '').slice(0, 40);
 
@@ -209,6 +218,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       if (!prep) throw notFound('The preparation');
       const [latest] = await preparations.versionsOf(id);
       if (EDITABLE_STATUSES.includes(latest.status)) throw conflict('draft_exists', `Version ${latest.number} can still be edited: change that one.`);
+      if (latest.status === 'prepared') throw conflict('draft_exists', `Version ${latest.number} has been prepared: correct its readings or submit it for review.`);
       if (latest.status === 'submitted') throw conflict('under_review', `Version ${latest.number} is waiting for review; a new version can start once it is approved or returned.`);
       const computed = await compute(labId, JSON.parse(latest.plan_json), JSON.parse(latest.overrides_json), Number(latest.seed));
       const { materialCode: _material, ...write } = computed;
@@ -216,6 +226,68 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
         await preparations.insertVersion(id, latest.number + 1, { ...write, created_by: actor.id, created_at: write.updated_at }, trx);
         await preparations.touchPreparation(id, { title: prep.title, analyte: prep.analyte, materialCode: prep.material_code, at: write.updated_at }, trx);
         await audit.record({ labId, actorUserId: actor.id, action: 'preparation.versioned', entityType: 'preparation', entityId: id, summary: `${actor.name} started version ${latest.number + 1} of “${prep.title}”` }, trx);
+      });
+      return detail(labId, id);
+    },
+
+    /**
+     * Records the masses actually weighed at the bench (and any deviation): the plan's planned
+     * masses are replaced by them, the budget is recomputed on the actual values, and the version
+     * becomes "prepared". Readings can be corrected until the version is submitted.
+     */
+    async recordReadings(labId: number, actor: SessionUser, id: number, number: number, input: ReadingsRequest & { deviations: string }): Promise<PreparationDetail> {
+      const prep = await preparations.find(labId, id);
+      if (!prep) throw notFound('The preparation');
+      const current = await preparations.version(id, number);
+      if (!current) throw notFound(`Version ${number}`);
+      if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation records its readings.');
+      if (![...EDITABLE_STATUSES, 'prepared'].includes(current.status)) throw conflict('not_draft', `Version ${number} is ${current.status}; its readings can no longer change.`);
+      const previous = parse<RecordedReadings>(current.readings_json);
+      const plan = JSON.parse(current.plan_json) as { steps?: Record<string, unknown>[] };
+      const steps = plan.steps ?? [];
+      const recorded: RecordedReadings['readings'] = [];
+      const issues: { path: string; message: string }[] = [];
+      input.readings.forEach((reading, index) => {
+        const step = steps[reading.stepIndex];
+        const field = step ? MASS_FIELDS[String(step.kind)] : undefined;
+        if (!step || !field) {
+          issues.push({ path: `readings.${index}.stepIndex`, message: `Step ${reading.stepIndex + 1} is not a weighing step.` });
+          return;
+        }
+        if (reading.tareG !== undefined && reading.grossG !== undefined && Math.abs(reading.grossG - reading.tareG - reading.actualMassG) > 1e-9 * Math.max(1, reading.grossG)) {
+          issues.push({ path: `readings.${index}.actualMassG`, message: `Gross − tare is ${(reading.grossG - reading.tareG).toPrecision(6)} g, not ${reading.actualMassG} g.` });
+          return;
+        }
+        // The planned value: the first reading's planned value if readings are being corrected.
+        const plannedG = previous?.readings.find((r) => r.stepIndex === reading.stepIndex)?.plannedG ?? Number(step[field]);
+        recorded.push({ stepIndex: reading.stepIndex, field, plannedG, actualG: reading.actualMassG, tareG: reading.tareG ?? null, grossG: reading.grossG ?? null });
+        step[field] = reading.actualMassG;
+      });
+      if (issues.length > 0) throw validationError(issues[0].message, issues);
+      const computed = await compute(labId, plan as Record<string, unknown>, JSON.parse(current.overrides_json), Number(current.seed));
+      if (computed.problem_json) {
+        const problem = JSON.parse(computed.problem_json) as PlanProblem;
+        throw new AppError('validation', 'plan_invalid', `With these readings the budget cannot be computed: ${problem.message}`, [{ path: ['plan', ...problem.path].join('.'), message: problem.message }]);
+      }
+      const { materialCode, ...write } = computed;
+      const readings: RecordedReadings = { recordedAt: write.updated_at, recordedBy: actor.name, deviations: input.deviations, readings: recorded };
+      await db.transaction(async (trx) => {
+        const changed = await preparations.recordReadings(current.id, { ...write, readings_json: JSON.stringify(readings), status: 'prepared' }, trx);
+        if (changed === 0) throw conflict('not_draft', `Version ${number} changed meanwhile; reload it.`);
+        await preparations.touchPreparation(id, { title: prep.title, analyte: prep.analyte, materialCode, at: write.updated_at }, trx);
+        await audit.record(
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'preparation.prepared',
+            entityType: 'preparation',
+            entityId: id,
+            summary: `${actor.name} recorded the readings of version ${number} of “${prep.title}”: ${write.result_statement}${input.deviations ? `; deviations: ${input.deviations}` : ''}`,
+            before: { statement: current.result_statement, readings: previous?.readings ?? null },
+            after: { statement: write.result_statement, readings: recorded },
+          },
+          trx,
+        );
       });
       return detail(labId, id);
     },

@@ -4,7 +4,7 @@ import { toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem } from '../../shared/contracts/library';
 import { hashPassword } from '../auth/password';
 import { leadPlan, libraryByCode } from '../test-support/demo-plans';
-import { buildTestApp, demo, signIn, type Client, type TestApp } from '../test-support/test-app';
+import { buildTestApp, countRows, demo, signIn, type Client, type TestApp } from '../test-support/test-app';
 
 let t: TestApp;
 let labId: number;
@@ -68,7 +68,7 @@ describe('saving a preparation computes and stores its snapshot', () => {
     const res = await analyst.post(url('/preparations'), { title: 'Sneaky', plan }).expect(400);
     expect(res.body.error.code).toBe('foreign_equipment');
     expect(res.body.error.details[0].path).toBe('steps.1.flask');
-    expect(await t.db('preparations').count({ n: '*' }).first()).toEqual({ n: 0 });
+    expect(await countRows(t.db('preparations'))).toBe(0);
   });
 
   it('keeps a draft the engine cannot compute, with the problem and its path', async () => {
@@ -123,7 +123,7 @@ describe('malformed plans and the compute-only route', () => {
     (unit.settings as { outputUnit: string }).outputUnit = 'ppm-ish';
     const refused = await analyst.post(url('/preparations'), { title: 'Bad unit', plan: unit }).expect(400);
     expect(refused.body.error.message).toMatch(/unit/i);
-    expect(await t.db('preparations').count({ n: '*' }).first()).toEqual({ n: 0 });
+    expect(await countRows(t.db('preparations'))).toBe(0);
   });
 
   it('computes without saving, with the trials asked for', async () => {
@@ -131,7 +131,7 @@ describe('malformed plans and the compute-only route', () => {
     expect(res.monteCarlo.trials).toBe(20_000);
     expect(res.monteCarlo.seed).toBe(5);
     expect(res.budget.unit).toBe('mg/L');
-    expect(await t.db('preparations').count({ n: '*' }).first()).toEqual({ n: 0 });
+    expect(await countRows(t.db('preparations'))).toBe(0);
     await analyst.post(url('/compute'), { plan: leadPlanWith(), trials: 5_000_000 }).expect(400);
   });
 });

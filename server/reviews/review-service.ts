@@ -51,7 +51,7 @@ export function reviewService(deps: {
     async submit(labId: number, actor: SessionUser, preparationId: number, number: number, comment: string): Promise<void> {
       const { prep, version } = await load(labId, preparationId, number);
       if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can submit it.');
-      if (version.status !== 'draft' && version.status !== 'returned') throw conflict('not_draft', `Version ${number} is ${version.status}; only a draft or returned version can be submitted.`);
+      if (!['draft', 'prepared', 'returned'].includes(version.status)) throw conflict('not_draft', `Version ${number} is ${version.status}; only a draft, prepared or returned version can be submitted.`);
       if (!version.snapshot_json) throw validationError('This version has no computed budget yet: fix the problem shown in the plan, then submit.');
       const at = now().toISOString();
       await db.transaction(async (trx) => {
@@ -154,7 +154,8 @@ export function reviewService(deps: {
         .select('p.id as preparation_id', 'p.title', 'p.analyte', 'v.number', 'a.name as analyst', 'u.name as approved_by', 'r.at as approved_at', 'v.result_statement', 'v.snapshot_sha256')
         .orderBy('r.at', 'desc')
         .limit(500);
-      if (q) query.andWhere((w) => w.whereLike('p.title', `%${q}%`).orWhereLike('p.analyte', `%${q}%`).orWhereLike('a.name', `%${q}%`).orWhereLike('p.material_code', `%${q}%`));
+      // whereILike: `like` on SQLite, `ilike` on PostgreSQL, so the search is case-blind on both.
+      if (q) query.andWhere((w) => w.whereILike('p.title', `%${q}%`).orWhereILike('p.analyte', `%${q}%`).orWhereILike('a.name', `%${q}%`).orWhereILike('p.material_code', `%${q}%`));
       const rows: { preparation_id: number; title: string; analyte: string; number: number; analyst: string; approved_by: string; approved_at: string; result_statement: string | null; snapshot_sha256: string }[] = await query;
       return rows.map((r) => ({
         preparationId: r.preparation_id,

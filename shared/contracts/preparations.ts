@@ -8,7 +8,8 @@ import { reviewSchema } from './reviews';
  * from the browser.
  */
 
-export const PREPARATION_STATUSES = ['draft', 'submitted', 'approved', 'returned'] as const;
+/** draft → (prepared: actual readings recorded) → submitted → approved, or returned to the analyst. */
+export const PREPARATION_STATUSES = ['draft', 'prepared', 'submitted', 'approved', 'returned'] as const;
 export const preparationStatusSchema = z.enum(PREPARATION_STATUSES);
 export type PreparationStatus = z.infer<typeof preparationStatusSchema>;
 
@@ -54,6 +55,38 @@ export const usedItemSchema = z.object({
   hazardNotes: z.string(),
 });
 export type UsedItem = z.infer<typeof usedItemSchema>;
+
+/** A mass actually weighed at the bench for one step (the planned value stays in the record). */
+export const readingSchema = z.object({
+  stepIndex: z.number().int().min(0),
+  actualMassG: z.number().positive('The mass weighed must be greater than zero.').refine(Number.isFinite, 'Enter the mass as a number.'),
+  tareG: z.number().nonnegative().optional(),
+  grossG: z.number().positive().optional(),
+});
+
+export const readingsRequestSchema = z.object({
+  readings: z.array(readingSchema).min(1, 'Enter at least one mass weighed.').max(20),
+  deviations: z.string().trim().max(2000, 'Use at most 2000 characters.').default(''),
+});
+export type ReadingsRequest = z.input<typeof readingsRequestSchema>;
+
+/** What was recorded at the bench, with the planned value each reading replaced. */
+export const recordedReadingsSchema = z.object({
+  recordedAt: z.string(),
+  recordedBy: z.string(),
+  deviations: z.string(),
+  readings: z.array(
+    z.object({
+      stepIndex: z.number().int(),
+      field: z.enum(['netMassG', 'finalMassG', 'solventMassG']),
+      plannedG: z.number(),
+      actualG: z.number(),
+      tareG: z.number().nullable(),
+      grossG: z.number().nullable(),
+    }),
+  ),
+});
+export type RecordedReadings = z.infer<typeof recordedReadingsSchema>;
 
 /** Where the plan is wrong, when it cannot be computed (the draft is kept as it is). */
 export const planProblemSchema = z.object({ path: z.array(z.union([z.string(), z.number()])), message: z.string() });
@@ -110,6 +143,8 @@ export const versionDetailSchema = versionSummarySchema.extend({
     })
     .nullable(),
   snapshotSha256: z.string().nullable(),
+  /** The masses actually weighed, once the solution has been prepared; null while only planned. */
+  readings: recordedReadingsSchema.nullable().default(null),
   /** Submissions, returns with their comments, and the signed approval, oldest first. */
   reviews: z.array(reviewSchema).default([]),
 });

@@ -159,11 +159,14 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   if (config.clientDir && existsSync(join(config.clientDir, 'index.html'))) {
     const clientDir = resolve(config.clientDir);
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    app.get('/*splat', (_req, res) => {
+    // Client routes (no file extension) get the app; a missing asset stays a 404.
+    app.get('/{*splat}', (req, res, next) => {
+      if (/\.[a-z0-9]+$/i.test(req.path)) return next();
       res.set('Cache-Control', 'no-cache');
       res.sendFile(join(clientDir, 'index.html'));
     });
   }
+  app.use(apiNotFound);
   app.use(errorHandler(log));
 
   return { app, sessions, close: () => computer.close() };

@@ -14,7 +14,8 @@ const STATUS: Record<AppError['kind'], number> = {
 };
 
 export const apiNotFound: RequestHandler = (req, res) => {
-  res.status(404).json({ error: { code: 'not_found', message: `No API route ${req.method} ${req.path}.` } });
+  const what = req.originalUrl.startsWith('/api/') ? 'API route' : 'page or file';
+  res.status(404).json({ error: { code: 'not_found', message: `No ${what} ${req.method} ${req.path}.` } });
 };
 
 interface HttpishError {

@@ -1,7 +1,7 @@
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { Link, useNavigate, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router';
-import type { PreparationDetail, VersionDetail } from '../../../../shared/contracts/preparations';
+import type { PreparationDetail, PreparationStatus, VersionDetail } from '../../../../shared/contracts/preparations';
 import type { Role } from '../../../../shared/contracts/roles';
 import { Alert } from '../../../components/ui/alert';
 import { paths } from '../../../config/paths';
@@ -13,6 +13,7 @@ import { preparationsKeys } from '../../../features/preparations/api/preparation
 import { recordQueryOptions, useRecord } from '../../../features/records/api/get-record';
 import { recordVersionQueryOptions, useRecordVersion } from '../../../features/records/api/get-record-version';
 import { useRecordRefresh } from '../../../features/records/api/use-record-refresh';
+import { BenchReadings } from '../../../features/records/components/bench-readings';
 import { BudgetSummary } from '../../../features/records/components/budget-summary';
 import { EquipmentUsed } from '../../../features/records/components/equipment-used';
 import { HazardCautions } from '../../../features/records/components/hazard-cautions';
@@ -20,17 +21,18 @@ import { MonteCarloVerdict } from '../../../features/records/components/monte-ca
 import { RecordDownloads } from '../../../features/records/components/record-downloads';
 import { RecordHeader } from '../../../features/records/components/record-header';
 import { ResultStatementPanel } from '../../../features/records/components/result-statement-panel';
+import { ReturnNotice } from '../../../features/records/components/return-notice';
 import { ReviewTrail } from '../../../features/records/components/review-trail';
 import { SnapshotHash } from '../../../features/records/components/snapshot-hash';
 import { StartNewVersionButton } from '../../../features/records/components/start-new-version-button';
 import { VersionSwitcher } from '../../../features/records/components/version-switcher';
 import { readSnapshot } from '../../../features/records/utils/snapshot-view';
+import { stepNamer } from '../../../features/records/utils/step-names';
 import { ApproveButton } from '../../../features/reviews/components/approve-button';
 import { ReturnButton } from '../../../features/reviews/components/return-button';
 import { SubmitForReviewButton } from '../../../features/reviews/components/submit-for-review-button';
 import { isApiError } from '../../../lib/api-error';
 import { activeMembership, activeRoles, can } from '../../../lib/authorization';
-import { formatDateTime } from '../../../lib/format-date';
 
 const idFrom = (value: string | undefined) => {
   const id = Number(value);
@@ -96,6 +98,7 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
   const preparation = useRecord(labId, preparationId);
   const version = useRecordVersion(labId, preparationId, versionNumber);
   const snapshot = readSnapshot(version.snapshot);
+  const stepName = snapshot ? stepNamer(snapshot.plan, snapshot.items) : (key: string) => key;
   const reference = { labId, preparationId, versionNumber };
 
   return (
@@ -138,7 +141,8 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
         ) : null}
         <div className="grid items-start gap-6 lg:grid-cols-[1fr_22rem]">
           <div className="flex min-w-0 flex-col gap-8">
-            {snapshot ? <BudgetSummary budget={snapshot.budget} /> : null}
+            {snapshot ? <BudgetSummary budget={snapshot.budget} stepName={stepName} /> : null}
+            {snapshot && version.readings ? <BenchReadings readings={version.readings} stepName={stepName} /> : null}
             {snapshot ? <EquipmentUsed items={snapshot.items} /> : null}
             <ReviewTrail reviews={version.reviews} />
           </div>
@@ -161,16 +165,8 @@ function BackLink({ approved, reviewing }: { approved: boolean; reviewing: boole
   return <Link to={paths.app.preparations.href()}>← Preparations</Link>;
 }
 
-/** The last return's comments, on top, while the version waits for the analyst. */
-function ReturnNotice({ version }: { version: VersionDetail }) {
-  const lastReturn = version.status === 'returned' ? version.reviews.findLast((review) => review.action === 'returned') : undefined;
-  if (!lastReturn) return null;
-  return (
-    <Alert tone="info" title={`Returned by ${lastReturn.actor}, ${formatDateTime(lastReturn.at)}`}>
-      <p className="whitespace-pre-line">{lastReturn.comment}</p>
-    </Alert>
-  );
-}
+/** The states an analyst may submit from (the server says the same). */
+const SUBMITTABLE: readonly PreparationStatus[] = ['draft', 'prepared', 'returned'];
 
 type RecordActionsProps = { labId: number; preparation: PreparationDetail; version: VersionDetail; userId: number; roles: readonly Role[] };
 
@@ -193,7 +189,7 @@ function RecordActions({ labId, preparation, version, userId, roles }: RecordAct
   const latestNumber = Math.max(...preparation.versions.map((each) => each.number));
   const actions: ReactNode[] = [];
 
-  if (analyst && owner && (version.status === 'draft' || version.status === 'returned') && version.snapshot) {
+  if (analyst && owner && SUBMITTABLE.includes(version.status) && version.snapshot) {
     actions.push(<SubmitForReviewButton key="submit" version={reference} onReviewed={onReviewed} />);
   }
   if (can(roles, 'reviewRecords') && version.status === 'submitted') {

@@ -26,14 +26,16 @@ export function AuditFilters({ query, onApply, onClear }: AuditFiltersProps) {
       aria-label="Audit trail filters"
       noValidate
       onSubmit={handleSubmit((next) => onApply({ ...next, offset: 0 }))}
-      className="mb-4 flex flex-wrap items-start gap-4 rounded-lg border border-line bg-surface p-4"
+      className="mb-4 rounded-lg border border-line bg-surface p-4"
     >
-      <TextField label="Person" hint="Name or e-mail, or part of it" className="w-56" error={errors.actor?.message} {...register('actor', EMPTY_AS_UNSET)} />
-      <Select label="Action" options={ACTION_OPTIONS} className="w-64" error={errors.action?.message} {...register('action', EMPTY_AS_UNSET)} />
-      <Select label="About" options={ENTITY_TYPE_OPTIONS} className="w-44" error={errors.entityType?.message} {...register('entityType', EMPTY_AS_UNSET)} />
-      <TextField label="From" type="date" className="w-44" error={errors.from?.message} {...register('from', EMPTY_AS_UNSET)} />
-      <TextField label="To" type="date" className="w-44" error={errors.to?.message} {...register('to', EMPTY_AS_UNSET)} />
-      <div className="flex gap-2 self-end pb-0.5">
+      <div className="grid items-start gap-4 sm:grid-cols-2 lg:grid-cols-[1.2fr_1.5fr_1fr_1fr_1fr]">
+        <TextField label="Person" hint="Name or e-mail, or part of it" error={errors.actor?.message} {...register('actor', EMPTY_AS_UNSET)} />
+        <Select label="Action" options={ACTION_OPTIONS} error={errors.action?.message} {...register('action', EMPTY_AS_UNSET)} />
+        <Select label="About" options={ENTITY_TYPE_OPTIONS} error={errors.entityType?.message} {...register('entityType', EMPTY_AS_UNSET)} />
+        <TextField label="From" type="date" error={errors.from?.message} {...register('from', EMPTY_AS_UNSET)} />
+        <TextField label="To" type="date" error={errors.to?.message} {...register('to', EMPTY_AS_UNSET)} />
+      </div>
+      <div className="mt-4 flex gap-2">
         <Button type="submit">Apply filters</Button>
         <Button variant="quiet" onClick={onClear}>
           Clear

@@ -2,7 +2,7 @@ import { createColumnHelper, createSortedRowModel, rowSortingFeature, sortFn_alp
 import { Link } from 'react-router';
 import type { ApprovedRecord } from '../../../../shared/contracts/reviews';
 import { paths } from '../../../config/paths';
-import { formatDateTime } from '../../../lib/format-date';
+import { formatDate, formatDateTime } from '../../../lib/format-date';
 import { recordPdfUrl, snapshotJsonUrl } from '../api/record-downloads';
 import { shortHash } from '../utils/format-figures';
 
@@ -26,15 +26,15 @@ const columnsFor = (labId: number) =>
       ),
     }),
     column.accessor('analyte', { header: 'Analyte', sortFn: 'alphanumeric' }),
-    column.accessor('versionNumber', { header: 'Version', sortFn: 'basic' }),
+    column.accessor('versionNumber', { header: 'Version', sortFn: 'basic', cell: (info) => `v${info.getValue()}` }),
     column.accessor('analyst', { header: 'Analyst', sortFn: 'alphanumeric' }),
-    column.accessor('approvedBy', { header: 'Approved by', sortFn: 'alphanumeric' }),
+    column.accessor('approvedBy', { header: () => <span className="whitespace-nowrap">Approved by</span>, sortFn: 'alphanumeric' }),
     column.accessor('approvedAt', {
       header: 'Approved',
       sortFn: 'alphanumeric',
       cell: (info) => (
-        <time dateTime={info.getValue()} className="whitespace-nowrap">
-          {formatDateTime(info.getValue())}
+        <time dateTime={info.getValue()} title={formatDateTime(info.getValue())} className="whitespace-nowrap">
+          {formatDate(info.getValue())}
         </time>
       ),
     }),
@@ -50,7 +50,7 @@ const columnsFor = (labId: number) =>
     }),
     column.display({
       id: 'downloads',
-      header: 'Downloads',
+      header: 'Files',
       cell: ({ row }) => {
         const { preparationId, versionNumber, title } = row.original;
         return (
@@ -79,7 +79,7 @@ export function ApprovedRecordsTable({ labId, records, search }: { labId: number
   return (
     <div>
       <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-        <table className="w-full text-left">
+        <table className="w-full text-left text-[0.95rem]">
           <caption className="sr-only">Approved records{search ? ` matching “${search}”` : ''}</caption>
           <thead className="border-b border-line bg-paper text-sm text-muted">
             {table.getHeaderGroups().map((headerGroup) => (
@@ -108,7 +108,7 @@ export function ApprovedRecordsTable({ labId, records, search }: { labId: number
             {rows.map((row) => (
               <tr key={row.id} className="border-b border-line align-top last:border-b-0">
                 {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className={`px-3 py-2 ${cell.column.id === 'versionNumber' ? 'numeric text-right' : ''} ${cell.column.id === 'resultStatement' ? 'min-w-72' : ''}`}>
+                  <td key={cell.id} className={`px-3 py-2 ${cell.column.id === 'title' ? 'min-w-44' : ''} ${cell.column.id === 'resultStatement' ? 'min-w-56' : ''}`}>
                     <table.FlexRender cell={cell} />
                   </td>
                 ))}

@@ -8,9 +8,9 @@ const column = createColumnHelper<RecordTableFeatures, StepRow>();
 const NUMERIC = new Set(['contribution', 'indexPercent']);
 
 /** Contributions by step with each one's share of the combined variance; the full budget is in the workspace and the PDF. */
-export function BudgetSummary({ budget }: { budget: BudgetView }) {
+export function BudgetSummary({ budget, stepName }: { budget: BudgetView; stepName: (key: string) => string }) {
   const columns = column.columns([
-    column.accessor('label', { header: 'Step', cell: (info) => <span className="font-semibold">{info.getValue()}</span> }),
+    column.accessor('key', { header: 'Step', cell: (info) => <span className="font-semibold">{stepName(info.getValue())}</span> }),
     column.accessor('contribution', {
       header: () => (
         <>

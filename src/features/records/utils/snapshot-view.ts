@@ -50,6 +50,8 @@ export type SnapshotView = {
   /** Null when the stored Monte Carlo or its validation has a shape this page does not read. */
   monteCarlo: MonteCarloView | null;
   validation: ValidationView | null;
+  /** The plan exactly as computed, with the library data inline. */
+  plan: Snapshot['plan'];
   items: Snapshot['items'];
   warnings: string[];
   engineVersion: string;
@@ -67,6 +69,7 @@ export function readSnapshot(snapshot: VersionDetail['snapshot']): SnapshotView 
     budget: budget.data,
     monteCarlo: monteCarlo.success ? monteCarlo.data : null,
     validation: validation.success ? validation.data : null,
+    plan: snapshot.plan,
     items: snapshot.items,
     warnings: snapshot.warnings,
     engineVersion: snapshot.engineVersion,

@@ -26,7 +26,7 @@ const columns = column.columns([
       </Link>
     ),
   }),
-  column.accessor('submittedBy', { header: 'Submitted by' }),
+  column.accessor('submittedBy', { header: () => <span className="whitespace-nowrap">Submitted by</span>, cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span> }),
   column.accessor('resultStatement', { header: 'Result', cell: (info) => info.getValue() ?? '—' }),
   column.accessor('comment', { header: 'Note', cell: (info) => (info.getValue() ? <span className="whitespace-pre-line">{info.getValue()}</span> : <span className="text-muted">—</span>) }),
 ]);

@@ -65,7 +65,7 @@ export function reviewService(deps: {
           mailer.send({
             to: reviewer.email,
             labId,
-            ...submittedMessage({ reviewerName: reviewer.name, analyst: actor.name, title: prep.title, version: number, statement: version.result_statement, comment, link: deps.publicUrl(`/preparations/${preparationId}`) }),
+            ...submittedMessage({ reviewerName: reviewer.name, analyst: actor.name, title: prep.title, version: number, statement: version.result_statement, comment, link: deps.publicUrl(`/records/${preparationId}/v/${number}`) }),
           }),
         );
       }
@@ -115,7 +115,7 @@ export function reviewService(deps: {
           mailer.send({
             to: analyst.email,
             labId,
-            ...decisionMessage({ analystName: analyst.name, reviewer: actor.name, title: prep.title, version: number, decision: decision.kind, comment, link: deps.publicUrl(`/preparations/${preparationId}`) }),
+            ...decisionMessage({ analystName: analyst.name, reviewer: actor.name, title: prep.title, version: number, decision: decision.kind, comment, link: deps.publicUrl(`/records/${preparationId}/v/${number}`) }),
           }),
         );
       }

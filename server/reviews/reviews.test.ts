@@ -1,7 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { createHash } from 'node:crypto';
 import { leadPlan, libraryByCode } from '../test-support/demo-plans';
-import { buildTestApp, demo, DEMO_PASSWORD, signIn, type Client, type TestApp } from '../test-support/test-app';
+import { buildTestApp, demo, DEMO_PASSWORD, dropTrigger, signIn, type Client, type TestApp } from '../test-support/test-app';
 
 let t: TestApp;
 let labId: number;
@@ -37,7 +37,7 @@ describe('draft → submitted → approved or returned', () => {
     expect(res.body.current.editable).toBe(false);
     const [mail] = await mailTo(demo('qa'));
     expect(mail.subject).toBe('Review requested: Pb check standard (version 1)');
-    expect(mail.text_body).toContain(`http://dilutrace.test/preparations/${preparationId}`);
+    expect(mail.text_body).toContain(`http://dilutrace.test/records/${preparationId}/v/1`);
     expect(mail.html_body).toContain('<a href=');
     await analyst.post(v1('submit'), {}).expect(409);
     const queue = (await qa.get(url('/review-queue')).expect(200)).body;
@@ -119,7 +119,7 @@ describe('an approved version never changes', () => {
     const ok = (await analyst.get(v1('verify')).expect(200)).body;
     expect(ok).toMatchObject({ intact: true, approvedSha256: row.snapshot_sha256, computedSha256: createHash('sha256').update(row.snapshot_json).digest('hex') });
     // Someone with direct database access drops the guard and edits the stored result.
-    await t.db.raw('DROP TRIGGER preparation_versions_approved_no_update');
+    await dropTrigger(t.db, 'preparation_versions_approved_no_update', 'preparation_versions');
     await t.db('preparation_versions').where({ id: row.id }).update({ snapshot_json: row.snapshot_json.replace('"value":', '"value":1e-9+') });
     const bad = (await analyst.get(v1('verify')).expect(200)).body;
     expect(bad.intact).toBe(false);

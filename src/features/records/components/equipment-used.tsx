@@ -20,7 +20,7 @@ const columns = column.columns([
     header: 'State when used',
     cell: ({ row }) => {
       const { flags, override } = row.original;
-      if (flags.length === 0 && !override) return <span className="text-muted">In calibration</span>;
+      if (flags.length === 0 && !override) return <span className="text-muted">No flags</span>;
       return (
         <div className="flex flex-col gap-1">
           {flags.map((flag) => (

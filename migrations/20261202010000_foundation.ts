@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { dropRefusals, refuse } from './support/refusal-triggers';
 
 /** Labs, people, their roles, sessions, invitations, password resets, captured mail and the audit trail. */
 export async function up(knex: Knex): Promise<void> {
@@ -27,9 +28,7 @@ export async function up(knex: Knex): Promise<void> {
     t.unique(['user_id', 'lab_id', 'role']);
     t.index(['lab_id']);
   });
-  await knex.raw(`CREATE TRIGGER memberships_role_check BEFORE INSERT ON memberships
-    WHEN NEW.role NOT IN ('admin','qa','analyst','auditor')
-    BEGIN SELECT RAISE(ABORT, 'unknown role'); END`);
+  await refuse(knex, 'memberships_role_check', 'INSERT', 'memberships', 'unknown role', "NEW.role NOT IN ('admin','qa','analyst','auditor')");
 
   await knex.schema.createTable('sessions', (t) => {
     t.string('sid', 128).primary();
@@ -88,10 +87,9 @@ export async function up(knex: Knex): Promise<void> {
     t.index(['lab_id', 'created_at']);
   });
   // The audit trail is append-only.
-  await knex.raw(`CREATE TRIGGER audit_events_no_update BEFORE UPDATE ON audit_events
-    BEGIN SELECT RAISE(ABORT, 'audit events are append-only'); END`);
-  await knex.raw(`CREATE TRIGGER audit_events_no_delete BEFORE DELETE ON audit_events
-    BEGIN SELECT RAISE(ABORT, 'audit events are append-only'); END`);
+  await refuse(knex, 'audit_events_no_update', 'UPDATE', 'audit_events', 'audit events are append-only');
+  await refuse(knex, 'audit_events_no_delete', 'DELETE', 'audit_events', 'audit events are append-only');
+  await refuse(knex, 'audit_events_no_truncate', 'TRUNCATE', 'audit_events', 'audit events are append-only');
 
   await knex.schema.createTable('app_settings', (t) => {
     t.string('key', 100).primary();
@@ -103,4 +101,5 @@ export async function down(knex: Knex): Promise<void> {
   for (const table of ['app_settings', 'audit_events', 'outbox', 'password_resets', 'invitations', 'sessions', 'memberships', 'users', 'labs']) {
     await knex.schema.dropTableIfExists(table);
   }
+  await dropRefusals(knex, ['memberships_role_check', 'audit_events_no_update', 'audit_events_no_delete', 'audit_events_no_truncate']);
 }

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { dropRefusals, refuse } from './support/refusal-triggers';
 
 /** Preparations and their versions; an approved version can never change or be removed. */
 export async function up(knex: Knex): Promise<void> {
@@ -34,15 +35,12 @@ export async function up(knex: Knex): Promise<void> {
     t.string('updated_at', 30).notNullable();
     t.unique(['preparation_id', 'number']);
   });
-  await knex.raw(`CREATE TRIGGER preparation_versions_approved_no_update BEFORE UPDATE ON preparation_versions
-    WHEN OLD.status = 'approved'
-    BEGIN SELECT RAISE(ABORT, 'an approved version is immutable'); END`);
-  await knex.raw(`CREATE TRIGGER preparation_versions_approved_no_delete BEFORE DELETE ON preparation_versions
-    WHEN OLD.status = 'approved'
-    BEGIN SELECT RAISE(ABORT, 'an approved version is immutable'); END`);
+  await refuse(knex, 'preparation_versions_approved_no_update', 'UPDATE', 'preparation_versions', 'an approved version is immutable', "OLD.status = 'approved'");
+  await refuse(knex, 'preparation_versions_approved_no_delete', 'DELETE', 'preparation_versions', 'an approved version is immutable', "OLD.status = 'approved'");
 }
 
 export async function down(knex: Knex): Promise<void> {
   await knex.schema.dropTableIfExists('preparation_versions');
   await knex.schema.dropTableIfExists('preparations');
+  await dropRefusals(knex, ['preparation_versions_approved_no_update', 'preparation_versions_approved_no_delete']);
 }

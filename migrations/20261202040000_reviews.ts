@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { dropRefusals, refuse } from './support/refusal-triggers';
 
 /**
  * The review trail of each version: submitted, returned (with comments), approved (with the
@@ -15,12 +16,12 @@ export async function up(knex: Knex): Promise<void> {
     t.string('snapshot_sha256', 64).nullable();
     t.index(['version_id']);
   });
-  await knex.raw(`CREATE TRIGGER version_reviews_no_update BEFORE UPDATE ON version_reviews
-    BEGIN SELECT RAISE(ABORT, 'review records are append-only'); END`);
-  await knex.raw(`CREATE TRIGGER version_reviews_no_delete BEFORE DELETE ON version_reviews
-    BEGIN SELECT RAISE(ABORT, 'review records are append-only'); END`);
+  await refuse(knex, 'version_reviews_no_update', 'UPDATE', 'version_reviews', 'review records are append-only');
+  await refuse(knex, 'version_reviews_no_delete', 'DELETE', 'version_reviews', 'review records are append-only');
+  await refuse(knex, 'version_reviews_no_truncate', 'TRUNCATE', 'version_reviews', 'review records are append-only');
 }
 
 export async function down(knex: Knex): Promise<void> {
   await knex.schema.dropTableIfExists('version_reviews');
+  await dropRefusals(knex, ['version_reviews_no_update', 'version_reviews_no_delete', 'version_reviews_no_truncate']);
 }

@@ -1,6 +1,6 @@
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app';
-import { certificateDir, loadEnv } from './config/env';
+import { certificateDir, databaseTarget, loadEnv } from './config/env';
 import { openDatabase } from './db/connection';
 import { seedDemoLab } from './db/seed-demo';
 import { sessionSecret } from './db/settings-repository';
@@ -10,9 +10,9 @@ import { createSmtpMailer } from './mail/mailer';
 import { usersRepository } from './auth/users-repository';
 
 const env = loadEnv();
-const db = await openDatabase(env.DILUTRACE_DB);
+const db = await openDatabase(databaseTarget(env));
 if (env.DILUTRACE_SEED_DEMO === '1' && (await usersRepository(db).count()) === 0) {
-  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: systemClock.now(), certificateDir: certificateDir(env.DILUTRACE_DB) });
+  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: systemClock.now(), certificateDir: certificateDir(env) });
   console.log('Seeded the demo lab (Wellmere Regional Water Laboratory).');
 }
 
@@ -31,7 +31,7 @@ const { app, sessions, close: closeApp } = createApp({
     production,
     trustProxy: env.DILUTRACE_TRUST_PROXY === '1',
     signInLimit: env.DILUTRACE_SIGNIN_LIMIT,
-    certificateDir: certificateDir(env.DILUTRACE_DB),
+    certificateDir: certificateDir(env),
     clientDir: production ? 'dist/client' : undefined,
   },
 });

@@ -29,8 +29,9 @@ const toEvent = (row: Row): AuditEvent => ({
 export function auditQuery(db: Db) {
   function filtered(labId: number, query: Omit<AuditQuery, 'limit' | 'offset'>) {
     const q = db('audit_events as e').leftJoin('users as u', 'u.id', 'e.actor_user_id').where('e.lab_id', labId);
-    if (query.actor) q.andWhere((w) => w.whereLike('u.name', `%${query.actor}%`).orWhereLike('u.email', `%${query.actor}%`));
-    if (query.action) q.andWhereLike('e.action', `${query.action}%`);
+    // whereILike: `like` on SQLite (case-blind for ASCII), `ilike` on PostgreSQL, so searches match alike.
+    if (query.actor) q.andWhere((w) => w.whereILike('u.name', `%${query.actor}%`).orWhereILike('u.email', `%${query.actor}%`));
+    if (query.action) q.andWhereILike('e.action', `${query.action}%`);
     if (query.entityType) q.andWhere('e.entity_type', query.entityType);
     if (query.entityId) q.andWhere('e.entity_id', query.entityId);
     if (query.from) q.andWhere('e.created_at', '>=', `${query.from}T00:00:00.000Z`);

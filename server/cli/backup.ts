@@ -4,6 +4,10 @@ import { backupDatabase } from '../db/backup';
 
 /** `npm run backup [-- <file>]`: an online, consistent copy of the database (default data/backups/…). */
 const env = loadEnv();
+if (env.DATABASE_URL) {
+  console.error('DATABASE_URL is set: back up PostgreSQL with its own tools (pg_dump), and copy DILUTRACE_FILES/certificates too.');
+  process.exit(2);
+}
 const stamp = new Date().toISOString().replace(/[:.]/g, '-');
 const destination = process.argv[2] ?? join(dirname(env.DILUTRACE_DB), 'backups', `dilutrace-${stamp}.sqlite`);
 try {

@@ -3,6 +3,10 @@ import { restoreDatabase } from '../db/backup';
 
 /** `npm run restore -- <backup file>`: replaces DILUTRACE_DB with the backup. Stop Dilutrace first. */
 const env = loadEnv();
+if (env.DATABASE_URL) {
+  console.error('DATABASE_URL is set: restore PostgreSQL with its own tools (pg_restore or psql).');
+  process.exit(2);
+}
 const backup = process.argv[2];
 if (!backup) {
   console.error('Name the backup file: npm run restore -- data/backups/dilutrace-….sqlite');

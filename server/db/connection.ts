@@ -5,13 +5,43 @@ import { migrationSource } from './migration-source';
 
 export type Db = Knex;
 
+export interface OpenOptions {
+  /** PostgreSQL only: the schema to work in, created if missing (the tests give each app its own). */
+  schema?: string;
+}
+
+/** True for a `postgres://` or `postgresql://` connection URL. */
+export const isPostgresUrl = (target: string) => /^postgres(ql)?:\/\//i.test(target);
+
+/** True when the database is PostgreSQL (otherwise it is the SQLite file). */
+export const isPostgres = (db: Db) => db.client.config.client === 'pg';
+
 /**
- * Opens the SQLite file (created if missing) with WAL journaling, foreign keys on and
- * synchronous=FULL, so an acknowledged commit survives a power cut, then applies pending migrations.
+ * Opens the database and applies pending migrations. A `postgres://` URL opens PostgreSQL through
+ * a pool of connections, so several app instances can share it (Knex's migration lock lets only one
+ * of them migrate at a time). Anything else is a SQLite file (created if missing), opened with WAL
+ * journaling, foreign keys on and synchronous=FULL, so an acknowledged commit survives a power cut,
+ * on a single connection.
  */
-export async function openDatabase(filename: string): Promise<Db> {
+export async function openDatabase(target: string, options: OpenOptions = {}): Promise<Db> {
+  const db = isPostgresUrl(target) ? openPostgres(target, options) : openSqlite(target);
+  if (options.schema) await db.raw('create schema if not exists ??', [options.schema]);
+  await db.migrate.latest({ migrationSource });
+  return db;
+}
+
+function openPostgres(url: string, options: OpenOptions): Db {
+  return knex({
+    client: 'pg',
+    connection: url,
+    searchPath: options.schema ? [options.schema] : undefined,
+    pool: { min: 0, max: 10 },
+  });
+}
+
+function openSqlite(filename: string): Db {
   if (filename !== ':memory:') mkdirSync(dirname(filename), { recursive: true });
-  const db = knex({
+  return knex({
     client: 'better-sqlite3',
     connection: { filename },
     useNullAsDefault: true,
@@ -31,6 +61,4 @@ export async function openDatabase(filename: string): Promise<Db> {
       },
     },
   });
-  await db.migrate.latest({ migrationSource });
-  return db;
 }

@@ -1,13 +1,13 @@
-import { certificateDir, loadEnv } from '../config/env';
+import { certificateDir, databaseName, databaseTarget, loadEnv } from '../config/env';
 import { openDatabase } from './connection';
 import { SeedRefusedError, seedDemoLab } from './seed-demo';
 
 /** `npm run seed`: seeds the demo lab into the configured database, only if it has no users. */
 const env = loadEnv();
-const db = await openDatabase(env.DILUTRACE_DB);
+const db = await openDatabase(databaseTarget(env));
 try {
-  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: new Date(), certificateDir: certificateDir(env.DILUTRACE_DB) });
-  console.log(`Demo lab seeded into ${env.DILUTRACE_DB}.`);
+  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: new Date(), certificateDir: certificateDir(env) });
+  console.log(`Demo lab seeded into ${databaseName(env)}.`);
 } catch (error) {
   if (!(error instanceof SeedRefusedError)) throw error;
   console.error(error.message);

@@ -1,7 +1,8 @@
 import { statSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { buildTestApp, type TestApp } from '../test-support/test-app';
+import { buildTestApp, countRows, type TestApp } from '../test-support/test-app';
+import { isPostgres } from './connection';
 import { DEMO_PEOPLE, SeedRefusedError, seedDemoLab } from './seed-demo';
 
 let t: TestApp;
@@ -15,13 +16,13 @@ describe('demo lab seed', () => {
     const emails = (await t.db('users').orderBy('id')).map((u: { email: string }) => u.email);
     expect(emails).toEqual(DEMO_PEOPLE.map((p) => `${p.local}@wellmere-water.example`));
     await expect(seedDemoLab(t.db, { password: 'another-password', now: new Date(), certificateDir: '/nonexistent' })).rejects.toBeInstanceOf(SeedRefusedError);
-    expect(await t.db('users').count({ n: '*' }).first()).toEqual({ n: DEMO_PEOPLE.length });
+    expect(await countRows(t.db('users'))).toBe(DEMO_PEOPLE.length);
   });
 
   it('fills the demo library: two balances, class A and B flasks, glass and piston pipettes, two materials with certificates', async () => {
     t = await buildTestApp();
     const kinds = Object.fromEntries(
-      ((await t.db('equipment_items').select('kind').count({ n: '*' }).groupBy('kind')) as { kind: string; n: number }[]).map((r) => [r.kind, r.n]),
+      ((await t.db('equipment_items').select('kind').count({ n: '*' }).groupBy('kind')) as { kind: string; n: number | string }[]).map((r) => [r.kind, Number(r.n)]),
     );
     expect(kinds).toEqual({ balance: 2, flask: 11, 'glass-pipette': 6, 'piston-pipette': 3, 'solid-material': 1, 'solution-material': 1 });
     const certificates = await t.db('certificates').select('stored_name', 'size_bytes');
@@ -36,6 +37,11 @@ describe('demo lab seed', () => {
     const { migrationSource } = await import('./migration-source');
     await t.db.migrate.rollback({ migrationSource }, true);
     expect(await t.db.schema.hasTable('users')).toBe(false);
+    // Nothing of the guards is left behind: SQLite's triggers, or PostgreSQL's trigger functions.
+    const leftovers = isPostgres(t.db)
+      ? t.db('pg_proc as p').join('pg_namespace as n', 'n.oid', 'p.pronamespace').whereRaw('n.nspname = current_schema()')
+      : t.db('sqlite_master').where({ type: 'trigger' });
+    expect(await countRows(leftovers)).toBe(0);
     await t.db.migrate.latest({ migrationSource });
     expect(await t.db.schema.hasTable('audit_events')).toBe(true);
   });

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { buildTestApp, demo, signIn, type Client, type TestApp } from '../test-support/test-app';
+import { buildTestApp, countRows, demo, signIn, type Client, type TestApp } from '../test-support/test-app';
 
 const fixtures = join(import.meta.dirname, '..', '..', 'tests', 'fixtures', 'library');
 
@@ -176,7 +176,7 @@ describe('certificates', () => {
       .set('x-csrf-token', qa.token)
       .attach('file', png, { filename: 'scan.txt', contentType: 'text/plain' })
       .expect(201);
-    expect(await t.db('certificates').where({ item_id: item.id }).count({ n: '*' }).first()).toEqual({ n: 1 });
+    expect(await countRows(t.db('certificates').where({ item_id: item.id }))).toBe(1);
   });
 
   it('refuses a file over the size limit', async () => {
@@ -200,11 +200,11 @@ describe('CSV import and export', () => {
       [3, 'create'],
       [4, 'create'],
     ]);
-    const countBefore = await t.db('equipment_items').count({ n: '*' }).first();
-    expect(await t.db('equipment_items').whereLike('code', 'VF-IMP-%').count({ n: '*' }).first()).toEqual({ n: 0 });
+    const countBefore = await countRows(t.db('equipment_items'));
+    expect(await countRows(t.db('equipment_items').whereLike('code', 'VF-IMP-%'))).toBe(0);
     const done = (await qa.post(url('/equipment-csv/import'), { kind: 'flask', csv, dryRun: false }).expect(200)).body;
     expect(done.written).toBe(true);
-    expect((await t.db('equipment_items').count({ n: '*' }).first())!.n).toBe(Number(countBefore!.n) + 3);
+    expect(await countRows(t.db('equipment_items'))).toBe(countBefore + 3);
     const exported = (await qa.get(url('/equipment-csv/export?kind=flask')).expect(200)).text;
     expect(exported.split('\n')[0]).toBe(csv.split('\n')[0]);
     expect(exported).toContain('VF-IMP-500B');
@@ -223,7 +223,7 @@ describe('CSV import and export', () => {
     expect(byLine[6]).toEqual(expect.arrayContaining(['nominal_ml', 'calibration_due_on']));
     const refused = await qa.post(url('/equipment-csv/import'), { kind: 'flask', csv, dryRun: false }).expect(400);
     expect(refused.body.error.code).toBe('import_rejected');
-    expect(await t.db('equipment_items').whereLike('code', 'VF-OK-%').count({ n: '*' }).first()).toEqual({ n: 0 });
+    expect(await countRows(t.db('equipment_items').whereLike('code', 'VF-OK-%'))).toBe(0);
   });
 
   it('reports unknown and missing columns against the header line', async () => {

@@ -1,9 +1,10 @@
+import { randomBytes } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { createApp } from '../app';
-import { openDatabase, type Db } from '../db/connection';
+import { isPostgres, openDatabase, type Db } from '../db/connection';
 import { demoEmail, seedDemoLab } from '../db/seed-demo';
 import type { Clock } from '../lib/clock';
 import { startCaptureServer, type CaptureServer } from '../mail/capture-server';
@@ -21,19 +22,29 @@ export function testClock(start = new Date('2026-12-02T09:00:00Z')): Clock & { a
 export interface TestApp {
   app: ReturnType<typeof createApp>['app'];
   db: Db;
+  /** The SQLite file (on PostgreSQL, a path in the test's folder that only places the certificates). */
   file: string;
   clock: ReturnType<typeof testClock>;
   close(): Promise<void>;
-  /** Builds a second app on the same database file, as after a server restart. */
+  /** Builds a second app on the same database, as after a server restart. */
   restart(): Promise<TestApp>;
 }
 
-/** A fresh SQLite file with the demo lab seeded, the local SMTP capture, and the app. */
-export async function buildTestApp(options: { file?: string; seed?: boolean; clock?: ReturnType<typeof testClock> } = {}): Promise<TestApp> {
+/** Set when the API tests run on PostgreSQL (`npm run test:postgres`); SQLite otherwise. */
+export const postgresUrl = process.env.DATABASE_URL;
+
+/**
+ * A fresh database with the demo lab seeded, the local SMTP capture, and the app: a new SQLite
+ * file, or with DATABASE_URL set a new schema of its own on that PostgreSQL (dropped on close).
+ */
+export async function buildTestApp(
+  options: { file?: string; schema?: string; seed?: boolean; clock?: ReturnType<typeof testClock> } = {},
+): Promise<TestApp> {
   const dir = options.file ? null : mkdtempSync(join(tmpdir(), 'dilutrace-test-'));
   const file = options.file ?? join(dir as string, 'test.sqlite');
+  const schema = postgresUrl ? (options.schema ?? `test_${randomBytes(8).toString('hex')}`) : undefined;
   const clock = options.clock ?? testClock();
-  const db = await openDatabase(file);
+  const db = postgresUrl ? await openDatabase(postgresUrl, { schema }) : await openDatabase(file);
   if (options.seed !== false) await seedDemoLab(db, { password: DEMO_PASSWORD, now: clock.now(), certificateDir: join(file, '..', 'certificates') });
   const capture: CaptureServer = await startCaptureServer(db, () => clock.now());
   const mailer: Mailer = createSmtpMailer(`smtp://127.0.0.1:${capture.port}`, 'Dilutrace <no-reply@dilutrace.test>');
@@ -43,11 +54,15 @@ export async function buildTestApp(options: { file?: string; seed?: boolean; clo
     clock,
     config: { certificateDir: join(file, '..', 'certificates'), sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined },
   });
-  const close = async () => {
+  const stop = async () => {
     await closeApp();
     mailer.close();
     await capture.close();
+  };
+  const dropDatabase = async () => {
+    if (schema) await db.raw('drop schema if exists ?? cascade', [schema]);
     await db.destroy();
+    if (dir) rmSync(dir, { recursive: true, force: true });
   };
   return {
     app,
@@ -55,17 +70,23 @@ export async function buildTestApp(options: { file?: string; seed?: boolean; clo
     file,
     clock,
     close: async () => {
-      await close();
-      if (dir) rmSync(dir, { recursive: true, force: true });
+      await stop();
+      await dropDatabase();
     },
     restart: async () => {
-      await close();
-      const next = await buildTestApp({ file, seed: false, clock });
-      return { ...next, close: async () => { await next.close(); if (dir) rmSync(dir, { recursive: true, force: true }); } };
+      await stop();
+      await db.destroy();
+      const next = await buildTestApp({ file, schema, seed: false, clock });
+      return {
+        ...next,
+        close: async () => {
+          await next.close();
+          if (dir) rmSync(dir, { recursive: true, force: true });
+        },
+      };
     },
   };
 }
-
 
 /** A cookie-keeping client with the session's CSRF token attached to every state-changing call. */
 export async function agentFor(app: TestApp['app']) {
@@ -105,4 +126,15 @@ export async function tokenFromOutbox(db: Db, to: string, prefix: '/invitation/'
   const match = mail?.text_body.match(new RegExp(`${prefix}([A-Za-z0-9_-]+)`));
   if (!match) throw new Error(`no ${prefix} mail to ${to}`);
   return match[1];
+}
+
+/** Drops a trigger the way someone with direct database access could (PostgreSQL names its table too). */
+export async function dropTrigger(db: Db, trigger: string, table: string): Promise<void> {
+  if (isPostgres(db)) await db.raw('drop trigger ?? on ??', [trigger, table]);
+  else await db.raw('drop trigger ??', [trigger]);
+}
+
+/** A table's row count as a number (PostgreSQL's count(*) is a bigint, which pg returns as a string). */
+export async function countRows(query: ReturnType<Db>): Promise<number> {
+  return Number((await query.count({ n: '*' }).first())?.n ?? 0);
 }

@@ -17,17 +17,32 @@ export const isPostgresUrl = (target: string) => /^postgres(ql)?:\/\//i.test(tar
 export const isPostgres = (db: Db) => db.client.config.client === 'pg';
 
 /**
- * Opens the database and applies pending migrations. A `postgres://` URL opens PostgreSQL through
- * a pool of connections, so several app instances can share it (Knex's migration lock lets only one
- * of them migrate at a time). Anything else is a SQLite file (created if missing), opened with WAL
- * journaling, foreign keys on and synchronous=FULL, so an acknowledged commit survives a power cut,
- * on a single connection.
+ * Opens the database and applies pending migrations. A `postgres://` URL opens PostgreSQL through a
+ * pool of connections, so several app instances can share it (one migrates at a time). Anything
+ * else is a SQLite file (created if missing), opened with WAL journaling, foreign keys on and
+ * synchronous=FULL, so an acknowledged commit survives a power cut, on a single connection.
  */
 export async function openDatabase(target: string, options: OpenOptions = {}): Promise<Db> {
   const db = isPostgresUrl(target) ? openPostgres(target, options) : openSqlite(target);
-  if (options.schema) await db.raw('create schema if not exists ??', [options.schema]);
-  await db.migrate.latest({ migrationSource });
+  await migrate(db, options.schema);
   return db;
+}
+
+/**
+ * Applies pending migrations (creating the schema first, if one is named). On PostgreSQL, instances
+ * starting together take turns under an advisory lock: Knex makes its own lock table on the first
+ * run, and two runs making it at once leave two lock rows, after which Knex never migrates again.
+ */
+async function migrate(db: Db, schema: string | undefined): Promise<void> {
+  if (!isPostgres(db)) {
+    await db.migrate.latest({ migrationSource });
+    return;
+  }
+  await db.transaction(async (trx) => {
+    await trx.raw('select pg_advisory_xact_lock(hashtext(?))', [`dilutrace migrations ${schema ?? ''}`]);
+    if (schema) await db.raw('create schema if not exists ??', [schema]);
+    await db.migrate.latest({ migrationSource });
+  });
 }
 
 function openPostgres(url: string, options: OpenOptions): Db {

@@ -1,12 +1,18 @@
-import type { QueryClient } from '@tanstack/react-query';
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import type { PreparationStatus } from '../../../../shared/contracts/preparations';
 import { Alert } from '../../../components/ui/alert';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
 import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
 import { preparationQueryOptions, usePreparation } from '../../../features/preparations/api/get-preparation';
 import { BenchSheet } from '../../../features/preparations/components/bench-sheet';
-import { activeMembership } from '../../../lib/authorization';
+import { ReadingsForm } from '../../../features/preparations/components/readings-form';
+import { recordsKeys } from '../../../features/records/api/records-keys';
+import { activeMembership, can } from '../../../lib/authorization';
+
+/** The states whose readings the owner may record or correct (the server says the same). */
+const READINGS_OPEN: readonly PreparationStatus[] = ['draft', 'returned', 'prepared'];
 
 const idFrom = (value: string | undefined) => {
   const id = Number(value);
@@ -39,19 +45,32 @@ export function Component() {
       </Alert>
     );
   }
-  return <BenchSheetPage labId={membership.id} preparationId={id} />;
+  return <BenchSheetPage labId={membership.id} preparationId={id} userId={me.user.id} planner={can(membership.roles, 'planPreparations')} />;
 }
 
-function BenchSheetPage({ labId, preparationId }: { labId: number; preparationId: number }) {
+function BenchSheetPage({ labId, preparationId, userId, planner }: { labId: number; preparationId: number; userId: number; planner: boolean }) {
+  const queryClient = useQueryClient();
   const detail = usePreparation(labId, preparationId);
   const library = useLabEquipment(labId);
+  const version = detail.current;
+  const recordsReadings = planner && detail.createdById === userId && READINGS_OPEN.includes(version.status);
   return (
     <>
       <title>{`Bench sheet · ${detail.title} · Dilutrace`}</title>
-      <p className="mb-3 print:hidden">
+      <p className="mb-3 flex flex-wrap justify-between gap-4 print:hidden">
         <Link to={paths.app.preparation.href(detail.id)}>← Back to the workspace</Link>
+        {recordsReadings ? <a href="#record-readings-heading">{version.readings ? 'Correct the readings' : 'Record the readings'} after preparing ↓</a> : null}
       </p>
       <BenchSheet detail={detail} library={library} />
+      {recordsReadings ? (
+        <ReadingsForm
+          labId={labId}
+          detail={detail}
+          recordHref={paths.app.record.href(detail.id, version.number)}
+          // The record page keeps its own copy of the preparation and its versions.
+          onRecorded={() => queryClient.invalidateQueries({ queryKey: recordsKeys.preparation(labId, detail.id) })}
+        />
+      ) : null}
     </>
   );
 }

@@ -18,6 +18,8 @@ import { useStartNewVersion } from '../../../features/preparations/api/start-new
 import { Workspace, writeOf } from '../../../features/preparations/components/workspace';
 import { WorkspaceHeader } from '../../../features/preparations/components/workspace-header';
 import { draftFromPlan, type PlanDraft } from '../../../features/preparations/utils/plan-draft';
+import { BenchReadings } from '../../../features/records/components/bench-readings';
+import { stepNamer } from '../../../features/records/utils/step-names';
 import { activeMembership, can } from '../../../lib/authorization';
 
 const idFrom = (value: string | undefined) => {
@@ -68,7 +70,7 @@ function PreparationPage({ labId, preparationId, userId, planner }: { labId: num
   const library = useLabEquipment(labId);
   const policy = useLabPolicy(labId);
   // A new version or another preparation starts the workspace afresh from the server's plan.
-  return <PreparationWorkspace key={`${detail.id}-${detail.current.number}`} labId={labId} detail={detail} library={library} policy={policy} userId={userId} planner={planner} />;
+  return <PreparationWorkspace key={`${detail.id}-${detail.current.number}-${detail.current.status}`} labId={labId} detail={detail} library={library} policy={policy} userId={userId} planner={planner} />;
 }
 
 type PreparationWorkspaceProps = { labId: number; detail: PreparationDetail; library: EquipmentItem[]; policy: LabPolicy; userId: number; planner: boolean };
@@ -98,15 +100,30 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
   const failure = duplicate.error ?? newVersion.error;
   const note = failure ? (
     <Alert tone="danger">{failure.message}</Alert>
+  ) : version.status === 'prepared' ? (
+    <Alert tone="info" title={`Version ${version.number} has been prepared`}>
+      <p>
+        The masses weighed at the bench are recorded and the result below is computed on them, so the plan no longer changes.
+        {planner && owner ? ' Until it is submitted for review you can still correct the readings.' : ''}
+      </p>
+      {planner && owner ? (
+        <p className="mt-1 flex flex-wrap gap-x-4">
+          <Link to={paths.app.benchSheet.href(detail.id)}>Correct the readings on the bench sheet</Link>
+          <Link to={paths.app.record.href(detail.id, version.number)}>Submit it for review from the record page</Link>
+        </p>
+      ) : null}
+    </Alert>
   ) : !editable ? (
     <Alert tone="info">
       {!version.editable
-        ? `Version ${version.number} is ${version.status} and cannot change.${planner ? ' Start a new version to change the plan.' : ''}`
+        ? `Version ${version.number} is ${version.status} and cannot change.${planner && version.status === 'approved' ? ' Start a new version to change the plan.' : ''}`
         : planner
           ? `Only ${detail.createdBy} can change this draft. Duplicate it to make your own variant.`
           : 'You can read this preparation; analysts plan and change preparations.'}
     </Alert>
   ) : null;
+  const readings =
+    version.readings && version.snapshot ? <BenchReadings readings={version.readings} stepName={stepNamer(version.snapshot.plan, version.snapshot.items)} plan={version.snapshot.plan} /> : null;
 
   return (
     <>
@@ -118,6 +135,7 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
         policy={policy}
         editable={editable}
         stored={stored}
+        readings={readings}
         save={(write) => saveDraft(labId, detail.id, version.number, write)}
         onSaved={(saved) => {
           // Whoever opens this preparation next (the list, the bench sheet, this page again) reads what was saved.
@@ -151,7 +169,8 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
                     Duplicate as a variant
                   </Button>
                 ) : null}
-                {planner && !version.editable ? (
+                {/* The server opens a new version only from an approved one: a prepared or submitted one is still on its way. */}
+                {planner && version.status === 'approved' ? (
                   <Button pending={newVersion.isPending} pendingLabel="Starting…" onClick={() => newVersion.mutate()}>
                     Start a new version
                   </Button>

@@ -142,7 +142,7 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
         <div className="grid items-start gap-6 lg:grid-cols-[1fr_22rem]">
           <div className="flex min-w-0 flex-col gap-8">
             {snapshot ? <BudgetSummary budget={snapshot.budget} stepName={stepName} /> : null}
-            {snapshot && version.readings ? <BenchReadings readings={version.readings} stepName={stepName} /> : null}
+            {snapshot && version.readings ? <BenchReadings readings={version.readings} stepName={stepName} plan={snapshot.plan} /> : null}
             {snapshot ? <EquipmentUsed items={snapshot.items} /> : null}
             <ReviewTrail reviews={version.reviews} />
           </div>

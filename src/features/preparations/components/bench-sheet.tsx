@@ -1,7 +1,9 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
 import { Button } from '../../../components/ui/button';
+import { plannedPlan } from '../utils/bench-readings';
 import { benchSheetLines, type BenchLine } from '../utils/bench-sheet-lines';
+import { STATUS_WORDS } from '../utils/status-words';
 import { hazardNotesOf } from '../utils/equipment-labels';
 import { HazardNotes } from './hazard-notes';
 
@@ -40,7 +42,8 @@ type BenchSheetProps = { detail: PreparationDetail; library: EquipmentItem[] };
 /** The printable sheet the analyst takes to the bench: steps in order, equipment IDs, targets, hazards, blanks for readings. */
 export function BenchSheet({ detail, library }: BenchSheetProps) {
   const version = detail.current;
-  const plan = version.snapshot?.plan ?? version.plan;
+  // Once the readings are in, the plan holds the masses weighed; the sheet still prints what was planned.
+  const plan = plannedPlan(version.snapshot?.plan ?? version.plan, version.readings);
   const settings = (plan.settings ?? {}) as { labTemperatureC?: number };
   const lines = benchSheetLines(plan, settings.labTemperatureC ?? 20);
   const hazards = new Map<string, string>();
@@ -57,9 +60,13 @@ export function BenchSheet({ detail, library }: BenchSheetProps) {
           <p className="text-sm font-semibold tracking-wide text-muted uppercase">Bench sheet</p>
           <h1 className="text-2xl font-bold">{detail.title}</h1>
           <p className="text-sm">
-            Preparation {detail.id}, version {version.number} ({version.status}) · planned by {detail.createdBy}
+            Preparation {detail.id}, version {version.number} ({STATUS_WORDS[version.status].toLowerCase()}) · planned by {detail.createdBy}
           </p>
-          {version.resultStatement ? <p className="mt-1 font-semibold">Planned result: {version.resultStatement}</p> : null}
+          {version.resultStatement ? (
+            <p className="mt-1 font-semibold">
+              {version.readings ? 'Result on the masses weighed' : 'Planned result'}: {version.resultStatement}
+            </p>
+          ) : null}
           {version.problem ? <p className="mt-1 font-semibold text-danger">The plan is not complete: {version.problem.message}</p> : null}
         </div>
         <div className="print:hidden">

@@ -1,14 +1,12 @@
-import type { PreparationStatus } from '../../../../shared/contracts/preparations';
+import { PREPARATION_STATUSES, type PreparationStatus } from '../../../../shared/contracts/preparations';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import type { PreparationListFilter } from '../api/get-preparations';
+import { STATUS_WORDS } from '../utils/status-words';
 
 const STATUS_OPTIONS: { value: '' | PreparationStatus; label: string }[] = [
   { value: '', label: 'Any status' },
-  { value: 'draft', label: 'Draft' },
-  { value: 'submitted', label: 'Submitted' },
-  { value: 'approved', label: 'Approved' },
-  { value: 'returned', label: 'Returned' },
+  ...PREPARATION_STATUSES.map((status) => ({ value: status, label: STATUS_WORDS[status] })),
 ];
 
 type PreparationsFiltersProps = {

@@ -1,13 +1,9 @@
 import type { PreparationStatus } from '../../../../shared/contracts/preparations';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
+import { STATUS_WORDS } from '../utils/status-words';
 
-const STATUS: Record<PreparationStatus, { label: string; tone: BadgeTone }> = {
-  draft: { label: 'Draft', tone: 'neutral' },
-  submitted: { label: 'Submitted', tone: 'accent' },
-  approved: { label: 'Approved', tone: 'ok' },
-  returned: { label: 'Returned', tone: 'caution' },
-};
+const TONES: Record<PreparationStatus, BadgeTone> = { draft: 'neutral', prepared: 'accent', submitted: 'accent', approved: 'ok', returned: 'caution' };
 
 export function StatusBadge({ status }: { status: PreparationStatus }) {
-  return <Badge tone={STATUS[status].tone}>{STATUS[status].label}</Badge>;
+  return <Badge tone={TONES[status]}>{STATUS_WORDS[status]}</Badge>;
 }

@@ -32,6 +32,8 @@ type WorkspaceProps = {
   onSaved?: (detail: PreparationDetail, draft: PlanDraft, savedKey: string) => void;
   /** The page header, given the save-state line and the current draft. */
   header: (saveLine: ReactNode, draft: PlanDraft) => ReactNode;
+  /** What was weighed at the bench, shown above the budget of a prepared version. */
+  readings?: ReactNode;
 };
 
 /**
@@ -56,7 +58,7 @@ export function writeOf(draft: PlanDraft, library: Map<string, EquipmentItem>): 
  * The analyst's workspace: the plan editor with the live GUM budget beside it (recomputed on every change
  * with the shared engine and the lab policy), the budget table, charts, Monte Carlo in a worker and autosave.
  */
-export function Workspace({ initialDraft, savedKey, library, policy, editable, stored, save, onSaved, header }: WorkspaceProps) {
+export function Workspace({ initialDraft, savedKey, library, policy, editable, stored, save, onSaved, header, readings }: WorkspaceProps) {
   const [draft, setDraft] = useState(initialDraft);
   const libraryById = useMemo(() => new Map(library.map((item) => [String(item.id), item])), [library]);
   // VF-25-A before VF-100-A: codes in natural order.
@@ -131,7 +133,7 @@ export function Workspace({ initialDraft, savedKey, library, policy, editable, s
               <p className="mb-2 text-sm font-semibold text-danger">Last valid result, shown until the marked field is fixed.</p>
             ) : null}
             {budget ? <ResultStatement budget={budget} /> : <p className="text-muted">The budget appears as soon as the plan is complete.</p>}
-            {stored ? <p className="mt-2 text-sm text-muted">As stored when this version was computed.</p> : null}
+            {stored ? <p className="mt-2 text-sm text-muted">As stored when this version was computed{readings ? ', on the masses weighed' : ''}.</p> : null}
           </section>
           {warnings.filter((warning) => warning.stepIndex === null).length > 0 ? (
             <ul className="mt-3 space-y-1">
@@ -153,6 +155,8 @@ export function Workspace({ initialDraft, savedKey, library, policy, editable, s
           ) : null}
         </aside>
       </div>
+
+      {readings ? <div className="mt-10">{readings}</div> : null}
 
       {budget ? (
         <section aria-labelledby="budget-heading" className={`mt-10 ${stale ? 'opacity-60' : ''}`}>

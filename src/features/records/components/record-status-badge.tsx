@@ -3,7 +3,7 @@ import { Badge, type BadgeTone } from '../../../components/ui/badge';
 
 const STATUS: Record<PreparationStatus, { label: string; tone: BadgeTone }> = {
   draft: { label: 'Draft', tone: 'neutral' },
-  prepared: { label: 'Prepared at the bench', tone: 'neutral' },
+  prepared: { label: 'Prepared (readings recorded)', tone: 'neutral' },
   submitted: { label: 'Waiting for review', tone: 'accent' },
   approved: { label: 'Approved', tone: 'ok' },
   returned: { label: 'Returned with comments', tone: 'caution' },

@@ -3,7 +3,7 @@ import type { VersionSummary } from '../../../../shared/contracts/preparations';
 
 const STATUS_WORDS: Record<VersionSummary['status'], string> = {
   draft: 'draft',
-  prepared: 'prepared',
+  prepared: 'prepared (readings recorded)',
   submitted: 'waiting for review',
   approved: 'approved',
   returned: 'returned',

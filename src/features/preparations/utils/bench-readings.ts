@@ -1,0 +1,159 @@
+import { readingsRequestSchema, type ReadingsRequest, type RecordedReadings } from '../../../../shared/contracts/preparations';
+import { formatToReadability } from './format-number';
+import { parseDecimal } from './parse-decimal';
+
+type Recorded = RecordedReadings['readings'][number];
+type Item = Record<string, unknown>;
+
+/** The mass a reading replaces, per kind of weighing step (the server's list: steps of other kinds take no reading). */
+const MASS_FIELDS: Record<string, Recorded['field']> = {
+  weighSolid: 'netMassG',
+  weighAliquot: 'netMassG',
+  makeUpToMass: 'finalMassG',
+  dissolveInSolvent: 'solventMassG',
+};
+
+/** One weighing of the plan as the readings form shows it. */
+export type WeighingRow = {
+  stepIndex: number;
+  /** What goes on the balance, in a few words: "On BAL-05: Lead(II) nitrate". */
+  what: string;
+  field: Recorded['field'];
+  /** The mass planned, before any reading replaced it. */
+  plannedG: number;
+  /** The planned mass as the balance shows it ("0.15990"), or as stored when the balance has no readability. */
+  plannedText: string;
+  /** The balance's scale interval d (g), when the plan gives it. */
+  readabilityG: number | null;
+  /** What was recorded for this step last time, if anything. */
+  recorded: Recorded | null;
+};
+
+/** A mass as the balance shows it (to its readability), or as stored when the readability is not known. */
+const asShown = (massG: number, readabilityG: number | null) => (readabilityG === null ? String(massG) : formatToReadability(massG, readabilityG));
+
+const text = (value: unknown) => (typeof value === 'string' ? value : '');
+
+function whatIsWeighed(step: Item): string {
+  const balance = text((step.balance as Item | undefined)?.itemId) || 'the balance';
+  const material = (step.material ?? {}) as Item;
+  switch (step.kind) {
+    case 'weighSolid':
+      return `On ${balance}: ${text(material.name) || 'the solid'}`;
+    case 'weighAliquot':
+      return `On ${balance}: aliquot of the solution`;
+    case 'makeUpToMass':
+      return `On ${balance}: solution made up to mass`;
+    default:
+      return `On ${balance}: solvent`;
+  }
+}
+
+/**
+ * The weighing steps of a computed plan (inline equipment), each with its planned mass to the balance's readability.
+ * Once readings are recorded the plan holds the masses weighed, so the planned mass is read back from the readings.
+ */
+export function weighingRows(plan: Record<string, unknown>, readings: RecordedReadings | null): WeighingRow[] {
+  const steps = (Array.isArray(plan.steps) ? plan.steps : []) as Item[];
+  return steps.flatMap((step, stepIndex) => {
+    const field = MASS_FIELDS[String(step.kind)];
+    if (!field) return [];
+    const recorded = readings?.readings.find((reading) => reading.stepIndex === stepIndex) ?? null;
+    const plannedG = recorded?.plannedG ?? Number(step[field]);
+    const d = Number((step.balance as Item | undefined)?.readabilityG);
+    const readabilityG = Number.isFinite(d) && d > 0 ? d : null;
+    const plannedText = asShown(plannedG, readabilityG);
+    return [{ stepIndex, what: whatIsWeighed(step), field, plannedG, plannedText, readabilityG, recorded }];
+  });
+}
+
+/** The plan with each recorded step's planned mass put back, for a bench sheet that prints what was planned. */
+export function plannedPlan(plan: Record<string, unknown>, readings: RecordedReadings | null): Record<string, unknown> {
+  if (!readings || !Array.isArray(plan.steps)) return plan;
+  const steps = (plan.steps as Item[]).map((step, stepIndex) => {
+    const recorded = readings.readings.find((reading) => reading.stepIndex === stepIndex);
+    return recorded ? { ...step, [recorded.field]: recorded.plannedG } : step;
+  });
+  return { ...plan, steps };
+}
+
+/** Digits after the decimal mark as typed: "12.18577" → 5, "12,1" → 1, "12" → 0. */
+function decimalsTyped(typed: string): number {
+  const match = /[.,](\d+)$/.exec(typed.trim());
+  return match ? match[1].length : 0;
+}
+
+/**
+ * Net = gross − tare, to as many decimals as the more precise of the two was typed with, so that the
+ * binary floating-point remainder never shows: tare "12.18577", gross "12.34567" → "0.15990".
+ * Null while either is empty or not a number, or when the gross is not above the tare.
+ *
+ * @example netFromGrossAndTare('12.18577', '12.34567') // "0.15990"
+ */
+export function netFromGrossAndTare(tareText: string, grossText: string): string | null {
+  const tareG = parseDecimal(tareText);
+  const grossG = parseDecimal(grossText);
+  if (tareG === null || grossG === null || Number.isNaN(tareG) || Number.isNaN(grossG) || grossG <= tareG) return null;
+  if (/e/i.test(tareText) || /e/i.test(grossText)) return String(Number((grossG - tareG).toPrecision(12)));
+  return (grossG - tareG).toFixed(Math.max(decimalsTyped(tareText), decimalsTyped(grossText)));
+}
+
+/** What the analyst typed for one weighing. */
+export type TypedReading = { tare: string; gross: string; net: string };
+
+/** The typed values of a row: the recorded ones as the balance showed them when correcting, blanks otherwise. */
+export function typedFromRecorded(row: WeighingRow): TypedReading {
+  const recorded = row.recorded;
+  if (!recorded) return { tare: '', gross: '', net: '' };
+  const shown = (massG: number | null) => (massG === null ? '' : asShown(massG, row.readabilityG));
+  return { tare: shown(recorded.tareG), gross: shown(recorded.grossG), net: shown(recorded.actualG) };
+}
+
+/** Form errors keyed by the request's own paths ("readings.0.actualMassG", "deviations"), as the server names them too. */
+export type ReadingErrors = Record<string, string>;
+
+const NOT_A_NUMBER = 'Enter the mass as a number, e.g. 0.15990.';
+
+/**
+ * The readings request for the typed rows (in the order of `rows`), checked with the shared schema,
+ * or the errors to show on the fields.
+ */
+export function readingsRequest(rows: WeighingRow[], typed: TypedReading[], deviations: string): { request: ReadingsRequest; errors: null } | { request: null; errors: ReadingErrors } {
+  const errors: ReadingErrors = {};
+  const readings = rows.map((row, index) => {
+    const tareG = parseDecimal(typed[index]?.tare ?? '');
+    const grossG = parseDecimal(typed[index]?.gross ?? '');
+    const netG = parseDecimal(typed[index]?.net ?? '');
+    if (Number.isNaN(tareG)) errors[`readings.${index}.tareG`] = NOT_A_NUMBER;
+    else if (tareG !== null && tareG < 0) errors[`readings.${index}.tareG`] = 'The tare cannot be negative.';
+    if (Number.isNaN(grossG)) errors[`readings.${index}.grossG`] = NOT_A_NUMBER;
+    else if (grossG !== null && tareG !== null && !Number.isNaN(tareG) && grossG <= tareG) errors[`readings.${index}.grossG`] = 'The gross must be more than the tare.';
+    if (netG === null) errors[`readings.${index}.actualMassG`] = 'Enter the net mass weighed, or the tare and gross.';
+    else if (Number.isNaN(netG)) errors[`readings.${index}.actualMassG`] = NOT_A_NUMBER;
+    return { stepIndex: row.stepIndex, actualMassG: netG ?? Number.NaN, ...(tareG === null ? {} : { tareG }), ...(grossG === null ? {} : { grossG }) };
+  });
+  if (Object.keys(errors).length > 0) return { request: null, errors };
+  const parsed = readingsRequestSchema.safeParse({ readings, deviations });
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) errors[issue.path.join('.')] ??= issue.message;
+    return { request: null, errors };
+  }
+  return { request: parsed.data, errors: null };
+}
+
+/**
+ * Where a refused request's problems go on the form: field issues by their path; a plan the readings made
+ * uncomputable ("plan.steps.0.netMassG") on the net mass of that step's row. Issues with no field are returned apart.
+ */
+export function placeServerIssues(rows: WeighingRow[], issues: { path: string; message: string }[]): { errors: ReadingErrors; unplaced: string[] } {
+  const errors: ReadingErrors = {};
+  const unplaced: string[] = [];
+  for (const issue of issues) {
+    const planStep = /^plan\.steps\.(\d+)\./.exec(issue.path);
+    const rowIndex = planStep ? rows.findIndex((row) => row.stepIndex === Number(planStep[1])) : -1;
+    const path = rowIndex >= 0 ? `readings.${rowIndex}.actualMassG` : issue.path.replace(/^readings\.(\d+)\.stepIndex$/, 'readings.$1.actualMassG');
+    if (/^readings\.\d+\.(tareG|grossG|actualMassG)$/.test(path) || path === 'deviations') errors[path] ??= issue.message;
+    else unplaced.push(issue.message);
+  }
+  return { errors, unplaced };
+}

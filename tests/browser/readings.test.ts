@@ -158,6 +158,8 @@ describe('the analyst records what was weighed at the bench', () => {
     await expect(page.getByRole('link', { name: 'Submit it for review from the record page' }).getAttribute('href')).resolves.toBe(`/records/${created.id}/v/1`);
     await expect(page.getByRole('table', { name: 'Masses weighed beside the planned masses' }).count()).resolves.toBe(1);
     await screenshot(page, 'readings-workspace');
+    await page.getByRole('heading', { name: 'Planned and actual' }).scrollIntoViewIfNeeded();
+    await screenshot(page, 'readings-workspace-table');
 
     await page.goto(`${server.baseUrl}/preparations`);
     await page.getByLabel('Status').selectOption({ label: 'Prepared (readings recorded)' });

@@ -31,6 +31,8 @@ describe.runIf(!process.env.DATABASE_URL)('a SIGKILL in the middle of writes los
       const flask = library.get('VF-100-A')!;
       const analyst = await httpClient(server.url);
       await analyst.signIn('analyst@wellmere-water.example', PASSWORD);
+      // Warm the compute worker so preparations are acknowledged during the burst, not only items.
+      expect((await analyst.request('POST', `/api/labs/${activeLabId}/preparations`, { title: `WARM-${run}`, plan: leadPlan(library) })).status).toBe(201);
       let killed = false;
       const writes = Array.from({ length: 400 }, async (_, i) => {
         const code = `CRASH-${run}-${i}`;
@@ -47,7 +49,9 @@ describe.runIf(!process.env.DATABASE_URL)('a SIGKILL in the middle of writes los
         }
       });
       // Kill once the burst is well under way.
-      while (acknowledged.filter((c) => c.startsWith(`CRASH-${run}-`)).length < 20) await new Promise((r) => setTimeout(r, 5));
+      const deadline = Date.now() + 20_000;
+      const ackedThisRun = (list: string[]) => list.filter((c) => c.startsWith(`CRASH-${run}-`)).length;
+      while ((ackedThisRun(acknowledged) < 20 || ackedThisRun(acknowledgedPlans) < 3) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 5));
       server.process.kill('SIGKILL');
       killed = true;
       await Promise.allSettled(writes);

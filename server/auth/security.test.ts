@@ -41,7 +41,7 @@ describe('web security', () => {
     expect(csp).toContain("script-src 'self'");
     expect(csp).toContain("object-src 'none'");
     expect(csp).toContain("frame-ancestors 'none'");
-    expect(csp).not.toMatch(/unsafe-eval|script-src[^;]*unsafe-inline/);
+    expect(csp).not.toMatch(/unsafe-eval|unsafe-inline/);
     expect(res.headers['x-powered-by']).toBeUndefined();
     expect(res.headers['x-content-type-options']).toBe('nosniff');
   });

@@ -12,7 +12,7 @@ import { applyApiError } from '../../../lib/form-errors';
 import { useCreateEquipment } from '../api/create-equipment';
 import { useReviseEquipment } from '../api/revise-equipment';
 import { formFieldPaths } from '../utils/form-field-paths';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 /** What every item form holds: the kind's data and, when editing, the reason for the new revision. */
 export type EquipmentFormValues = { data: Record<string, unknown>; reason: string };

@@ -1,7 +1,7 @@
 import { useFormContext } from 'react-hook-form';
 import { TextField } from '../../../components/ui/text-field';
 import { EMPTY_AS_NULL } from './form-registrations';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 type MaterialValues = {
   data: { code: string; name: string; description?: string; lot: string; supplier?: string; certificateReference?: string; expiresOn: string; hazardNotes?: string };

@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { isApiError } from '../../../lib/api-error';
 import { useRetireEquipment } from '../api/retire-equipment';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 /** Retires the item after asking why; it leaves the lists of items in use, its record stays. */
 export function RetireItemButton({ labId, item }: { labId: number; item: EquipmentDetail }) {

@@ -10,7 +10,7 @@ import { applyApiError } from '../../../lib/form-errors';
 import { useApproveVersion } from '../api/approve-version';
 import type { OnReviewed, VersionReference } from '../api/review-version-input';
 import { FormDialog } from './form-dialog';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 type ApproveValues = z.input<typeof approveRequestSchema>;
 

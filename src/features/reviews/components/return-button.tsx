@@ -9,7 +9,7 @@ import { applyApiError } from '../../../lib/form-errors';
 import type { OnReviewed, VersionReference } from '../api/review-version-input';
 import { useReturnVersion } from '../api/return-version';
 import { FormDialog } from './form-dialog';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 /** QA's "Return with comments": the version goes back to its analyst, who sees the comments on the record. */
 export function ReturnButton({ version, onReviewed }: { version: VersionReference; onReviewed: OnReviewed }) {

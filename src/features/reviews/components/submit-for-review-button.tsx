@@ -9,7 +9,7 @@ import { applyApiError } from '../../../lib/form-errors';
 import { useSubmitVersion } from '../api/submit-version';
 import type { OnReviewed, VersionReference } from '../api/review-version-input';
 import { FormDialog } from './form-dialog';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 /** The analyst's "Submit for review", with an optional note to the reviewer. */
 export function SubmitForReviewButton({ version, onReviewed }: { version: VersionReference; onReviewed: OnReviewed }) {

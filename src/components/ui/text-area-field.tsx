@@ -1,5 +1,5 @@
 import { useId, type Ref, type TextareaHTMLAttributes } from 'react';
-import { describedBy, FieldMessages } from '../../../components/ui/field-message';
+import { describedBy, FieldMessages } from './field-message';
 
 type TextAreaFieldProps = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; hint?: string; error?: string; ref?: Ref<HTMLTextAreaElement> };
 

@@ -1,5 +1,6 @@
 import type { Role } from '../../shared/contracts/roles';
 import type { Db } from '../db/connection';
+import { insertedId } from '../db/inserted-id';
 
 export interface UserRow {
   id: number;
@@ -24,7 +25,7 @@ export function usersRepository(db: Db) {
       const [row] = await trx('users')
         .insert({ email: user.email.toLowerCase(), name: user.name, password_hash: user.passwordHash, active: true, created_at: user.createdAt })
         .returning('id');
-      return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+      return insertedId(row);
     },
     setPassword: (id: number, passwordHash: string, trx: Db = db) => trx('users').where({ id }).update({ password_hash: passwordHash }),
     setActive: (id: number, active: boolean, trx: Db = db) => trx('users').where({ id }).update({ active }),

@@ -2,6 +2,7 @@ import type { Role } from '../../shared/contracts/roles';
 import { hashPassword } from '../auth/password';
 import type { Db } from './connection';
 import { seedDemoLibrary } from './seed-demo-library';
+import { insertedId } from './inserted-id';
 
 /** The invented demo lab (DESIGN.md §7). All names are made up. */
 export const DEMO_LAB = { name: 'Wellmere Regional Water Laboratory', slug: 'wellmere-water', domain: 'wellmere-water.example' };
@@ -26,13 +27,13 @@ export async function seedDemoLab(db: Db, options: { password: string; now: Date
     const users = Number((await trx('users').count({ n: '*' }).first())?.n ?? 0);
     if (users > 0) throw new SeedRefusedError('The database already has users; the demo lab is only seeded into an empty database.');
     const [lab] = await trx('labs').insert({ name: DEMO_LAB.name, slug: DEMO_LAB.slug, created_at: at }).returning('id');
-    const labId = typeof lab === 'object' ? (lab as { id: number }).id : (lab as number);
+    const labId = insertedId(lab);
     const ids: Record<string, number> = {};
     for (const person of DEMO_PEOPLE) {
       const [user] = await trx('users')
         .insert({ email: demoEmail(person.local), name: person.name, password_hash: passwordHash, active: true, created_at: at })
         .returning('id');
-      const userId = typeof user === 'object' ? (user as { id: number }).id : (user as number);
+      const userId = insertedId(user);
       ids[person.local] = userId;
       for (const role of person.roles) await trx('memberships').insert({ user_id: userId, lab_id: labId, role, created_at: at });
     }

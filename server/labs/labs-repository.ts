@@ -1,5 +1,6 @@
 import type { Role } from '../../shared/contracts/roles';
 import type { Db } from '../db/connection';
+import { insertedId } from '../db/inserted-id';
 
 export interface MemberRow {
   user_id: number;
@@ -15,7 +16,7 @@ export function labsRepository(db: Db) {
     findById: (id: number): Promise<{ id: number; name: string; slug: string } | undefined> => db('labs').where({ id }).first(),
     async insert(lab: { name: string; slug: string; createdAt: string }, trx: Db = db): Promise<number> {
       const [row] = await trx('labs').insert({ name: lab.name, slug: lab.slug, created_at: lab.createdAt }).returning('id');
-      return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+      return insertedId(row);
     },
     rolesOf: async (userId: number, labId: number): Promise<Role[]> =>
       (await db('memberships').where({ user_id: userId, lab_id: labId }).select('role')).map((row: { role: Role }) => row.role),

@@ -5,8 +5,7 @@ import { AppError } from '../lib/errors';
 import { columnFor, parseLibraryCsv } from './csv-io';
 import type { LibraryRepository } from './library-repository';
 import type { LibraryService } from './library-service';
-
-const stable = (value: unknown) => JSON.stringify(value, (_k, v) => (v && typeof v === 'object' && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort()) : v));
+import { canonicalJson } from '../lib/canonical-json';
 
 /**
  * CSV import: every row is checked first and reported with its line number; only a file with no
@@ -51,7 +50,7 @@ export function importService(deps: { db: Db; library: LibraryRepository; items:
           else if (existing) {
             itemId = existing.id;
             const current = await library.revision(existing.current_revision_id);
-            action = current && stable(JSON.parse(current.data_json)) === stable(parsed.data) ? 'unchanged' : 'revise';
+            action = current && canonicalJson(JSON.parse(current.data_json)) === canonicalJson(parsed.data) ? 'unchanged' : 'revise';
           }
         }
         if (errors.length > 0) action = 'error';

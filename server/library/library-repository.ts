@@ -1,5 +1,6 @@
 import type { EquipmentKind } from '../../shared/contracts/library';
 import type { Db } from '../db/connection';
+import { insertedId } from '../db/inserted-id';
 
 export interface ItemRow {
   id: number;
@@ -38,8 +39,6 @@ export interface CertificateRow {
   uploaded_at: string;
 }
 
-const idOf = (row: unknown) => (typeof row === 'object' && row !== null ? (row as { id: number }).id : (row as number));
-
 export function libraryRepository(db: Db) {
   const revisions = (trx: Db = db) =>
     trx('equipment_revisions as r').join('users as u', 'u.id', 'r.created_by').select('r.*', 'u.name as created_by_name');
@@ -65,7 +64,7 @@ export function libraryRepository(db: Db) {
       const [inserted] = await trx('equipment_items')
         .insert({ lab_id: row.labId, kind: row.kind, code: row.code, status: 'active', created_at: row.createdAt, created_by: row.createdBy })
         .returning('id');
-      return idOf(inserted);
+      return insertedId(inserted);
     },
     /** Appends a revision and makes it the item's current one. */
     async appendRevision(itemId: number, row: { data: unknown; reason: string; createdAt: string; createdBy: number; code: string }, trx: Db): Promise<number> {
@@ -74,7 +73,7 @@ export function libraryRepository(db: Db) {
       const [inserted] = await trx('equipment_revisions')
         .insert({ item_id: itemId, number, data_json: JSON.stringify(row.data), reason: row.reason, created_at: row.createdAt, created_by: row.createdBy })
         .returning('id');
-      const revisionId = idOf(inserted);
+      const revisionId = insertedId(inserted);
       await trx('equipment_items').where({ id: itemId }).update({ current_revision_id: revisionId, code: row.code });
       return revisionId;
     },
@@ -96,7 +95,7 @@ export function libraryRepository(db: Db) {
         .first(),
     async insertCertificate(row: Omit<CertificateRow, 'id' | 'uploaded_by_name' | 'revision_number'> & { uploaded_by: number }): Promise<number> {
       const [inserted] = await db('certificates').insert(row).returning('id');
-      return idOf(inserted);
+      return insertedId(inserted);
     },
   };
 }

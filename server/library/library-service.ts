@@ -14,6 +14,7 @@ import { conflict, notFound, validationError } from '../lib/errors';
 import { toFieldIssues } from '../lib/validate';
 import { calibrationState, expiryState, flagWords, isMaterial } from './item-status';
 import type { CertificateRow, ItemRow, LibraryRepository, RevisionRow } from './library-repository';
+import { canonicalJson } from '../lib/canonical-json';
 
 export const toRevision = (row: RevisionRow): Revision => ({
   id: row.id,
@@ -45,8 +46,6 @@ export function parseItemData(kind: EquipmentKind, data: unknown) {
   }
   return result.data as { code: string } & Record<string, unknown>;
 }
-
-const stableJson = (value: unknown): string => JSON.stringify(value, (_key, v) => (v && typeof v === 'object' && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort()) : v));
 
 export function libraryService(deps: { db: Db; library: LibraryRepository; audit: AuditRepository; now: () => Date }) {
   const { db, library, audit, now } = deps;
@@ -129,7 +128,7 @@ export function libraryService(deps: { db: Db; library: LibraryRepository; audit
         const data = parseItemData(item.kind, input.data);
         const current = await library.revision(item.current_revision_id, t);
         const before = JSON.parse((current as RevisionRow).data_json);
-        if (stableJson(before) === stableJson(data)) return 'unchanged' as const;
+        if (canonicalJson(before) === canonicalJson(data)) return 'unchanged' as const;
         await assertCodeFree(labId, data.code, itemId, t);
         await library.appendRevision(itemId, { data, reason: input.reason, createdAt: now().toISOString(), createdBy: actor.id, code: data.code }, t);
         await audit.record(

@@ -1,5 +1,6 @@
 import type { Role } from '../../shared/contracts/roles';
 import type { Db } from '../db/connection';
+import { insertedId } from '../db/inserted-id';
 
 export interface InvitationRow {
   id: number;
@@ -20,7 +21,7 @@ export function invitationsRepository(db: Db) {
   return {
     async insert(row: Omit<InvitationRow, 'id' | 'accepted_at' | 'accepted_user_id' | 'invited_by_name'>): Promise<number> {
       const [inserted] = await db('invitations').insert(row).returning('id');
-      return typeof inserted === 'object' ? (inserted as { id: number }).id : (inserted as number);
+      return insertedId(inserted);
     },
     findByTokenHash: (tokenHash: string): Promise<InvitationRow | undefined> => db('invitations').where({ token_hash: tokenHash }).first(),
     findById: (id: number): Promise<InvitationRow | undefined> =>

@@ -1,5 +1,6 @@
 import type { PreparationStatus } from '../../shared/contracts/preparations';
 import type { Db } from '../db/connection';
+import { insertedId } from '../db/inserted-id';
 
 export interface PreparationRow {
   id: number;
@@ -54,8 +55,6 @@ export type VersionWrite = Pick<
   'plan_json' | 'overrides_json' | 'seed' | 'problem_json' | 'snapshot_json' | 'snapshot_sha256' | 'result_statement' | 'value' | 'unit' | 'relative_expanded_uncertainty' | 'updated_at'
 >;
 
-const idOf = (row: unknown) => (typeof row === 'object' && row !== null ? (row as { id: number }).id : (row as number));
-
 export function preparationsRepository(db: Db) {
   const versions = (trx: Db = db) => trx('preparation_versions as v').join('users as u', 'u.id', 'v.created_by').select('v.*', 'u.name as created_by_name');
 
@@ -87,13 +86,13 @@ export function preparationsRepository(db: Db) {
       const [inserted] = await trx('preparations')
         .insert({ lab_id: row.labId, title: row.title, analyte: row.analyte, material_code: row.materialCode, created_by: row.createdBy, created_at: row.at, updated_at: row.at })
         .returning('id');
-      return idOf(inserted);
+      return insertedId(inserted);
     },
     touchPreparation: (id: number, row: { title: string; analyte: string; materialCode: string | null; at: string }, trx: Db) =>
       trx('preparations').where({ id }).update({ title: row.title, analyte: row.analyte, material_code: row.materialCode, updated_at: row.at }),
     async insertVersion(preparationId: number, number: number, row: VersionWrite & { created_by: number; created_at: string }, trx: Db): Promise<number> {
       const [inserted] = await trx('preparation_versions').insert({ preparation_id: preparationId, number, status: 'draft', ...row }).returning('id');
-      return idOf(inserted);
+      return insertedId(inserted);
     },
     /** Only a draft (or a returned version) changes in place; the WHERE makes that hold even if two requests race. */
     updateDraft: (versionId: number, row: VersionWrite, trx: Db) => trx('preparation_versions').where({ id: versionId }).whereIn('status', EDITABLE_STATUSES).update(row),

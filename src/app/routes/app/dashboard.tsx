@@ -14,7 +14,7 @@ export function Component() {
         title={`Welcome, ${me.user.name}`}
         description={
           membership
-            ? `${membership.name}. Here is what each of your roles will do in Dilutrace; the measurement work arrives step by step.`
+            ? `${membership.name}. What each of your roles does here, and where to start.`
             : undefined
         }
       />

@@ -1,52 +1,59 @@
 import { ROLE_LABELS, ROLES, type Role } from '../../../../shared/contracts/roles';
 import { Link } from 'react-router';
-import { Badge } from '../../../components/ui/badge';
 import { paths } from '../../../config/paths';
 
-/** What each role will find here as Dilutrace grows, said plainly (DESIGN.md §2). */
-const COMING_FOR_ROLE: Record<Role, { summary: string; items: string[] }> = {
+/** What each role does in Dilutrace, said plainly (DESIGN.md §2). */
+const WORK_OF_ROLE: Record<Role, { summary: string; items: string[] }> = {
   analyst: {
     summary: 'Plan how a standard is made and see what limits its uncertainty.',
     items: [
       'Plan a preparation — weighing, stock, dilution steps — and see its uncertainty budget as you type',
-      'Compare routes to the same target concentration and pick the one with the lowest expanded uncertainty',
-      'Submit a budget for review and print the bench sheet',
+      'Duplicate a plan into variants and compare them, or let the route finder rank routes to a target',
+      'Print the bench sheet, record the masses actually weighed, and submit the record for review',
     ],
   },
   qa: {
     summary: 'Keep the equipment the budgets rest on, and decide what is approved.',
     items: [
-      'The tolerance library: balances, flasks, pipettes and reference materials with their certificates — available now under Library',
-      'Lab policy: coverage probability, glassware distribution, temperature range, minimum-weight rule — available now under Lab policy',
-      'The review queue: approve and sign budgets, or return them with comments — available now under Review queue',
+      'The tolerance library: balances, flasks, pipettes and reference materials with their certificates',
+      'Lab policy: coverage probability, glassware distribution, temperature range, minimum-weight rule',
+      'The review queue: approve and sign budgets, or return them with comments',
     ],
   },
   auditor: {
     summary: 'Read what was approved, and how it got there.',
     items: [
-      'Approved preparation records, read-only, with their fingerprint check — available now under Approved records',
-      'The audit trail: who changed what, and when — available now under Audit trail',
+      'Approved preparation records, read-only, with their fingerprint check',
       'Signed PDF records and stored snapshots to download, from each approved record',
+      'The audit trail: who changed what, and when',
     ],
   },
   admin: {
     summary: 'Look after the lab itself and the people in it.',
-    items: ['Members and their roles — available now under Members', 'Invitations by e-mail — captured in the Outbox for now'],
+    items: ['Members and their roles; deactivate someone who has left', 'Invitations by e-mail, and the Outbox of mail Dilutrace has sent'],
   },
 };
 
 /** Where each role's daily work starts. */
 const SHORTCUTS: Record<Role, { label: string; href: string }[]> = {
-  analyst: [],
+  analyst: [
+    { label: 'New preparation', href: paths.app.preparationNew.href() },
+    { label: 'Preparations', href: paths.app.preparations.href() },
+    { label: 'Route finder', href: paths.app.routeFinder.href() },
+  ],
   qa: [
     { label: 'Open the review queue', href: paths.app.reviewQueue.href() },
+    { label: 'Library', href: paths.app.library.href() },
     { label: 'Audit trail', href: paths.app.audit.href() },
   ],
   auditor: [
     { label: 'Open the approved records', href: paths.app.records.href() },
     { label: 'Audit trail', href: paths.app.audit.href() },
   ],
-  admin: [],
+  admin: [
+    { label: 'Members', href: paths.app.members.href() },
+    { label: 'Outbox', href: paths.app.outbox.href() },
+  ],
 };
 
 export function RoleOverview({ roles }: { roles: readonly Role[] }) {
@@ -59,15 +66,10 @@ export function RoleOverview({ roles }: { roles: readonly Role[] }) {
             <h2 id={`role-${role}`} className="text-xl font-bold">
               {ROLE_LABELS[role]}
             </h2>
-            {role === 'admin' || role === 'qa' || role === 'auditor' ? (
-              <Badge tone="ok">Available</Badge>
-            ) : (
-              <Badge tone="accent">Coming</Badge>
-            )}
           </div>
-          <p className="mb-3 text-ink">{COMING_FOR_ROLE[role].summary}</p>
+          <p className="mb-3 text-ink">{WORK_OF_ROLE[role].summary}</p>
           <ul className="list-disc space-y-1 pl-5 text-muted">
-            {COMING_FOR_ROLE[role].items.map((item) => (
+            {WORK_OF_ROLE[role].items.map((item) => (
               <li key={item}>{item}</li>
             ))}
           </ul>

@@ -5,7 +5,9 @@ const timeFormat = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '
 /** "Saved at 10:42", "Saving…", "Not saved: <reason>", announced politely. */
 export function SaveStateLine({ state }: { state: SaveState }) {
   const words =
-    state.phase === 'saved'
+    state.phase === 'unsaved'
+      ? 'Not saved yet: it saves itself once the plan can be computed'
+      : state.phase === 'saved'
       ? state.at
         ? `Saved at ${timeFormat.format(state.at)}`
         : 'Saved'

@@ -6,6 +6,7 @@ import { isApiError } from '../../../lib/api-error';
 export const AUTOSAVE_DELAY_MS = 1500;
 
 export type SaveState =
+  | { phase: 'unsaved' }
   | { phase: 'saved'; at: Date | null }
   | { phase: 'waiting' }
   | { phase: 'saving' }
@@ -28,7 +29,8 @@ export function useAutosave(input: {
 }) {
   const { write, blocked, enabled } = input;
   const key = write ? JSON.stringify(write) : null;
-  const [state, setState] = useState<SaveState>({ phase: 'saved', at: null });
+  // A preparation loaded from the server is saved as it stands; a new one has nothing saved yet.
+  const [state, setState] = useState<SaveState>(input.initialKey === null ? { phase: 'unsaved' } : { phase: 'saved', at: null });
   const savedKey = useRef<string | null>(input.initialKey);
   const inFlight = useRef(false);
   const latest = useRef({ write, key, save: input.save, onSaved: input.onSaved });

@@ -1,6 +1,7 @@
 import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
-import { Fragment, useState } from 'react';
+import { useState } from 'react';
 import type { AuditEvent } from '../../../../shared/contracts/audit';
+import { DataTable } from '../../../components/ui/data-table';
 import { AuditChange } from './audit-change';
 import { AuditTime } from './audit-time';
 
@@ -58,45 +59,23 @@ export function AuditTable({ events, caption }: { events: AuditEvent[]; caption:
   const table = useTable({ features, columns, data: events, getRowId: (event) => String(event.id) });
   const columnCount = columns.length;
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-      <table className="w-full text-left">
-        <caption className="sr-only">{caption}</caption>
-        <thead className="border-b border-line bg-paper text-sm text-muted">
-          {table.getHeaderGroups().map((headerGroup) => (
-            <tr key={headerGroup.id}>
-              {headerGroup.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-2 font-semibold">
-                  <table.FlexRender header={header} />
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <Fragment key={row.id}>
-              <tr className="border-b border-line align-top last:border-b-0">
-                {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2">
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-              {openIds.has(row.original.id) ? (
-                <tr id={`audit-change-${row.original.id}`} className="border-b border-line bg-paper/50">
-                  <td colSpan={columnCount} className="px-3 py-3">
-                    <div className="flex flex-col gap-4 md:flex-row">
-                      <AuditChange label="Before" value={row.original.before} />
-                      <AuditChange label="After" value={row.original.after} />
-                    </div>
-                  </td>
-                </tr>
-              ) : null}
-            </Fragment>
-          ))}
-        </tbody>
-      </table>
+    <DataTable
+      table={table}
+      caption={caption}
+      rowDetail={(row) =>
+        openIds.has(row.original.id) ? (
+          <tr id={`audit-change-${row.original.id}`} className="border-b border-line bg-paper/50">
+            <td colSpan={columnCount} className="px-3 py-3">
+              <div className="flex flex-col gap-4 md:flex-row">
+                <AuditChange label="Before" value={row.original.before} />
+                <AuditChange label="After" value={row.original.after} />
+              </div>
+            </td>
+          </tr>
+        ) : null
+      }
+    >
       {events.length === 0 ? <p className="p-4 text-muted">No event matches these filters.</p> : null}
-    </div>
+    </DataTable>
   );
 }

@@ -1,6 +1,7 @@
 import { useTable } from '@tanstack/react-table';
 import { useState, type ReactNode } from 'react';
 import type { EquipmentItem, EquipmentKind } from '../../../../shared/contracts/library';
+import { DataTable, SortButton } from '../../../components/ui/data-table';
 import { EQUIPMENT_COLUMNS, equipmentTableFeatures, NUMERIC_COLUMN_IDS, SEARCHED_COLUMN_IDS } from './equipment-columns';
 
 type EquipmentTableProps = {
@@ -11,8 +12,6 @@ type EquipmentTableProps = {
   /** Controls beside the search box (status filter, actions). */
   toolbar?: ReactNode;
 };
-
-const SORT_WORDS = { asc: 'ascending', desc: 'descending' } as const;
 
 /** The items of one kind, sortable by any column with a value and searchable by ID and description. */
 export function EquipmentTable({ kind, caption, items, toolbar }: EquipmentTableProps) {
@@ -48,62 +47,34 @@ export function EquipmentTable({ kind, caption, items, toolbar }: EquipmentTable
         </div>
         {toolbar}
       </div>
-      <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-        <table className="w-full text-left">
-          <caption className="sr-only">{caption}</caption>
-          <thead className="border-b border-line bg-paper text-sm text-muted">
-            {table.getHeaderGroups().map((headerGroup) => (
-              <tr key={headerGroup.id}>
-                {headerGroup.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const numeric = NUMERIC_COLUMN_IDS.has(header.column.id);
-                  const width = header.column.id === 'description' ? 'min-w-48' : '';
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={sorted ? SORT_WORDS[sorted] : undefined}
-                      className={`px-3 py-2 align-bottom font-semibold ${numeric ? 'text-right' : ''} ${width}`}
-                    >
-                      {header.isPlaceholder ? null : header.column.getCanSort() ? (
-                        // Numbers: the arrow goes left of the heading, so the heading's right edge lines up with the figures.
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className={`inline-flex items-end gap-1 font-semibold hover:text-ink ${numeric ? 'flex-row-reverse text-right' : 'text-left'}`}
-                        >
-                          <span>
-                            <table.FlexRender header={header} />
-                          </span>
-                          <span aria-hidden="true" className="w-3 shrink-0 text-ink">
-                            {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
-                          </span>
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {rows.map((row) => (
-              <tr key={row.id} className="border-b border-line align-top last:border-b-0">
-                {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className={`px-3 py-2 ${NUMERIC_COLUMN_IDS.has(cell.column.id) ? 'text-right' : ''}`}>
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      <DataTable
+        table={table}
+        caption={caption}
+        headerClassName={(header) => `align-bottom ${NUMERIC_COLUMN_IDS.has(header.column.id) ? 'text-right' : ''} ${header.column.id === 'description' ? 'min-w-48' : ''}`}
+        sortDirection={(header) => header.column.getIsSorted()}
+        renderHeader={(header) =>
+          header.isPlaceholder ? null : header.column.getCanSort() ? (
+            // Numbers: the arrow goes left of the heading, so the heading's right edge lines up with the figures.
+            <SortButton
+              direction={header.column.getIsSorted()}
+              onToggle={header.column.getToggleSortingHandler()}
+              className={`inline-flex items-end gap-1 font-semibold hover:text-ink ${NUMERIC_COLUMN_IDS.has(header.column.id) ? 'flex-row-reverse text-right' : 'text-left'}`}
+              arrowClassName="w-3 shrink-0 text-ink"
+            >
+              <span>
+                <table.FlexRender header={header} />
+              </span>
+            </SortButton>
+          ) : (
+            <table.FlexRender header={header} />
+          )
+        }
+        cellClassName={(cell) => (NUMERIC_COLUMN_IDS.has(cell.column.id) ? 'text-right' : '')}
+      >
         {rows.length === 0 ? (
           <p className="p-4 text-muted">{search ? `Nothing matches “${search}”.` : `No ${caption}.`}</p>
         ) : null}
-      </div>
+      </DataTable>
       <p className="mt-2 text-sm text-muted">
         {rows.length} of {items.length} {caption}. Select a column heading to sort by it.
       </p>

@@ -2,6 +2,7 @@ import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-tab
 import type { z } from 'zod';
 import type { importRowResultSchema } from '../../../../shared/contracts/library';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
+import { DataTable } from '../../../components/ui/data-table';
 
 type ImportRow = z.infer<typeof importRowResultSchema>;
 
@@ -40,32 +41,10 @@ const columns = column.columns([
 export function ImportResultTable({ rows }: { rows: ImportRow[] }) {
   const table = useTable({ features, columns, data: rows, getRowId: (row) => String(row.line) });
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-      <table className="w-full text-left">
-        <caption className="sr-only">Rows of the file, by line number</caption>
-        <thead className="border-b border-line bg-paper text-sm text-muted">
-          {table.getHeaderGroups().map((headerGroup) => (
-            <tr key={headerGroup.id}>
-              {headerGroup.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-2 font-semibold">
-                  <table.FlexRender header={header} />
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={`border-b border-line align-top last:border-b-0 ${row.original.action === 'error' ? 'bg-danger-tint/50' : ''}`}>
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-2">
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable
+      table={table}
+      caption="Rows of the file, by line number"
+      rowClassName={(row) => (row.original.action === 'error' ? 'bg-danger-tint/50' : '')}
+    />
   );
 }

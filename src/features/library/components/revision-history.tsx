@@ -1,6 +1,7 @@
 import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import type { EquipmentKind, Revision } from '../../../../shared/contracts/library';
+import { DataTable } from '../../../components/ui/data-table';
 import { paths } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format-date';
 import { revisionChanges } from '../utils/revision-changes';
@@ -45,33 +46,11 @@ export function RevisionHistory({ itemId, kind, revisions, openNumber }: Revisio
       <h2 id="history-heading" className="mb-3 text-xl font-bold">
         Revision history
       </h2>
-      <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-        <table className="w-full text-left">
-          <caption className="sr-only">Revisions, newest first</caption>
-          <thead className="border-b border-line bg-paper text-sm text-muted">
-            {table.getHeaderGroups().map((headerGroup) => (
-              <tr key={headerGroup.id}>
-                {headerGroup.headers.map((header) => (
-                  <th key={header.id} scope="col" className="px-3 py-2 font-semibold">
-                    <table.FlexRender header={header} />
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className={`border-b border-line align-top last:border-b-0 ${row.original.number === openNumber ? 'bg-accent-tint' : ''}`}>
-                {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2">
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        table={table}
+        caption="Revisions, newest first"
+        rowClassName={(row) => (row.original.number === openNumber ? 'bg-accent-tint' : '')}
+      />
       {open ? (
         <div className="mt-4 grid gap-6 rounded-lg border border-line bg-surface p-6 md:grid-cols-2">
           <div>

@@ -1,13 +1,13 @@
 import { createColumnHelper, createSortedRowModel, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures, useTable } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import type { PreparationSummary } from '../../../../shared/contracts/preparations';
+import { DataTable, SortButton } from '../../../components/ui/data-table';
 import { formatDateTime } from '../../../lib/format-date';
 import { formatPercent, formatSignificant } from '../utils/format-number';
 import { StatusBadge } from './status-badge';
 
 const features = tableFeatures({ rowSortingFeature, sortedRowModel: createSortedRowModel(), sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic } });
 const column = createColumnHelper<typeof features, PreparationSummary>();
-const SORT_WORDS = { asc: 'ascending', desc: 'descending' } as const;
 
 type PreparationsTableProps = {
   preparations: PreparationSummary[];
@@ -83,45 +83,26 @@ export function PreparationsTable({ preparations, hrefOf, selected, onToggle }: 
   const table = useTable({ features, columns, data: preparations, getRowId: (row) => String(row.id) });
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-      <table className="w-full text-left">
-        <caption className="sr-only">Preparations</caption>
-        <thead className="border-b border-line bg-paper text-sm text-muted">
-          {table.getHeaderGroups().map((headerGroup) => (
-            <tr key={headerGroup.id}>
-              {headerGroup.headers.map((header) => {
-                const sorted = header.column.getIsSorted();
-                return (
-                  <th key={header.id} scope="col" aria-sort={sorted ? SORT_WORDS[sorted] : undefined} className="px-3 py-2 font-semibold">
-                    {header.column.getCanSort() ? (
-                      <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex gap-1 font-semibold hover:text-ink">
-                        <table.FlexRender header={header} />
-                        <span aria-hidden="true" className="w-3 text-ink">
-                          {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
-                        </span>
-                      </button>
-                    ) : (
-                      <table.FlexRender header={header} />
-                    )}
-                  </th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="border-b border-line align-top last:border-b-0">
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-2">
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
+    <DataTable
+      table={table}
+      caption="Preparations"
+      sortDirection={(header) => header.column.getIsSorted()}
+      renderHeader={(header) =>
+        header.column.getCanSort() ? (
+          <SortButton
+            direction={header.column.getIsSorted()}
+            onToggle={header.column.getToggleSortingHandler()}
+            className="inline-flex gap-1 font-semibold hover:text-ink"
+            arrowClassName="w-3 text-ink"
+          >
+            <table.FlexRender header={header} />
+          </SortButton>
+        ) : (
+          <table.FlexRender header={header} />
+        )
+      }
+    >
       {preparations.length === 0 ? <p className="p-4 text-muted">No preparations match these filters.</p> : null}
-    </div>
+    </DataTable>
   );
 }

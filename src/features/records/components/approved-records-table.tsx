@@ -1,6 +1,7 @@
 import { createColumnHelper, createSortedRowModel, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures, useTable } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import type { ApprovedRecord } from '../../../../shared/contracts/reviews';
+import { DataTable, SortButton } from '../../../components/ui/data-table';
 import { paths } from '../../../config/paths';
 import { formatDate, formatDateTime } from '../../../lib/format-date';
 import { recordPdfUrl, snapshotJsonUrl } from '../api/record-downloads';
@@ -12,7 +13,6 @@ const features = tableFeatures({
   sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic },
 });
 const column = createColumnHelper<typeof features, ApprovedRecord>();
-const SORT_WORDS = { asc: 'ascending', desc: 'descending' } as const;
 
 const columnsFor = (labId: number) =>
   column.columns([
@@ -78,46 +78,30 @@ export function ApprovedRecordsTable({ labId, records, search }: { labId: number
   const rows = table.getRowModel().rows;
   return (
     <div>
-      <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-        <table className="w-full text-left text-[0.95rem]">
-          <caption className="sr-only">Approved records{search ? ` matching “${search}”` : ''}</caption>
-          <thead className="border-b border-line bg-paper text-sm text-muted">
-            {table.getHeaderGroups().map((headerGroup) => (
-              <tr key={headerGroup.id}>
-                {headerGroup.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  return (
-                    <th key={header.id} scope="col" aria-sort={sorted ? SORT_WORDS[sorted] : undefined} className="px-3 py-2 align-bottom font-semibold">
-                      {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-end gap-1 text-left font-semibold hover:text-ink">
-                          <table.FlexRender header={header} />
-                          <span aria-hidden="true" className="w-3 shrink-0 text-ink">
-                            {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
-                          </span>
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {rows.map((row) => (
-              <tr key={row.id} className="border-b border-line align-top last:border-b-0">
-                {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className={`px-3 py-2 ${cell.column.id === 'title' ? 'min-w-44' : ''} ${cell.column.id === 'resultStatement' ? 'min-w-56' : ''}`}>
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      <DataTable
+        table={table}
+        caption={<>Approved records{search ? ` matching “${search}”` : ''}</>}
+        className="text-[0.95rem]"
+        headerClassName={() => 'align-bottom'}
+        sortDirection={(header) => header.column.getIsSorted()}
+        renderHeader={(header) =>
+          header.column.getCanSort() ? (
+            <SortButton
+              direction={header.column.getIsSorted()}
+              onToggle={header.column.getToggleSortingHandler()}
+              className="inline-flex items-end gap-1 text-left font-semibold hover:text-ink"
+              arrowClassName="w-3 shrink-0 text-ink"
+            >
+              <table.FlexRender header={header} />
+            </SortButton>
+          ) : (
+            <table.FlexRender header={header} />
+          )
+        }
+        cellClassName={(cell) => `${cell.column.id === 'title' ? 'min-w-44' : ''} ${cell.column.id === 'resultStatement' ? 'min-w-56' : ''}`}
+      >
         {rows.length === 0 ? <p className="p-4 text-muted">{search ? `No approved record matches “${search}”.` : 'Nothing has been approved in this lab yet.'}</p> : null}
-      </div>
+      </DataTable>
       <p className="mt-2 text-sm text-muted">
         {rows.length} approved {rows.length === 1 ? 'record' : 'records'}. Select a column heading to sort by it.
       </p>

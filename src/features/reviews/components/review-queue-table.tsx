@@ -1,6 +1,7 @@
 import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import type { ReviewQueueItem } from '../../../../shared/contracts/reviews';
+import { DataTable } from '../../../components/ui/data-table';
 import { paths } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format-date';
 import { waitingTimeInWords } from '../utils/waiting-time';
@@ -38,32 +39,10 @@ export function ReviewQueueTable({ items }: { items: ReviewQueueItem[] }) {
   const table = useTable({ features, columns, data, getRowId: (item) => `${item.preparationId}-${item.versionNumber}` });
   if (items.length === 0) return <p className="rounded-lg border border-line bg-surface p-6 text-muted">Nothing is waiting for review.</p>;
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-      <table className="w-full text-left">
-        <caption className="sr-only">Versions waiting for review, oldest first</caption>
-        <thead className="border-b border-line bg-paper text-sm text-muted">
-          {table.getHeaderGroups().map((headerGroup) => (
-            <tr key={headerGroup.id}>
-              {headerGroup.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-2 font-semibold">
-                  <table.FlexRender header={header} />
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="border-b border-line align-top last:border-b-0">
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className={`px-3 py-2 ${cell.column.id === 'resultStatement' ? 'min-w-72' : ''}`}>
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable
+      table={table}
+      caption="Versions waiting for review, oldest first"
+      cellClassName={(cell) => (cell.column.id === 'resultStatement' ? 'min-w-72' : '')}
+    />
   );
 }

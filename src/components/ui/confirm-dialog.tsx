@@ -1,5 +1,6 @@
-import { useEffect, useId, useRef, type ReactNode } from 'react';
+import { useId, type ReactNode } from 'react';
 import { Button } from './button';
+import { ModalDialog } from './modal-dialog';
 
 type ConfirmDialogProps = {
   open: boolean;
@@ -17,26 +18,10 @@ type ConfirmDialogProps = {
  * and focus returns to the opener when it closes.
  */
 export function ConfirmDialog({ open, title, children, confirmLabel, tone = 'primary', pending, onConfirm, onCancel }: ConfirmDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
   const titleId = useId();
 
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (!dialog) return;
-    if (open && !dialog.open) dialog.showModal();
-    if (!open && dialog.open) dialog.close();
-  }, [open]);
-
   return (
-    <dialog
-      ref={dialogRef}
-      aria-labelledby={titleId}
-      onCancel={(event) => {
-        event.preventDefault();
-        onCancel();
-      }}
-      className="m-auto w-full max-w-md rounded-lg border border-line bg-surface p-6 text-ink shadow-xl"
-    >
+    <ModalDialog open={open} labelledBy={titleId} width="md" onCancel={onCancel}>
       <h2 id={titleId} className="mb-2 text-xl font-bold">
         {title}
       </h2>
@@ -49,6 +34,6 @@ export function ConfirmDialog({ open, title, children, confirmLabel, tone = 'pri
           {confirmLabel}
         </Button>
       </div>
-    </dialog>
+    </ModalDialog>
   );
 }

@@ -1,5 +1,6 @@
-import { useEffect, useId, useRef, type FormEventHandler, type ReactNode } from 'react';
+import { useId, type FormEventHandler, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
+import { ModalDialog } from '../../../components/ui/modal-dialog';
 
 type FormDialogProps = {
   open: boolean;
@@ -16,25 +17,16 @@ type FormDialogProps = {
  * and the browser returns focus to the button that opened it.
  */
 export function FormDialog({ open, title, submitLabel, pending, onSubmit, onClose, children }: FormDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
   const titleId = useId();
 
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (!dialog) return;
-    if (open && !dialog.open) dialog.showModal();
-    if (!open && dialog.open) dialog.close();
-  }, [open]);
-
   return (
-    <dialog
-      ref={dialogRef}
-      aria-labelledby={titleId}
-      onCancel={(event) => {
-        event.preventDefault();
+    <ModalDialog
+      open={open}
+      labelledBy={titleId}
+      width="lg"
+      onCancel={() => {
         if (!pending) onClose();
       }}
-      className="m-auto w-full max-w-lg rounded-lg border border-line bg-surface p-6 text-ink shadow-xl"
     >
       <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
         <h2 id={titleId} className="text-xl font-bold">
@@ -50,6 +42,6 @@ export function FormDialog({ open, title, submitLabel, pending, onSubmit, onClos
           </Button>
         </div>
       </form>
-    </dialog>
+    </ModalDialog>
   );
 }

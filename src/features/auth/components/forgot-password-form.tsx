@@ -4,10 +4,10 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { passwordResetRequestSchema } from '../../../../shared/contracts/auth';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
 import { applyApiError } from '../../../lib/form-errors';
 import { useRequestPasswordReset } from '../api/request-password-reset';
+import { AuthForm } from './auth-form';
 
 export function ForgotPasswordForm() {
   const requestReset = useRequestPasswordReset();
@@ -34,8 +34,7 @@ export function ForgotPasswordForm() {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      {formError ? <Alert tone="danger">{formError}</Alert> : null}
+    <AuthForm onSubmit={onSubmit} formError={formError} submitLabel="Send reset link" pending={requestReset.isPending} pendingLabel="Sending…">
       <TextField
         label="E-mail"
         type="email"
@@ -44,9 +43,6 @@ export function ForgotPasswordForm() {
         error={errors.email?.message}
         {...register('email')}
       />
-      <Button type="submit" pending={requestReset.isPending} pendingLabel="Sending…">
-        Send reset link
-      </Button>
-    </form>
+    </AuthForm>
   );
 }

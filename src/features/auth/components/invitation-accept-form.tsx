@@ -3,11 +3,10 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { personNameSchema, type InvitationPreview } from '../../../../shared/contracts/members';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
 import { applyApiError } from '../../../lib/form-errors';
 import { useAcceptInvitation } from '../api/accept-invitation';
+import { AuthForm } from './auth-form';
 import { confirmedPasswordShape, PASSWORD_HINT, PASSWORD_MISMATCH, passwordsMatch } from './new-password-schema';
 
 const newAccountSchema = z
@@ -45,8 +44,7 @@ function NewAccountForm({ token, preview, onAccepted }: InvitationAcceptFormProp
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      {formError ? <Alert tone="danger">{formError}</Alert> : null}
+    <AuthForm onSubmit={onSubmit} formError={formError} submitLabel="Join the lab" pending={accept.isPending} pendingLabel="Joining…">
       <TextField label="Your name" autoComplete="name" hint="As colleagues and audit records will show it." error={errors.name?.message} {...register('name')} />
       <TextField
         label="Choose a password"
@@ -63,10 +61,7 @@ function NewAccountForm({ token, preview, onAccepted }: InvitationAcceptFormProp
         error={errors.passwordAgain?.message}
         {...register('passwordAgain')}
       />
-      <Button type="submit" pending={accept.isPending} pendingLabel="Joining…">
-        Join the lab
-      </Button>
-    </form>
+    </AuthForm>
   );
 }
 
@@ -92,9 +87,14 @@ function ExistingAccountForm({ token, preview, onAccepted }: InvitationAcceptFor
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <p>You already have a Dilutrace account. Confirm with its password to add this lab to it.</p>
-      {formError ? <Alert tone="danger">{formError}</Alert> : null}
+    <AuthForm
+      onSubmit={onSubmit}
+      formError={formError}
+      submitLabel="Join the lab"
+      pending={accept.isPending}
+      pendingLabel="Joining…"
+      intro={<p>You already have a Dilutrace account. Confirm with its password to add this lab to it.</p>}
+    >
       <TextField
         label="Your current password"
         type="password"
@@ -102,9 +102,6 @@ function ExistingAccountForm({ token, preview, onAccepted }: InvitationAcceptFor
         error={errors.password?.message}
         {...register('password')}
       />
-      <Button type="submit" pending={accept.isPending} pendingLabel="Joining…">
-        Join the lab
-      </Button>
-    </form>
+    </AuthForm>
   );
 }

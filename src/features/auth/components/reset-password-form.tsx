@@ -4,11 +4,11 @@ import { useForm } from 'react-hook-form';
 import { Link } from 'react-router';
 import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
 import { paths } from '../../../config/paths';
 import { applyApiError } from '../../../lib/form-errors';
 import { useResetPassword } from '../api/reset-password';
+import { AuthForm } from './auth-form';
 import { confirmedPasswordShape, PASSWORD_HINT, PASSWORD_MISMATCH, passwordsMatch } from './new-password-schema';
 
 const resetPasswordFormSchema = z.object(confirmedPasswordShape).refine(passwordsMatch, PASSWORD_MISMATCH);
@@ -43,8 +43,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      {formError ? <Alert tone="danger">{formError}</Alert> : null}
+    <AuthForm onSubmit={onSubmit} formError={formError} submitLabel="Set new password" pending={resetPassword.isPending} pendingLabel="Saving…">
       <TextField
         label="New password"
         type="password"
@@ -60,9 +59,6 @@ export function ResetPasswordForm({ token }: { token: string }) {
         error={errors.passwordAgain?.message}
         {...register('passwordAgain')}
       />
-      <Button type="submit" pending={resetPassword.isPending} pendingLabel="Saving…">
-        Set new password
-      </Button>
-    </form>
+    </AuthForm>
   );
 }

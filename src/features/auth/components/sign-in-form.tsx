@@ -4,12 +4,11 @@ import { useForm } from 'react-hook-form';
 import { Link } from 'react-router';
 import type { z } from 'zod';
 import { loginRequestSchema } from '../../../../shared/contracts/auth';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
 import { paths } from '../../../config/paths';
 import { applyApiError } from '../../../lib/form-errors';
 import { useSignIn } from '../api/sign-in';
+import { AuthForm } from './auth-form';
 
 type SignInFormProps = { onSignedIn: () => void };
 
@@ -35,8 +34,18 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      {formError ? <Alert tone="danger">{formError}</Alert> : null}
+    <AuthForm
+      onSubmit={onSubmit}
+      formError={formError}
+      submitLabel="Sign in"
+      pending={signIn.isPending}
+      pendingLabel="Signing in…"
+      footer={
+        <p>
+          <Link to={paths.auth.forgotPassword.href()}>Forgot password?</Link>
+        </p>
+      }
+    >
       <TextField label="E-mail" type="email" autoComplete="username" error={errors.email?.message} {...register('email')} />
       <TextField
         label="Password"
@@ -45,12 +54,6 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
         error={errors.password?.message}
         {...register('password')}
       />
-      <Button type="submit" pending={signIn.isPending} pendingLabel="Signing in…">
-        Sign in
-      </Button>
-      <p>
-        <Link to={paths.auth.forgotPassword.href()}>Forgot password?</Link>
-      </p>
-    </form>
+    </AuthForm>
   );
 }

@@ -1,4 +1,4 @@
-import { useId, useRef, useState, type FormEvent } from 'react';
+import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Link } from 'react-router';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
 import { Alert } from '../../../components/ui/alert';
@@ -53,6 +53,12 @@ export function ReadingsForm({ labId, detail, recordHref, onRecorded }: Readings
   const [confirmation, setConfirmation] = useState<PreparationDetail | null>(null);
   const confirmationRef = useRef<HTMLDivElement>(null);
   const record = useRecordReadings(labId, detail.id, onRecorded);
+  const recordedAt = version.readings?.recordedAt;
+  // Move focus to the confirmation once it is on screen, and again after the form below is rebuilt
+  // for the recorded set (that rebuild removes the button that had focus).
+  useEffect(() => {
+    if (confirmation) confirmationRef.current?.focus();
+  }, [confirmation, recordedAt]);
 
   return (
     <section aria-labelledby="record-readings-heading" className="mt-8 rounded-lg border border-ink bg-surface p-6 print:hidden">
@@ -80,10 +86,7 @@ export function ReadingsForm({ labId, detail, recordHref, onRecorded }: Readings
           record.mutate(
             { versionNumber: version.number, request },
             {
-              onSuccess: (saved) => {
-                setConfirmation(saved);
-                requestAnimationFrame(() => confirmationRef.current?.focus());
-              },
+              onSuccess: (saved) => setConfirmation(saved),
               onError,
             },
           )

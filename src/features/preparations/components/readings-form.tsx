@@ -112,6 +112,11 @@ function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
   const [errors, setErrors] = useState<ReadingErrors>({});
   const [formError, setFormError] = useState<string | null>(null);
   const formRef = useRef<HTMLFormElement>(null);
+  // Bumped when errors are shown; the effect runs after they are on screen and focuses the first.
+  const [focusRequest, setFocusRequest] = useState(0);
+  useEffect(() => {
+    if (focusRequest > 0) formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]')?.focus();
+  }, [focusRequest]);
   const fieldId = (path: string) => `${formId}-${path.replaceAll('.', '-')}`;
   const howNetHint = `${formId}-net-hint`;
 
@@ -139,10 +144,7 @@ function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
   };
 
   const focusFirstError = (found: ReadingErrors) => {
-    requestAnimationFrame(() => {
-      const first = formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]');
-      first?.focus();
-    });
+    setFocusRequest((count) => count + 1);
     return found;
   };
 

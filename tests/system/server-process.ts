@@ -1,20 +1,8 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { createServer } from 'node:net';
 import { join } from 'node:path';
+import { freePort, waitForHealth } from '../support/server-process-helpers';
 
 const root = join(import.meta.dirname, '..', '..');
-
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const address = server.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      server.close(() => resolve(port));
-    });
-  });
-}
 
 export interface RunningServer {
   url: string;
@@ -34,17 +22,7 @@ export async function startServer(env: Record<string, string>): Promise<RunningS
   child.stdout?.on('data', (chunk) => (output += String(chunk)));
   child.stderr?.on('data', (chunk) => (output += String(chunk)));
   const url = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 30_000;
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`the server exited: ${output}`);
-    try {
-      if ((await fetch(`${url}/api/health`)).ok) break;
-    } catch {
-      /* not listening yet */
-    }
-    if (Date.now() > deadline) throw new Error(`the server did not start: ${output}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
+  await waitForHealth(url, child, () => output, 30_000);
   return { url, process: child, output: () => output };
 }
 

@@ -1,38 +1,10 @@
-import { spawn, type ChildProcess } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { freePort, waitForHealth } from '../../support/server-process-helpers';
 
 export type RunningServer = { baseUrl: string; output: () => string; stop: () => Promise<void> };
-
-/** A port nobody listens on right now, chosen by the operating system. */
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      probe.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitForHealth(baseUrl: string, child: ChildProcess, output: () => string, timeoutMs: number) {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`The server exited with code ${child.exitCode}:\n${output()}`);
-    try {
-      const response = await fetch(`${baseUrl}/api/health`);
-      if (response.ok && ((await response.json()) as { status?: string }).status === 'ok') return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 250));
-  }
-  throw new Error(`The server did not answer /api/health within ${timeoutMs} ms:\n${output()}`);
-}
 
 /**
  * Starts `server/index.ts` in production mode on a free port, against a fresh SQLite

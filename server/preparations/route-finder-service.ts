@@ -1,6 +1,6 @@
 import { policySettings, toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem } from '../../shared/contracts/library';
-import { findRoutes, type Balance, type CertifiedSolution, type GlassPipette, type PistonPipette, type RouteResult, type SolidMaterial, type VolumetricFlask } from '../../shared/uncertainty';
+import { findRoutes, type RouteRequest, type Balance, type CertifiedSolution, type GlassPipette, type PistonPipette, type RouteResult, type SolidMaterial, type VolumetricFlask } from '../../shared/uncertainty';
 import { notFound, validationError } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
 import type { PolicyService } from '../policy/policy-service';
@@ -11,7 +11,7 @@ const usable = (item: EquipmentItem) => item.status === 'active' && item.calibra
 /** Runs the engine's route finder over the lab's current library and policy. */
 export function routeFinderService(deps: { items: LibraryService; policy: PolicyService }) {
   return {
-    async find(labId: number, input: { target: { value: number; unit: string }; analyte: string; materialLibraryId: string; maximumDilutions: number; limit: number }): Promise<RouteResult & { skipped: string[] }> {
+    async find(labId: number, input: { target: RouteRequest['target']; analyte: string; materialLibraryId: string; maximumDilutions: number; limit: number }): Promise<RouteResult & { skipped: string[] }> {
       const library = await deps.items.list(labId, { status: 'active' });
       const material = library.find((item) => String(item.id) === input.materialLibraryId);
       if (!material || !material.kind.endsWith('-material')) throw notFound('That reference material');
@@ -21,7 +21,7 @@ export function routeFinderService(deps: { items: LibraryService; policy: Policy
       const of = <T>(kinds: string[]) => ok.filter((item) => kinds.includes(item.kind)).map((item) => toEngineEquipment(item) as T);
       const policy = await deps.policy.read(labId);
       const result = findRoutes({
-        target: input.target as never,
+        target: input.target,
         analyte: { formula: input.analyte },
         material: toEngineEquipment(material) as SolidMaterial | CertifiedSolution,
         balances: of<Balance>(['balance']),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { concentrationUnitNames } from '../uncertainty/units';
 import { reviewSchema } from './reviews';
 
 /**
@@ -157,7 +158,10 @@ export const preparationDetailSchema = preparationSummarySchema.extend({
 export type PreparationDetail = z.infer<typeof preparationDetailSchema>;
 
 export const routeFinderRequestSchema = z.object({
-  target: z.object({ value: z.number().positive('The target must be greater than zero.'), unit: z.string().min(1) }),
+  target: z.object({
+    value: z.number().positive('The target must be greater than zero.'),
+    unit: z.enum(concentrationUnitNames, { message: `Choose a unit: ${concentrationUnitNames.join(', ')}.` }),
+  }),
   analyte: z.string().trim().min(1, 'Enter the analyte, e.g. Pb.'),
   materialLibraryId: z.string().min(1, 'Choose the reference material.'),
   maximumDilutions: z.number().int().min(0).max(3).default(3),

@@ -6,7 +6,9 @@ import { TextField } from '../../../components/ui/text-field';
 import type { RouteFinderRequest } from '../api/find-routes';
 
 /** Units the route finder plans for (volumetric routes: mass or amount concentrations). */
-const TARGET_UNITS = ['g/L', 'mg/L', 'µg/L', 'ng/L', 'mol/L', 'mmol/L', 'µmol/L'];
+const TARGET_UNITS = ['g/L', 'mg/L', 'µg/L', 'ng/L', 'mol/L', 'mmol/L', 'µmol/L'] as const;
+type TargetUnit = (typeof TARGET_UNITS)[number];
+const isTargetUnit = (text: string): text is TargetUnit => (TARGET_UNITS as readonly string[]).includes(text);
 
 type RouteFinderFormProps = {
   materials: EquipmentItem[];
@@ -19,7 +21,7 @@ const analyteOf = (item: EquipmentItem | undefined) => (typeof item?.current.dat
 /** Target, analyte, material and the most dilutions allowed. */
 export function RouteFinderForm({ materials, pending, onSubmit }: RouteFinderFormProps) {
   const [value, setValue] = useState('');
-  const [unit, setUnit] = useState('mg/L');
+  const [unit, setUnit] = useState<TargetUnit>('mg/L');
   const [materialId, setMaterialId] = useState('');
   const [analyte, setAnalyte] = useState('');
   const [maximumDilutions, setMaximumDilutions] = useState('3');
@@ -40,7 +42,7 @@ export function RouteFinderForm({ materials, pending, onSubmit }: RouteFinderFor
       }}
     >
       <TextField label="Target concentration" inputMode="decimal" value={value} onChange={(event) => setValue(event.target.value)} className="md:col-span-1" />
-      <Select label="Unit" value={unit} onChange={(event) => setUnit(event.target.value)} options={TARGET_UNITS.map((each) => ({ value: each, label: each }))} />
+      <Select label="Unit" value={unit} onChange={(event) => isTargetUnit(event.target.value) && setUnit(event.target.value)} options={TARGET_UNITS.map((each) => ({ value: each, label: each }))} />
       <Select
         label="Reference material"
         className="md:col-span-2"

@@ -1,6 +1,6 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { launchChromium, screenshot, watchForPageProblems } from './support/chromium';
+import { launchChromium, openCleanPage, screenshot } from './support/chromium';
 import { startDilutraceServer, type RunningServer } from './support/dilutrace-server';
 
 /** Demo password for this run only; the seed gives it to every demo user. */
@@ -29,11 +29,7 @@ afterAll(async () => {
   await server?.stop();
 });
 
-async function openPage(): Promise<{ page: Page; problems: string[] }> {
-  await context.clearCookies();
-  const page = await context.newPage();
-  return { page, problems: watchForPageProblems(page) };
-}
+const openPage = () => openCleanPage(context);
 
 async function signIn(page: Page, local: string) {
   await page.goto(`${server.baseUrl}/sign-in`);

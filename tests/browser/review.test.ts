@@ -6,7 +6,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem } from '../../shared/contracts/library';
-import { launchChromium, screenshot, SCREENSHOT_DIR, watchForPageProblems } from './support/chromium';
+import { launchChromium, openCleanPage, screenshot, SCREENSHOT_DIR } from './support/chromium';
 import { startDilutraceServer, type RunningServer } from './support/dilutrace-server';
 
 /** Demo password for this run only; the seed gives it to every demo user. */
@@ -39,11 +39,7 @@ afterAll(async () => {
   if (work) rmSync(work, { recursive: true, force: true });
 });
 
-async function openPage(): Promise<{ page: Page; problems: string[] }> {
-  await browser.context.clearCookies();
-  const page = await browser.context.newPage();
-  return { page, problems: watchForPageProblems(page) };
-}
+const openPage = () => openCleanPage(browser.context);
 
 async function signIn(page: Page, local: string) {
   await page.goto(`${server.baseUrl}/sign-in`);

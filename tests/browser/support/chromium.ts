@@ -55,3 +55,10 @@ export function watchForPageProblems(page: Page): string[] {
   });
   return problems;
 }
+
+/** A new tab with no session, so one failed test cannot leave the next signed in; its problems are watched. */
+export async function openCleanPage(context: BrowserContext): Promise<{ page: Page; problems: string[] }> {
+  await context.clearCookies();
+  const page = await context.newPage();
+  return { page, problems: watchForPageProblems(page) };
+}

@@ -19,9 +19,11 @@ import type { Clock } from './lib/clock';
 import { limitBodyDepth, requireJsonBody } from './lib/body-guards';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import type { Mailer } from './mail/mailer';
-import { outboxRouter } from './mail/outbox-router';
+import { deliveryLogRouter } from './mail/delivery-log-router';
 import { invitationsRouter, labMembersRouter } from './members/members-router';
 import { membersService } from './members/members-service';
+import { operatorRouter } from './operator/operator-router';
+import { operatorService } from './operator/operator-service';
 import { certificatesService } from './library/certificates-service';
 import { importService } from './library/import-service';
 import { libraryRepository } from './library/library-repository';
@@ -75,7 +77,8 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   // express-session dates its cookies by the real clock, so the store compares with the same one.
   const sessions = new DatabaseSessionStore(db, () => Date.now());
   const auth = authService({ db, users, audit, mailer, sessions, now, publicUrl });
-  const members = membersService({ db, users, labs, audit, mailer, sessions, now, publicUrl });
+  const members = membersService({ db, users, labs, audit, mailer, now, publicUrl });
+  const operator = operatorService({ db, users, audit, sessions });
   const library = libraryRepository(db);
   const items = libraryService({ db, library, audit, now });
   const certificates = certificatesService({ library, audit, directory: config.certificateDir, now });
@@ -86,7 +89,7 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   const reviews = reviewService({ db, preparations: preparationRows, users, labs, audit, mailer, now, publicUrl, log });
   const routes = routeFinderService({ items, policy });
   const passport = createPassport(auth);
-  const authorize = createAuthorize(labs);
+  const authorize = createAuthorize(labs, users);
 
   const app = express();
   app.disable('x-powered-by');
@@ -146,7 +149,8 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   api.use('/auth', authRouter({ auth, passport, authorize, signInLimit: config.signInLimit ?? 10 }));
   api.use('/invitations', invitationsRouter({ members, auth }));
   api.use('/labs/:labId', labMembersRouter({ members, authorize }));
-  api.use('/labs/:labId', outboxRouter({ db, authorize }));
+  api.use('/operator', operatorRouter({ operator, authorize }));
+  api.use('/labs/:labId', deliveryLogRouter({ db, authorize }));
   api.use('/labs/:labId', libraryRouter({ items, certificates, imports, authorize }));
   api.use('/labs/:labId', policyRouter({ policy, authorize }));
   api.use('/labs/:labId', auditRouter({ db, authorize }));

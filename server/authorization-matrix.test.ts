@@ -8,9 +8,10 @@ import { agentFor, buildTestApp, demo, DEMO_PASSWORD, signIn, type Client, type 
 /**
  * Who may call each API route. A route the app serves but this table does not list fails the
  * suite, so a new route cannot ship without a decision here.
- *   public: anyone; signedIn: any signed-in user; member: any role in the lab; otherwise the roles.
+ *   public: anyone; signedIn: any signed-in user; member: any role in the lab; operator: the
+ *   instance operator only (outside lab roles; in the demo the admin account); otherwise the roles.
  */
-type Access = 'public' | 'signedIn' | 'member' | Role[];
+type Access = 'public' | 'signedIn' | 'member' | 'operator' | Role[];
 const KEEPERS: Role[] = ['qa', 'admin'];
 const ACCESS: Record<string, Access> = {
   'GET /api/health': 'public',
@@ -25,9 +26,15 @@ const ACCESS: Record<string, Access> = {
   'POST /api/invitations/:token/accept': 'public',
   'GET /api/labs/:labId/members': ['admin'],
   'PATCH /api/labs/:labId/members/:userId': ['admin'],
+  'DELETE /api/labs/:labId/members/:userId': ['admin'],
   'GET /api/labs/:labId/invitations': ['admin'],
   'POST /api/labs/:labId/invitations': ['admin'],
-  'GET /api/labs/:labId/outbox': ['admin'],
+  'POST /api/labs/:labId/invitations/:invitationId/revoke': ['admin'],
+  'GET /api/labs/:labId/delivery-log': ['admin'],
+  'GET /api/operator/accounts': 'operator',
+  'POST /api/operator/accounts/:userId/disable': 'operator',
+  'POST /api/operator/accounts/:userId/enable': 'operator',
+  'GET /api/operator/mail': 'operator',
   'GET /api/labs/:labId/equipment-templates': 'member',
   'GET /api/labs/:labId/equipment-csv/columns': 'member',
   'GET /api/labs/:labId/equipment-csv/template': 'member',
@@ -67,6 +74,8 @@ const ACCESS: Record<string, Access> = {
 
 const ROLES: Role[] = ['admin', 'qa', 'analyst', 'auditor'];
 const LOCAL: Record<Role, 'admin' | 'qa' | 'analyst' | 'auditor'> = { admin: 'admin', qa: 'qa', analyst: 'analyst', auditor: 'auditor' };
+/** The demo admin account is also the instance operator; no other demo account is. */
+const OPERATOR_ROLE: Role = 'admin';
 
 let t: TestApp;
 let ownLab: number;
@@ -125,7 +134,8 @@ describe('authorization matrix: every API route × role × (own lab, other lab, 
         const client = clients.get(role)!;
         const own = await call(client, method, concrete(path, ownLab));
         cells += 1;
-        const allowed = access === 'public' || access === 'signedIn' || access === 'member' || access.includes(role);
+        const allowed =
+          access === 'public' || access === 'signedIn' || access === 'member' || (access === 'operator' ? role === OPERATOR_ROLE : access.includes(role));
         const hidden = own.status === 404 && own.body?.error?.message === LAB_HIDDEN;
         if (allowed && (own.status === 401 || own.status === 403 || hidden)) failures.push(`${key} as ${role} in own lab → ${own.status}, expected access`);
         if (!allowed && own.status !== 403) failures.push(`${key} as ${role} in own lab → ${own.status}, expected 403`);

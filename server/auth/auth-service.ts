@@ -62,7 +62,7 @@ export function authService(deps: {
       }
       const list = [...labs.values()];
       const activeLabId = requestedLabId !== undefined && labs.has(requestedLabId) ? requestedLabId : (list[0]?.id ?? null);
-      return { user, labs: list, activeLabId, csrfToken };
+      return { user, labs: list, activeLabId, operator: await users.isOperator(user.id), csrfToken };
     },
 
     async recordSignIn(user: SessionUser, labId: number | null): Promise<void> {
@@ -81,10 +81,10 @@ export function authService(deps: {
         created_at: created.toISOString(),
         expires_at: new Date(created.getTime() + RESET_LIFETIME_MS).toISOString(),
       });
-      const labId = (await users.memberships(user.id))[0]?.lab_id ?? null;
-      await audit.record({ labId, actorUserId: user.id, action: 'auth.password_reset_requested', entityType: 'user', entityId: user.id, summary: `Password reset requested for ${user.email}` });
+      // Account mail is filed by recipient only: no lab's delivery log lists it (lab id null).
+      await audit.record({ labId: null, actorUserId: user.id, action: 'auth.password_reset_requested', entityType: 'user', entityId: user.id, summary: `Password reset requested for ${user.email}` });
       const message = passwordResetMessage({ name: user.name, link: deps.publicUrl(`/reset-password/${token}`) });
-      await mailer.send({ to: user.email, labId, ...message });
+      await mailer.send({ to: user.email, labId: null, ...message });
     },
 
     /** Sets a new password from a reset link; the link works once, for one hour, and ends other sessions. */
@@ -101,8 +101,7 @@ export function authService(deps: {
         await users.setPassword(user.id, passwordHash, trx);
       });
       await deps.sessions.destroyForUser(user.id);
-      const labId = (await users.memberships(user.id))[0]?.lab_id ?? null;
-      await audit.record({ labId, actorUserId: user.id, action: 'auth.password_reset', entityType: 'user', entityId: user.id, summary: `Password reset for ${user.email}` });
+      await audit.record({ labId: null, actorUserId: user.id, action: 'auth.password_reset', entityType: 'user', entityId: user.id, summary: `Password reset for ${user.email}` });
     },
   };
 }

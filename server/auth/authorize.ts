@@ -3,6 +3,7 @@ import { idParam } from '../../shared/contracts/auth';
 import type { Role } from '../../shared/contracts/roles';
 import { forbidden, notFound, unauthenticated } from '../lib/errors';
 import type { LabsRepository } from '../labs/labs-repository';
+import type { UsersRepository } from './users-repository';
 
 export interface SessionUser {
   id: number;
@@ -35,8 +36,9 @@ declare global {
  * - `authorize.lab(roles)`: the route has `:labId`; the user must be a member of that lab and hold
  *   one of `roles` (or any role when `roles` is 'member'). A lab the user is not in answers 404,
  *   so its existence is not revealed.
+ * - `authorize.operator`: the instance operator, a flag on the account held outside every lab's roles.
  */
-export function createAuthorize(labs: LabsRepository) {
+export function createAuthorize(labs: LabsRepository, users: UsersRepository) {
   const signedIn: RequestHandler = (req, _res, next) => {
     if (!req.user) throw unauthenticated();
     next();
@@ -53,6 +55,11 @@ export function createAuthorize(labs: LabsRepository) {
       req.lab = { id: parsed.data, roles: held };
       next();
     };
-  return { signedIn, lab };
+  const operator: RequestHandler = async (req, _res, next) => {
+    if (!req.user) throw unauthenticated();
+    if (!(await users.isOperator(req.user.id))) throw forbidden('Only the instance operator may do this.');
+    next();
+  };
+  return { signedIn, lab, operator };
 }
 export type Authorize = ReturnType<typeof createAuthorize>;

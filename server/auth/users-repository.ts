@@ -8,6 +8,7 @@ export interface UserRow {
   name: string;
   password_hash: string;
   active: number | boolean;
+  operator: number | boolean;
   created_at: string;
 }
 
@@ -29,6 +30,18 @@ export function usersRepository(db: Db) {
     },
     setPassword: (id: number, passwordHash: string, trx: Db = db) => trx('users').where({ id }).update({ password_hash: passwordHash }),
     setActive: (id: number, active: boolean, trx: Db = db) => trx('users').where({ id }).update({ active }),
+    setOperator: (id: number, operator: boolean, trx: Db = db) => trx('users').where({ id }).update({ operator }),
+    isOperator: async (id: number): Promise<boolean> => Boolean((await db('users').where({ id, active: true }).first('operator'))?.operator),
+    list: (): Promise<UserRow[]> => db('users').orderBy('email'),
+    labNamesByUser: async (): Promise<Map<number, string[]>> => {
+      const rows: { user_id: number; name: string }[] = await db('memberships as m')
+        .join('labs as l', 'l.id', 'm.lab_id')
+        .distinct('m.user_id', 'l.name')
+        .orderBy(['m.user_id', 'l.name']);
+      const byUser = new Map<number, string[]>();
+      for (const row of rows) byUser.set(row.user_id, [...(byUser.get(row.user_id) ?? []), row.name]);
+      return byUser;
+    },
     count: async (): Promise<number> => Number((await db('users').count({ n: '*' }).first())?.n ?? 0),
     memberships: (userId: number): Promise<MembershipRow[]> =>
       db('memberships as m')

@@ -7,8 +7,9 @@ import { insertedId } from './inserted-id';
 /** The invented demo lab (DESIGN.md §7). All names are made up. */
 export const DEMO_LAB = { name: 'Wellmere Regional Water Laboratory', slug: 'wellmere-water', domain: 'wellmere-water.example' };
 
-export const DEMO_PEOPLE: { local: string; name: string; roles: Role[] }[] = [
-  { local: 'admin', name: 'Rowan Achterberg', roles: ['admin'] },
+/** The demo admin is also the instance operator (outside the lab's roles; see DESIGN.md §2). */
+export const DEMO_PEOPLE: { local: string; name: string; roles: Role[]; operator?: boolean }[] = [
+  { local: 'admin', name: 'Rowan Achterberg', roles: ['admin'], operator: true },
   { local: 'qa', name: 'Imogen Tasker', roles: ['qa'] },
   { local: 'analyst', name: 'Dev Okonjo', roles: ['analyst'] },
   { local: 'analyst2', name: 'Lucía Ferreira-Blom', roles: ['analyst'] },
@@ -31,7 +32,7 @@ export async function seedDemoLab(db: Db, options: { password: string; now: Date
     const ids: Record<string, number> = {};
     for (const person of DEMO_PEOPLE) {
       const [user] = await trx('users')
-        .insert({ email: demoEmail(person.local), name: person.name, password_hash: passwordHash, active: true, created_at: at })
+        .insert({ email: demoEmail(person.local), name: person.name, password_hash: passwordHash, active: true, operator: person.operator === true, created_at: at })
         .returning('id');
       const userId = insertedId(user);
       ids[person.local] = userId;

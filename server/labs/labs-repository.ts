@@ -35,6 +35,8 @@ export function labsRepository(db: Db) {
         await trx('memberships').insert({ user_id: userId, lab_id: labId, role, created_at: createdAt }).onConflict(['user_id', 'lab_id', 'role']).ignore();
       }
     },
+    removeMember: async (userId: number, labId: number, trx: Db): Promise<number> =>
+      Number(await trx('memberships').where({ user_id: userId, lab_id: labId }).delete()),
     countActiveAdmins: async (labId: number, trx: Db = db): Promise<number> =>
       Number(
         (

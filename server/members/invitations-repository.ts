@@ -15,11 +15,12 @@ export interface InvitationRow {
   expires_at: string;
   accepted_at: string | null;
   accepted_user_id: number | null;
+  revoked_at: string | null;
 }
 
 export function invitationsRepository(db: Db) {
   return {
-    async insert(row: Omit<InvitationRow, 'id' | 'accepted_at' | 'accepted_user_id' | 'invited_by_name'>): Promise<number> {
+    async insert(row: Omit<InvitationRow, 'id' | 'accepted_at' | 'accepted_user_id' | 'revoked_at' | 'invited_by_name'>): Promise<number> {
       const [inserted] = await db('invitations').insert(row).returning('id');
       return insertedId(inserted);
     },
@@ -32,7 +33,12 @@ export function invitationsRepository(db: Db) {
         .where('i.lab_id', labId)
         .orderBy('i.id', 'desc')
         .select('i.*', 'u.name as invited_by_name'),
-    markAccepted: (id: number, userId: number, at: string, trx: Db = db) =>
-      trx('invitations').where({ id }).whereNull('accepted_at').update({ accepted_at: at, accepted_user_id: userId }),
+    /** Claims a pending invitation; the affected-row count (0 or 1) says whether this call won it. */
+    claim: async (id: number, at: string, trx: Db): Promise<boolean> =>
+      Number(await trx('invitations').where({ id }).whereNull('accepted_at').whereNull('revoked_at').update({ accepted_at: at })) === 1,
+    setAcceptedUser: (id: number, userId: number, trx: Db) => trx('invitations').where({ id }).update({ accepted_user_id: userId }),
+    /** Revokes a pending invitation of this lab; false when it was already accepted or revoked. */
+    revoke: async (id: number, labId: number, by: number, at: string): Promise<boolean> =>
+      Number(await db('invitations').where({ id, lab_id: labId }).whereNull('accepted_at').whereNull('revoked_at').update({ revoked_at: at, revoked_by: by })) === 1,
   };
 }

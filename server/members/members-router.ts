@@ -9,6 +9,7 @@ import { valid, validate } from '../lib/validate';
 import type { MembersService } from './members-service';
 
 const memberParams = z.object({ labId: idParam, userId: idParam });
+const invitationParams = z.object({ labId: idParam, invitationId: idParam });
 
 /** Routes under /api/labs/:labId for the lab's administrator. */
 export function labMembersRouter(deps: { members: MembersService; authorize: Authorize }) {
@@ -26,6 +27,12 @@ export function labMembersRouter(deps: { members: MembersService; authorize: Aut
     res.json(await members.update(labId(req), req.user as SessionUser, params.userId, body));
   });
 
+  router.delete('/members/:userId', admin, validate({ params: memberParams }), async (req, res) => {
+    const { params } = valid(req, { params: memberParams });
+    await members.remove(labId(req), req.user as SessionUser, params.userId);
+    res.status(204).end();
+  });
+
   router.get('/invitations', admin, async (req, res) => {
     res.json(await members.listInvitations(labId(req)));
   });
@@ -35,10 +42,18 @@ export function labMembersRouter(deps: { members: MembersService; authorize: Aut
     res.status(201).json(await members.invite(labId(req), req.user as SessionUser, body));
   });
 
+  router.post('/invitations/:invitationId/revoke', admin, validate({ params: invitationParams }), async (req, res) => {
+    const { params } = valid(req, { params: invitationParams });
+    res.json(await members.revokeInvitation(labId(req), req.user as SessionUser, params.invitationId));
+  });
+
   return router;
 }
 
-/** The public invitation link: preview, then accept (which signs the person in). */
+/**
+ * The public invitation link: preview, then accept. A new e-mail's accept signs the new account in;
+ * an existing account accepts from its own session and switches to the lab it joined.
+ */
 export function invitationsRouter(deps: { members: MembersService; auth: AuthService }) {
   const { members, auth } = deps;
   const router = Router();
@@ -50,9 +65,12 @@ export function invitationsRouter(deps: { members: MembersService; auth: AuthSer
 
   router.post('/:token/accept', validate({ params: tokenParamsSchema, body: invitationAcceptSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: tokenParamsSchema, body: invitationAcceptSchema });
-    const user = await members.accept(params.token, body);
-    await new Promise<void>((resolve, reject) => req.login(user, (error) => (error ? reject(error) : resolve())));
-    const me = await auth.me(user, undefined, csrfToken(req));
+    const signedIn = req.user as SessionUser | undefined;
+    const user = await members.accept(params.token, signedIn, body);
+    if (signedIn?.id !== user.id) {
+      await new Promise<void>((resolve, reject) => req.login(user, (error) => (error ? reject(error) : resolve())));
+    }
+    const me = await auth.me(user, await members.labOf(params.token), csrfToken(req));
     req.session.activeLabId = me.activeLabId ?? undefined;
     res.json(me);
   });

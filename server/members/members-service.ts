@@ -2,13 +2,12 @@ import { invitationJoinNewSchema, type Invitation, type InvitationPreview, type 
 import type { Role } from '../../shared/contracts/roles';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
-import { hashPassword, verifyPassword } from '../auth/password';
-import type { DatabaseSessionStore } from '../auth/session-store';
+import { hashPassword } from '../auth/password';
 import { hashToken, newToken } from '../auth/tokens';
 import type { UsersRepository } from '../auth/users-repository';
 import type { Db } from '../db/connection';
 import type { LabsRepository, MemberRow } from '../labs/labs-repository';
-import { conflict, notFound, validationError } from '../lib/errors';
+import { conflict, forbidden, notFound, unauthenticated, validationError } from '../lib/errors';
 import { toFieldIssues } from '../lib/validate';
 import type { Mailer } from '../mail/mailer';
 import { invitationMessage } from '../mail/messages';
@@ -43,7 +42,10 @@ const toInvitation = (row: InvitationRow): Invitation => ({
   createdAt: row.created_at,
   expiresAt: row.expires_at,
   acceptedAt: row.accepted_at,
+  revokedAt: row.revoked_at,
 });
+
+const invitationUsed = () => conflict('invitation_used', 'This invitation has just been accepted. Sign in to continue.');
 
 export function membersService(deps: {
   db: Db;
@@ -51,7 +53,6 @@ export function membersService(deps: {
   labs: LabsRepository;
   audit: AuditRepository;
   mailer: Mailer;
-  sessions: DatabaseSessionStore;
   now: () => Date;
   publicUrl: (path: string) => string;
 }) {
@@ -60,7 +61,7 @@ export function membersService(deps: {
 
   async function openInvitation(token: string): Promise<InvitationRow> {
     const row = await invitations.findByTokenHash(hashToken(token));
-    if (!row || row.accepted_at || row.expires_at <= now().toISOString()) {
+    if (!row || row.accepted_at || row.revoked_at || row.expires_at <= now().toISOString()) {
       throw notFound('This invitation (it may have expired or been used already)');
     }
     return row;
@@ -131,23 +132,27 @@ export function membersService(deps: {
       };
     },
 
-    /** Joins the lab with the invited role: creates the account, or confirms an existing one by its password. */
-    async accept(token: string, input: { name?: string; password: string }): Promise<SessionUser> {
+    /**
+     * Joins the lab with the invited role. An e-mail that already has an account accepts signed in
+     * as that account (the link never checks a password); a new e-mail sets its name and password.
+     * The invitation is claimed by a conditional update, so of concurrent accepts one wins and the
+     * others get a conflict.
+     */
+    async accept(token: string, signedIn: SessionUser | undefined, input: { name?: string; password?: string }): Promise<SessionUser> {
       const row = await openInvitation(token);
       const existing = await users.findByEmail(row.email);
       const at = now().toISOString();
       let userId: number;
       if (existing) {
-        if (!existing.active) throw validationError('This account is deactivated. Ask the lab administrator to reactivate it.');
-        if (!(await verifyPassword(input.password, existing.password_hash))) {
-          throw validationError('You already have a Dilutrace account: enter its current password to join this lab.', [
-            { path: 'password', message: 'This is not the password of your existing account.' },
-          ]);
+        if (!signedIn) throw unauthenticated(`You already have a Dilutrace account. Sign in as ${row.email} to accept this invitation.`);
+        if (signedIn.email.toLowerCase() !== row.email.toLowerCase()) {
+          throw forbidden(`This invitation is for ${row.email}. Sign out, then sign in as ${row.email} to accept it.`);
         }
         userId = existing.id;
         await db.transaction(async (trx) => {
+          if (!(await invitations.claim(row.id, at, trx))) throw invitationUsed();
+          await invitations.setAcceptedUser(row.id, userId, trx);
           await labs.addRole(userId, row.lab_id, row.role, at, trx);
-          await invitations.markAccepted(row.id, userId, at, trx);
         });
       } else {
         const parsed = invitationJoinNewSchema.safeParse(input);
@@ -157,9 +162,10 @@ export function membersService(deps: {
         }
         const passwordHash = await hashPassword(parsed.data.password);
         userId = await db.transaction(async (trx) => {
+          if (!(await invitations.claim(row.id, at, trx))) throw invitationUsed();
           const id = await users.insert({ email: row.email, name: parsed.data.name, passwordHash, createdAt: at }, trx);
+          await invitations.setAcceptedUser(row.id, id, trx);
           await labs.addRole(id, row.lab_id, row.role, at, trx);
-          await invitations.markAccepted(row.id, id, at, trx);
           return id;
         });
       }
@@ -175,30 +181,68 @@ export function membersService(deps: {
       return { id: userId, email: row.email, name: user?.name ?? '' };
     },
 
-    /** Changes roles or deactivates; the lab always keeps at least one active admin. */
-    async update(labId: number, actor: SessionUser, userId: number, change: MemberUpdate): Promise<Member> {
-      const before = await member(labId, userId);
-      await db.transaction(async (trx) => {
-        if (change.roles) await labs.setRoles(userId, labId, [...new Set(change.roles)], now().toISOString(), trx);
-        if (change.active !== undefined) await users.setActive(userId, change.active, trx);
-        if ((await labs.countActiveAdmins(labId, trx)) === 0) {
-          throw conflict('last_admin', 'The lab needs at least one active administrator. Make someone else admin first.');
-        }
-      });
-      const after = await member(labId, userId);
-      if (change.active === false) await deps.sessions.destroyForUser(userId);
+    /** The lab an invitation (by its token) is for, once accepted: the session switches to it. */
+    labOf: async (token: string): Promise<number | undefined> => (await invitations.findByTokenHash(hashToken(token)))?.lab_id,
+
+    async revokeInvitation(labId: number, actor: SessionUser, invitationId: number): Promise<Invitation> {
+      const row = await invitations.findById(invitationId);
+      if (!row || row.lab_id !== labId) throw notFound('The invitation');
+      if (!(await invitations.revoke(invitationId, labId, actor.id, now().toISOString()))) {
+        throw conflict('invitation_closed', 'This invitation was already accepted or revoked.');
+      }
       await audit.record({
         labId,
         actorUserId: actor.id,
-        action: change.active === false ? 'member.deactivated' : change.active === true && !before.active ? 'member.reactivated' : 'member.roles_changed',
+        action: 'member.invitation_revoked',
+        entityType: 'invitation',
+        entityId: invitationId,
+        summary: `${actor.name} revoked the invitation of ${row.email} as ${row.role}`,
+      });
+      return toInvitation((await invitations.findById(invitationId)) as InvitationRow);
+    },
+
+    /** Changes a member's roles in this lab; the lab always keeps at least one active admin. */
+    async update(labId: number, actor: SessionUser, userId: number, change: MemberUpdate): Promise<Member> {
+      const before = await member(labId, userId);
+      await db.transaction(async (trx) => {
+        await labs.setRoles(userId, labId, [...new Set(change.roles)], now().toISOString(), trx);
+        if ((await labs.countActiveAdmins(labId, trx)) === 0) throw lastAdmin();
+      });
+      const after = await member(labId, userId);
+      await audit.record({
+        labId,
+        actorUserId: actor.id,
+        action: 'member.roles_changed',
         entityType: 'user',
         entityId: userId,
-        summary: `${actor.name} changed ${before.email}: roles ${before.roles.join(', ')} → ${after.roles.join(', ')}, ${before.active ? 'active' : 'inactive'} → ${after.active ? 'active' : 'inactive'}`,
-        before: { roles: before.roles, active: before.active },
-        after: { roles: after.roles, active: after.active },
+        summary: `${actor.name} changed the roles of ${before.email}: ${before.roles.join(', ')} → ${after.roles.join(', ')}`,
+        before: { roles: before.roles },
+        after: { roles: after.roles },
       });
       return after;
     },
+
+    /**
+     * Ends a person's membership of this lab. Their account, their other labs and what they did
+     * here (records, audit trail) stay; their sessions lose this lab at the next request.
+     */
+    async remove(labId: number, actor: SessionUser, userId: number): Promise<void> {
+      const before = await member(labId, userId);
+      await db.transaction(async (trx) => {
+        await labs.removeMember(userId, labId, trx);
+        if ((await labs.countActiveAdmins(labId, trx)) === 0) throw lastAdmin();
+      });
+      await audit.record({
+        labId,
+        actorUserId: actor.id,
+        action: 'member.removed',
+        entityType: 'user',
+        entityId: userId,
+        summary: `${actor.name} removed ${before.email} (${before.roles.join(', ')}) from the lab`,
+        before: { roles: before.roles },
+      });
+    },
   };
 }
+const lastAdmin = () => conflict('last_admin', 'The lab needs at least one active administrator. Make someone else admin first.');
 export type MembersService = ReturnType<typeof membersService>;

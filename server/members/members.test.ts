@@ -33,7 +33,7 @@ describe('role boundaries on the member routes', () => {
   const adminRoutes = (lab: () => number) => [
     ['get', () => `/api/labs/${lab()}/members`],
     ['get', () => `/api/labs/${lab()}/invitations`],
-    ['get', () => `/api/labs/${lab()}/outbox`],
+    ['get', () => `/api/labs/${lab()}/delivery-log`],
     ['post', () => `/api/labs/${lab()}/invitations`],
   ] as const;
 
@@ -67,8 +67,8 @@ describe('role boundaries on the member routes', () => {
       const res = method === 'get' ? await admin.get(url()) : await admin.post(url(), { email: 'x@y.example', name: 'X', role: 'analyst' });
       expect(res.status, `${method} ${url()}`).toBe(404);
     }
-    const outbox = (await admin.get(`/api/labs/${labId}/outbox`).expect(200)).body as { subject: string }[];
-    expect(outbox.map((m) => m.subject)).not.toContain('Harrowgate only');
+    const log = (await admin.get(`/api/labs/${labId}/delivery-log`).expect(200)).body as { subject: string }[];
+    expect(log.map((m) => m.subject)).not.toContain('Harrowgate only');
     const otherAdmin = await signIn(t.app, 'admin@harrowgate.example');
     const members = (await otherAdmin.get(`/api/labs/${otherLabId}/members`).expect(200)).body as { email: string }[];
     expect(members.map((m) => m.email)).toEqual(['admin@harrowgate.example']);
@@ -91,10 +91,12 @@ describe('invitations through the captured mail', () => {
       .expect(201);
     expect(invited.body.email).toBe('priya.nandakumar@wellmere-water.example');
 
-    const outbox = (await admin.get(`/api/labs/${labId}/outbox`).expect(200)).body as { subject: string; to: string; html: string }[];
-    expect(outbox[0].subject).toMatch(/invited to Wellmere Regional Water Laboratory/);
-    expect(outbox[0].to).toContain('priya.nandakumar@wellmere-water.example');
-    expect(outbox[0].html).toMatch(/<a href="http:\/\/dilutrace\.test\/invitation\//);
+    const log = (await admin.get(`/api/labs/${labId}/delivery-log`).expect(200)).body as { subject: string; to: string }[];
+    expect(log[0].subject).toMatch(/invited to Wellmere Regional Water Laboratory/);
+    expect(log[0].to).toContain('priya.nandakumar@wellmere-water.example');
+    // The demo admin is also the instance operator, who reads the captured body.
+    const mail = (await admin.get('/api/operator/mail').expect(200)).body as { html: string }[];
+    expect(mail[0].html).toMatch(/<a href="http:\/\/dilutrace\.test\/invitation\//);
 
     const token = await tokenFromOutbox(t.db, 'priya.nandakumar@wellmere-water.example', '/invitation/');
     const visitor = await agentFor(t.app);
@@ -118,15 +120,17 @@ describe('invitations through the captured mail', () => {
     expect(await t.db('audit_events').where({ action: 'member.joined' })).toHaveLength(1);
   });
 
-  it('lets a person with an account in another lab join by confirming their current password', async () => {
+  it('lets a person with an account in another lab join, signed in as themselves', async () => {
     const admin = await signIn(t.app, demo('admin'));
     await admin.post(`/api/labs/${labId}/invitations`, { email: 'admin@harrowgate.example', name: 'Ode Marlow', role: 'auditor' }).expect(201);
     const token = await tokenFromOutbox(t.db, 'admin@harrowgate.example', '/invitation/');
     const visitor = await agentFor(t.app);
     expect((await visitor.get(`/api/invitations/${token}`)).body.existingAccount).toBe(true);
-    await visitor.post(`/api/invitations/${token}/accept`, { name: 'Ode Marlow', password: 'wrong-password-123' }).expect(400);
-    const me = (await visitor.post(`/api/invitations/${token}/accept`, { password: DEMO_PASSWORD }).expect(200)).body;
+    await visitor.post(`/api/invitations/${token}/accept`, { password: DEMO_PASSWORD }).expect(401);
+    const invitee = await signIn(t.app, 'admin@harrowgate.example');
+    const me = (await invitee.post(`/api/invitations/${token}/accept`, {}).expect(200)).body;
     expect(me.labs.map((l: { name: string }) => l.name).sort()).toEqual(['Harrowgate Food Testing', 'Wellmere Regional Water Laboratory']);
+    expect(me.activeLabId).toBe(labId);
   });
 
   it('refuses to invite someone who is already a member', async () => {
@@ -144,8 +148,8 @@ describe('invitations through the captured mail', () => {
   });
 });
 
-describe('roles and deactivation', () => {
-  it('changes roles, deactivates a member (who can no longer sign in) and keeps their records', async () => {
+describe('roles and removal', () => {
+  it('changes roles, removes a member from the lab (who then has no lab) and keeps their account and records', async () => {
     const admin = await signIn(t.app, demo('admin'));
     const members = (await admin.get(`/api/labs/${labId}/members`).expect(200)).body as { userId: number; email: string }[];
     const analyst2 = members.find((m) => m.email === demo('analyst2'))!;
@@ -153,13 +157,13 @@ describe('roles and deactivation', () => {
 
     const changed = await admin.patch(`/api/labs/${labId}/members/${analyst2.userId}`, { roles: ['analyst', 'qa'] }).expect(200);
     expect(changed.body.roles.sort()).toEqual(['analyst', 'qa']);
-    await admin.patch(`/api/labs/${labId}/members/${analyst2.userId}`, { active: false }).expect(200);
+    await admin.delete(`/api/labs/${labId}/members/${analyst2.userId}`).expect(204);
 
-    await session.get('/api/auth/me').expect(401);
-    const retry = await agentFor(t.app);
-    await retry.post('/api/auth/login', { email: demo('analyst2'), password: DEMO_PASSWORD }).expect(401);
-    expect(Boolean((await t.db('users').where({ email: demo('analyst2') }).first()).active)).toBe(false);
-    expect(await t.db('audit_events').where({ action: 'member.deactivated' })).toHaveLength(1);
+    await session.get(`/api/labs/${labId}/preparations`).expect(404);
+    expect((await session.get('/api/auth/me').expect(200)).body).toMatchObject({ labs: [], activeLabId: null });
+    expect(Boolean((await t.db('users').where({ email: demo('analyst2') }).first()).active)).toBe(true);
+    expect((await admin.get(`/api/labs/${labId}/members`).expect(200)).body.map((m: { email: string }) => m.email)).not.toContain(demo('analyst2'));
+    expect(await t.db('audit_events').where({ action: 'member.removed', lab_id: labId })).toHaveLength(1);
   });
 
   it('keeps at least one active admin', async () => {

@@ -41,6 +41,8 @@ export const meSchema = z.object({
   user: userSummarySchema,
   labs: z.array(labMembershipSchema),
   activeLabId: z.number().int().nullable(),
+  /** The instance operator (outside every lab's roles): disables accounts, reads the captured mail. */
+  operator: z.boolean(),
   csrfToken: z.string(),
 });
 export type Me = z.infer<typeof meSchema>;

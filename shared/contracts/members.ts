@@ -7,6 +7,7 @@ export const memberSchema = z.object({
   email: z.string(),
   name: z.string(),
   roles: z.array(roleSchema),
+  /** The account's status everywhere; only the instance operator changes it. */
   active: z.boolean(),
   joinedAt: z.string(),
 });
@@ -30,10 +31,11 @@ export const invitationSchema = z.object({
   createdAt: z.string(),
   expiresAt: z.string(),
   acceptedAt: z.string().nullable(),
+  revokedAt: z.string().nullable(),
 });
 export type Invitation = z.infer<typeof invitationSchema>;
 
-/** What the invitation link shows before the person sets a password. */
+/** What the invitation link shows: a new e-mail sets a password, an existing account signs in to accept. */
 export const invitationPreviewSchema = z.object({
   email: z.string(),
   name: z.string(),
@@ -49,33 +51,30 @@ export const invitationJoinNewSchema = z.object({
   password: newPasswordSchema,
 });
 
-/** A person with an account elsewhere joining: confirms with their current password. */
-export const invitationJoinExistingSchema = z.object({
-  password: z.string().min(1, 'Enter the password of your existing account.').max(200),
-});
-
-/** The accept route takes either shape; the server applies the one that fits the account. */
+/**
+ * The accept route: a new e-mail sends a name and a new password; an existing account sends
+ * nothing, signed in as the invited e-mail (the link never checks a password).
+ */
 export const invitationAcceptSchema = z.object({
   name: personNameSchema.optional(),
-  password: z.string().min(1, 'Enter a password.').max(200),
+  password: z.string().max(200).optional(),
 });
 export type InvitationAccept = z.infer<typeof invitationAcceptSchema>;
 
-export const memberUpdateSchema = z
-  .object({
-    roles: z.array(roleSchema).min(1, 'Give the member at least one role.').optional(),
-    active: z.boolean().optional(),
-  })
-  .refine((value) => value.roles !== undefined || value.active !== undefined, 'Nothing to change.');
+/** A lab admin changes a member's roles in their lab; accounts are switched off only by the operator. */
+export const memberUpdateSchema = z.object({
+  active: z
+    .undefined({ error: 'A lab administrator changes roles only. To take someone out of this lab, remove them from it.' })
+    .optional(),
+  roles: z.array(roleSchema, { error: 'Choose at least one role.' }).min(1, 'Give the member at least one role.'),
+});
 export type MemberUpdate = z.infer<typeof memberUpdateSchema>;
 
-export const outboxMessageSchema = z.object({
+/** One line of a lab's mail delivery log: who, what and when, never the body or its links. */
+export const deliveryLogEntrySchema = z.object({
   id: z.number().int(),
   to: z.string(),
-  from: z.string(),
   subject: z.string(),
-  text: z.string(),
-  html: z.string().nullable(),
   createdAt: z.string(),
 });
-export type OutboxMessage = z.infer<typeof outboxMessageSchema>;
+export type DeliveryLogEntry = z.infer<typeof deliveryLogEntrySchema>;

@@ -4,8 +4,14 @@ import { navigationFor } from './navigation';
 const labels = (roles: Parameters<typeof navigationFor>[0]) => navigationFor(roles).map((item) => item.label);
 
 describe('navigationFor', () => {
-  it('gives an administrator the member and outbox pages, the approved records and the audit trail', () => {
-    expect(labels(['admin'])).toEqual(['Dashboard', 'Preparations', 'Library', 'Lab policy', 'Approved records', 'Audit trail', 'Members', 'Outbox']);
+  it('gives an administrator the member page, the delivery log, the approved records and the audit trail', () => {
+    expect(labels(['admin'])).toEqual(['Dashboard', 'Preparations', 'Library', 'Lab policy', 'Approved records', 'Audit trail', 'Members', 'Delivery log']);
+  });
+
+  it('gives the captured mail to the instance operator alone, whatever their lab roles', () => {
+    expect(labels(['admin'])).not.toContain('Captured mail');
+    expect(navigationFor(['admin'], true).map((item) => item.label)).toContain('Captured mail');
+    expect(navigationFor([], true).map((item) => item.label)).toEqual(['Dashboard', 'Captured mail']);
   });
 
   it('gives analysts, QA and auditors the preparations, the library and the lab policy (read-only unless QA)', () => {
@@ -22,7 +28,7 @@ describe('navigationFor', () => {
 
   it('takes the union of several roles without repeating an entry', () => {
     expect(labels(['analyst', 'admin', 'qa'])).toEqual([
-      'Dashboard', 'Preparations', 'Route finder', 'Library', 'Lab policy', 'Review queue', 'Approved records', 'Audit trail', 'Members', 'Outbox',
+      'Dashboard', 'Preparations', 'Route finder', 'Library', 'Lab policy', 'Review queue', 'Approved records', 'Audit trail', 'Members', 'Delivery log',
     ]);
   });
 

@@ -2,8 +2,11 @@ import type { Role } from '../../shared/contracts/roles';
 import { paths } from '../config/paths';
 import { can, type Permission } from '../lib/authorization';
 
-/** `null`: everyone signed in; `'member'`: anyone with a role in the active lab; otherwise that permission. */
-export type NavigationItem = { label: string; href: string; permission: Permission | 'member' | null };
+/**
+ * `null`: everyone signed in; `'member'`: anyone with a role in the active lab; `'operator'`: the
+ * instance operator, whatever their lab roles; otherwise that permission.
+ */
+export type NavigationItem = { label: string; href: string; permission: Permission | 'member' | 'operator' | null };
 
 const NAVIGATION: readonly NavigationItem[] = [
   { label: 'Dashboard', href: paths.app.dashboard.href(), permission: null },
@@ -17,12 +20,16 @@ const NAVIGATION: readonly NavigationItem[] = [
   { label: 'Approved records', href: paths.app.records.href(), permission: 'member' },
   { label: 'Audit trail', href: paths.app.audit.href(), permission: 'readAuditTrail' },
   { label: 'Members', href: paths.app.members.href(), permission: 'manageMembers' },
-  { label: 'Outbox', href: paths.app.outbox.href(), permission: 'readOutbox' },
+  { label: 'Delivery log', href: paths.app.deliveryLog.href(), permission: 'readDeliveryLog' },
+  { label: 'Captured mail', href: paths.app.capturedMail.href(), permission: 'operator' },
 ];
 
-/** The navigation entries the given roles (in the active lab) may use, in display order. */
-export function navigationFor(roles: readonly Role[]): NavigationItem[] {
-  return NAVIGATION.filter(
-    (item) => item.permission === null || (item.permission === 'member' ? roles.length > 0 : can(roles, item.permission)),
-  );
+/** The navigation entries the given roles (in the active lab) and the operator flag open, in display order. */
+export function navigationFor(roles: readonly Role[], operator = false): NavigationItem[] {
+  return NAVIGATION.filter((item) => {
+    if (item.permission === null) return true;
+    if (item.permission === 'member') return roles.length > 0;
+    if (item.permission === 'operator') return operator;
+    return can(roles, item.permission);
+  });
 }

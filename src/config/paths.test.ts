@@ -47,7 +47,7 @@ describe('record, review and audit paths', () => {
 
 describe('safeRedirectPath', () => {
   it('keeps paths inside the app', () => {
-    expect(safeRedirectPath('/outbox?message=3')).toBe('/outbox?message=3');
+    expect(safeRedirectPath('/captured-mail?message=3')).toBe('/captured-mail?message=3');
   });
 
   it('refuses other origins and falls back to the dashboard', () => {

@@ -86,10 +86,14 @@ export const paths = {
       path: '/policy',
       href: () => '/policy',
     },
-    outbox: {
-      path: '/outbox',
+    deliveryLog: {
+      path: '/delivery-log',
+      href: () => '/delivery-log',
+    },
+    capturedMail: {
+      path: '/captured-mail',
       /** `messageId` opens one captured message beside the list. */
-      href: (messageId?: number) => (messageId === undefined ? '/outbox' : `/outbox?message=${messageId}`),
+      href: (messageId?: number) => (messageId === undefined ? '/captured-mail' : `/captured-mail?message=${messageId}`),
     },
     preparations: {
       path: '/preparations',

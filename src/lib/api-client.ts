@@ -95,4 +95,8 @@ export const api = {
   postWithoutResult: async (path: string, body?: unknown): Promise<void> => {
     await mutate('POST', path, body ?? {}, null);
   },
+  /** Deletes the resource at `path` (`204`, no body either way). */
+  delete: async (path: string): Promise<void> => {
+    await mutate('DELETE', path, undefined, null);
+  },
 };

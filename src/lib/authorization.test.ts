@@ -9,6 +9,7 @@ const me: Me = {
     { id: 2, name: 'South', roles: ['admin', 'qa'] },
   ],
   activeLabId: 2,
+  operator: false,
   csrfToken: 'token',
 };
 
@@ -24,9 +25,9 @@ describe('authorization', () => {
     expect(activeRoles({ ...me, activeLabId: 99 })).toEqual([]);
   });
 
-  it('lets only administrators manage members and read the outbox', () => {
+  it('lets only administrators manage members and read the delivery log', () => {
     expect(can(['admin'], 'manageMembers')).toBe(true);
     expect(can(['qa', 'analyst', 'auditor'], 'manageMembers')).toBe(false);
-    expect(can(['auditor'], 'readOutbox')).toBe(false);
+    expect(can(['auditor'], 'readDeliveryLog')).toBe(false);
   });
 });

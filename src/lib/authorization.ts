@@ -6,7 +6,7 @@ export const PERMISSIONS = {
   manageMembers: ['admin'],
   reviewRecords: ['qa'],
   readAuditTrail: ['auditor', 'qa', 'admin'],
-  readOutbox: ['admin'],
+  readDeliveryLog: ['admin'],
   planPreparations: ['analyst'],
   findRoutes: ['analyst', 'qa'],
 } as const satisfies Record<string, readonly Role[]>;

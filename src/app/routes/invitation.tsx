@@ -5,6 +5,7 @@ import { AuthLayout } from '../../components/layouts/auth-layout';
 import { Alert } from '../../components/ui/alert';
 import { paths } from '../../config/paths';
 import { useInvitationPreview, invitationPreviewQueryOptions } from '../../features/auth/api/get-invitation-preview';
+import { meQueryOptions } from '../../features/auth/api/get-me';
 import { InvitationAcceptForm } from '../../features/auth/components/invitation-accept-form';
 import { isApiError } from '../../lib/api-error';
 
@@ -13,6 +14,8 @@ export const clientLoader =
   async ({ params }: LoaderFunctionArgs) => {
     // Always ask afresh: an invitation used or withdrawn a moment ago must not show its form again.
     await queryClient.fetchQuery({ ...invitationPreviewQueryOptions(params.token ?? ''), staleTime: 0 });
+    // An existing account accepts signed in as itself, so the page needs to know who is signed in.
+    await queryClient.ensureQueryData(meQueryOptions());
     return null;
   };
 

@@ -64,7 +64,7 @@ function MembersPage({ labId, labName, currentUserId }: { labId: number; labName
           </Card>
         </div>
         <Card title="Pending invitations">
-          <PendingInvitations invitations={invitations} />
+          <PendingInvitations labId={labId} invitations={invitations} />
         </Card>
       </div>
     </>

@@ -47,7 +47,7 @@ export function Component() {
       navigation={
         <nav aria-label="Main">
           <ul className="flex gap-1">
-            {navigationFor(activeRoles(me)).map((item) => (
+            {navigationFor(activeRoles(me), me.operator).map((item) => (
               <li key={item.href}>
                 <NavLink
                   to={item.href}

@@ -6,7 +6,7 @@ import { storeSignedInUser } from './get-me';
 
 type AcceptInvitationInput = { token: string } & InvitationAccept;
 
-/** Accepts an invitation; the answer is the now signed-in user. */
+/** Accepts an invitation (a new account sends name and password, a signed-in one nothing); the answer is the signed-in user. */
 export function acceptInvitation({ token, name, password }: AcceptInvitationInput): Promise<Me> {
   return api.post(`/api/invitations/${encodeURIComponent(token)}/accept`, { name, password }, meSchema);
 }

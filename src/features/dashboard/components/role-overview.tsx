@@ -30,7 +30,7 @@ const WORK_OF_ROLE: Record<Role, { summary: string; items: string[] }> = {
   },
   admin: {
     summary: 'Look after the lab itself and the people in it.',
-    items: ['Members and their roles; deactivate someone who has left', 'Invitations by e-mail, and the Outbox of mail Dilutrace has sent'],
+    items: ['Members and their roles; remove someone who has left the lab', 'Invitations by e-mail, and the delivery log of mail Dilutrace has sent about the lab'],
   },
 };
 
@@ -52,7 +52,7 @@ const SHORTCUTS: Record<Role, { label: string; href: string }[]> = {
   ],
   admin: [
     { label: 'Members', href: paths.app.members.href() },
-    { label: 'Outbox', href: paths.app.outbox.href() },
+    { label: 'Delivery log', href: paths.app.deliveryLog.href() },
   ],
 };
 

@@ -4,4 +4,5 @@ export const membersKeys = {
   lab: (labId: number) => [...membersKeys.all, labId] as const,
   list: (labId: number) => [...membersKeys.lab(labId), 'list'] as const,
   invitations: (labId: number) => [...membersKeys.lab(labId), 'invitations'] as const,
+  deliveryLog: (labId: number) => [...membersKeys.lab(labId), 'delivery-log'] as const,
 };

@@ -9,7 +9,7 @@ export function updateMember({ labId, userId, change }: UpdateMemberInput): Prom
   return api.patch(`/api/labs/${labId}/members/${userId}`, change, memberSchema);
 }
 
-/** Saves a role or activation change; settles only once the member list has been read again. */
+/** Saves a role change; settles only once the member list has been read again. */
 export function useUpdateMember() {
   const queryClient = useQueryClient();
   return useMutation({

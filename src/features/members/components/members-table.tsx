@@ -3,7 +3,7 @@ import { useMemo } from 'react';
 import type { Member } from '../../../../shared/contracts/members';
 import { Badge } from '../../../components/ui/badge';
 import { formatDate } from '../../../lib/format-date';
-import { MemberActivationCell } from './member-activation-cell';
+import { RemoveMemberCell } from './remove-member-cell';
 import { MemberRolesCell } from './member-roles-cell';
 
 const features = tableFeatures({});
@@ -30,7 +30,8 @@ export function MembersTable({ labId, labName, members, currentUserId }: Members
         }),
         column.accessor('active', {
           header: 'Status',
-          cell: (info) => (info.getValue() ? <Badge tone="ok">Active</Badge> : <Badge tone="caution">Deactivated</Badge>),
+          // The account's status everywhere: only the instance operator disables an account.
+          cell: (info) => (info.getValue() ? <Badge tone="ok">Active</Badge> : <Badge tone="caution">Account disabled</Badge>),
         }),
         column.accessor('joinedAt', {
           header: 'Joined',
@@ -41,18 +42,19 @@ export function MembersTable({ labId, labName, members, currentUserId }: Members
           ),
         }),
         column.display({
-          id: 'activation',
-          header: () => <span className="sr-only">Access</span>,
+          id: 'removal',
+          header: () => <span className="sr-only">Membership</span>,
           cell: (info) => (
-            <MemberActivationCell
+            <RemoveMemberCell
               labId={labId}
+              labName={labName}
               member={info.row.original}
               isCurrentUser={info.row.original.userId === currentUserId}
             />
           ),
         }),
       ]),
-    [labId, currentUserId],
+    [labId, labName, currentUserId],
   );
   const table = useTable({ features, columns, data: members, getRowId: (member) => String(member.userId) });
 

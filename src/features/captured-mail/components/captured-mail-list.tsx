@@ -1,10 +1,10 @@
 import { Link } from 'react-router';
-import type { OutboxMessage } from '../../../../shared/contracts/members';
+import type { CapturedMessage } from '../../../../shared/contracts/operator';
 import { paths } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format-date';
 
 /** The captured messages, newest first; the open one is marked as the current item. */
-export function OutboxList({ messages, openMessageId }: { messages: OutboxMessage[]; openMessageId: number | null }) {
+export function CapturedMailList({ messages, openMessageId }: { messages: CapturedMessage[]; openMessageId: number | null }) {
   if (messages.length === 0) return <p className="text-muted">No mail has been captured yet.</p>;
   return (
     <ul aria-label="Captured mail" className="self-start divide-y divide-line overflow-hidden rounded-lg border border-line bg-surface">
@@ -13,7 +13,7 @@ export function OutboxList({ messages, openMessageId }: { messages: OutboxMessag
         return (
           <li key={message.id}>
             <Link
-              to={paths.app.outbox.href(message.id)}
+              to={paths.app.capturedMail.href(message.id)}
               aria-current={open ? 'true' : undefined}
               className={`block px-4 py-3 no-underline hover:bg-paper ${open ? 'border-l-4 border-accent bg-accent-tint' : 'border-l-4 border-transparent'}`}
             >

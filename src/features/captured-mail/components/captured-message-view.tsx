@@ -1,12 +1,12 @@
-import type { OutboxMessage } from '../../../../shared/contracts/members';
+import type { CapturedMessage } from '../../../../shared/contracts/operator';
 import { formatDateTime } from '../../../lib/format-date';
 import { splitLinks } from '../utils/split-links';
 
 /** One captured message: its envelope and its plain text with clickable links. */
-export function OutboxMessageView({ message }: { message: OutboxMessage }) {
+export function CapturedMessageView({ message }: { message: CapturedMessage }) {
   return (
-    <article aria-labelledby="outbox-message-subject" className="rounded-lg border border-line bg-surface p-6">
-      <h2 id="outbox-message-subject" className="mb-3 text-xl font-bold">
+    <article aria-labelledby="captured-message-subject" className="rounded-lg border border-line bg-surface p-6">
+      <h2 id="captured-message-subject" className="mb-3 text-xl font-bold">
         {message.subject}
       </h2>
       <dl className="mb-4 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 border-b border-line pb-4 text-sm">

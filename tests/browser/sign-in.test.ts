@@ -63,7 +63,9 @@ describe('signing in', () => {
       const navigation = mainNavigation(page);
       await expect(navigation.getByRole('link', { name: 'Dashboard' }).count()).resolves.toBe(1);
       await expect(navigation.getByRole('link', { name: 'Members' }).count()).resolves.toBe(role.admin ? 1 : 0);
-      await expect(navigation.getByRole('link', { name: 'Outbox' }).count()).resolves.toBe(role.admin ? 1 : 0);
+      await expect(navigation.getByRole('link', { name: 'Delivery log' }).count()).resolves.toBe(role.admin ? 1 : 0);
+      // The demo admin account is also the instance operator, the only one who reads captured mail.
+      await expect(navigation.getByRole('link', { name: 'Captured mail' }).count()).resolves.toBe(role.admin ? 1 : 0);
       await expect(page.getByRole('heading', { level: 2, name: role.card }).count()).resolves.toBe(1);
       await expect(page.getByText(LAB_NAME).first().isVisible()).resolves.toBe(true);
       await screenshot(page, `dashboard-${role.local}`);
@@ -137,7 +139,7 @@ describe('signing in', () => {
 });
 
 describe('inviting a new analyst', () => {
-  it('goes from the invite form through the outbox to a signed-in analyst', async () => {
+  it('goes from the invite form through the captured mail to a signed-in analyst', async () => {
     const { page, problems } = await openPage();
     const newEmail = `jory.trevail@${DEMO_DOMAIN}`;
     const newName = 'Jory Trevail';
@@ -158,14 +160,22 @@ describe('inviting a new analyst', () => {
     await page.getByText(newEmail, { exact: true }).waitFor(); // listed under pending invitations
     await screenshot(page, 'members-after-invitation');
 
-    await mainNavigation(page).getByRole('link', { name: 'Outbox' }).click();
-    await page.getByRole('heading', { level: 1, name: 'Outbox' }).waitFor();
+    // The lab's delivery log lists the invitation without its body or link.
+    await mainNavigation(page).getByRole('link', { name: 'Delivery log' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Delivery log' }).waitFor();
+    await page.getByRole('cell', { name: newEmail }).first().waitFor();
+    await expect(page.getByRole('link', { name: /\/invitation\// }).count()).resolves.toBe(0);
+    await screenshot(page, 'delivery-log');
+
+    // The operator (here the same demo account) reads the captured message itself.
+    await mainNavigation(page).getByRole('link', { name: 'Captured mail' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Captured mail' }).waitFor();
     const newest = page.getByRole('list', { name: 'Captured mail' }).getByRole('link').first();
     await expect(newest.innerText()).resolves.toContain(newEmail);
     await newest.click();
     const invitationLink = page.getByRole('article').getByRole('link', { name: /\/invitation\// });
     await invitationLink.waitFor();
-    await screenshot(page, 'outbox-invitation');
+    await screenshot(page, 'captured-mail-invitation');
 
     // The invitee's own browser session: sign the admin out first, then follow the mailed link.
     const href = (await invitationLink.getAttribute('href')) ?? '';
@@ -197,7 +207,7 @@ describe('inviting a new analyst', () => {
 });
 
 describe('administering members', () => {
-  it('gives a member a second role and deactivates another after confirming', async () => {
+  it('gives a member a second role and removes another from the lab after confirming', async () => {
     const { page, problems } = await openPage();
     await signIn(page, `admin@${DEMO_DOMAIN}`, DEMO_PASSWORD);
     await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
@@ -211,13 +221,13 @@ describe('administering members', () => {
     await expect(qaBox.isChecked()).resolves.toBe(true);
 
     const auditorRow = page.getByRole('row').filter({ hasText: `auditor@${DEMO_DOMAIN}` });
-    await auditorRow.getByRole('button', { name: /^Deactivate/ }).click();
-    const dialog = page.getByRole('dialog', { name: /^Deactivate / });
+    await auditorRow.getByRole('button', { name: /^Remove/ }).click();
+    const dialog = page.getByRole('dialog', { name: /^Remove / });
     await dialog.waitFor();
-    await screenshot(page, 'members-confirm-deactivate');
-    await dialog.getByRole('button', { name: 'Deactivate' }).click();
+    await screenshot(page, 'members-confirm-remove');
+    await dialog.getByRole('button', { name: 'Remove' }).click();
     await dialog.waitFor({ state: 'hidden' });
-    await auditorRow.getByText('Deactivated').waitFor();
+    await auditorRow.waitFor({ state: 'detached' });
     await signOut(page);
 
     // Lucía now sees the QA card beside her analyst card.
@@ -228,10 +238,12 @@ describe('administering members', () => {
     await signOut(page);
     expect(problems).toEqual([]);
 
-    // The deactivated auditor can no longer sign in; the refusal is shown in place.
+    // The removed auditor's account still signs in, but the lab and its records are gone from it.
     await signIn(page, `auditor@${DEMO_DOMAIN}`, DEMO_PASSWORD);
-    await page.getByRole('alert').waitFor();
-    expect(new URL(page.url()).pathname).toBe('/sign-in');
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await expect(mainNavigation(page).getByRole('link', { name: 'Approved records' }).count()).resolves.toBe(0);
+    await expect(mainNavigation(page).getByRole('link', { name: 'Audit trail' }).count()).resolves.toBe(0);
+    await signOut(page);
   });
 });
 
@@ -246,7 +258,8 @@ describe('resetting a forgotten password', () => {
 
     await signIn(page, `admin@${DEMO_DOMAIN}`, DEMO_PASSWORD);
     await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
-    await page.goto(`${server.baseUrl}/outbox`);
+    // Only the instance operator reads the reset mail (the demo admin account is the operator).
+    await page.goto(`${server.baseUrl}/captured-mail`);
     await page.getByRole('list', { name: 'Captured mail' }).getByRole('link').filter({ hasText: `qa@${DEMO_DOMAIN}` }).first().click();
     const resetLink = page.getByRole('article').getByRole('link', { name: /\/reset-password\// });
     await resetLink.waitFor();

@@ -244,6 +244,37 @@ describe('administering members', () => {
     await expect(mainNavigation(page).getByRole('link', { name: 'Approved records' }).count()).resolves.toBe(0);
     await expect(mainNavigation(page).getByRole('link', { name: 'Audit trail' }).count()).resolves.toBe(0);
     await signOut(page);
+
+    // Invited back, the auditor accepts signed in as herself: the link asks for no password.
+    await signIn(page, `admin@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await page.goto(`${server.baseUrl}/members`);
+    const form = page.getByRole('form', { name: 'Invite a member' });
+    await form.getByLabel('Name').fill('Harriet Vance');
+    await form.getByLabel('E-mail').fill(`auditor@${DEMO_DOMAIN}`);
+    await form.getByLabel('Role').selectOption('auditor');
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    await page.getByText(`Invitation sent to auditor@${DEMO_DOMAIN}`).waitFor();
+    await mainNavigation(page).getByRole('link', { name: 'Captured mail' }).click();
+    await page.getByRole('list', { name: 'Captured mail' }).getByRole('link').first().click();
+    const invitationLink = page.getByRole('article').getByRole('link', { name: /\/invitation\// });
+    const href = (await invitationLink.getAttribute('href')) ?? '';
+    await signOut(page);
+
+    await page.goto(href);
+    await page.getByRole('heading', { level: 1, name: `Join ${LAB_NAME}` }).waitFor();
+    await expect(page.getByLabel(/password/i).count()).resolves.toBe(0);
+    await screenshot(page, 'invitation-existing-account');
+    await page.getByRole('link', { name: `Sign in as auditor@${DEMO_DOMAIN} to accept` }).click();
+    await page.getByRole('heading', { level: 1, name: 'Sign in' }).waitFor();
+    await page.getByLabel('E-mail').fill(`auditor@${DEMO_DOMAIN}`);
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { level: 1, name: `Join ${LAB_NAME}` }).waitFor();
+    await page.getByRole('button', { name: 'Join the lab' }).click();
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await expect(page.getByRole('heading', { level: 2, name: 'Auditor' }).count()).resolves.toBe(1);
+    await signOut(page);
   });
 });
 

@@ -15,14 +15,25 @@ function layout(paragraphs: string[], link: { href: string; label: string }): { 
   return { text, html };
 }
 
-export function invitationMessage(input: { name: string; labName: string; role: Role; invitedBy: string; link: string; expiresAt: string }) {
+export function invitationMessage(input: {
+  name: string;
+  labName: string;
+  role: Role;
+  invitedBy: string;
+  link: string;
+  expiresAt: string;
+  /** The e-mail already has an account: the person signs in to accept, and sets no password. */
+  existingAccount: boolean;
+}) {
   return {
     subject: `You are invited to ${input.labName} on Dilutrace`,
     ...layout(
       [
         `Hello ${input.name},`,
         `${input.invitedBy} has invited you to join ${input.labName} on Dilutrace as ${ROLE_LABELS[input.role].toLowerCase()}.`,
-        `Open the link below to set your password. It works once and expires on ${input.expiresAt.slice(0, 10)}.`,
+        input.existingAccount
+          ? `You already have a Dilutrace account: open the link below and sign in as usual to accept. It works once and expires on ${input.expiresAt.slice(0, 10)}.`
+          : `Open the link below to set your password. It works once and expires on ${input.expiresAt.slice(0, 10)}.`,
       ],
       { href: input.link, label: 'Accept the invitation' },
     ),

@@ -79,6 +79,9 @@ describe('invitations for an existing account', () => {
     const adminB = await signIn(t.app, ADMIN_B);
     await adminB.post(`/api/labs/${labB}/invitations`, { email: demo('qa'), name: 'Imogen Tasker', role: 'qa' }).expect(201);
     const token = await tokenFromOutbox(t.db, demo('qa'), '/invitation/');
+    const mail = await t.db('outbox').where('text_body', 'like', '%/invitation/%').first();
+    expect(mail.text_body).toMatch(/sign in as usual to accept/);
+    expect(mail.text_body).not.toMatch(/set your password/);
 
     const visitor = await agentFor(t.app);
     expect((await visitor.get(`/api/invitations/${token}`).expect(200)).body.existingAccount).toBe(true);

@@ -114,6 +114,7 @@ export function membersService(deps: {
         invitedBy: actor.name,
         link: deps.publicUrl(`/invitation/${token}`),
         expiresAt,
+        existingAccount: existing !== undefined,
       });
       await mailer.send({ to: input.email, labId, ...message });
       const row = await invitations.findById(id);

@@ -40,9 +40,16 @@ async function joinLabB(email: string, role: 'qa' | 'auditor' | 'admin') {
   return adminB;
 }
 
+/** The same guest membership written directly, so a finding reproduces whatever the accept route does. */
+async function guestInLabB(email: string, role: 'qa' | 'auditor' | 'admin') {
+  await t.db('memberships').insert({ user_id: await userId(email), lab_id: labB, role, created_at: t.clock.now().toISOString() });
+  return signIn(t.app, ADMIN_B);
+}
+
 describe('reset links stay with their recipient', () => {
   it("files a reset mail by recipient, so lab B's admin never reads lab A's QA reset link", async () => {
-    const adminB = await joinLabB(demo('qa'), 'auditor');
+    // Lab B (Harrowgate) sorts before lab A (Wellmere): it became her "first lab".
+    const adminB = await guestInLabB(demo('qa'), 'auditor');
     await (await agentFor(t.app)).post('/api/auth/password-reset', { email: demo('qa') }).expect(202);
     const token = await tokenFromOutbox(t.db, demo('qa'), '/reset-password/');
 
@@ -79,9 +86,6 @@ describe('invitations for an existing account', () => {
     const adminB = await signIn(t.app, ADMIN_B);
     await adminB.post(`/api/labs/${labB}/invitations`, { email: demo('qa'), name: 'Imogen Tasker', role: 'qa' }).expect(201);
     const token = await tokenFromOutbox(t.db, demo('qa'), '/invitation/');
-    const mail = await t.db('outbox').where('text_body', 'like', '%/invitation/%').first();
-    expect(mail.text_body).toMatch(/sign in as usual to accept/);
-    expect(mail.text_body).not.toMatch(/set your password/);
 
     const visitor = await agentFor(t.app);
     expect((await visitor.get(`/api/invitations/${token}`).expect(200)).body.existingAccount).toBe(true);
@@ -102,6 +106,10 @@ describe('invitations for an existing account', () => {
     expect(me.activeLabId).toBe(labB);
     expect(me.labs.map((l: { name: string }) => l.name).sort()).toEqual(['Harrowgate Food Testing', 'Wellmere Regional Water Laboratory']);
     await invitee.post(`/api/invitations/${token}/accept`, {}).expect(404);
+    // The mail tells her to sign in, not to set a password.
+    const mail = await t.db('outbox').where('text_body', 'like', '%/invitation/%').first();
+    expect(mail.text_body).toMatch(/sign in as usual to accept/);
+    expect(mail.text_body).not.toMatch(/set your password/);
   });
 
   it('answers 409 to all but one of four concurrent accepts of one invitation', async () => {
@@ -131,7 +139,7 @@ describe('invitations for an existing account', () => {
 
 describe('a lab admin manages memberships of their own lab only', () => {
   it("cannot switch off lab A's only admin from lab B, and lab A keeps an active admin", async () => {
-    const adminB = await joinLabB(demo('admin'), 'auditor');
+    const adminB = await guestInLabB(demo('admin'), 'auditor');
     const guestId = await userId(demo('admin'));
     const res = await adminB.patch(`/api/labs/${labB}/members/${guestId}`, { active: false });
     expect(res.status).toBe(400);

@@ -8,10 +8,11 @@ describe('navigationFor', () => {
     expect(labels(['admin'])).toEqual(['Dashboard', 'Preparations', 'Library', 'Lab policy', 'Approved records', 'Audit trail', 'Members', 'Delivery log']);
   });
 
-  it('gives the captured mail to the instance operator alone, whatever their lab roles', () => {
+  it('gives the accounts and the captured mail to the instance operator alone, whatever their lab roles', () => {
     expect(labels(['admin'])).not.toContain('Captured mail');
+    expect(labels(['admin'])).not.toContain('Accounts');
     expect(navigationFor(['admin'], true).map((item) => item.label)).toContain('Captured mail');
-    expect(navigationFor([], true).map((item) => item.label)).toEqual(['Dashboard', 'Captured mail']);
+    expect(navigationFor([], true).map((item) => item.label)).toEqual(['Dashboard', 'Accounts', 'Captured mail']);
   });
 
   it('gives analysts, QA and auditors the preparations, the library and the lab policy (read-only unless QA)', () => {

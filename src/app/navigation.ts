@@ -21,6 +21,7 @@ const NAVIGATION: readonly NavigationItem[] = [
   { label: 'Audit trail', href: paths.app.audit.href(), permission: 'readAuditTrail' },
   { label: 'Members', href: paths.app.members.href(), permission: 'manageMembers' },
   { label: 'Delivery log', href: paths.app.deliveryLog.href(), permission: 'readDeliveryLog' },
+  { label: 'Accounts', href: paths.app.accounts.href(), permission: 'operator' },
   { label: 'Captured mail', href: paths.app.capturedMail.href(), permission: 'operator' },
 ];
 

@@ -34,6 +34,7 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.app.policy.path, lazy: () => import('./routes/app/policy').then(convert) },
             { path: paths.app.members.path, lazy: () => import('./routes/app/members').then(convert) },
             { path: paths.app.deliveryLog.path, lazy: () => import('./routes/app/delivery-log').then(convert) },
+            { path: paths.app.accounts.path, lazy: () => import('./routes/app/accounts').then(convert) },
             { path: paths.app.capturedMail.path, lazy: () => import('./routes/app/captured-mail').then(convert) },
             { path: paths.app.preparations.path, lazy: () => import('./routes/app/preparations').then(convert) },
             { path: paths.app.preparationNew.path, lazy: () => import('./routes/app/preparations-new').then(convert) },

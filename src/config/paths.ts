@@ -90,6 +90,10 @@ export const paths = {
       path: '/delivery-log',
       href: () => '/delivery-log',
     },
+    accounts: {
+      path: '/accounts',
+      href: () => '/accounts',
+    },
     capturedMail: {
       path: '/captured-mail',
       /** `messageId` opens one captured message beside the list. */

@@ -311,6 +311,44 @@ describe('resetting a forgotten password', () => {
   });
 });
 
+describe('the instance operator', () => {
+  it('disables an account everywhere and enables it again from the Accounts screen', async () => {
+    const { page, problems } = await openPage();
+    await signIn(page, `admin@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await mainNavigation(page).getByRole('link', { name: 'Accounts' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Accounts' }).waitFor();
+
+    const analystRow = page.getByRole('row').filter({ hasText: `analyst@${DEMO_DOMAIN}` });
+    await analystRow.getByRole('button', { name: /^Disable/ }).click();
+    const dialog = page.getByRole('dialog', { name: /^Disable / });
+    await dialog.getByText(LAB_NAME).waitFor();
+    await screenshot(page, 'accounts-confirm-disable');
+    await dialog.getByRole('button', { name: 'Disable' }).click();
+    await dialog.waitFor({ state: 'hidden' });
+    await analystRow.getByText('Disabled').waitFor();
+    await signOut(page);
+
+    // Disabled everywhere: the refusal is shown in place.
+    await signIn(page, `analyst@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('alert').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+
+    await signIn(page, `admin@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await page.goto(`${server.baseUrl}/accounts`);
+    await analystRow.getByRole('button', { name: /^Enable/ }).click();
+    await page.getByRole('dialog', { name: /^Enable / }).getByRole('button', { name: 'Enable' }).click();
+    await analystRow.getByText('Active').waitFor();
+    await signOut(page);
+
+    await signIn(page, `analyst@${DEMO_DOMAIN}`, DEMO_PASSWORD);
+    await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+    await signOut(page);
+    expect(problems).toEqual([]);
+  });
+});
+
 describe('pages without a session', () => {
   it('renders the password reset request, the reset page and the 404 page', async () => {
     const { page, problems } = await openPage();

@@ -122,6 +122,27 @@ describe('invitations for an existing account', () => {
     expect(await countRows(t.db('users').where({ email: 'rush@wellmere-water.example' }))).toBe(1);
   });
 
+  it('answers 409, not 5xx, when invitations from two labs to one new e-mail are accepted at once', async () => {
+    const email = 'both.labs@example.org';
+    await (await signIn(t.app, demo('admin'))).post(`/api/labs/${labA}/invitations`, { email, name: 'Both Labs', role: 'analyst' }).expect(201);
+    const tokenA = await tokenFromOutbox(t.db, email, '/invitation/');
+    await (await signIn(t.app, ADMIN_B)).post(`/api/labs/${labB}/invitations`, { email, name: 'Both Labs', role: 'qa' }).expect(201);
+    const tokenB = await tokenFromOutbox(t.db, email, '/invitation/');
+    expect(tokenB).not.toBe(tokenA);
+    const [first, second] = await Promise.all([agentFor(t.app), agentFor(t.app)]);
+    const answers = await Promise.all([
+      first.post(`/api/invitations/${tokenA}/accept`, { name: 'Both Labs', password: 'bench-ready-2026' }),
+      second.post(`/api/invitations/${tokenB}/accept`, { name: 'Both Labs', password: 'bench-ready-2026' }),
+    ]);
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 409]);
+    expect(answers.find((a) => a.status === 409)?.body.error.message).toMatch(/Sign in as both\.labs@example\.org/);
+    expect(await countRows(t.db('users').where({ email }))).toBe(1);
+    // The losing invitation is still open: the new account signs in and accepts it.
+    const loser = answers[0].status === 409 ? tokenA : tokenB;
+    const person = await signIn(t.app, email, 'bench-ready-2026');
+    await person.post(`/api/invitations/${loser}/accept`, {}).expect(200);
+  });
+
   it('lets the lab admin revoke a pending invitation, after which the link is dead', async () => {
     const adminA = await signIn(t.app, demo('admin'));
     const invitation = (await adminA.post(`/api/labs/${labA}/invitations`, { email: 'later@wellmere-water.example', name: 'Later', role: 'analyst' }).expect(201)).body;

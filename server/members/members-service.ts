@@ -6,6 +6,7 @@ import { hashPassword } from '../auth/password';
 import { hashToken, newToken } from '../auth/tokens';
 import type { UsersRepository } from '../auth/users-repository';
 import type { Db } from '../db/connection';
+import { isUniqueViolation } from '../db/unique-violation';
 import type { LabsRepository, MemberRow } from '../labs/labs-repository';
 import { conflict, forbidden, notFound, unauthenticated, validationError } from '../lib/errors';
 import { toFieldIssues } from '../lib/validate';
@@ -162,13 +163,21 @@ export function membersService(deps: {
           throw validationError(`${issues[0].path}: ${issues[0].message}`, issues);
         }
         const passwordHash = await hashPassword(parsed.data.password);
-        userId = await db.transaction(async (trx) => {
-          if (!(await invitations.claim(row.id, at, trx))) throw invitationUsed();
-          const id = await users.insert({ email: row.email, name: parsed.data.name, passwordHash, createdAt: at }, trx);
-          await invitations.setAcceptedUser(row.id, id, trx);
-          await labs.addRole(id, row.lab_id, row.role, at, trx);
-          return id;
-        });
+        userId = await db
+          .transaction(async (trx) => {
+            if (!(await invitations.claim(row.id, at, trx))) throw invitationUsed();
+            const id = await users.insert({ email: row.email, name: parsed.data.name, passwordHash, createdAt: at }, trx);
+            await invitations.setAcceptedUser(row.id, id, trx);
+            await labs.addRole(id, row.lab_id, row.role, at, trx);
+            return id;
+          })
+          .catch((error: unknown) => {
+            // Another lab's invitation to the same e-mail made the account a moment ago: this one stays open.
+            if (isUniqueViolation(error, 'users', 'email')) {
+              throw conflict('account_exists', `An account for ${row.email} was just created. Sign in as ${row.email} to accept this invitation.`);
+            }
+            throw error;
+          });
       }
       await audit.record({
         labId: row.lab_id,

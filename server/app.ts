@@ -9,7 +9,8 @@ import { auditRouter } from './audit/audit-router';
 import { authRouter } from './auth/auth-router';
 import { authService } from './auth/auth-service';
 import { createAuthorize } from './auth/authorize';
-import { requireCsrfToken } from './auth/csrf';
+import { attemptLimits, type AttemptLimitSettings } from './auth/attempt-limits';
+import { csrfProtection } from './auth/csrf';
 import { createPassport } from './auth/passport';
 import { DatabaseSessionStore } from './auth/session-store';
 import { usersRepository } from './auth/users-repository';
@@ -43,8 +44,10 @@ export interface AppConfig {
   publicUrl: string;
   production: boolean;
   trustProxy: boolean;
-  /** Sign-in attempts per address and e-mail in 15 minutes; 10 unless set. */
+  /** Failed password checks per e-mail address in 15 minutes; 10 unless set (DILUTRACE_SIGNIN_LIMIT). */
   signInLimit?: number;
+  /** The other attempt limits (server/auth/attempt-limits.ts); each has a default. */
+  attemptLimits?: Partial<AttemptLimitSettings>;
   /** Folder for uploaded certificates, outside the web root. */
   certificateDir: string;
   /** Built client to serve (production); omitted in development and API tests. */
@@ -85,6 +88,9 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   const preparations = preparationsService({ db, preparations: preparationRows, items, policy, audit, computer, now });
   const reviews = reviewService({ db, preparations: preparationRows, users, labs, audit, mailer, now, publicUrl, log });
   const routes = routeFinderService({ items, policy });
+  const limits = attemptLimits({ db, audit, log, settings: { ...(config.signInLimit ? { perAccount: config.signInLimit } : {}), ...config.attemptLimits } });
+  const pruneAttempts = setInterval(() => void limits.prune().catch((error: unknown) => log('Pruning attempt counters failed', error)), 60 * 60 * 1000).unref();
+  const csrf = csrfProtection({ secret: config.sessionSecret, secureCookie: config.production && config.trustProxy });
   const passport = createPassport(auth);
   const authorize = createAuthorize(labs);
 
@@ -142,16 +148,16 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   api.get('/health', (_req, res) => {
     res.json({ status: 'ok', time: now().toISOString() });
   });
-  api.use(requireCsrfToken);
-  api.use('/auth', authRouter({ auth, passport, authorize, signInLimit: config.signInLimit ?? 10 }));
-  api.use('/invitations', invitationsRouter({ members, auth }));
+  api.use(csrf.requireToken);
+  api.use('/auth', authRouter({ auth, passport, authorize, limits, csrf, log }));
+  api.use('/invitations', invitationsRouter({ members, auth, limits }));
   api.use('/labs/:labId', labMembersRouter({ members, authorize }));
   api.use('/labs/:labId', outboxRouter({ db, authorize }));
   api.use('/labs/:labId', libraryRouter({ items, certificates, imports, authorize }));
   api.use('/labs/:labId', policyRouter({ policy, authorize }));
   api.use('/labs/:labId', auditRouter({ db, authorize }));
   api.use('/labs/:labId', preparationsRouter({ preparations, routes, authorize }));
-  api.use('/labs/:labId', reviewRouter({ reviews, preparations, authorize }));
+  api.use('/labs/:labId', reviewRouter({ reviews, preparations, authorize, limits }));
   api.use('/labs/:labId', recordRouter({ preparations, labs, authorize, clock }));
   api.use(apiNotFound);
   app.use('/api', api);
@@ -169,5 +175,9 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   app.use(apiNotFound);
   app.use(errorHandler(log));
 
-  return { app, sessions, close: () => computer.close() };
+  const close = async () => {
+    clearInterval(pruneAttempts);
+    await computer.close();
+  };
+  return { app, sessions, close };
 }

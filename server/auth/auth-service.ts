@@ -98,7 +98,10 @@ export function authService(deps: {
       if (!user || !user.active) throw notFound('The account');
       const passwordHash = await hashPassword(password);
       await db.transaction(async (trx) => {
-        await resets.markUsed(reset.id, now().toISOString(), trx);
+        // Consumed by one conditional update: of simultaneous uses of one link, exactly one gets a row.
+        if ((await resets.consume(reset.id, now().toISOString(), trx)) !== 1) {
+          throw validationError('This reset link has expired or was already used. Ask for a new one.');
+        }
         await users.setPassword(user.id, passwordHash, trx);
       });
       await deps.sessions.destroyForUser(user.id);

@@ -17,6 +17,7 @@ import { usersRepository } from './auth/users-repository';
 import type { Db } from './db/connection';
 import { labsRepository } from './labs/labs-repository';
 import type { Clock } from './lib/clock';
+import { backgroundWork } from './lib/background';
 import { limitBodyDepth, requireJsonBody } from './lib/body-guards';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import type { Mailer } from './mail/mailer';
@@ -88,7 +89,8 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   const preparations = preparationsService({ db, preparations: preparationRows, items, policy, audit, computer, now });
   const reviews = reviewService({ db, preparations: preparationRows, users, labs, audit, mailer, now, publicUrl, log });
   const routes = routeFinderService({ items, policy });
-  const limits = attemptLimits({ db, audit, log, settings: { ...(config.signInLimit ? { perAccount: config.signInLimit } : {}), ...config.attemptLimits } });
+  const background = backgroundWork(log);
+  const limits = attemptLimits({ db, audit, background, settings: { ...(config.signInLimit ? { perAccount: config.signInLimit } : {}), ...config.attemptLimits } });
   const pruneAttempts = setInterval(() => void limits.prune().catch((error: unknown) => log('Pruning attempt counters failed', error)), 60 * 60 * 1000).unref();
   const csrf = csrfProtection({ secret: config.sessionSecret, secureCookie: config.production && config.trustProxy });
   const passport = createPassport(auth);
@@ -149,7 +151,7 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
     res.json({ status: 'ok', time: now().toISOString() });
   });
   api.use(csrf.requireToken);
-  api.use('/auth', authRouter({ auth, passport, authorize, limits, csrf, log }));
+  api.use('/auth', authRouter({ auth, passport, authorize, limits, csrf, background }));
   api.use('/invitations', invitationsRouter({ members, auth, limits }));
   api.use('/labs/:labId', labMembersRouter({ members, authorize }));
   api.use('/labs/:labId', outboxRouter({ db, authorize }));
@@ -177,6 +179,7 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
 
   const close = async () => {
     clearInterval(pruneAttempts);
+    await background.idle();
     await computer.close();
   };
   return { app, sessions, close };

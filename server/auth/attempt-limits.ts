@@ -5,6 +5,7 @@ import { RateLimiterPostgres, RateLimiterRes, RateLimiterSQLite, type RateLimite
 import { normaliseEmail } from '../../shared/contracts/auth';
 import type { AuditRepository } from '../audit/audit-repository';
 import { isPostgres, type Db } from '../db/connection';
+import type { BackgroundWork } from '../lib/background';
 import { AppError } from '../lib/errors';
 
 /**
@@ -81,7 +82,7 @@ const accountKey = (email: string) => createHash('sha256').update(normaliseEmail
 /** The client's address; IPv6 by its /56 network, as one client usually holds the whole block. */
 const clientKey = (req: Request) => ipKeyGenerator(req.ip ?? 'unknown');
 
-export function attemptLimits(deps: { db: Db; audit: AuditRepository; settings?: Partial<AttemptLimitSettings>; log: (message: string, error?: unknown) => void }) {
+export function attemptLimits(deps: { db: Db; audit: AuditRepository; settings?: Partial<AttemptLimitSettings>; background: BackgroundWork }) {
   const settings = { ...DEFAULT_ATTEMPT_LIMITS, ...deps.settings };
   const account = databaseLimiter(deps.db, 'password-account', settings.perAccount);
   const client = databaseLimiter(deps.db, 'password-client', settings.perClient);
@@ -104,11 +105,7 @@ export function attemptLimits(deps: { db: Db; audit: AuditRepository; settings?:
     ];
   }
 
-  const refund = (counters: Counter[]) =>
-    Promise.all(counters.map((c) => c.limiter.reward(c.key, 1))).then(
-      () => undefined,
-      (error) => deps.log('Refunding an attempt failed', error),
-    );
+  const refund = (counters: Counter[]) => Promise.all(counters.map((c) => c.limiter.reward(c.key, 1)));
 
   async function lockedOut(kind: AttemptKind, req: Request, counter: Counter): Promise<void> {
     await deps.audit.record({
@@ -145,7 +142,7 @@ export function attemptLimits(deps: { db: Db; audit: AuditRepository; settings?:
       }
       if (kind !== 'reset_request') {
         res.on('finish', () => {
-          if (res.statusCode < 400) void refund(taken);
+          if (res.statusCode < 400) deps.background.run('Refunding an attempt', () => refund(taken));
         });
       }
       next();

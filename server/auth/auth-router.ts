@@ -8,6 +8,7 @@ import {
   tokenParamsSchema,
 } from '../../shared/contracts/auth';
 import { AppError, forbidden, unauthenticated } from '../lib/errors';
+import type { BackgroundWork } from '../lib/background';
 import { valid, validate } from '../lib/validate';
 import type { AttemptLimits } from './attempt-limits';
 import type { AuthService } from './auth-service';
@@ -24,7 +25,7 @@ export function authRouter(deps: {
   authorize: Authorize;
   limits: AttemptLimits;
   csrf: CsrfProtection;
-  log: (message: string, error?: unknown) => void;
+  background: BackgroundWork;
 }) {
   const { auth, passport, authorize, limits } = deps;
   const router = Router();
@@ -88,7 +89,7 @@ export function authRouter(deps: {
       const { body } = valid(req, { body: passwordResetRequestSchema });
       // Answer first, then look the address up and mail: known and unknown addresses take the same time.
       res.status(202).json({ message: 'If an account uses that address, a reset link is on its way. It works for one hour.' });
-      await auth.requestPasswordReset(body.email).catch((error: unknown) => deps.log('Password reset request failed', error));
+      deps.background.run('Password reset request', () => auth.requestPasswordReset(body.email));
     },
   );
 

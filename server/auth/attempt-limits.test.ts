@@ -23,6 +23,16 @@ describe('sign-in limits', () => {
     expect(await lockouts(t)).toBe(1);
   });
 
+  it('lets no more guesses through than the limit when they arrive at once', async () => {
+    t = await buildTestApp({ config: { signInLimit: 5 } });
+    const clients = await Promise.all(Array.from({ length: 12 }, () => agentFor(t!.app)));
+    const answers = await Promise.all(clients.map((client, i) => client.post('/api/auth/login', { email: demo('qa'), password: `guess-${i}` })));
+    const statuses = answers.map((res) => res.status).sort();
+    expect(statuses.filter((s) => s === 401)).toHaveLength(5);
+    expect(statuses.filter((s) => s === 429)).toHaveLength(7);
+    expect(await lockouts(t)).toBe(1);
+  });
+
   it('limits password spraying across many accounts from one client address, and audits the lock-out once', async () => {
     t = await buildTestApp({ config: { attemptLimits: { perClient: 5 } } });
     const client = await agentFor(t.app);

@@ -51,7 +51,7 @@ async function signInLoad(url: string, email: string): Promise<Figures> {
   );
   latencies.sort((a, b) => a - b);
   const at = (q: number) => latencies[Math.min(latencies.length - 1, Math.floor(q * latencies.length))];
-  return { name: 'sign-in (POST /api/auth/login, bcrypt cost 11)', requests: latencies.length, perSecond: latencies.length / SECONDS, p50: at(0.5), p99: at(0.99), errors };
+  return { name: 'sign-in (POST /api/auth/login, scrypt N=2^15)', requests: latencies.length, perSecond: latencies.length / SECONDS, p50: at(0.5), p99: at(0.99), errors };
 }
 
 const file = join(mkdtempSync(join(tmpdir(), 'dilutrace-load-')), 'load.sqlite');
@@ -95,7 +95,7 @@ ${rows.join('\n')}
 
 The last line is the library list measured while four clients keep the compute route busy: Monte Carlo
 runs in worker threads, so the request thread stays free to answer other users. Sign-in is dominated by
-bcrypt (cost 11) on purpose. Run it again with \`npm run load\`; \`LOAD_SECONDS\` sets the duration.
+scrypt (N=2^15, r=8, p=1, in libuv's thread pool) on purpose. Run it again with \`npm run load\`; \`LOAD_SECONDS\` sets the duration.
 `;
   writeFileSync(join(import.meta.dirname, '..', 'docs', 'performance.md'), text);
   console.log(text);

@@ -9,13 +9,15 @@ import { auditRouter } from './audit/audit-router';
 import { authRouter } from './auth/auth-router';
 import { authService } from './auth/auth-service';
 import { createAuthorize } from './auth/authorize';
-import { requireCsrfToken } from './auth/csrf';
+import { attemptLimits, type AttemptLimitSettings } from './auth/attempt-limits';
+import { csrfProtection } from './auth/csrf';
 import { createPassport } from './auth/passport';
 import { DatabaseSessionStore } from './auth/session-store';
 import { usersRepository } from './auth/users-repository';
 import type { Db } from './db/connection';
 import { labsRepository } from './labs/labs-repository';
 import type { Clock } from './lib/clock';
+import { backgroundWork } from './lib/background';
 import { limitBodyDepth, requireJsonBody } from './lib/body-guards';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import type { Mailer } from './mail/mailer';
@@ -45,8 +47,10 @@ export interface AppConfig {
   publicUrl: string;
   production: boolean;
   trustProxy: boolean;
-  /** Sign-in attempts per address and e-mail in 15 minutes; 10 unless set. */
+  /** Failed password checks per e-mail address in 15 minutes; 10 unless set (DILUTRACE_SIGNIN_LIMIT). */
   signInLimit?: number;
+  /** The other attempt limits (server/auth/attempt-limits.ts); each has a default. */
+  attemptLimits?: Partial<AttemptLimitSettings>;
   /** Folder for uploaded certificates, outside the web root. */
   certificateDir: string;
   /** Built client to serve (production); omitted in development and API tests. */
@@ -88,6 +92,10 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   const preparations = preparationsService({ db, preparations: preparationRows, items, policy, audit, computer, now });
   const reviews = reviewService({ db, preparations: preparationRows, users, labs, audit, mailer, now, publicUrl, log });
   const routes = routeFinderService({ items, policy });
+  const background = backgroundWork(log);
+  const limits = attemptLimits({ db, audit, background, settings: { ...(config.signInLimit ? { perAccount: config.signInLimit } : {}), ...config.attemptLimits } });
+  const pruneAttempts = setInterval(() => void limits.prune().catch((error: unknown) => log('Pruning attempt counters failed', error)), 60 * 60 * 1000).unref();
+  const csrf = csrfProtection({ secret: config.sessionSecret, secureCookie: config.production && config.trustProxy });
   const passport = createPassport(auth);
   const authorize = createAuthorize(labs, users);
 
@@ -145,9 +153,9 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   api.get('/health', (_req, res) => {
     res.json({ status: 'ok', time: now().toISOString() });
   });
-  api.use(requireCsrfToken);
-  api.use('/auth', authRouter({ auth, passport, authorize, signInLimit: config.signInLimit ?? 10 }));
-  api.use('/invitations', invitationsRouter({ members, auth }));
+  api.use(csrf.requireToken);
+  api.use('/auth', authRouter({ auth, passport, authorize, limits, csrf, background }));
+  api.use('/invitations', invitationsRouter({ members, auth, limits }));
   api.use('/labs/:labId', labMembersRouter({ members, authorize }));
   api.use('/operator', operatorRouter({ operator, authorize }));
   api.use('/labs/:labId', deliveryLogRouter({ db, authorize }));
@@ -155,7 +163,7 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   api.use('/labs/:labId', policyRouter({ policy, authorize }));
   api.use('/labs/:labId', auditRouter({ db, authorize }));
   api.use('/labs/:labId', preparationsRouter({ preparations, routes, authorize }));
-  api.use('/labs/:labId', reviewRouter({ reviews, preparations, authorize }));
+  api.use('/labs/:labId', reviewRouter({ reviews, preparations, authorize, limits }));
   api.use('/labs/:labId', recordRouter({ preparations, labs, authorize, clock }));
   api.use(apiNotFound);
   app.use('/api', api);
@@ -173,5 +181,10 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   app.use(apiNotFound);
   app.use(errorHandler(log));
 
-  return { app, sessions, close: () => computer.close() };
+  const close = async () => {
+    clearInterval(pruneAttempts);
+    await background.idle();
+    await computer.close();
+  };
+  return { app, sessions, close };
 }

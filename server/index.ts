@@ -31,6 +31,7 @@ const { app, sessions, close: closeApp } = createApp({
     production,
     trustProxy: env.DILUTRACE_TRUST_PROXY === '1',
     signInLimit: env.DILUTRACE_SIGNIN_LIMIT,
+    attemptLimits: { perClient: env.DILUTRACE_SIGNIN_CLIENT_LIMIT, perInstance: env.DILUTRACE_SIGNIN_INSTANCE_LIMIT },
     certificateDir: certificateDir(env),
     clientDir: production ? 'dist/client' : undefined,
   },

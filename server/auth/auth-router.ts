@@ -1,5 +1,4 @@
 import { Router, type Request } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { Passport } from 'passport';
 import {
   activeLabRequestSchema,
@@ -9,40 +8,37 @@ import {
   tokenParamsSchema,
 } from '../../shared/contracts/auth';
 import { AppError, forbidden, unauthenticated } from '../lib/errors';
+import type { BackgroundWork } from '../lib/background';
 import { valid, validate } from '../lib/validate';
+import type { AttemptLimits } from './attempt-limits';
 import type { AuthService } from './auth-service';
 import type { Authorize, SessionUser } from './authorize';
-import { csrfToken } from './csrf';
-
-const limited = (max: number, message: string) =>
-  rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: max,
-    standardHeaders: 'draft-7',
-    legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String((req.body as { email?: unknown })?.email ?? '').toLowerCase()}`,
-    handler: () => {
-      throw new AppError('rate_limited', 'rate_limited', message);
-    },
-  });
+import { csrfToken, type CsrfProtection } from './csrf';
 
 function logIn(req: Request, user: SessionUser): Promise<void> {
   return new Promise((resolve, reject) => req.login(user, (error) => (error ? reject(error) : resolve())));
 }
 
-export function authRouter(deps: { auth: AuthService; passport: InstanceType<typeof Passport>; authorize: Authorize; signInLimit: number }) {
-  const { auth, passport, authorize } = deps;
+export function authRouter(deps: {
+  auth: AuthService;
+  passport: InstanceType<typeof Passport>;
+  authorize: Authorize;
+  limits: AttemptLimits;
+  csrf: CsrfProtection;
+  background: BackgroundWork;
+}) {
+  const { auth, passport, authorize, limits } = deps;
   const router = Router();
   const me = (req: Request) => auth.me(req.user as SessionUser, req.session.activeLabId, csrfToken(req));
 
   router.get('/csrf', (req, res) => {
-    res.json({ csrfToken: csrfToken(req) });
+    res.json({ csrfToken: deps.csrf.tokenFor(req, res) });
   });
 
   router.post(
     '/login',
-    limited(deps.signInLimit, 'Too many sign-in attempts. Wait 15 minutes, then try again.'),
     validate({ body: loginRequestSchema }),
+    limits.guard('sign_in', (req) => valid(req, { body: loginRequestSchema }).body.email),
     async (req, res) => {
       const { body } = valid(req, { body: loginRequestSchema });
       req.body = body;
@@ -87,18 +83,20 @@ export function authRouter(deps: { auth: AuthService; passport: InstanceType<typ
 
   router.post(
     '/password-reset',
-    limited(5, 'Too many reset requests. Wait 15 minutes, then try again.'),
     validate({ body: passwordResetRequestSchema }),
+    limits.guard('reset_request', (req) => valid(req, { body: passwordResetRequestSchema }).body.email),
     async (req, res) => {
       const { body } = valid(req, { body: passwordResetRequestSchema });
-      await auth.requestPasswordReset(body.email);
+      // Answer first, then look the address up and mail: known and unknown addresses take the same time.
       res.status(202).json({ message: 'If an account uses that address, a reset link is on its way. It works for one hour.' });
+      deps.background.run('Password reset request', () => auth.requestPasswordReset(body.email));
     },
   );
 
   router.post(
     '/password-reset/:token',
     validate({ params: tokenParamsSchema, body: passwordResetCompleteSchema }),
+    limits.guard('reset_link'),
     async (req, res) => {
       const { params, body } = valid(req, { params: tokenParamsSchema, body: passwordResetCompleteSchema });
       await auth.completePasswordReset(params.token, body.password);

@@ -5,7 +5,7 @@ import type { Db } from '../db/connection';
 import { notFound, validationError } from '../lib/errors';
 import type { Mailer } from '../mail/mailer';
 import { passwordResetMessage } from '../mail/messages';
-import { DUMMY_HASH, hashPassword, verifyPassword } from './password';
+import { DUMMY_HASH, hashPassword, needsRehash, verifyPassword } from './password';
 import { passwordResetsRepository } from './password-resets-repository';
 import type { DatabaseSessionStore } from './session-store';
 import { hashToken, newToken } from './tokens';
@@ -43,6 +43,7 @@ export function authService(deps: {
         });
         return null;
       }
+      if (needsRehash(user.password_hash)) await users.replacePasswordHash(user.id, user.password_hash, await hashPassword(password));
       return { id: user.id, email: user.email, name: user.name };
     },
 
@@ -97,7 +98,10 @@ export function authService(deps: {
       if (!user || !user.active) throw notFound('The account');
       const passwordHash = await hashPassword(password);
       await db.transaction(async (trx) => {
-        await resets.markUsed(reset.id, now().toISOString(), trx);
+        // Consumed by one conditional update: of simultaneous uses of one link, exactly one gets a row.
+        if ((await resets.consume(reset.id, now().toISOString(), trx)) !== 1) {
+          throw validationError('This reset link has expired or was already used. Ask for a new one.');
+        }
         await users.setPassword(user.id, passwordHash, trx);
       });
       await deps.sessions.destroyForUser(user.id);

@@ -66,7 +66,8 @@ describe('sign-in', () => {
   });
 
   it('issues a new session id at sign-in (no session fixation)', async () => {
-    const client = await agentFor(t.app);
+    // Signed-out visitors have no session; the session a browser already holds is the one to replace.
+    const client = await signIn(t.app, demo('auditor'));
     const before = (await t.db('sessions').select('sid')).map((r: { sid: string }) => r.sid);
     expect(before).toHaveLength(1);
     const res = await client.post('/api/auth/login', { email: demo('analyst'), password: DEMO_PASSWORD }).expect(200);

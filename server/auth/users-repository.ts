@@ -29,6 +29,8 @@ export function usersRepository(db: Db) {
       return insertedId(row);
     },
     setPassword: (id: number, passwordHash: string, trx: Db = db) => trx('users').where({ id }).update({ password_hash: passwordHash }),
+    /** Swaps in a rehashed password only if the stored hash is still `old` (a reset meanwhile wins). */
+    replacePasswordHash: (id: number, old: string, next: string) => db('users').where({ id, password_hash: old }).update({ password_hash: next }),
     setActive: (id: number, active: boolean, trx: Db = db) => trx('users').where({ id }).update({ active }),
     setOperator: (id: number, operator: boolean, trx: Db = db) => trx('users').where({ id }).update({ operator }),
     isOperator: async (id: number): Promise<boolean> => Boolean((await db('users').where({ id, active: true }).first('operator'))?.operator),

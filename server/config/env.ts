@@ -19,8 +19,12 @@ const envSchema = z.object({
   DILUTRACE_SEED_DEMO: z.enum(['0', '1']).default('1'),
   DILUTRACE_DEMO_PASSWORD: z.string().min(10, 'DILUTRACE_DEMO_PASSWORD must be at least 10 characters').default('wellmere-demo-2026'),
   DILUTRACE_TRUST_PROXY: z.enum(['0', '1']).default('0'),
-  /** Sign-in attempts allowed per address and e-mail in 15 minutes (raise only for load tests). */
+  /** Failed password checks allowed per e-mail address in 15 minutes (raise only for load tests). */
   DILUTRACE_SIGNIN_LIMIT: z.coerce.number().int().min(1).default(10),
+  /** Failed password checks allowed from one client address in 15 minutes, across all accounts. */
+  DILUTRACE_SIGNIN_CLIENT_LIMIT: z.coerce.number().int().min(1).default(100),
+  /** Failed password checks allowed on the whole instance in 15 minutes. */
+  DILUTRACE_SIGNIN_INSTANCE_LIMIT: z.coerce.number().int().min(1).default(1000),
   SMTP_URL: z.url().optional(),
   MAIL_FROM: z.string().default('Dilutrace <no-reply@dilutrace.local>'),
 });

@@ -5,6 +5,7 @@ import * as preparations from '../../migrations/20261202030000_preparations';
 import * as reviews from '../../migrations/20261202040000_reviews';
 import * as readings from '../../migrations/20261202050000_readings';
 import * as accountsAndOperator from '../../migrations/20261203010000_accounts_and_operator';
+import * as authAttempts from '../../migrations/20261203020000_auth_attempts';
 
 /**
  * Migrations imported statically, so they run the same under tsx and Vitest
@@ -17,6 +18,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202040000_reviews': reviews,
   '20261202050000_readings': readings,
   '20261203010000_accounts_and_operator': accountsAndOperator,
+  '20261203020000_auth_attempts': authAttempts,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

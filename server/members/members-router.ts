@@ -2,6 +2,7 @@ import { Router, type Request } from 'express';
 import { idParam, tokenParamsSchema } from '../../shared/contracts/auth';
 import { invitationAcceptSchema, invitationCreateSchema, memberUpdateSchema } from '../../shared/contracts/members';
 import { z } from 'zod';
+import type { AttemptLimits } from '../auth/attempt-limits';
 import type { AuthService } from '../auth/auth-service';
 import type { Authorize, SessionUser } from '../auth/authorize';
 import { csrfToken } from '../auth/csrf';
@@ -54,7 +55,7 @@ export function labMembersRouter(deps: { members: MembersService; authorize: Aut
  * The public invitation link: preview, then accept. A new e-mail's accept signs the new account in;
  * an existing account accepts from its own session and switches to the lab it joined.
  */
-export function invitationsRouter(deps: { members: MembersService; auth: AuthService }) {
+export function invitationsRouter(deps: { members: MembersService; auth: AuthService; limits: AttemptLimits }) {
   const { members, auth } = deps;
   const router = Router();
 
@@ -63,7 +64,7 @@ export function invitationsRouter(deps: { members: MembersService; auth: AuthSer
     res.json(await members.preview(params.token));
   });
 
-  router.post('/:token/accept', validate({ params: tokenParamsSchema, body: invitationAcceptSchema }), async (req, res) => {
+  router.post('/:token/accept', deps.limits.guard('invitation'), validate({ params: tokenParamsSchema, body: invitationAcceptSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: tokenParamsSchema, body: invitationAcceptSchema });
     const signedIn = req.user as SessionUser | undefined;
     const user = await members.accept(params.token, signedIn, body);

@@ -2,6 +2,7 @@ import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
 import { approveRequestSchema, returnRequestSchema, submitRequestSchema } from '../../shared/contracts/reviews';
+import type { AttemptLimits } from '../auth/attempt-limits';
 import type { Authorize, LabContext, SessionUser } from '../auth/authorize';
 import { valid, validate } from '../lib/validate';
 import type { PreparationsService } from '../preparations/preparations-service';
@@ -11,7 +12,7 @@ const versionParams = z.object({ labId: idParam, preparationId: idParam, number:
 const searchQuery = z.object({ q: z.string().trim().max(200).optional() });
 
 /** Submit (analyst), approve or return (QA), the review queue, approved records and hash verification. */
-export function reviewRouter(deps: { reviews: ReviewService; preparations: PreparationsService; authorize: Authorize }) {
+export function reviewRouter(deps: { reviews: ReviewService; preparations: PreparationsService; authorize: Authorize; limits: AttemptLimits }) {
   const { reviews, preparations, authorize } = deps;
   const router = Router({ mergeParams: true });
   const lab = (req: Request) => (req.lab as LabContext).id;
@@ -24,7 +25,8 @@ export function reviewRouter(deps: { reviews: ReviewService; preparations: Prepa
     res.json(await preparations.detail(lab(req), params.preparationId));
   });
 
-  router.post(`${base}/approve`, authorize.lab(['qa']), validate({ params: versionParams, body: approveRequestSchema }), async (req, res) => {
+  const signature = deps.limits.guard('approval', (req) => req.user?.email);
+  router.post(`${base}/approve`, authorize.lab(['qa']), validate({ params: versionParams, body: approveRequestSchema }), signature, async (req, res) => {
     const { params, body } = valid(req, { params: versionParams, body: approveRequestSchema });
     await reviews.decide(lab(req), actor(req), params.preparationId, params.number, { kind: 'approved', ...body });
     res.json(await preparations.detail(lab(req), params.preparationId));

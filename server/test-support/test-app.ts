@@ -3,7 +3,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
-import { createApp } from '../app';
+import { createApp, type AppConfig } from '../app';
 import { isPostgres, openDatabase, type Db } from '../db/connection';
 import { demoEmail, seedDemoLab } from '../db/seed-demo';
 import type { Clock } from '../lib/clock';
@@ -38,7 +38,7 @@ export const postgresUrl = process.env.DATABASE_URL;
  * file, or with DATABASE_URL set a new schema of its own on that PostgreSQL (dropped on close).
  */
 export async function buildTestApp(
-  options: { file?: string; schema?: string; seed?: boolean; clock?: ReturnType<typeof testClock> } = {},
+  options: { file?: string; schema?: string; seed?: boolean; clock?: ReturnType<typeof testClock>; config?: Partial<AppConfig>; wrapMailer?: (mailer: Mailer) => Mailer } = {},
 ): Promise<TestApp> {
   const dir = options.file ? null : mkdtempSync(join(tmpdir(), 'dilutrace-test-'));
   const file = options.file ?? join(dir as string, 'test.sqlite');
@@ -50,9 +50,9 @@ export async function buildTestApp(
   const mailer: Mailer = createSmtpMailer(`smtp://127.0.0.1:${capture.port}`, 'Dilutrace <no-reply@dilutrace.test>');
   const { app, close: closeApp } = createApp({
     db,
-    mailer,
+    mailer: options.wrapMailer ? options.wrapMailer(mailer) : mailer,
     clock,
-    config: { certificateDir: join(file, '..', 'certificates'), sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined },
+    config: { certificateDir: join(file, '..', 'certificates'), sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined, ...options.config },
   });
   const stop = async () => {
     await closeApp();
@@ -76,7 +76,7 @@ export async function buildTestApp(
     restart: async () => {
       await stop();
       await db.destroy();
-      const next = await buildTestApp({ file, schema, seed: false, clock });
+      const next = await buildTestApp({ file, schema, seed: false, clock, config: options.config });
       return {
         ...next,
         close: async () => {
@@ -119,13 +119,19 @@ export async function signIn(app: TestApp['app'], email: string, password = DEMO
 
 export const demo = (local: 'admin' | 'qa' | 'analyst' | 'analyst2' | 'auditor') => demoEmail(local);
 
-/** The token in the newest captured mail to `to` whose link path starts with `prefix`. */
+/**
+ * The token in the newest captured mail to `to` whose link path starts with `prefix`. Waits up to
+ * two seconds for it: a reset link is mailed after the request has been answered.
+ */
 export async function tokenFromOutbox(db: Db, to: string, prefix: '/invitation/' | '/reset-password/'): Promise<string> {
-  const rows: { to_address: string; text_body: string }[] = await db('outbox').orderBy('id', 'desc');
-  const mail = rows.find((row) => row.to_address.includes(to) && row.text_body.includes(prefix));
-  const match = mail?.text_body.match(new RegExp(`${prefix}([A-Za-z0-9_-]+)`));
-  if (!match) throw new Error(`no ${prefix} mail to ${to}`);
-  return match[1];
+  for (let waited = 0; ; waited += 20) {
+    const rows: { to_address: string; text_body: string }[] = await db('outbox').orderBy('id', 'desc');
+    const mail = rows.find((row) => row.to_address.includes(to) && row.text_body.includes(prefix));
+    const match = mail?.text_body.match(new RegExp(`${prefix}([A-Za-z0-9_-]+)`));
+    if (match) return match[1];
+    if (waited >= 2000) throw new Error(`no ${prefix} mail to ${to}`);
+    await new Promise((resolve) => setTimeout(resolve, 20));
+  }
 }
 
 /** Drops a trigger the way someone with direct database access could (PostgreSQL names its table too). */

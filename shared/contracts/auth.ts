@@ -3,10 +3,12 @@ import { roleSchema } from './roles';
 
 export const idParam = z.coerce.number().int().positive();
 
+/** How an e-mail address is compared everywhere (accounts, sign-in limits): trimmed, lower-case. */
+export const normaliseEmail = (email: string): string => email.trim().toLowerCase();
+
 export const emailSchema = z
   .string()
-  .trim()
-  .toLowerCase()
+  .overwrite(normaliseEmail)
   .pipe(z.email({ message: 'Enter an e-mail address such as name@lab.example.' }));
 
 /** Password policy for new passwords: at least 10 characters, not only spaces. */

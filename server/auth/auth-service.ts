@@ -32,15 +32,19 @@ export function authService(deps: {
       const user = await users.findByEmail(email);
       const ok = await verifyPassword(password, user?.password_hash ?? DUMMY_HASH);
       if (!user || !ok || !user.active) {
-        const memberships = user ? await users.memberships(user.id) : [];
-        await audit.record({
-          labId: memberships[0]?.lab_id ?? null,
-          actorUserId: user?.id ?? null,
-          action: 'auth.sign_in_failed',
-          entityType: 'user',
-          entityId: user?.id ?? null,
-          summary: user && ok && !user.active ? `Sign-in refused for deactivated account ${email}` : `Failed sign-in for ${email}`,
-        });
+        // Filed under every lab the account belongs to (each may see its member's failures), never
+        // under one of them chosen by order; an unknown address is an instance-level event.
+        const labIds = user ? [...new Set((await users.memberships(user.id)).map((m) => m.lab_id))] : [];
+        for (const labId of labIds.length > 0 ? labIds : [null]) {
+          await audit.record({
+            labId,
+            actorUserId: user?.id ?? null,
+            action: 'auth.sign_in_failed',
+            entityType: 'user',
+            entityId: user?.id ?? null,
+            summary: user && ok && !user.active ? `Sign-in refused for disabled account ${email}` : `Failed sign-in for ${email}`,
+          });
+        }
         return null;
       }
       if (needsRehash(user.password_hash)) await users.replacePasswordHash(user.id, user.password_hash, await hashPassword(password));

@@ -202,3 +202,12 @@ describe('a lab admin manages memberships of their own lab only', () => {
     await adminB.patch(`/api/labs/${labB}/members/${self}`, { roles: ['qa'] }).expect(409);
   });
 });
+
+describe('failed sign-ins are filed with every lab of the account', () => {
+  it("shows lab A a failed sign-in of its QA even when she is also a guest of lab B", async () => {
+    await guestInLabB(demo('qa'), 'auditor');
+    await (await agentFor(t.app)).post('/api/auth/login', { email: demo('qa'), password: 'not-her-password-1' }).expect(401);
+    const failures = await t.db('audit_events').where({ action: 'auth.sign_in_failed', entity_id: String(await userId(demo('qa'))) });
+    expect(failures.map((row) => row.lab_id).sort()).toEqual([labA, labB].sort());
+  });
+});

@@ -4,6 +4,7 @@ import * as library from '../../migrations/20261202020000_library';
 import * as preparations from '../../migrations/20261202030000_preparations';
 import * as reviews from '../../migrations/20261202040000_reviews';
 import * as readings from '../../migrations/20261202050000_readings';
+import * as recordIntegrity from '../../migrations/20261203030000_record_integrity';
 
 /**
  * Migrations imported statically, so they run the same under tsx and Vitest
@@ -15,6 +16,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202030000_preparations': preparations,
   '20261202040000_reviews': reviews,
   '20261202050000_readings': readings,
+  '20261203030000_record_integrity': recordIntegrity,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -21,6 +21,7 @@ export function RecordHeader({ preparation, version, actions }: RecordHeaderProp
   const facts: [string, ReactNode][] = [
     ['Analyst', preparation.createdBy],
     ['Analyte', analyte || '—'],
+    ...(version.approvedAs ? ([['Laboratory', version.approvedAs.labName]] as [string, ReactNode][]) : []),
     ['Version started', <When key="started" at={version.createdAt} />],
     ['Last computed', version.snapshot ? <When key="computed" at={version.snapshot.computedAt} /> : 'Not computed'],
     ...(submitted ? ([['Submitted', <When key="submitted" at={submitted.at} />]] as [string, ReactNode][]) : []),
@@ -30,7 +31,7 @@ export function RecordHeader({ preparation, version, actions }: RecordHeaderProp
     <header className="mb-6 border-b border-line pb-4">
       <div className="flex flex-wrap items-start justify-between gap-4">
         <div>
-          <p className="text-sm font-semibold tracking-wide text-muted uppercase">Preparation record{version.approvedAs ? ` · ${version.approvedAs.labName}` : ''}</p>
+          <p className="text-sm font-semibold tracking-wide text-muted uppercase">Preparation record</p>
           <h1 className="text-3xl font-bold tracking-tight">{title}</h1>
           <p className="mt-2 flex flex-wrap items-center gap-3">
             <span className="text-lg font-semibold">Version {version.number}</span>

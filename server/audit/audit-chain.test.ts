@@ -96,7 +96,7 @@ describe.runIf(!process.env.DATABASE_URL)('npm run verify', () => {
   it('says intact and exits 0, then names the broken row and exits non-zero', async () => {
     await approveOne();
     const ok = runVerify(t.file);
-    expect(ok.code).toBe(0);
+    expect(ok.code, ok.output).toBe(0);
     expect(ok.output).toMatch(/^Intact: \d+ audit events .* all 1 approved versions/m);
     const [first] = await events();
     await dropTrigger(t.db, 'audit_events_no_update', 'audit_events');

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { leadPlan, libraryByCode } from '../test-support/demo-plans';
 import { buildTestApp, demo, DEMO_PASSWORD, dropTrigger, signIn, type Client, type TestApp } from '../test-support/test-app';
@@ -68,6 +69,13 @@ describe('an approved version keeps what it showed when it was signed', () => {
     expect(ok.record).toMatchObject({ storedSha256: expect.stringMatching(/^[0-9a-f]{64}$/) });
     expect(ok.record.computedSha256).toBe(ok.record.storedSha256);
     expect(ok.record.approvedSha256).toBe(ok.record.storedSha256);
+    // The download carries what the hash covers, so anyone can recompute it outside Dilutrace.
+    const download = (await qa.get(version(1, 'snapshot.json')).expect(200)).body;
+    expect(download).toMatchObject({ recordSha256: ok.record.storedSha256, approvedAs: { title: 'Pb check standard', labName: 'Wellmere Regional Water Laboratory' } });
+    const recomputed = createHash('sha256')
+      .update(`{"approvedAs":${JSON.stringify({ analyte: download.approvedAs.analyte, labName: download.approvedAs.labName, preparationName: download.approvedAs.preparationName, title: download.approvedAs.title })},"format":"dilutrace-approved-record/2","snapshotSha256":"${download.snapshotSha256}"}`)
+      .digest('hex');
+    expect(recomputed).toBe(download.recordSha256);
     await dropTrigger(t.db, 'preparation_versions_approved_no_update', 'preparation_versions');
     await t.db('preparation_versions').where({ preparation_id: preparationId, number: 1 }).update({ approved_title: 'Forged title' });
     const bad = (await qa.get(version(1, 'verify')).expect(200)).body;

@@ -29,7 +29,7 @@ async function start(file: string): Promise<RunningServer> {
   return server;
 }
 async function stop(server: RunningServer): Promise<void> {
-  if (server.process.exitCode !== null) return;
+  if (server.process.exitCode !== null || server.process.signalCode !== null) return;
   const exited = new Promise((resolve) => server.process.once('exit', resolve));
   server.process.kill('SIGTERM');
   await exited;
@@ -115,4 +115,16 @@ describe.runIf(!process.env.DATABASE_URL)('backups and the keys to sessions', ()
     expect(done.code, done.output).toBe(0);
     expect(done.output).toMatch(/Restored/);
   }, 90_000);
+
+  it('restores after a server was killed outright: a crash leaves no stale lock behind', async () => {
+    const file = join(mkdtempSync(join(tmpdir(), 'dilutrace-keys-')), 'live.sqlite');
+    const server = await start(file);
+    const backup = join(file, '..', 'backup.sqlite');
+    expect(run('backup.ts', [backup], file).code).toBe(0);
+    const killed = new Promise((resolve) => server.process.once('exit', resolve));
+    server.process.kill('SIGKILL');
+    await killed;
+    const done = run('restore.ts', [backup], file);
+    expect(done.code, done.output).toBe(0);
+  }, 60_000);
 });

@@ -1,6 +1,8 @@
+import { rmSync, writeFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app';
 import { certificateDir, databaseTarget, loadEnv } from './config/env';
+import { pidFileOf } from './db/backup';
 import { openDatabase } from './db/connection';
 import { seedDemoLab } from './db/seed-demo';
 import { sessionSecret } from './db/settings-repository';
@@ -38,6 +40,10 @@ const { app, sessions, close: closeApp } = createApp({
 });
 await sessions.prune();
 
+// Names this process in `npm run restore`'s refusal (the database's own lock is what refuses).
+const pidFile = env.DATABASE_URL ? null : pidFileOf(env.DILUTRACE_DB);
+if (pidFile) writeFileSync(pidFile, String(process.pid));
+
 const server = app.listen(env.PORT, env.HOST, () => {
   const { port } = server.address() as AddressInfo;
   const url = env.DILUTRACE_PUBLIC_URL ?? `http://${env.HOST === '0.0.0.0' ? '127.0.0.1' : env.HOST}:${port}`;
@@ -56,6 +62,7 @@ async function shutdown(signal: string) {
   await closeApp();
   await capture?.close();
   await db.destroy();
+  if (pidFile) rmSync(pidFile, { force: true });
   process.exit(0);
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'));

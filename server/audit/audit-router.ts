@@ -1,8 +1,8 @@
 import { Router } from 'express';
-import { stringify } from 'csv-stringify/sync';
 import { auditQuerySchema } from '../../shared/contracts/audit';
 import type { Authorize, LabContext } from '../auth/authorize';
 import type { Db } from '../db/connection';
+import { toSafeCsv } from '../lib/csv-cells';
 import { valid, validate } from '../lib/validate';
 import { auditQuery } from './audit-query';
 
@@ -20,7 +20,7 @@ export function auditRouter(deps: { db: Db; authorize: Authorize }) {
   router.get('/audit-events.csv', readers, validate({ query: auditQuerySchema }), async (req, res) => {
     const { query } = valid(req, { query: auditQuerySchema });
     const events = await trail.all((req.lab as LabContext).id, query);
-    const csv = stringify([
+    const csv = toSafeCsv([
       ['id', 'time_utc', 'actor', 'action', 'entity_type', 'entity_id', 'summary', 'before', 'after'],
       ...events.map((e) => [e.id, e.at, e.actor ?? '', e.action, e.entityType, e.entityId ?? '', e.summary, e.before == null ? '' : JSON.stringify(e.before), e.after == null ? '' : JSON.stringify(e.after)]),
     ]);

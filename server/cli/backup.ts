@@ -12,7 +12,7 @@ const stamp = new Date().toISOString().replace(/[:.]/g, '-');
 const destination = process.argv[2] ?? join(dirname(env.DILUTRACE_DB), 'backups', `dilutrace-${stamp}.sqlite`);
 try {
   const { pages } = await backupDatabase(env.DILUTRACE_DB, destination);
-  console.log(`Backed up ${env.DILUTRACE_DB} to ${destination} (${pages} pages, integrity ok).`);
+  console.log(`Backed up ${env.DILUTRACE_DB} to ${destination} (${pages} pages, integrity ok; sessions and the session secret left out).`);
   console.log('Certificates are files: copy the certificates folder beside the database too.');
 } catch (error) {
   console.error((error as Error).message);

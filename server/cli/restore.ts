@@ -1,7 +1,10 @@
 import { loadEnv } from '../config/env';
-import { restoreDatabase } from '../db/backup';
+import { DatabaseInUseError, restoreDatabase } from '../db/backup';
 
-/** `npm run restore -- <backup file>`: replaces DILUTRACE_DB with the backup. Stop Dilutrace first. */
+/**
+ * `npm run restore -- <backup file>`: replaces DILUTRACE_DB with the backup. Refused (exit code 3)
+ * while Dilutrace or anything else has the database open.
+ */
 const env = loadEnv();
 if (env.DATABASE_URL) {
   console.error('DATABASE_URL is set: restore PostgreSQL with its own tools (pg_restore or psql).');
@@ -14,8 +17,8 @@ if (!backup) {
 }
 try {
   await restoreDatabase(backup, env.DILUTRACE_DB);
-  console.log(`Restored ${env.DILUTRACE_DB} from ${backup} (integrity ok). Start Dilutrace again.`);
+  console.log(`Restored ${env.DILUTRACE_DB} from ${backup} (integrity ok). Everyone signs in again. Start Dilutrace again.`);
 } catch (error) {
   console.error((error as Error).message);
-  process.exitCode = 1;
+  process.exitCode = error instanceof DatabaseInUseError ? 3 : 1;
 }

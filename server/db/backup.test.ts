@@ -24,7 +24,7 @@ async function dump(file: string): Promise<Record<string, unknown[]>> {
 
 // SQLite's online backup API and integrity_check; PostgreSQL is backed up with its own tools (pg_dump).
 describe.runIf(!process.env.DATABASE_URL)('backup and restore of the SQLite file', () => {
-  it('copies the live database online, and restoring brings back exactly that state', async () => {
+  it('copies the live database online, and restoring brings back exactly that state without its sessions', async () => {
     const t = await buildTestApp();
     const labId = (await t.db('labs').first()).id;
     const qa = await signIn(t.app, demo('qa'));
@@ -42,7 +42,9 @@ describe.runIf(!process.env.DATABASE_URL)('backup and restore of the SQLite file
     await t.close();
 
     expect(run('restore.ts', [backup], { DILUTRACE_DB: t.file })).toMatch(/Restored/);
-    expect(await dump(t.file)).toEqual(atBackup);
+    // Everything but the sessions, which a backup leaves out (everyone signs in again).
+    expect(atBackup.sessions.length).toBeGreaterThan(0);
+    expect(await dump(t.file)).toEqual({ ...atBackup, sessions: [] });
   });
 
   it('refuses to overwrite an existing backup file', async () => {

@@ -20,7 +20,8 @@ export const isPostgres = (db: Db) => db.client.config.client === 'pg';
  * Opens the database and applies pending migrations. A `postgres://` URL opens PostgreSQL through a
  * pool of connections, so several app instances can share it (one migrates at a time). Anything
  * else is a SQLite file (created if missing), opened with WAL journaling, foreign keys on and
- * synchronous=FULL, so an acknowledged commit survives a power cut, on a single connection.
+ * synchronous=FULL, so an acknowledged commit survives a power cut, and recursive triggers on (so
+ * REPLACE fires the delete guards), on a single connection.
  */
 export async function openDatabase(target: string, options: OpenOptions = {}): Promise<Db> {
   const db = isPostgresUrl(target) ? openPostgres(target, options) : openSqlite(target);
@@ -69,6 +70,9 @@ function openSqlite(filename: string): Db {
           conn.pragma('synchronous = FULL');
           conn.pragma('foreign_keys = ON');
           conn.pragma('busy_timeout = 5000');
+          // REPLACE deletes the conflicting row; only with recursive triggers does that delete fire the
+          // record tables' delete guards (otherwise INSERT OR REPLACE silently rewrites a record).
+          conn.pragma('recursive_triggers = ON');
           done(null, conn);
         } catch (error) {
           done(error as Error, conn);

@@ -6,6 +6,7 @@ import * as reviews from '../../migrations/20261202040000_reviews';
 import * as readings from '../../migrations/20261202050000_readings';
 import * as accountsAndOperator from '../../migrations/20261203010000_accounts_and_operator';
 import * as authAttempts from '../../migrations/20261203020000_auth_attempts';
+import * as recordIntegrity from '../../migrations/20261203030000_record_integrity';
 
 /**
  * Migrations imported statically, so they run the same under tsx and Vitest
@@ -19,6 +20,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202050000_readings': readings,
   '20261203010000_accounts_and_operator': accountsAndOperator,
   '20261203020000_auth_attempts': authAttempts,
+  '20261203030000_record_integrity': recordIntegrity,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

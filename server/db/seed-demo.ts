@@ -1,3 +1,4 @@
+import { auditRepository } from '../audit/audit-repository';
 import type { Role } from '../../shared/contracts/roles';
 import { hashPassword } from '../auth/password';
 import type { Db } from './connection';
@@ -39,15 +40,10 @@ export async function seedDemoLab(db: Db, options: { password: string; now: Date
       for (const role of person.roles) await trx('memberships').insert({ user_id: userId, lab_id: labId, role, created_at: at });
     }
     await seedDemoLibrary(trx, { labId, ownerId: ids.qa, now: options.now, certificateDir: options.certificateDir });
-    await trx('audit_events').insert({
-      lab_id: labId,
-      actor_user_id: null,
-      action: 'lab.seeded',
-      entity_type: 'lab',
-      entity_id: String(labId),
-      summary: 'Demo lab created by the seed command',
-      created_at: at,
-    });
+    await auditRepository(trx, () => options.now).record(
+      { labId, actorUserId: null, action: 'lab.seeded', entityType: 'lab', entityId: labId, summary: 'Demo lab created by the seed command' },
+      trx,
+    );
     return { labId };
   });
 }

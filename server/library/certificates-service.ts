@@ -5,7 +5,8 @@ import { fileTypeFromBuffer } from 'file-type';
 import type { Certificate } from '../../shared/contracts/library';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
-import { AppError, notFound, validationError } from '../lib/errors';
+import { AppError, conflict, notFound, validationError } from '../lib/errors';
+import { certificateDisplayName, pdfHoldsJavaScript } from './certificate-file';
 import type { LibraryRepository } from './library-repository';
 import { toCertificate } from './library-service';
 
@@ -15,7 +16,9 @@ const ACCEPTED: Record<string, string> = { 'application/pdf': 'pdf', 'image/png'
 
 /**
  * Certificates are stored outside the web root under a generated name; the type is taken from
- * the file's first bytes, never from its name or the browser's claim.
+ * the file's first bytes, never from its name or the browser's claim. The uploader's name is kept
+ * only for display, cleaned and ending in the sniffed type's extension. A PDF that can run
+ * JavaScript is stored but flagged (and the flag audited).
  */
 export function certificatesService(deps: { library: LibraryRepository; audit: AuditRepository; directory: string; now: () => Date }) {
   const { library, audit, directory, now } = deps;
@@ -25,6 +28,7 @@ export function certificatesService(deps: { library: LibraryRepository; audit: A
       if (!file || file.buffer.length === 0) throw validationError('Choose a certificate file (PDF, PNG or JPEG) to upload.', [{ path: 'file', message: 'No file was sent.' }]);
       const item = await library.item(labId, itemId);
       if (!item) throw notFound('The item');
+      if (item.status === 'retired') throw conflict('item_retired', `${item.code} is retired, so it takes no new certificates. Attach the certificate to the item that replaced it.`);
       const revision = (await library.revisionsOf(itemId)).find((r) => r.number === revisionNumber);
       if (!revision) throw notFound(`Revision ${revisionNumber} of ${item.code}`);
       const detected = await fileTypeFromBuffer(file.buffer);
@@ -38,7 +42,8 @@ export function certificatesService(deps: { library: LibraryRepository; audit: A
       const storedName = `${randomUUID()}.${extension}`;
       await writeFile(join(directory, storedName), file.buffer, { flag: 'wx', mode: 0o600 });
       const sha256 = createHash('sha256').update(file.buffer).digest('hex');
-      const originalName = file.originalname.replace(/[^\p{L}\p{N} ._()-]/gu, '_').slice(0, 200) || `certificate.${extension}`;
+      const originalName = certificateDisplayName(file.originalname, extension);
+      const containsScript = detected.mime === 'application/pdf' && pdfHoldsJavaScript(file.buffer);
       const id = await library.insertCertificate({
         lab_id: labId,
         item_id: itemId,
@@ -48,6 +53,7 @@ export function certificatesService(deps: { library: LibraryRepository; audit: A
         media_type: detected.mime,
         size_bytes: file.buffer.length,
         sha256,
+        contains_script: containsScript,
         uploaded_by: actor.id,
         uploaded_at: now().toISOString(),
       });
@@ -58,8 +64,19 @@ export function certificatesService(deps: { library: LibraryRepository; audit: A
         entityType: 'equipment',
         entityId: itemId,
         summary: `${actor.name} attached ${originalName} to ${item.code} revision ${revisionNumber}`,
-        after: { certificateId: id, sha256 },
+        after: { certificateId: id, sha256, containsScript },
       });
+      if (containsScript) {
+        await audit.record({
+          labId,
+          actorUserId: actor.id,
+          action: 'library.certificate_flagged',
+          entityType: 'equipment',
+          entityId: itemId,
+          summary: `${originalName} on ${item.code} revision ${revisionNumber} holds JavaScript; open it only in a viewer with scripts turned off`,
+          after: { certificateId: id, sha256 },
+        });
+      }
       return toCertificate((await library.certificate(labId, id))!);
     },
 

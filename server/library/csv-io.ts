@@ -1,6 +1,6 @@
 import { parse } from 'csv-parse/sync';
-import { stringify } from 'csv-stringify/sync';
 import type { EquipmentItem, EquipmentKind } from '../../shared/contracts/library';
+import { restoreCell, toSafeCsv } from '../lib/csv-cells';
 import { CSV_COLUMNS, type CsvColumn } from './csv-columns';
 
 export interface CsvRow {
@@ -25,8 +25,9 @@ function getPath(source: unknown, path: (string | number)[]): unknown {
   return path.reduce<unknown>((node, key) => (node == null ? undefined : (node as Record<string | number, unknown>)[key]), source);
 }
 
+/** Reads one cell; the apostrophe our exports put before formula-like text is taken off first. */
 function readCell(column: CsvColumn, raw: string): { value?: unknown; error?: string } {
-  const cell = raw.trim();
+  const cell = restoreCell(raw.trim());
   const optional = column.type.startsWith('optional');
   if (cell === '') {
     if (optional) return { value: undefined };
@@ -88,7 +89,10 @@ export function columnFor(kind: EquipmentKind, path: string): string {
   return column?.column ?? (dataPath || '(row)');
 }
 
-/** The library of one kind as CSV in the import column set, so an export can be edited and imported again. */
+/**
+ * The library of one kind as CSV in the import column set, so an export can be edited and imported
+ * again; formula-like text is neutralised (and the import takes the apostrophe off again).
+ */
 export function libraryToCsv(kind: EquipmentKind, items: EquipmentItem[]): string {
   const columns = CSV_COLUMNS[kind];
   const rows = items.map((item) =>
@@ -99,11 +103,11 @@ export function libraryToCsv(kind: EquipmentKind, items: EquipmentItem[]): strin
       return String(value);
     }),
   );
-  return stringify([columns.map((c) => c.column), ...rows]);
+  return toSafeCsv([columns.map((c) => c.column), ...rows]);
 }
 
 /** The template file offered for download: the header row of the kind's column set. */
 export function csvTemplate(kind: EquipmentKind): string {
   const columns = CSV_COLUMNS[kind];
-  return stringify([columns.map((c) => c.column)]);
+  return toSafeCsv([columns.map((c) => c.column)]);
 }

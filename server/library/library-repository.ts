@@ -35,6 +35,7 @@ export interface CertificateRow {
   media_type: string;
   size_bytes: number;
   sha256: string;
+  contains_script: boolean | number;
   uploaded_by_name: string;
   uploaded_at: string;
 }
@@ -93,7 +94,7 @@ export function libraryRepository(db: Db) {
         .where({ 'c.id': certificateId, 'c.lab_id': labId })
         .select('c.*', 'u.name as uploaded_by_name', 'r.number as revision_number')
         .first(),
-    async insertCertificate(row: Omit<CertificateRow, 'id' | 'uploaded_by_name' | 'revision_number'> & { uploaded_by: number }): Promise<number> {
+    async insertCertificate(row: Omit<CertificateRow, 'id' | 'uploaded_by_name' | 'revision_number' | 'contains_script'> & { uploaded_by: number; contains_script?: boolean }): Promise<number> {
       const [inserted] = await db('certificates').insert(row).returning('id');
       return insertedId(inserted);
     },

@@ -29,7 +29,8 @@ export function libraryRouter(deps: { items: LibraryService; certificates: Certi
   const lab = (req: Request) => (req.lab as LabContext).id;
   const actor = (req: Request) => req.user as SessionUser;
 
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: CERTIFICATE_MAX_BYTES, files: 1, fields: 5 } }).single('file');
+  // Browsers send the file name as UTF-8 bytes; multer's default reads them as latin1 and mangles them.
+  const upload = multer({ storage: multer.memoryStorage(), defParamCharset: 'utf8', limits: { fileSize: CERTIFICATE_MAX_BYTES, files: 1, fields: 5 } }).single('file');
   const receiveFile = (req: Request, res: Parameters<typeof upload>[1]) =>
     new Promise<void>((resolve, reject) =>
       upload(req, res, (error: unknown) => {
@@ -39,7 +40,10 @@ export function libraryRouter(deps: { items: LibraryService; certificates: Certi
               ? new AppError('too_large', 'file_too_large', `The certificate is larger than ${CERTIFICATE_MAX_BYTES / 1024 / 1024} MB.`)
               : new AppError('validation', 'upload_invalid', `The upload was refused: ${error.message}.`),
           );
-        } else if (error) reject(error);
+        } else if (error) {
+          // Anything else multer passes on is the form itself failing to parse (busboy: a malformed part header, a cut-off body).
+          reject(new AppError('validation', 'upload_invalid', 'The upload could not be read; choose the file again and retry.'));
+        }
         else resolve();
       }),
     );

@@ -33,6 +33,7 @@ export const toCertificate = (row: CertificateRow): Certificate => ({
   mediaType: row.media_type,
   sizeBytes: row.size_bytes,
   sha256: row.sha256,
+  containsScript: Boolean(row.contains_script),
   uploadedBy: row.uploaded_by_name,
   uploadedAt: row.uploaded_at,
 });

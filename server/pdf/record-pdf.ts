@@ -223,6 +223,10 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     heading('Integrity');
     paragraph('SHA-256 of the stored snapshot (canonical JSON of plan, equipment revisions, engine version, seed and results):', { size: 8.5 });
     paragraph(version.snapshotSha256 ?? '—', { font: 'mono', size: 8.5 });
+    if (version.recordSha256 && version.approvedAs) {
+      paragraph(`SHA-256 signed at approval (the snapshot hash with the title, analyte “${version.approvedAs.analyte}”, preparation name “${version.approvedAs.preparationName}” and laboratory name shown here):`, { size: 8.5 });
+      paragraph(version.recordSha256, { font: 'mono', size: 8.5 });
+    }
 
     heading('Hazards and cautions');
     for (const item of items.filter((i) => i.hazardNotes)) paragraph(`${item.code}: ${item.hazardNotes}`, { size: 8.5 });

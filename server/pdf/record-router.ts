@@ -20,8 +20,11 @@ export function recordRouter(deps: { preparations: PreparationsService; labs: La
     const preparation = await deps.preparations.detail(labId, params.preparationId);
     const version = await deps.preparations.version(labId, params.preparationId, params.number);
     if (!version.snapshot) throw validationError('This version has no computed budget yet, so there is no record to print.');
-    const lab = await deps.labs.findById(labId);
-    const pdf = await renderRecordPdf({ labName: lab?.name ?? '', preparation, version, generatedAt: deps.clock.now().toISOString() });
+    // An approved version prints what it was signed under, not what later versions renamed.
+    const frozen = version.approvedAs;
+    const labName = frozen?.labName ?? (await deps.labs.findById(labId))?.name ?? '';
+    const shown = frozen ? { ...preparation, title: frozen.title } : preparation;
+    const pdf = await renderRecordPdf({ labName, preparation: shown, version, generatedAt: deps.clock.now().toISOString() });
     const name = `dilutrace-${params.preparationId}-v${params.number}${version.status === 'approved' ? '' : '-draft'}.pdf`;
     res.set('X-Content-Type-Options', 'nosniff').attachment(name).type('application/pdf').send(pdf);
   });

@@ -1,6 +1,7 @@
 import type { PreparationStatus } from '../../shared/contracts/preparations';
 import type { Db } from '../db/connection';
 import { insertedId } from '../db/inserted-id';
+import type { ApprovedAsColumns } from '../reviews/approved-record';
 
 export interface PreparationRow {
   id: number;
@@ -14,7 +15,7 @@ export interface PreparationRow {
   updated_at: string;
 }
 
-export interface VersionRow {
+export interface VersionRow extends ApprovedAsColumns {
   id: number;
   preparation_id: number;
   number: number;
@@ -25,6 +26,8 @@ export interface VersionRow {
   problem_json: string | null;
   snapshot_json: string | null;
   snapshot_sha256: string | null;
+  /** SHA-256 over the snapshot hash and the frozen fields, set when the version is approved. */
+  record_sha256: string | null;
   readings_json: string | null;
   result_statement: string | null;
   value: number | null;
@@ -45,6 +48,7 @@ export interface ReviewRow {
   at: string;
   comment: string;
   snapshot_sha256: string | null;
+  record_sha256: string | null;
 }
 
 /** The statuses in which the author may still change a version. */
@@ -101,9 +105,12 @@ export function preparationsRepository(db: Db) {
       trx('preparation_versions').where({ id: versionId }).whereIn('status', [...EDITABLE_STATUSES, 'prepared']).update(row),
     /** Moves a version between statuses; returns 0 when it was not in `from` any more. */
     setStatus: (versionId: number, from: PreparationStatus, to: PreparationStatus, trx: Db) => trx('preparation_versions').where({ id: versionId, status: from }).update({ status: to }),
+    /** Approves a submitted version and freezes what it shows, in one update; 0 when it was not submitted any more. */
+    approve: (versionId: number, frozen: ApprovedAsColumns & { record_sha256: string }, trx: Db) =>
+      trx('preparation_versions').where({ id: versionId, status: 'submitted' }).update({ status: 'approved', ...frozen }),
     reviewsOf: (versionId: number, trx: Db = db): Promise<ReviewRow[]> =>
       trx('version_reviews as r').join('users as u', 'u.id', 'r.actor_user_id').where('r.version_id', versionId).orderBy('r.id').select('r.*', 'u.name as actor_name'),
-    insertReview: (row: Omit<ReviewRow, 'id' | 'actor_name'>, trx: Db) => trx('version_reviews').insert(row),
+    insertReview: (row: Omit<ReviewRow, 'id' | 'actor_name' | 'record_sha256'> & { record_sha256?: string | null }, trx: Db) => trx('version_reviews').insert(row),
   };
 }
 export type PreparationsRepository = ReturnType<typeof preparationsRepository>;

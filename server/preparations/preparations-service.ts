@@ -14,6 +14,7 @@ import type { Snapshot } from './compute-snapshot';
 import { resolvePlan } from './plan-resolver';
 import { EDITABLE_STATUSES, type PreparationRow, type PreparationsRepository, type ReviewRow, type VersionRow, type VersionWrite } from './preparations-repository';
 import type { Review } from '../../shared/contracts/reviews';
+import { approvedAsOf } from '../reviews/approved-record';
 
 const parse = <T>(json: string | null): T | null => (json === null ? null : (JSON.parse(json) as T));
 
@@ -30,7 +31,7 @@ function toSummary(row: VersionRow): VersionSummary {
   };
 }
 
-const toReview = (row: ReviewRow): Review => ({ id: row.id, action: row.action, actor: row.actor_name, at: row.at, comment: row.comment, snapshotSha256: row.snapshot_sha256 });
+const toReview = (row: ReviewRow): Review => ({ id: row.id, action: row.action, actor: row.actor_name, at: row.at, comment: row.comment, snapshotSha256: row.snapshot_sha256, recordSha256: row.record_sha256 ?? null });
 
 export function toVersionDetail(row: VersionRow, reviews: ReviewRow[]): VersionDetail {
   return {
@@ -43,6 +44,8 @@ export function toVersionDetail(row: VersionRow, reviews: ReviewRow[]): VersionD
     problem: parse<PlanProblem>(row.problem_json),
     snapshot: parse<Snapshot>(row.snapshot_json),
     snapshotSha256: row.snapshot_sha256,
+    approvedAs: approvedAsOf(row),
+    recordSha256: row.record_sha256 ?? null,
   };
 }
 

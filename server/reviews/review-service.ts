@@ -10,6 +10,13 @@ import { conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { Mailer } from '../mail/mailer';
 import { decisionMessage, submittedMessage } from '../mail/messages';
 import type { PreparationsRepository, VersionRow } from '../preparations/preparations-repository';
+import { approvedAsOf, approvedRecordSha256, toApprovedAsColumns, type ApprovedAs } from './approved-record';
+
+/** The plan document's own title, if it has one. */
+function planTitle(planJson: string): string | null {
+  const title = (JSON.parse(planJson) as { title?: unknown }).title;
+  return typeof title === 'string' && title.trim() ? title.trim().slice(0, 200) : null;
+}
 
 /**
  * The review workflow of a computed version: draft or returned → submitted (its author) → approved
@@ -92,9 +99,19 @@ export function reviewService(deps: {
       }
       const at = now().toISOString();
       const comment = decision.kind === 'approved' ? decision.statement : decision.comment;
+      // What the record shows is frozen with the signature and covered by the hash signed.
+      const approvedAs: ApprovedAs | null =
+        decision.kind === 'approved'
+          ? { title: prep.title, analyte: prep.analyte, preparationName: planTitle(version.plan_json) ?? prep.title, labName: (await labs.findById(labId))?.name ?? '' }
+          : null;
+      const recordSha256 = approvedAs && version.snapshot_sha256 ? approvedRecordSha256(version.snapshot_sha256, approvedAs) : null;
       await db.transaction(async (trx) => {
-        if ((await preparations.setStatus(version.id, 'submitted', decision.kind, trx)) === 0) throw conflict('not_submitted', 'The version changed meanwhile; reload it.');
-        await preparations.insertReview({ version_id: version.id, action: decision.kind, actor_user_id: actor.id, at, comment, snapshot_sha256: version.snapshot_sha256 }, trx);
+        const changed =
+          approvedAs && recordSha256
+            ? await preparations.approve(version.id, { ...toApprovedAsColumns(approvedAs), record_sha256: recordSha256 }, trx)
+            : await preparations.setStatus(version.id, 'submitted', decision.kind, trx);
+        if (changed === 0) throw conflict('not_submitted', 'The version changed meanwhile; reload it.');
+        await preparations.insertReview({ version_id: version.id, action: decision.kind, actor_user_id: actor.id, at, comment, snapshot_sha256: version.snapshot_sha256, record_sha256: recordSha256 }, trx);
         await audit.record(
           {
             labId,
@@ -104,7 +121,7 @@ export function reviewService(deps: {
             entityId: preparationId,
             summary: `${actor.name} ${decision.kind} version ${number} of “${prep.title}”: ${comment}`,
             before: { status: 'submitted' },
-            after: { status: decision.kind, snapshotSha256: version.snapshot_sha256 },
+            after: { status: decision.kind, snapshotSha256: version.snapshot_sha256, ...(recordSha256 ? { recordSha256, approvedAs } : {}) },
           },
           trx,
         );
@@ -144,18 +161,30 @@ export function reviewService(deps: {
       }));
     },
 
+    /** Approved versions, newest first; title and analyte are the frozen ones where the version has them. */
     async approvedRecords(labId: number, q?: string): Promise<ApprovedRecord[]> {
+      const title = db.raw('coalesce(v.approved_title, p.title)');
+      const analyte = db.raw('coalesce(v.approved_analyte, p.analyte)');
       const query = db('preparation_versions as v')
         .join('preparations as p', 'p.id', 'v.preparation_id')
         .join('users as a', 'a.id', 'p.created_by')
         .join('version_reviews as r', (j) => j.on('r.version_id', 'v.id').andOnVal('r.action', '=', 'approved'))
         .join('users as u', 'u.id', 'r.actor_user_id')
         .where({ 'p.lab_id': labId, 'v.status': 'approved' })
-        .select('p.id as preparation_id', 'p.title', 'p.analyte', 'v.number', 'a.name as analyst', 'u.name as approved_by', 'r.at as approved_at', 'v.result_statement', 'v.snapshot_sha256')
+        .select('p.id as preparation_id', { title }, { analyte }, 'v.number', 'a.name as analyst', 'u.name as approved_by', 'r.at as approved_at', 'v.result_statement', 'v.snapshot_sha256')
         .orderBy('r.at', 'desc')
         .limit(500);
-      // whereILike: `like` on SQLite, `ilike` on PostgreSQL, so the search is case-blind on both.
-      if (q) query.andWhere((w) => w.whereILike('p.title', `%${q}%`).orWhereILike('p.analyte', `%${q}%`).orWhereILike('a.name', `%${q}%`).orWhereILike('p.material_code', `%${q}%`));
+      // lower() … like lower(?) and whereILike are case-blind on SQLite and PostgreSQL alike.
+      if (q) {
+        const pattern = `%${q}%`;
+        query.andWhere((w) =>
+          w
+            .whereRaw('lower(coalesce(v.approved_title, p.title)) like lower(?)', [pattern])
+            .orWhereRaw('lower(coalesce(v.approved_analyte, p.analyte)) like lower(?)', [pattern])
+            .orWhereILike('a.name', pattern)
+            .orWhereILike('p.material_code', pattern),
+        );
+      }
       const rows: { preparation_id: number; title: string; analyte: string; number: number; analyst: string; approved_by: string; approved_at: string; result_statement: string | null; snapshot_sha256: string }[] = await query;
       return rows.map((r) => ({
         preparationId: r.preparation_id,
@@ -170,24 +199,37 @@ export function reviewService(deps: {
       }));
     },
 
-    /** Recomputes the SHA-256 of the stored snapshot and compares it with the hash stored and the hash signed. */
+    /**
+     * Recomputes the SHA-256 of the stored snapshot and compares it with the hash stored and the hash
+     * signed; for a version approved with frozen fields, also the record hash that covers them.
+     */
     async verify(labId: number, preparationId: number, number: number): Promise<SnapshotVerification> {
       const { version } = await load(labId, preparationId, number);
       if (!version.snapshot_json) throw validationError('This version has no computed snapshot to verify.');
       const computedSha256 = sha256Hex(version.snapshot_json);
       const approval = (await preparations.reviewsOf(version.id)).find((r) => r.action === 'approved');
       const approvedSha256 = approval?.snapshot_sha256 ?? null;
-      const intact = computedSha256 === version.snapshot_sha256 && (approvedSha256 === null || approvedSha256 === computedSha256);
+      const snapshotIntact = computedSha256 === version.snapshot_sha256 && (approvedSha256 === null || approvedSha256 === computedSha256);
+      const approvedAs = approvedAsOf(version);
+      const record =
+        approvedAs || version.record_sha256 || approval?.record_sha256
+          ? { computedSha256: approvedAs ? approvedRecordSha256(computedSha256, approvedAs) : null, storedSha256: version.record_sha256, approvedSha256: approval?.record_sha256 ?? null }
+          : null;
+      const recordIntact = record === null || (record.computedSha256 !== null && record.computedSha256 === record.storedSha256 && record.computedSha256 === record.approvedSha256);
+      const intact = snapshotIntact && recordIntact;
       return {
         computedSha256,
         storedSha256: version.snapshot_sha256,
         approvedSha256,
+        record,
         intact,
-        message: intact
-          ? approvedSha256
-            ? 'The stored snapshot is exactly the one that was approved.'
-            : 'The stored snapshot matches its recorded hash.'
-          : 'The stored snapshot does NOT match its recorded hash: the record has been altered since it was computed or signed.',
+        message: !snapshotIntact
+          ? 'The stored snapshot does NOT match its recorded hash: the record has been altered since it was computed or signed.'
+          : !recordIntact
+            ? 'The title, analyte, preparation name or lab name stored with the approval does NOT match the signed hash: the record has been altered since it was signed.'
+            : approvedSha256
+              ? 'The stored snapshot is exactly the one that was approved.'
+              : 'The stored snapshot matches its recorded hash.',
       };
     },
   };

@@ -199,6 +199,8 @@ export const certificateSchema = z.object({
   mediaType: z.string(),
   sizeBytes: z.number().int(),
   sha256: z.string(),
+  /** A PDF that can run JavaScript (stored, but to be opened only with scripts turned off). */
+  containsScript: z.boolean().default(false),
   uploadedBy: z.string(),
   uploadedAt: z.string(),
 });

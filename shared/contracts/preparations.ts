@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { concentrationUnitNames } from '../uncertainty/units';
-import { reviewSchema } from './reviews';
+import { approvedAsSchema, reviewSchema } from './reviews';
 
 /**
  * Preparations and their versions. The plan is the engine's plan document (shared/uncertainty
@@ -144,6 +144,10 @@ export const versionDetailSchema = versionSummarySchema.extend({
     })
     .nullable(),
   snapshotSha256: z.string().nullable(),
+  /** Approved versions: the title, analyte, preparation name and lab name frozen at approval (null before they were stored). */
+  approvedAs: approvedAsSchema.nullable().default(null),
+  /** Approved versions: the SHA-256 signed, over the snapshot hash and the frozen fields. */
+  recordSha256: z.string().nullable().default(null),
   /** The masses actually weighed, once the solution has been prepared; null while only planned. */
   readings: recordedReadingsSchema.nullable().default(null),
   /** Submissions, returns with their comments, and the signed approval, oldest first. */

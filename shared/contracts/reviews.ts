@@ -9,8 +9,14 @@ export const reviewSchema = z.object({
   at: z.string(),
   comment: z.string(),
   snapshotSha256: z.string().nullable(),
+  /** For an approval: the SHA-256 signed, over the snapshot hash and the frozen title, analyte and names. */
+  recordSha256: z.string().nullable().default(null),
 });
 export type Review = z.infer<typeof reviewSchema>;
+
+/** What an approved version showed when it was signed (frozen with the signature). */
+export const approvedAsSchema = z.object({ title: z.string(), analyte: z.string(), preparationName: z.string(), labName: z.string() });
+export type ApprovedAsView = z.infer<typeof approvedAsSchema>;
 
 export const submitRequestSchema = z.object({ comment: z.string().trim().max(2000).default('') });
 export const returnRequestSchema = z.object({
@@ -52,6 +58,11 @@ export const snapshotVerificationSchema = z.object({
   computedSha256: z.string(),
   storedSha256: z.string().nullable(),
   approvedSha256: z.string().nullable(),
+  /** The record hash over the frozen fields (null for versions approved before they were frozen). */
+  record: z
+    .object({ computedSha256: z.string().nullable(), storedSha256: z.string().nullable(), approvedSha256: z.string().nullable() })
+    .nullable()
+    .default(null),
   intact: z.boolean(),
   message: z.string(),
 });

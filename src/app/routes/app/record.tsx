@@ -103,7 +103,7 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
 
   return (
     <>
-      <title>{`${preparation.title} · v${version.number} · Dilutrace`}</title>
+      <title>{`${version.approvedAs?.title ?? preparation.title} · v${version.number} · Dilutrace`}</title>
       <p className="mb-2">
         <BackLink approved={version.status === 'approved'} reviewing={version.status === 'submitted' && can(roles, 'reviewRecords')} />
       </p>

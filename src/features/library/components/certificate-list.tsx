@@ -14,6 +14,11 @@ export function CertificateList({ labId, certificates }: { labId: number; certif
           <a href={certificateDownloadUrl(labId, certificate.id)} download={certificate.originalName} className="font-semibold break-all">
             {certificate.originalName}
           </a>
+          {certificate.containsScript ? (
+            <p className="text-sm font-semibold text-danger" role="note">
+              Holds JavaScript: open it only in a PDF viewer with scripts turned off, and check it with whoever issued it.
+            </p>
+          ) : null}
           <div className="text-sm text-muted">
             Revision {certificate.revisionNumber} · {sizeText(certificate.sizeBytes)} · {certificate.uploadedBy},{' '}
             <time dateTime={certificate.uploadedAt}>{formatDateTime(certificate.uploadedAt)}</time>

@@ -9,13 +9,19 @@ function When({ at }: { at: string }) {
   return <time dateTime={at}>{formatDateTime(at)}</time>;
 }
 
-/** The page's h1 with the version, its status and who did what when. */
+/**
+ * The page's h1 with the version, its status and who did what when. An approved version shows the
+ * title and analyte it was signed under, whatever later versions were renamed to.
+ */
 export function RecordHeader({ preparation, version, actions }: RecordHeaderProps) {
+  const title = version.approvedAs?.title ?? preparation.title;
+  const analyte = version.approvedAs?.analyte ?? preparation.analyte;
   const submitted = version.reviews.findLast((review) => review.action === 'submitted');
   const approved = version.reviews.find((review) => review.action === 'approved');
   const facts: [string, ReactNode][] = [
     ['Analyst', preparation.createdBy],
-    ['Analyte', preparation.analyte || '—'],
+    ['Analyte', analyte || '—'],
+    ...(version.approvedAs ? ([['Laboratory', version.approvedAs.labName]] as [string, ReactNode][]) : []),
     ['Version started', <When key="started" at={version.createdAt} />],
     ['Last computed', version.snapshot ? <When key="computed" at={version.snapshot.computedAt} /> : 'Not computed'],
     ...(submitted ? ([['Submitted', <When key="submitted" at={submitted.at} />]] as [string, ReactNode][]) : []),
@@ -26,7 +32,7 @@ export function RecordHeader({ preparation, version, actions }: RecordHeaderProp
       <div className="flex flex-wrap items-start justify-between gap-4">
         <div>
           <p className="text-sm font-semibold tracking-wide text-muted uppercase">Preparation record</p>
-          <h1 className="text-3xl font-bold tracking-tight">{preparation.title}</h1>
+          <h1 className="text-3xl font-bold tracking-tight">{title}</h1>
           <p className="mt-2 flex flex-wrap items-center gap-3">
             <span className="text-lg font-semibold">Version {version.number}</span>
             <span data-testid="record-status">

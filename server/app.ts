@@ -84,7 +84,7 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   const preparationRows = preparationsRepository(db);
   const preparations = preparationsService({ db, preparations: preparationRows, items, policy, audit, computer, now });
   const reviews = reviewService({ db, preparations: preparationRows, users, labs, audit, mailer, now, publicUrl, log });
-  const routes = routeFinderService({ items, policy });
+  const routes = routeFinderService({ items, policy, computer });
   const passport = createPassport(auth);
   const authorize = createAuthorize(labs);
 

@@ -1,5 +1,6 @@
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app';
+import { createComputePool } from './compute/compute-pool';
 import { certificateDir, databaseTarget, loadEnv } from './config/env';
 import { openDatabase } from './db/connection';
 import { seedDemoLab } from './db/seed-demo';
@@ -25,6 +26,10 @@ const { app, sessions, close: closeApp } = createApp({
   db,
   mailer,
   clock: systemClock,
+  computer: createComputePool({
+    ...(env.DILUTRACE_COMPUTE_THREADS ? { threads: env.DILUTRACE_COMPUTE_THREADS } : {}),
+    ...(env.DILUTRACE_COMPUTE_JOBS_PER_LAB ? { jobsPerLab: env.DILUTRACE_COMPUTE_JOBS_PER_LAB } : {}),
+  }),
   config: {
     sessionSecret: env.DILUTRACE_SESSION_SECRET ?? (await sessionSecret(db)),
     publicUrl,

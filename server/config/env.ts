@@ -21,6 +21,10 @@ const envSchema = z.object({
   DILUTRACE_TRUST_PROXY: z.enum(['0', '1']).default('0'),
   /** Sign-in attempts allowed per address and e-mail in 15 minutes (raise only for load tests). */
   DILUTRACE_SIGNIN_LIMIT: z.coerce.number().int().min(1).default(10),
+  /** Worker threads of the compute pool (Monte Carlo, route finder); one less than the cores, at most 2, unless set. */
+  DILUTRACE_COMPUTE_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+  /** Computations one lab may have running or waiting at once (4 unless set); past it the lab is asked to retry. */
+  DILUTRACE_COMPUTE_JOBS_PER_LAB: z.coerce.number().int().min(1).max(256).optional(),
   SMTP_URL: z.url().optional(),
   MAIL_FROM: z.string().default('Dilutrace <no-reply@dilutrace.local>'),
 });

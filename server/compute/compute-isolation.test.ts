@@ -156,3 +156,21 @@ describe.runIf(!process.env.DATABASE_URL)('a locked database', () => {
     await analyst.post(url('/preparations'), { title: 'After the lock', plan: leadPlan(library) }).expect(201);
   });
 });
+
+describe.runIf(process.env.DATABASE_URL)('a locked PostgreSQL table', () => {
+  it('waits for the lock timeout, then answers 503 with Retry-After; health still answers', { timeout: 60_000 }, async () => {
+    const { app, analyst, library, url } = await setUp();
+    const holder = await t!.db.transaction();
+    await holder.raw('lock table preparations in share mode');
+    try {
+      const res = await analyst.post(url('/preparations'), { title: 'While locked', plan: leadPlan(library) });
+      expect(res.status).toBe(503);
+      expect(res.headers['retry-after']).toBe('5');
+      expect(res.body.error.code).toBe('database_busy');
+      await request(app).get('/api/health').expect(200);
+    } finally {
+      await holder.rollback();
+    }
+    await analyst.post(url('/preparations'), { title: 'After the lock', plan: leadPlan(library) }).expect(201);
+  });
+});

@@ -65,7 +65,7 @@ describe('compute pool (piscina worker threads)', () => {
     pool = createComputePool({ threads: 1, timeoutMs: 50 });
     const error = await refusal(pool.snapshot(1, job(HEAVY)));
     expect((error as AppError).code).toBe('compute_timeout');
-    expect(error.message).toMatch(/took longer than/);
+    expect(error.message).toMatch(/did not finish within/);
     expect(pool.stats()).toMatchObject({ active: 0, timedOut: 1 });
   });
 

@@ -15,7 +15,7 @@ export interface ComputeLimits {
   jobsPerLab: number;
   /** Jobs waiting for a thread, all labs together; past it the server answers 503. */
   queuedJobs: number;
-  /** A job still running after this long is stopped. */
+  /** A job not finished this long after it was accepted (waiting included) is stopped. */
   timeoutMs: number;
 }
 
@@ -71,7 +71,7 @@ export function createComputePool(limits: Partial<ComputeLimits> = {}): Computer
     } catch (error) {
       if (deadline.aborted) {
         timedOut += 1;
-        throw new AppError('unavailable', 'compute_timeout', `The computation took longer than ${Math.round(timeoutMs / 1000)} s and was stopped. Use fewer Monte Carlo trials or a smaller plan.`);
+        throw new AppError('unavailable', 'compute_timeout', `The computation did not finish within ${Math.round(timeoutMs / 1000)} s and was stopped. Try again later, or use fewer Monte Carlo trials.`);
       }
       if (clientSignal?.aborted) {
         cancelled += 1;

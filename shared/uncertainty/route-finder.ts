@@ -18,6 +18,7 @@ import { evaluatePlan } from './evaluate-plan';
 import { minimumWeightG } from './minimum-weight';
 import { parseWithSchema } from './parse-plan';
 import { PlanError } from './plan-error';
+import { groupedDigits } from './plan-limits';
 import { settingsSchema, type PlanInput } from './plan-schema';
 import { concentrationUnitNames, unitOf, type ConcentrationUnit } from './units';
 import { pistonErrorsUl } from './volume-delivery';
@@ -125,6 +126,13 @@ export function findRoutes(input: RouteRequest): RouteResult {
   const flaskVariance = (flask: VolumetricFlask) =>
     (flask.toleranceMl ** 2 / toleranceFactor(flask.toleranceDistribution) + flask.fillRepeatabilityMl ** 2) / flask.nominalMl ** 2 + temperatureVariance;
 
+  let searchSteps = 0;
+  /** Counts one partial route (or dilution stage) looked at; false once the budget is spent. */
+  const withinBudget = () => {
+    searchSteps += 1;
+    return searchSteps <= request.searchBudget;
+  };
+
   const stages: Stage[] = [];
   request.pipettes.forEach((pipette, pipetteIndex) => {
     for (const volumeMl of pipetteVolumesMl(pipette)) {
@@ -133,7 +141,7 @@ export function findRoutes(input: RouteRequest): RouteResult {
           ? (pipette.toleranceMl ** 2 / toleranceFactor(pipette.toleranceDistribution) + pipette.fillRepeatabilityMl ** 2) / volumeMl ** 2
           : pistonVariance(pipette, volumeMl);
       request.flasks.forEach((flask, flaskIndex) => {
-        if (volumeMl >= flask.nominalMl) return;
+        if (volumeMl >= flask.nominalMl || !withinBudget()) return;
         stages.push({
           pipetteIndex,
           flaskIndex,
@@ -149,12 +157,6 @@ export function findRoutes(input: RouteRequest): RouteResult {
 
   const kept: Candidate[] = [];
   let feasibleCandidates = 0;
-  let searchSteps = 0;
-  /** Counts one partial route looked at; false once the budget is spent. */
-  const withinBudget = () => {
-    searchSteps += 1;
-    return searchSteps <= request.searchBudget;
-  };
   const bound = () => (kept.length < keep ? Infinity : kept[kept.length - 1].approximateVariance);
   const offer = (candidate: Candidate) => {
     feasibleCandidates += 1;
@@ -311,7 +313,7 @@ function rankCandidates(
     feasibleCandidates: search.feasibleCandidates,
     stoppedEarly,
     searchNote: stoppedEarly
-      ? `The search stopped after ${request.searchBudget.toLocaleString('en-GB')} candidate routes, so a better route may exist. ` +
+      ? `The search stopped after ${groupedDigits(request.searchBudget)} candidate routes, so a better route may exist. ` +
         'Allow fewer dilutions, or retire equipment the lab no longer uses, for a complete search.'
       : null,
   };

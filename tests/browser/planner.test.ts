@@ -197,7 +197,7 @@ describe('the analyst plans a lead standard', () => {
   });
 
   it('shows the route finder’s sentence when its search stopped early', async () => {
-    const note = 'The search stopped after 2,000,000 candidate routes, so a better route may exist.';
+    const note = 'The search stopped after 2 000 000 candidate routes, so a better route may exist.';
     // The demo library is small enough for a complete search, so the server's answer is marked as stopped here.
     await page.route('**/route-finder', async (route) => {
       const response = await route.fetch();

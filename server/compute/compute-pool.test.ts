@@ -48,6 +48,16 @@ describe('compute pool (piscina worker threads)', () => {
     expect(outcomes[4].message).toMatch(/Your lab already has 2 computations/);
   });
 
+  it('serves waiting jobs in turns by lab: a lab that queued first does not hold another lab behind all its jobs', async () => {
+    pool = createComputePool({ threads: 1, jobsPerLab: 4 });
+    const finished: string[] = [];
+    const track = (name: string, lab: number, trials: number) => pool!.snapshot(lab, job(trials)).then(() => void finished.push(name));
+    await Promise.all([track('A1', 1, HEAVY / 4), track('A2', 1, HEAVY / 4), track('A3', 1, HEAVY / 4), track('A4', 1, HEAVY / 4), track('B1', 2, 1000)]);
+    // One thread: first come, first served would finish B1 last. In turns, B1 runs as soon as A1 has finished.
+    expect(finished).toEqual(['A1', 'B1', 'A2', 'A3', 'A4']);
+    expect(finished).toHaveLength(5);
+  });
+
   it('a full queue refuses new jobs from any lab', async () => {
     pool = createComputePool({ threads: 1, jobsPerLab: 10, queuedJobs: 1 });
     const stop = new AbortController();

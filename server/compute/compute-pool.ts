@@ -4,6 +4,7 @@ import { PlanError, type RouteRequest, type RouteResult } from '../../shared/unc
 import { AppError } from '../lib/errors';
 import type { Snapshot } from '../preparations/compute-snapshot';
 import type { ComputeJob, ComputeReply } from './compute-worker';
+import { LabTurns } from './lab-turns';
 
 export type SnapshotInput = Extract<ComputeJob, { kind: 'snapshot' }>['input'];
 
@@ -11,7 +12,7 @@ export type SnapshotInput = Extract<ComputeJob, { kind: 'snapshot' }>['input'];
 export interface ComputeLimits {
   /** Worker threads running the engine. */
   threads: number;
-  /** Jobs of one lab running or waiting at once; a lab past it is told to retry, the others are not held. */
+  /** Jobs of one lab running or waiting at once; a lab past it is told to retry. */
   jobsPerLab: number;
   /** Jobs waiting for a thread, all labs together; past it the server answers 503. */
   queuedJobs: number;
@@ -41,7 +42,10 @@ export interface Computer {
 
 const busy = (message: string) => new AppError('unavailable', 'compute_busy', message);
 
-/** A bounded pool of worker threads (piscina), started on first use, with a per-lab share of it. */
+/**
+ * A bounded pool of worker threads (piscina), started on first use. Each lab has a share of it (jobs
+ * running or waiting), and waiting jobs are served in turns by lab.
+ */
 export function createComputePool(limits: Partial<ComputeLimits> = {}): Computer {
   const { threads, jobsPerLab, queuedJobs, timeoutMs } = { ...DEFAULT_COMPUTE_LIMITS, ...limits };
   const pool = new Piscina<ComputeJob, ComputeReply>({
@@ -51,6 +55,10 @@ export function createComputePool(limits: Partial<ComputeLimits> = {}): Computer
     maxQueue: queuedJobs,
     idleTimeout: 60_000,
   });
+  // Jobs wait here, in turns by lab, and reach piscina only when a thread is free (piscina's own line is
+  // first come, first served).
+  const waiting = new LabTurns<() => void>();
+  let running = 0;
   const activeByLab = new Map<number, number>();
   let active = 0;
   let cancelled = 0;
@@ -67,7 +75,13 @@ export function createComputePool(limits: Partial<ComputeLimits> = {}): Computer
     activeByLab.set(labId, ofLab + 1);
     active += 1;
     try {
-      return await pool.run(job, { signal });
+      await threadFor(labId, signal);
+      try {
+        return await pool.run(job, { signal });
+      } finally {
+        running -= 1;
+        startWaiting();
+      }
     } catch (error) {
       if (deadline.aborted) {
         timedOut += 1;
@@ -84,6 +98,37 @@ export function createComputePool(limits: Partial<ComputeLimits> = {}): Computer
       const left = (activeByLab.get(labId) ?? 1) - 1;
       if (left > 0) activeByLab.set(labId, left);
       else activeByLab.delete(labId);
+    }
+  }
+
+  /** Resolves when a thread is free for this job (counted as running), or rejects if the job is aborted while it waits. */
+  function threadFor(labId: number, signal: AbortSignal): Promise<void> {
+    if (signal.aborted) return Promise.reject(signal.reason);
+    if (running < threads && waiting.size === 0) {
+      running += 1;
+      waiting.served(labId);
+      return Promise.resolve();
+    }
+    return new Promise((resolve, reject) => {
+      const start = () => {
+        signal.removeEventListener('abort', stop);
+        running += 1;
+        resolve();
+      };
+      const stop = () => {
+        waiting.remove(labId, start);
+        reject(signal.reason);
+      };
+      signal.addEventListener('abort', stop, { once: true });
+      waiting.push(labId, start);
+    });
+  }
+
+  function startWaiting() {
+    while (running < threads) {
+      const start = waiting.shift();
+      if (!start) return;
+      start();
     }
   }
 

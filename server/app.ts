@@ -91,7 +91,7 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   const preparationRows = preparationsRepository(db);
   const preparations = preparationsService({ db, preparations: preparationRows, items, policy, audit, computer, now });
   const reviews = reviewService({ db, preparations: preparationRows, users, labs, audit, mailer, now, publicUrl, log });
-  const routes = routeFinderService({ items, policy });
+  const routes = routeFinderService({ items, policy, computer });
   const background = backgroundWork(log);
   const limits = attemptLimits({ db, audit, background, settings: { ...(config.signInLimit ? { perAccount: config.signInLimit } : {}), ...config.attemptLimits } });
   const pruneAttempts = setInterval(() => void limits.prune().catch((error: unknown) => log('Pruning attempt counters failed', error)), 60 * 60 * 1000).unref();

@@ -1,6 +1,7 @@
 import { rmSync, writeFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app';
+import { createComputePool } from './compute/compute-pool';
 import { certificateDir, databaseTarget, loadEnv } from './config/env';
 import { pidFileOf } from './db/backup';
 import { openDatabase } from './db/connection';
@@ -27,6 +28,10 @@ const { app, sessions, close: closeApp } = createApp({
   db,
   mailer,
   clock: systemClock,
+  computer: createComputePool({
+    ...(env.DILUTRACE_COMPUTE_THREADS ? { threads: env.DILUTRACE_COMPUTE_THREADS } : {}),
+    ...(env.DILUTRACE_COMPUTE_JOBS_PER_LAB ? { jobsPerLab: env.DILUTRACE_COMPUTE_JOBS_PER_LAB } : {}),
+  }),
   config: {
     sessionSecret: env.DILUTRACE_SESSION_SECRET ?? (await sessionSecret(db)),
     publicUrl,

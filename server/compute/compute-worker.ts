@@ -1,15 +1,18 @@
-import { parentPort } from 'node:worker_threads';
-import { PlanError } from '../../shared/uncertainty';
-import { computeSnapshot } from '../preparations/compute-snapshot';
+import { findRoutes, PlanError, type RouteRequest, type RouteResult } from '../../shared/uncertainty';
+import { computeSnapshot, type Snapshot } from '../preparations/compute-snapshot';
 
-type Job = { id: number; input: Parameters<typeof computeSnapshot>[0] };
+/** What a worker thread is asked to do: a stored budget's snapshot, or a route search. */
+export type ComputeJob = { kind: 'snapshot'; input: Parameters<typeof computeSnapshot>[0] } | { kind: 'routes'; request: RouteRequest };
 
-/** Runs the engine for the request thread: GUM, Monte Carlo and validation of one resolved plan. */
-parentPort?.on('message', ({ id, input }: Job) => {
+/** A PlanError does not survive the trip between threads as a class, so it travels as data. */
+export type ComputeReply = { snapshot: Snapshot } | { routes: RouteResult } | { planError: { path: PlanError['path']; message: string } };
+
+/** Runs one job in a worker thread of the compute pool (piscina calls the default export). */
+export default function runComputeJob(job: ComputeJob): ComputeReply {
   try {
-    parentPort?.postMessage({ id, snapshot: computeSnapshot(input) });
+    return job.kind === 'snapshot' ? { snapshot: computeSnapshot(job.input) } : { routes: findRoutes(job.request) };
   } catch (error) {
-    const planError = error instanceof PlanError ? { path: error.path } : null;
-    parentPort?.postMessage({ id, error: { message: (error as Error).message, planError } });
+    if (error instanceof PlanError) return { planError: { path: error.path, message: error.message } };
+    throw error;
   }
-});
+}

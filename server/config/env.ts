@@ -25,6 +25,10 @@ const envSchema = z.object({
   DILUTRACE_SIGNIN_CLIENT_LIMIT: z.coerce.number().int().min(1).default(100),
   /** Failed password checks allowed on the whole instance in 15 minutes. */
   DILUTRACE_SIGNIN_INSTANCE_LIMIT: z.coerce.number().int().min(1).default(1000),
+  /** Worker threads of the compute pool (Monte Carlo, route finder); one less than the cores, at most 2, unless set. */
+  DILUTRACE_COMPUTE_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+  /** Computations one lab may have running or waiting at once (4 unless set); past it the lab is asked to retry. */
+  DILUTRACE_COMPUTE_JOBS_PER_LAB: z.coerce.number().int().min(1).max(256).optional(),
   SMTP_URL: z.url().optional(),
   MAIL_FROM: z.string().default('Dilutrace <no-reply@dilutrace.local>'),
 });

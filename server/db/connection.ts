@@ -40,18 +40,29 @@ async function migrate(db: Db, schema: string | undefined): Promise<void> {
     return;
   }
   await db.transaction(async (trx) => {
+    // Waiting for another instance's migrations is not a lock to give up on.
+    await trx.raw('set local lock_timeout = 0');
     await trx.raw('select pg_advisory_xact_lock(hashtext(?))', [`dilutrace migrations ${schema ?? ''}`]);
     if (schema) await db.raw('create schema if not exists ??', [schema]);
     await db.migrate.latest({ migrationSource });
   });
 }
 
+/** How long a PostgreSQL statement waits for a row or table lock before it fails (answered 503), ms. */
+export const POSTGRES_LOCK_TIMEOUT_MS = 5000;
+
 function openPostgres(url: string, options: OpenOptions): Db {
   return knex({
     client: 'pg',
     connection: url,
     searchPath: options.schema ? [options.schema] : undefined,
-    pool: { min: 0, max: 10 },
+    pool: {
+      min: 0,
+      max: 10,
+      afterCreate: (conn: { query: (sql: string, done: (error: Error | null) => void) => void }, done: (error: Error | null, conn: unknown) => void) => {
+        conn.query(`set lock_timeout = ${POSTGRES_LOCK_TIMEOUT_MS}`, (error) => done(error, conn));
+      },
+    },
   });
 }
 

@@ -11,7 +11,20 @@ const STATUS: Record<AppError['kind'], number> = {
   too_large: 413,
   unsupported_media_type: 415,
   rate_limited: 429,
+  unavailable: 503,
 };
+
+/** Seconds a client is asked to wait (Retry-After) before trying a 503 again. */
+export const RETRY_AFTER_SECONDS = 5;
+
+/**
+ * The database stayed busy past its wait: SQLite still locked after busy_timeout, or PostgreSQL's
+ * lock_timeout (55P03), a deadlock (40P01) or a serialization failure (40001). Retrying later helps.
+ */
+export function isDatabaseBusy(error: unknown): boolean {
+  const code = (error as { code?: unknown } | null)?.code;
+  return typeof code === 'string' && (/^SQLITE_(BUSY|LOCKED)/.test(code) || ['55P03', '40P01', '40001'].includes(code));
+}
 
 export const apiNotFound: RequestHandler = (req, res) => {
   const what = req.originalUrl.startsWith('/api/') ? 'API route' : 'page or file';
@@ -28,7 +41,13 @@ interface HttpishError {
 /** Maps error classes to statuses and the one JSON error shape; never sends a stack. */
 export function errorHandler(log: (message: string, error: unknown) => void): ErrorRequestHandler {
   return (error, _req, res, _next) => {
+    if (isDatabaseBusy(error)) {
+      res.set('Retry-After', String(RETRY_AFTER_SECONDS));
+      res.status(503).json({ error: { code: 'database_busy', message: 'The database is busy. Try again in a few seconds.' } });
+      return;
+    }
     if (error instanceof AppError) {
+      if (error.kind === 'unavailable') res.set('Retry-After', String(RETRY_AFTER_SECONDS));
       res.status(STATUS[error.kind]).json({ error: { code: error.code, message: error.message, details: error.details } });
       return;
     }

@@ -3,7 +3,7 @@ import type { FieldIssue } from '../../shared/contracts/errors';
 /** An error the client may see: a stable code and a message a chemist reads. Services throw these. */
 export class AppError extends Error {
   constructor(
-    readonly kind: 'validation' | 'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'rate_limited' | 'too_large' | 'unsupported_media_type',
+    readonly kind: 'validation' | 'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'rate_limited' | 'too_large' | 'unsupported_media_type' | 'unavailable',
     readonly code: string,
     message: string,
     readonly details?: FieldIssue[] | Record<string, unknown>,

@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
 import { computeRequestSchema, preparationListQuerySchema, readingsRequestSchema, preparationWriteSchema, routeFinderRequestSchema, titleSchema } from '../../shared/contracts/preparations';
 import type { Authorize, LabContext, SessionUser } from '../auth/authorize';
+import { clientSignal } from '../lib/client-signal';
 import { valid, validate } from '../lib/validate';
 import type { PreparationsService } from './preparations-service';
 import type { routeFinderService } from './route-finder-service';
@@ -27,7 +28,7 @@ export function preparationsRouter(deps: { preparations: PreparationsService; ro
 
   router.post('/preparations', plan, validate({ body: preparationWriteSchema }), async (req, res) => {
     const { body } = valid(req, { body: preparationWriteSchema });
-    res.status(201).json(await preparations.create(lab(req), actor(req), body));
+    res.status(201).json(await preparations.create(lab(req), actor(req), body, clientSignal(res)));
   });
 
   router.get('/preparations/:preparationId', read, validate({ params: prepParams }), async (req, res) => {
@@ -42,32 +43,32 @@ export function preparationsRouter(deps: { preparations: PreparationsService; ro
 
   router.put('/preparations/:preparationId/versions/:number', plan, validate({ params: versionParams, body: preparationWriteSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: versionParams, body: preparationWriteSchema });
-    res.json(await preparations.saveDraft(lab(req), actor(req), params.preparationId, params.number, body));
+    res.json(await preparations.saveDraft(lab(req), actor(req), params.preparationId, params.number, body, clientSignal(res)));
   });
 
   router.post('/preparations/:preparationId/versions/:number/readings', plan, validate({ params: versionParams, body: readingsRequestSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: versionParams, body: readingsRequestSchema });
-    res.json(await preparations.recordReadings(lab(req), actor(req), params.preparationId, params.number, body));
+    res.json(await preparations.recordReadings(lab(req), actor(req), params.preparationId, params.number, body, clientSignal(res)));
   });
 
   router.post('/preparations/:preparationId/versions', plan, validate({ params: prepParams }), async (req, res) => {
     const { params } = valid(req, { params: prepParams });
-    res.status(201).json(await preparations.newVersion(lab(req), actor(req), params.preparationId));
+    res.status(201).json(await preparations.newVersion(lab(req), actor(req), params.preparationId, clientSignal(res)));
   });
 
   router.post('/preparations/:preparationId/duplicate', plan, validate({ params: prepParams, body: duplicateSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: prepParams, body: duplicateSchema });
-    res.status(201).json(await preparations.duplicate(lab(req), actor(req), params.preparationId, body.title));
+    res.status(201).json(await preparations.duplicate(lab(req), actor(req), params.preparationId, body.title, clientSignal(res)));
   });
 
   router.post('/compute', authorize.lab(['analyst', 'qa']), validate({ body: computeRequestSchema }), async (req, res) => {
     const { body } = valid(req, { body: computeRequestSchema });
-    res.json(await preparations.computeOnly(lab(req), body));
+    res.json(await preparations.computeOnly(lab(req), body, clientSignal(res)));
   });
 
   router.post('/route-finder', authorize.lab(['analyst', 'qa']), validate({ body: routeFinderRequestSchema }), async (req, res) => {
     const { body } = valid(req, { body: routeFinderRequestSchema });
-    res.json(await routes.find(lab(req), body));
+    res.json(await routes.find(lab(req), body, clientSignal(res)));
   });
 
   return router;

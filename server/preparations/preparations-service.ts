@@ -99,14 +99,14 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
   }
 
   /** Resolves against the library and computes; a plan the engine refuses is kept with its problem. */
-  async function compute(labId: number, plan: Record<string, unknown>, overrides: Override[], seed: number): Promise<VersionWrite & { materialCode: string | null }> {
+  async function compute(labId: number, plan: Record<string, unknown>, overrides: Override[], seed: number, signal?: AbortSignal): Promise<VersionWrite & { materialCode: string | null }> {
     assertWellFormed(plan);
     const at = now().toISOString();
     const library = await libraryOf(labId);
     const base = { plan_json: JSON.stringify(plan), overrides_json: JSON.stringify(overrides), seed, updated_at: at };
     try {
       const resolved = resolvePlan(plan, library, overrides);
-      const snapshot = await computer.run({ plan: resolved.plan, items: resolved.items, seed, computedAt: at, policy: await policy.read(labId) });
+      const snapshot = await computer.snapshot(labId, { plan: resolved.plan, items: resolved.items, seed, computedAt: at, policy: await policy.read(labId) }, signal);
       const budget = snapshot.budget as { statement: string; value: number; unit: string; relativeExpandedUncertainty: number };
       const snapshotJson = canonicalJson(snapshot);
       const material = resolved.items.find((i) => i.kind.endsWith('-material'));
@@ -148,10 +148,11 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     detail,
 
     /** Computes a plan against the lab's library without saving anything (for integrations and load tests). */
-    async computeOnly(labId: number, input: { plan: Record<string, unknown>; overrides: Override[]; seed: number; trials: number }) {
+    async computeOnly(labId: number, input: { plan: Record<string, unknown>; overrides: Override[]; seed: number; trials: number }, signal?: AbortSignal) {
       assertWellFormed(input.plan);
       const resolved = resolvePlan(input.plan, await libraryOf(labId), input.overrides);
-      return computer.run({ plan: resolved.plan, items: resolved.items, seed: input.seed, computedAt: now().toISOString(), policy: await policy.read(labId), trials: input.trials });
+      const job = { plan: resolved.plan, items: resolved.items, seed: input.seed, computedAt: now().toISOString(), policy: await policy.read(labId), trials: input.trials };
+      return computer.snapshot(labId, job, signal);
     },
 
     async list(labId: number, filter: Parameters<PreparationsRepository['list']>[1]): Promise<PreparationSummary[]> {
@@ -167,9 +168,9 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       return toVersionDetail(row, await preparations.reviewsOf(row.id));
     },
 
-    async create(labId: number, actor: SessionUser, input: PreparationWrite & { overrides: Override[] }): Promise<PreparationDetail> {
+    async create(labId: number, actor: SessionUser, input: PreparationWrite & { overrides: Override[] }, signal?: AbortSignal): Promise<PreparationDetail> {
       const seed = input.seed ?? randomInt(0, 2 ** 32);
-      const computed = await compute(labId, input.plan, input.overrides, seed);
+      const computed = await compute(labId, input.plan, input.overrides, seed, signal);
       const { materialCode, ...write } = computed;
       const at = now().toISOString();
       const id = await db.transaction(async (trx) => {
@@ -185,14 +186,14 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     },
 
     /** Saves (and recomputes) the draft version; only its author may, and only while it is a draft. */
-    async saveDraft(labId: number, actor: SessionUser, id: number, number: number, input: PreparationWrite & { overrides: Override[] }): Promise<PreparationDetail> {
+    async saveDraft(labId: number, actor: SessionUser, id: number, number: number, input: PreparationWrite & { overrides: Override[] }, signal?: AbortSignal): Promise<PreparationDetail> {
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const current = await preparations.version(id, number);
       if (!current) throw notFound(`Version ${number}`);
       if (!EDITABLE_STATUSES.includes(current.status)) throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
       if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can change its draft. Duplicate it to make your own variant.');
-      const computed = await compute(labId, input.plan, input.overrides, input.seed ?? Number(current.seed));
+      const computed = await compute(labId, input.plan, input.overrides, input.seed ?? Number(current.seed), signal);
       const { materialCode, ...write } = computed;
       await db.transaction(async (trx) => {
         const changed = await preparations.updateDraft(current.id, write, trx);
@@ -216,14 +217,14 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     },
 
     /** Starts a new draft version from the latest one (after approval or return). */
-    async newVersion(labId: number, actor: SessionUser, id: number): Promise<PreparationDetail> {
+    async newVersion(labId: number, actor: SessionUser, id: number, signal?: AbortSignal): Promise<PreparationDetail> {
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const [latest] = await preparations.versionsOf(id);
       if (EDITABLE_STATUSES.includes(latest.status)) throw conflict('draft_exists', `Version ${latest.number} can still be edited: change that one.`);
       if (latest.status === 'prepared') throw conflict('draft_exists', `Version ${latest.number} has been prepared: correct its readings or submit it for review.`);
       if (latest.status === 'submitted') throw conflict('under_review', `Version ${latest.number} is waiting for review; a new version can start once it is approved or returned.`);
-      const computed = await compute(labId, JSON.parse(latest.plan_json), JSON.parse(latest.overrides_json), Number(latest.seed));
+      const computed = await compute(labId, JSON.parse(latest.plan_json), JSON.parse(latest.overrides_json), Number(latest.seed), signal);
       const { materialCode: _material, ...write } = computed;
       await db.transaction(async (trx) => {
         await preparations.insertVersion(id, latest.number + 1, { ...write, created_by: actor.id, created_at: write.updated_at }, trx);
@@ -238,7 +239,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
      * masses are replaced by them, the budget is recomputed on the actual values, and the version
      * becomes "prepared". Readings can be corrected until the version is submitted.
      */
-    async recordReadings(labId: number, actor: SessionUser, id: number, number: number, input: ReadingsRequest & { deviations: string }): Promise<PreparationDetail> {
+    async recordReadings(labId: number, actor: SessionUser, id: number, number: number, input: ReadingsRequest & { deviations: string }, signal?: AbortSignal): Promise<PreparationDetail> {
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const current = await preparations.version(id, number);
@@ -267,7 +268,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
         step[field] = reading.actualMassG;
       });
       if (issues.length > 0) throw validationError(issues[0].message, issues);
-      const computed = await compute(labId, plan as Record<string, unknown>, JSON.parse(current.overrides_json), Number(current.seed));
+      const computed = await compute(labId, plan as Record<string, unknown>, JSON.parse(current.overrides_json), Number(current.seed), signal);
       if (computed.problem_json) {
         const problem = JSON.parse(computed.problem_json) as PlanProblem;
         throw new AppError('validation', 'plan_invalid', `With these readings the budget cannot be computed: ${problem.message}`, [{ path: ['plan', ...problem.path].join('.'), message: problem.message }]);
@@ -296,7 +297,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     },
 
     /** A new preparation with a copy of this one's plan, for comparing variants. */
-    async duplicate(labId: number, actor: SessionUser, id: number, title?: string): Promise<PreparationDetail> {
+    async duplicate(labId: number, actor: SessionUser, id: number, title?: string, signal?: AbortSignal): Promise<PreparationDetail> {
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const [latest] = await preparations.versionsOf(id);
@@ -305,7 +306,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
         plan: JSON.parse(latest.plan_json),
         overrides: JSON.parse(latest.overrides_json),
         seed: Number(latest.seed),
-      });
+      }, signal);
     },
   };
 }

@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { createApp, type AppConfig } from '../app';
+import type { Computer } from '../compute/compute-pool';
 import { isPostgres, openDatabase, type Db } from '../db/connection';
 import { demoEmail, seedDemoLab } from '../db/seed-demo';
 import type { Clock } from '../lib/clock';
@@ -38,7 +39,7 @@ export const postgresUrl = process.env.DATABASE_URL;
  * file, or with DATABASE_URL set a new schema of its own on that PostgreSQL (dropped on close).
  */
 export async function buildTestApp(
-  options: { file?: string; schema?: string; seed?: boolean; clock?: ReturnType<typeof testClock>; config?: Partial<AppConfig>; wrapMailer?: (mailer: Mailer) => Mailer } = {},
+  options: { file?: string; schema?: string; seed?: boolean; clock?: ReturnType<typeof testClock>; config?: Partial<AppConfig>; wrapMailer?: (mailer: Mailer) => Mailer; computer?: Computer } = {},
 ): Promise<TestApp> {
   const dir = options.file ? null : mkdtempSync(join(tmpdir(), 'dilutrace-test-'));
   const file = options.file ?? join(dir as string, 'test.sqlite');
@@ -52,6 +53,7 @@ export async function buildTestApp(
     db,
     mailer: options.wrapMailer ? options.wrapMailer(mailer) : mailer,
     clock,
+    computer: options.computer,
     config: { certificateDir: join(file, '..', 'certificates'), sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined, ...options.config },
   });
   const stop = async () => {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { MAXIMUM_COVERAGE_FACTOR } from '../uncertainty/coverage-factor';
 
 /**
  * The lab's tolerance library: what QA records for each kind of item. Every number carries its
@@ -247,7 +248,7 @@ export const equipmentListQuerySchema = z.object({
 export const labPolicySchema = z.object({
   coverage: z.discriminatedUnion('mode', [
     z.object({ mode: z.literal('probability'), probability: z.union([z.literal(0.9545), z.literal(0.95)], { message: 'Choose 95.45 % or 95 %.' }) }),
-    z.object({ mode: z.literal('fixed-k'), k: positive('the coverage factor k').refine((v) => v <= 10, 'Give k at most 10.') }),
+    z.object({ mode: z.literal('fixed-k'), k: positive('the coverage factor k').refine((v) => v <= MAXIMUM_COVERAGE_FACTOR, `Give k at most ${MAXIMUM_COVERAGE_FACTOR}.`) }),
   ]),
   glasswareDistribution: toleranceDistributionSchema,
   temperatureHalfRangeC: positive('the temperature half-range').refine((v) => v <= 20, 'Give a half-range of at most 20 °C.'),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { MAXIMUM_FORMULA_LENGTH, MAXIMUM_MONTE_CARLO_TRIALS } from '../uncertainty/plan-limits';
 import { concentrationUnitNames } from '../uncertainty/units';
 import { approvedAsSchema, reviewSchema } from './reviews';
 
@@ -166,7 +167,7 @@ export const routeFinderRequestSchema = z.object({
     value: z.number().positive('The target must be greater than zero.'),
     unit: z.enum(concentrationUnitNames, { message: `Choose a unit: ${concentrationUnitNames.join(', ')}.` }),
   }),
-  analyte: z.string().trim().min(1, 'Enter the analyte, e.g. Pb.'),
+  analyte: z.string().trim().min(1, 'Enter the analyte, e.g. Pb.').max(MAXIMUM_FORMULA_LENGTH, `Write the analyte in at most ${MAXIMUM_FORMULA_LENGTH} characters.`),
   materialLibraryId: z.string().min(1, 'Choose the reference material.'),
   maximumDilutions: z.number().int().min(0).max(3).default(3),
   limit: z.number().int().min(1).max(50).default(10),
@@ -177,5 +178,5 @@ export const computeRequestSchema = z.object({
   plan: z.record(z.string(), z.unknown()),
   overrides: z.array(overrideSchema).max(50).default([]),
   seed: seedSchema.default(1),
-  trials: z.number().int().min(1000, 'Use at least 1000 trials.').max(1_000_000, 'Use at most 10⁶ trials.').default(100_000),
+  trials: z.number().int().min(1000, 'Use at least 1000 trials.').max(MAXIMUM_MONTE_CARLO_TRIALS, 'Use at most 10⁶ trials.').default(100_000),
 });

@@ -1,5 +1,6 @@
 import { atomicWeightOf, standardAtomicWeights, type AtomicWeightTable } from './atomic-weights';
 import { PlanError, type PlanPathSegment } from './plan-error';
+import { MAXIMUM_FORMULA_LENGTH, MAXIMUM_FORMULA_NESTING } from './plan-limits';
 
 /** Number of atoms of each element in one formula unit. */
 export type Composition = ReadonlyMap<string, number>;
@@ -8,12 +9,20 @@ export type Composition = ReadonlyMap<string, number>;
  * Parses a chemical formula into its composition. Understands element symbols, counts,
  * nested parentheses or brackets with a multiplier, and hydrates or adducts joined by
  * `·`, `•`, `.` or `*` with an optional leading count: `Pb(NO3)2`, `CuSO4·5H2O`, `K2Cr2O7`.
- * @throws PlanError for an unknown element or unbalanced parentheses
+ * At most MAXIMUM_FORMULA_LENGTH characters and MAXIMUM_FORMULA_NESTING levels of brackets, checked before
+ * reading (the reader recurses once per level).
+ * @throws PlanError for an unknown element, unbalanced parentheses, or a formula beyond those caps
  * @example parseFormula('CuSO4·5H2O') // Map { Cu → 1, S → 1, O → 9, H → 10 }
  */
 export function parseFormula(formula: string, path: PlanPathSegment[] = ['formula'], table: AtomicWeightTable = standardAtomicWeights): Composition {
   const text = formula.replace(/\s+/g, '');
   if (text.length === 0) throw new PlanError(path, 'The formula is empty.');
+  if (text.length > MAXIMUM_FORMULA_LENGTH) {
+    throw new PlanError(path, `A formula can have at most ${MAXIMUM_FORMULA_LENGTH} characters; this one has ${text.length}.`);
+  }
+  if (nestingDepth(text) > MAXIMUM_FORMULA_NESTING) {
+    throw new PlanError(path, `"${text}" nests brackets more than ${MAXIMUM_FORMULA_NESTING} deep; a formula can nest them at most ${MAXIMUM_FORMULA_NESTING} levels.`);
+  }
   const total = new Map<string, number>();
   for (const part of text.split(/[·•.*]/)) {
     if (part.length === 0) throw new PlanError(path, `"${formula}" has an empty part around a hydrate dot.`);
@@ -25,6 +34,17 @@ export function parseFormula(formula: string, path: PlanPathSegment[] = ['formul
     for (const [symbol, count] of composition) total.set(symbol, (total.get(symbol) ?? 0) + count * multiplier);
   }
   return total;
+}
+
+/** Deepest level of brackets, counted in one pass (unbalanced brackets are reported by the reader). */
+function nestingDepth(text: string): number {
+  let depth = 0;
+  let deepest = 0;
+  for (const character of text) {
+    if (character === '(' || character === '[') deepest = Math.max(deepest, (depth += 1));
+    else if (character === ')' || character === ']') depth -= 1;
+  }
+  return deepest;
 }
 
 function parseGroup(text: string, start: number, formula: string, path: PlanPathSegment[], table: AtomicWeightTable): { composition: Map<string, number>; end: number } {

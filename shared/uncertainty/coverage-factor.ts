@@ -4,6 +4,13 @@ import { regularizedIncompleteBeta, regularizedLowerGamma } from './special-func
 export const twoSigmaProbability = 0.9544997361036416;
 
 /**
+ * Largest fixed coverage factor the engine accepts. Monte Carlo states its intervals at p = 2Φ(k) − 1, and
+ * from k ≈ 8.3 on that rounds to exactly 1 in double precision, where no interval exists; 8 keeps a margin.
+ * The lab policy's limit is this same constant.
+ */
+export const MAXIMUM_COVERAGE_FACTOR = 8;
+
+/**
  * Standard normal distribution function Φ(z) = ½[1 + P(½, z²/2)·sign z].
  * @example normalCumulative(2) // 0.9772498680518208
  */

@@ -1,8 +1,15 @@
 import { z } from 'zod';
 import { distributionSchema } from './distribution-schema';
+import { MAXIMUM_FORMULA_LENGTH } from './plan-limits';
 
 const positive = (what: string) => z.number().finite().positive(`${what} must be greater than zero.`);
 const nonNegative = (what: string) => z.number().finite().nonnegative(`${what} must be zero or positive.`);
+
+/** A chemical formula as written in a plan: "Pb(NO3)2". Its bracket nesting is checked when it is read. */
+export const formulaSchema = z
+  .string()
+  .min(1, 'The formula is empty.')
+  .max(MAXIMUM_FORMULA_LENGTH, { error: (issue) => `A formula can have at most ${MAXIMUM_FORMULA_LENGTH} characters; this one has ${String(issue.input).length}.` });
 
 /** Fields every equipment item carries: a stable id for the physical item, and optional library references. */
 const itemFields = {
@@ -78,7 +85,7 @@ export const solidMaterialSchema = z
     kind: z.literal('solidMaterial'),
     ...itemFields,
     name: z.string().min(1),
-    formula: z.string().min(1),
+    formula: formulaSchema,
     purity: z
       .object({
         massFraction: z.number().gt(0, 'Purity must be greater than 0.').lte(1, 'Purity is a mass fraction and cannot exceed 1 (100 %).'),

@@ -16,6 +16,7 @@ import type { CompiledModel } from './model-types';
 import { parsePlan } from './parse-plan';
 import { compilePlan } from './plan-compiler';
 import { PlanError } from './plan-error';
+import { groupedDigits, MAXIMUM_MONTE_CARLO_TRIALS } from './plan-limits';
 import type { Plan, PlanInput } from './plan-schema';
 import { RandomGenerator } from './random-generator';
 import { fillSamples } from './samplers';
@@ -23,9 +24,9 @@ import { fillSamples } from './samplers';
 export interface MonteCarloOptions {
   /** 32-bit unsigned integer; the same seed gives the same numbers everywhere. */
   seed: number;
-  /** Fixed number of trials M. Give this or `adaptive`. */
+  /** Fixed number of trials M, at most MAXIMUM_MONTE_CARLO_TRIALS. Give this or `adaptive`. */
   trials?: number;
-  /** The adaptive procedure of JCGM 101 7.9.4. */
+  /** The adaptive procedure of JCGM 101 7.9.4, stopped at `maximumTrials` (at most, and by default, MAXIMUM_MONTE_CARLO_TRIALS). */
   adaptive?: { significantDigits?: 1 | 2; maximumTrials?: number };
   /** Defaults to the plan's coverage setting, or 2Φ(2) − 1 for a compiled model. */
   coverageProbability?: number;
@@ -131,6 +132,7 @@ export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options
     if (trials === undefined || !Number.isInteger(trials) || trials < 2) {
       throw new PlanError(['trials'], 'Give a whole number of trials (at least 2), or ask for the adaptive procedure.');
     }
+    assertTrialsWithinCap(trials, ['trials']);
     const outputs = new Float64Array(trials);
     let done = 0;
     let summary: MonteCarloResult | undefined;
@@ -154,6 +156,12 @@ export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options
   return startAdaptive(options.adaptive, probability, runChunk, summarise, chunkSize);
 }
 
+function assertTrialsWithinCap(trials: number, path: string[]): void {
+  if (trials > MAXIMUM_MONTE_CARLO_TRIALS) {
+    throw new PlanError(path, `A Monte Carlo run can have at most ${groupedDigits(MAXIMUM_MONTE_CARLO_TRIALS)} trials; ${groupedDigits(trials)} were asked for.`);
+  }
+}
+
 /**
  * JCGM 101 7.9.4: batches of M = max(⌈100/(1 − p)⌉, 10⁴) trials; after each batch h ≥ 2 the standard deviations
  * s = √(Σ(x⁽ʳ⁾ − x̄)²/(h(h − 1))) of the batch means, standard uncertainties and interval ends are compared with
@@ -168,7 +176,14 @@ function startAdaptive(
 ): MonteCarloRun {
   const significantDigits = settings.significantDigits ?? 2;
   const batchSize = Math.max(Math.ceil(100 / (1 - probability)), 10_000);
-  const maximumTrials = Math.max(settings.maximumTrials ?? 10_000_000, 2 * batchSize);
+  const maximumTrials = settings.maximumTrials ?? MAXIMUM_MONTE_CARLO_TRIALS;
+  assertTrialsWithinCap(maximumTrials, ['adaptive', 'maximumTrials']);
+  if (2 * batchSize > maximumTrials) {
+    throw new PlanError(
+      ['adaptive'],
+      `At this coverage probability the adaptive procedure needs batches of ${groupedDigits(batchSize)} trials, more than its limit allows; give a fixed number of trials.`,
+    );
+  }
   let outputs = new Float64Array(4 * batchSize);
   let done = 0;
   const batchStatistics: number[][] = [];

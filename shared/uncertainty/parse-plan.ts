@@ -62,6 +62,8 @@ function describeIssue(issue: Issue, path: PlanPathSegment[]): string {
   }
   if (issue.code === 'invalid_union' && issue.message !== 'Invalid input') return `${where}: ${issue.message}`;
   if (issue.code === 'invalid_type' && issue.input === undefined) return `${where} is missing.`;
+  // A cap on the plan's own lists ("A plan can have at most 20 steps; …") names what it counts.
+  if (issue.code === 'too_big' && path.length <= 1) return issue.message;
   if (issue.code === 'unrecognized_keys') return `${where} has fields the plan format does not know: ${issue.keys.join(', ')}.`;
   if (issue.code === 'invalid_union') return `${where} is not one of the accepted forms; check its "kind" or "shape" and fields.`;
   return `${where}: ${issue.message}`;

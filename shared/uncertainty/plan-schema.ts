@@ -1,18 +1,26 @@
 import { z } from 'zod';
+import { MAXIMUM_COVERAGE_FACTOR } from './coverage-factor';
 import { extraSourceSchema } from './distribution-schema';
 import {
   balanceSchema,
   certifiedSolutionSchema,
+  formulaSchema,
   glassPipetteSchema,
   pistonPipetteSchema,
   solidMaterialSchema,
   volumetricFlaskSchema,
 } from './equipment-schema';
+import { MAXIMUM_EXTRA_SOURCES_PER_STEP, MAXIMUM_PLAN_STEPS } from './plan-limits';
 import { concentrationUnitNames } from './units';
 
 const positive = (what: string) => z.number().finite().positive(`${what} must be greater than zero.`);
 const nonNegative = (what: string) => z.number().finite().nonnegative(`${what} must be zero or positive.`);
-const extraSources = z.array(extraSourceSchema).default([]);
+const extraSources = z
+  .array(extraSourceSchema)
+  .max(MAXIMUM_EXTRA_SOURCES_PER_STEP, {
+    error: (issue) => `A step can have at most ${MAXIMUM_EXTRA_SOURCES_PER_STEP} extra sources; it has ${(issue.input as unknown[]).length}.`,
+  })
+  .default([]);
 
 const weighSolidStep = z
   .object({
@@ -89,7 +97,15 @@ export const stepSchema = z.discriminatedUnion('kind', [
 
 export const coverageSchema = z.union([
   z.object({ probability: z.union([z.literal(0.9545), z.literal(0.95)], { error: 'The coverage probability is 0.9545 (k = 2 for a normal distribution) or 0.95.' }) }).strict(),
-  z.object({ k: z.number().finite().positive('The coverage factor k must be greater than zero.') }).strict(),
+  z
+    .object({
+      k: z
+        .number()
+        .finite()
+        .positive('The coverage factor k must be greater than zero.')
+        .max(MAXIMUM_COVERAGE_FACTOR, `The coverage factor k can be at most ${MAXIMUM_COVERAGE_FACTOR}.`),
+    })
+    .strict(),
 ]);
 
 export const settingsSchema = z
@@ -114,9 +130,12 @@ export const planSchema = z
     formatVersion: z.literal(1),
     title: z.string().optional(),
     /** The element or ion whose concentration is stated, as a formula: "Pb", "Se", "NO3". */
-    analyte: z.object({ formula: z.string().min(1) }).strict(),
+    analyte: z.object({ formula: formulaSchema }).strict(),
     settings: settingsSchema,
-    steps: z.array(stepSchema).min(1, 'A plan needs at least one step.'),
+    steps: z
+      .array(stepSchema)
+      .min(1, 'A plan needs at least one step.')
+      .max(MAXIMUM_PLAN_STEPS, { error: (issue) => `A plan can have at most ${MAXIMUM_PLAN_STEPS} steps; this one has ${(issue.input as unknown[]).length}.` }),
   })
   .strict();
 

@@ -88,4 +88,31 @@ describe('route finder', () => {
   it('refuses a mass-fraction target with a path', () => {
     expect(() => findRoutes({ ...small, target: { value: 1, unit: 'mg/kg' } })).toThrow(/volumetric routes/);
   });
+
+  // A library of many flasks and pipettes (duplicates of the demo items under their own tags) and a target no
+  // route reaches: nothing tightens the search bound, so before the search had a budget it enumerated every
+  // sequence of up to three dilutions (its cost grows with the cube of the library) on the request thread.
+  const many = <T extends { itemId: string }>(items: T[], copies: number) =>
+    Array.from({ length: copies }, (_, copy) => items.map((item) => ({ ...item, itemId: `${item.itemId}-${copy}` }))).flat();
+  const unreachable: RouteRequest = {
+    ...small,
+    target: { value: 0.0123457, unit: 'mg/L' },
+    flasks: many(library.flasks as RouteRequest['flasks'], 2),
+    pipettes: many(library.pipettes as NonNullable<RouteRequest['pipettes']>, 2),
+    relativeTargetTolerance: 1e-9,
+    maximumDilutions: 3,
+  };
+
+  it('stops a search that exceeds its budget and says so in the answer', () => {
+    const result = findRoutes(unreachable);
+    expect(result.stoppedEarly).toBe(true);
+    expect(result.searchNote).toMatch(/stopped after .* candidate routes/);
+    expect(result.routes).toEqual([]);
+  });
+
+  it('says nothing about stopping when the search finished', () => {
+    const result = findRoutes(small);
+    expect(result.stoppedEarly).toBe(false);
+    expect(result.searchNote).toBeNull();
+  });
 });

@@ -5,6 +5,7 @@ import { standardUncertainty } from './distributions';
 import {
   balanceSchema,
   certifiedSolutionSchema,
+  formulaSchema,
   glassPipetteSchema,
   pistonPipetteSchema,
   solidMaterialSchema,
@@ -17,17 +18,25 @@ import { evaluatePlan } from './evaluate-plan';
 import { minimumWeightG } from './minimum-weight';
 import { parseWithSchema } from './parse-plan';
 import { PlanError } from './plan-error';
+import { groupedDigits } from './plan-limits';
 import { settingsSchema, type PlanInput } from './plan-schema';
 import { concentrationUnitNames, unitOf, type ConcentrationUnit } from './units';
 import { pistonErrorsUl } from './volume-delivery';
 import { waterDensityKgPerM3 } from './water-density';
+
+/**
+ * Partial routes (a start plus up to three dilutions) the search looks at before it stops: about half a
+ * second of work on one core, whatever the size of the library. Without it the search of a target no
+ * route reaches grows with the cube of the number of flask and pipette pairings.
+ */
+export const ROUTE_SEARCH_BUDGET = 2_000_000;
 
 /** What the route finder is asked: target, material, the equipment on hand, and search limits. */
 export const routeRequestSchema = z
   .object({
     target: z.object({ value: z.number().positive('The target concentration must be greater than zero.'), unit: z.enum(concentrationUnitNames) }).strict(),
     /** The element or ion stated, as a formula ("Pb"). */
-    analyte: z.object({ formula: z.string().min(1) }).strict(),
+    analyte: z.object({ formula: formulaSchema }).strict(),
     material: z.discriminatedUnion('kind', [solidMaterialSchema, certifiedSolutionSchema]),
     balances: z.array(balanceSchema).default([]),
     flasks: z.array(volumetricFlaskSchema).min(1, 'The route finder needs at least one flask.'),
@@ -40,6 +49,8 @@ export const routeRequestSchema = z
     relativeTargetTolerance: z.number().positive().default(0.005),
     /** Most of the solid that may be weighed, g. */
     maximumMaterialG: z.number().positive().optional(),
+    /** Partial routes the search may look at before it stops and answers with the best found so far. */
+    searchBudget: z.number().int().positive().max(ROUTE_SEARCH_BUDGET).default(ROUTE_SEARCH_BUDGET),
   })
   .strict();
 
@@ -64,6 +75,10 @@ export interface RouteResult {
   routes: Route[];
   /** Candidate routes that met every constraint and were scored. */
   feasibleCandidates: number;
+  /** True when the search reached its budget before it had looked at every route. */
+  stoppedEarly: boolean;
+  /** The sentence to show the analyst when the search stopped early; null when it was complete. */
+  searchNote: string | null;
 }
 
 interface Stage {
@@ -111,6 +126,13 @@ export function findRoutes(input: RouteRequest): RouteResult {
   const flaskVariance = (flask: VolumetricFlask) =>
     (flask.toleranceMl ** 2 / toleranceFactor(flask.toleranceDistribution) + flask.fillRepeatabilityMl ** 2) / flask.nominalMl ** 2 + temperatureVariance;
 
+  let searchSteps = 0;
+  /** Counts one partial route (or dilution stage) looked at; false once the budget is spent. */
+  const withinBudget = () => {
+    searchSteps += 1;
+    return searchSteps <= request.searchBudget;
+  };
+
   const stages: Stage[] = [];
   request.pipettes.forEach((pipette, pipetteIndex) => {
     for (const volumeMl of pipetteVolumesMl(pipette)) {
@@ -119,7 +141,7 @@ export function findRoutes(input: RouteRequest): RouteResult {
           ? (pipette.toleranceMl ** 2 / toleranceFactor(pipette.toleranceDistribution) + pipette.fillRepeatabilityMl ** 2) / volumeMl ** 2
           : pistonVariance(pipette, volumeMl);
       request.flasks.forEach((flask, flaskIndex) => {
-        if (volumeMl >= flask.nominalMl) return;
+        if (volumeMl >= flask.nominalMl || !withinBudget()) return;
         stages.push({
           pipetteIndex,
           flaskIndex,
@@ -172,7 +194,7 @@ export function findRoutes(input: RouteRequest): RouteResult {
         if (massG >= minimumG) offer({ approximateVariance: variance + readingVariance / massG ** 2, startIndex, stages: [...chosen], massG });
         if (chosen.length === maximumDilutions) return;
         for (const stage of stages) {
-          if (variance + stage.relativeVariance >= bound()) break;
+          if (variance + stage.relativeVariance >= bound() || !withinBudget()) break;
           if (used.has(stage.flaskIndex) || stage.volumeMl >= previousMl || massPerFactor * dilution * stage.factor > maximumG) continue;
           used.add(stage.flaskIndex);
           chosen.push(stage);
@@ -183,7 +205,7 @@ export function findRoutes(input: RouteRequest): RouteResult {
       };
       visit([], 1, base, start.flask.nominalMl);
     });
-    return rankCandidates(kept, request, settings.outputUnit, limit, feasibleCandidates, (candidate) => {
+    return rankCandidates(kept, request, settings.outputUnit, limit, { feasibleCandidates, searchSteps }, (candidate) => {
       const start = starts[candidate.startIndex];
       const massG = roundMass(candidate.massG ?? 0, start.balance.readabilityG);
       return {
@@ -209,7 +231,7 @@ export function findRoutes(input: RouteRequest): RouteResult {
     if (Math.abs(dilution / wantedDilution - 1) <= tolerance) offer({ approximateVariance: variance, startIndex: 0, stages: [...chosen] });
     if (chosen.length === maximumDilutions || dilution > wantedDilution * (1 + tolerance)) return;
     for (const stage of stages) {
-      if (variance + stage.relativeVariance >= bound()) break;
+      if (variance + stage.relativeVariance >= bound() || !withinBudget()) break;
       if (used.has(stage.flaskIndex) || stage.volumeMl >= previousMl) continue;
       used.add(stage.flaskIndex);
       chosen.push(stage);
@@ -219,7 +241,7 @@ export function findRoutes(input: RouteRequest): RouteResult {
     }
   };
   visit([], 1, certificateVariance, Infinity);
-  return rankCandidates(kept, request, settings.outputUnit, limit, feasibleCandidates, (candidate) => ({
+  return rankCandidates(kept, request, settings.outputUnit, limit, { feasibleCandidates, searchSteps }, (candidate) => ({
     steps: [{ kind: 'startFromCertifiedSolution', material }],
     materialUsed: { volumeMl: candidate.stages[0]?.volumeMl ?? 0 },
     firstLabel: `${material.name} (${material.itemId})`,
@@ -233,7 +255,7 @@ function rankCandidates(
   request: z.output<typeof routeRequestSchema>,
   outputUnit: ConcentrationUnit,
   limit: number,
-  feasibleCandidates: number,
+  search: { feasibleCandidates: number; searchSteps: number },
   startOf: (candidate: Candidate) => { steps: PlanInput['steps']; materialUsed: Route['materialUsed']; firstLabel: string; startVolumeMl: number; signature: string },
 ): RouteResult {
   // Items with identical specifications (two 1000 mL class A flasks) give the same route twice: keep one.
@@ -285,7 +307,16 @@ function rankCandidates(
       material(left) - material(right) ||
       left.solutionVolumeMl - right.solutionVolumeMl,
   );
-  return { routes: routes.slice(0, limit), feasibleCandidates };
+  const stoppedEarly = search.searchSteps > request.searchBudget;
+  return {
+    routes: routes.slice(0, limit),
+    feasibleCandidates: search.feasibleCandidates,
+    stoppedEarly,
+    searchNote: stoppedEarly
+      ? `The search stopped after ${groupedDigits(request.searchBudget)} candidate routes, so a better route may exist. ` +
+        'Allow fewer dilutions, or retire equipment the lab no longer uses, for a complete search.'
+      : null,
+  };
 }
 
 /** A flask's data without its identity: two flasks with equal specifications are interchangeable. */

@@ -196,6 +196,29 @@ describe('the analyst plans a lead standard', () => {
     expect(problems).toEqual([]);
   });
 
+  it('shows the route finder’s sentence when its search stopped early', async () => {
+    const note = 'The search stopped after 2 000 000 candidate routes, so a better route may exist.';
+    // The demo library is small enough for a complete search, so the server's answer is marked as stopped here.
+    await page.route('**/route-finder', async (route) => {
+      const response = await route.fetch();
+      await route.fulfill({ response, json: { ...(await response.json()), stoppedEarly: true, searchNote: note } });
+    });
+    try {
+      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Route finder' }).click();
+      const form = page.getByRole('form', { name: 'Find routes' });
+      await form.getByLabel('Target concentration').fill('10');
+      await form.getByLabel('Unit').selectOption('µg/L');
+      await chooseItem(form.getByLabel('Reference material'), 'RM-SE-1000');
+      await form.getByRole('button', { name: 'Find routes' }).click();
+      const status = page.getByRole('status').filter({ hasText: 'Search stopped early' });
+      await status.waitFor({ timeout: 30_000 });
+      await expect(status.innerText()).resolves.toContain(note);
+    } finally {
+      await page.unroute('**/route-finder');
+    }
+    expect(problems).toEqual([]);
+  });
+
   it('prints a bench sheet with targets to the balance readability, the hazards and blanks for the readings', async () => {
     await page.goto(`${server.baseUrl}/preparations/${created.lead}`);
     await statement().waitFor();

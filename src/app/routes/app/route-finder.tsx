@@ -56,7 +56,7 @@ function RouteFinderPage({ labId, planner }: { labId: number; planner: boolean }
       <title>Route finder · Dilutrace</title>
       <PageHeader
         title="Route finder"
-        description="Give the target and the material: Dilutrace tries every route of up to three dilutions with the lab’s current balances, flasks and pipettes and ranks them by relative expanded uncertainty."
+        description="Give the target and the material: Dilutrace tries the routes of up to three dilutions with the lab’s current balances, flasks and pipettes and ranks them by relative expanded uncertainty. A very large search stops early and says so."
       />
       <div className="mb-8 rounded-lg border border-line bg-surface p-5">
         <RouteFinderForm
@@ -79,6 +79,13 @@ function RouteFinderPage({ labId, planner }: { labId: number; planner: boolean }
             {find.data.feasibleCandidates.toLocaleString('en-GB')} routes met every constraint (minimum weight, capacity, volumes on hand).
             {planner ? ' “Plan this route” makes it a draft preparation and opens it.' : ''}
           </p>
+          {find.data.searchNote ? (
+            <div className="mb-3">
+              <Alert tone="info" title="Search stopped early">
+                {find.data.searchNote}
+              </Alert>
+            </div>
+          ) : null}
           {find.data.routes.length > 0 ? <RoutesTable routes={find.data.routes} onPlan={planner ? plan : null} planningRank={planningRank} /> : null}
           {find.data.skipped.length > 0 ? (
             <p className="mt-3 text-sm text-muted">Left out (overdue or expired): {find.data.skipped.join('; ')}.</p>

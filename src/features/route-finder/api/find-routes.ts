@@ -17,7 +17,14 @@ const routeSchema = z.object({
   description: z.string(),
   warnings: z.array(z.string()),
 });
-const routeResultSchema = z.object({ routes: z.array(routeSchema), feasibleCandidates: z.number().int(), skipped: z.array(z.string()) });
+const routeResultSchema = z.object({
+  routes: z.array(routeSchema),
+  feasibleCandidates: z.number().int(),
+  /** Set when the search reached its budget; searchNote is then the sentence to show. */
+  stoppedEarly: z.boolean(),
+  searchNote: z.string().nullable(),
+  skipped: z.array(z.string()),
+});
 export type FoundRoute = z.infer<typeof routeSchema>;
 export type RouteFinderResult = z.infer<typeof routeResultSchema>;
 

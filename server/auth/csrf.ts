@@ -27,7 +27,12 @@ function visitorNonce(req: Request): string | undefined {
   return undefined;
 }
 
-const same = (given: string, expected: string) => given.length === expected.length && timingSafeEqual(Buffer.from(given), Buffer.from(expected));
+const same = (given: string, expected: string) => {
+  const a = Buffer.from(given);
+  const b = Buffer.from(expected);
+  // Compare byte lengths: a header with non-ASCII characters can match in characters but not in bytes.
+  return a.length === b.length && timingSafeEqual(a, b);
+};
 
 /**
  * CSRF tokens in the `X-CSRF-Token` header. A signed-in session has its own token (above). A

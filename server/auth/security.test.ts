@@ -1,6 +1,8 @@
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import type { AddressInfo } from 'node:net';
+import { connect } from 'node:net';
 import request from 'supertest';
 import { afterEach, describe, expect, it } from 'vitest';
 import { createApp } from '../app';
@@ -60,5 +62,39 @@ describe('web security', () => {
     expect(res.headers['set-cookie']?.[0]).toMatch(/HttpOnly/);
     await close();
     await db.destroy();
+  });
+});
+
+describe('CSRF token comparison', () => {
+  it('refuses, without a 5xx, a token of the right length in characters but not in bytes', async () => {
+    t = await buildTestApp();
+    const visit = await request(t.app).get('/api/auth/csrf').expect(200);
+    const token = visit.body.csrfToken as string;
+    const cookie = String(visit.headers['set-cookie']).split(';')[0];
+    // One raw byte 0xE9 in the header: the server reads it as one character, two bytes in UTF-8.
+    const server = t.app.listen(0, '127.0.0.1');
+    await new Promise((resolve) => server.once('listening', resolve));
+    const { port } = server.address() as AddressInfo;
+    const body = JSON.stringify({ email: demo('qa'), password: DEMO_PASSWORD });
+    const head = [
+      'POST /api/auth/login HTTP/1.1',
+      `Host: 127.0.0.1:${port}`,
+      `Cookie: ${cookie}`,
+      `X-CSRF-Token: \u00e9${token.slice(1)}`,
+      'Content-Type: application/json',
+      `Content-Length: ${Buffer.byteLength(body)}`,
+      'Connection: close',
+      '',
+      body,
+    ].join('\r\n');
+    const answer = await new Promise<string>((resolve, reject) => {
+      const socket = connect(port, '127.0.0.1', () => socket.end(Buffer.from(head, 'latin1')));
+      let received = '';
+      socket.on('data', (chunk) => (received += chunk.toString('latin1')));
+      socket.on('end', () => resolve(received));
+      socket.on('error', reject);
+    });
+    await new Promise((resolve) => server.close(resolve));
+    expect(answer.split('\r\n')[0]).toBe('HTTP/1.1 403 Forbidden');
   });
 });

@@ -53,7 +53,7 @@ const server = app.listen(env.PORT, env.HOST, () => {
   const { port } = server.address() as AddressInfo;
   const url = env.DILUTRACE_PUBLIC_URL ?? `http://${env.HOST === '0.0.0.0' ? '127.0.0.1' : env.HOST}:${port}`;
   console.log(`Dilutrace is running at ${url}${production ? '' : ' (API only; the client runs under Vite on :5173)'}`);
-  if (!env.SMTP_URL) console.log(`Mail is captured locally (SMTP on 127.0.0.1:${capture?.port}); admins read it on the Outbox page.`);
+  if (!env.SMTP_URL) console.log(`Mail is captured locally (SMTP on 127.0.0.1:${capture?.port}); the instance operator reads it under Captured mail.`);
 });
 
 let stopping = false;

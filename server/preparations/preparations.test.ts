@@ -172,12 +172,13 @@ describe('drafts, versions, variants and roles', () => {
     const res = (
       await analyst.post(url('/route-finder'), { target: { value: 10, unit: 'µg/L' }, analyte: 'Se', materialLibraryId: String(library.get('RM-SE-1000')!.id), maximumDilutions: 3 }).expect(200)
     ).body;
-    expect(res.routes.length).toBeGreaterThan(0);
+    expect(res.routes.length).toBeGreaterThan(1);
     const best = res.routes[0];
     // 1000 mg/L to 10 µg/L is a factor of 10⁵: at least three dilutions with this glassware.
     expect(best.value).toBeGreaterThan(10 * 0.995);
     expect(best.value).toBeLessThan(10 * 1.005);
-    for (let i = 1; i < res.routes.length; i += 1) expect(res.routes[i].relativeExpandedUncertainty).toBeGreaterThanOrEqual(res.routes[i - 1].relativeExpandedUncertainty);
+    const spreads = res.routes.map((route: { relativeExpandedUncertainty: number }) => route.relativeExpandedUncertainty);
+    expect(spreads).toEqual([...spreads].sort((left, right) => left - right));
     expect(res.skipped).toEqual([]);
   });
 });

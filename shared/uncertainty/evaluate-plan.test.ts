@@ -60,6 +60,7 @@ describe('example plans', () => {
   it.each(examplePlans)('%s: sensitivity coefficients match central differences', (name) => {
     const model = compilePlan(readJson<PlanInput>(`plans/${name}`));
     const output = evaluateDuals(model)[model.outputNode];
+    expect(model.sources.length).toBeGreaterThan(0);
     const estimates = model.sources.map((source) => source.estimate);
     model.sources.forEach((source, index) => {
       const h = 1e-4 * Math.max(Math.abs(source.estimate), source.standardUncertainty);
@@ -76,12 +77,11 @@ describe('example plans', () => {
   it('the demo glassware carries the ISO 1042 / ISO 648 class A tolerances', () => {
     const iso = readJson<{ flaskClassAToleranceMl: Record<string, number>; pipetteClassAToleranceMl: Record<string, number> }>('engine/iso-glassware-tolerances.json');
     const plan = leadPlan as unknown as { steps: Record<string, { kind: string; nominalMl: number; toleranceMl: number; toleranceClass: string }>[] };
-    for (const step of plan.steps) {
-      for (const item of [step.flask, step.pipette]) {
-        if (item === undefined || item.toleranceClass !== 'A') continue;
-        const table = item.kind === 'volumetricFlask' ? iso.flaskClassAToleranceMl : iso.pipetteClassAToleranceMl;
-        expect(item.toleranceMl).toBe(table[String(item.nominalMl)]);
-      }
+    const classA = plan.steps.flatMap((step) => [step.flask, step.pipette]).filter((item) => item !== undefined && item.toleranceClass === 'A');
+    expect(classA.length).toBeGreaterThan(0);
+    for (const item of classA) {
+      const table = item.kind === 'volumetricFlask' ? iso.flaskClassAToleranceMl : iso.pipetteClassAToleranceMl;
+      expect(item.toleranceMl).toBe(table[String(item.nominalMl)]);
     }
   });
 });
@@ -143,7 +143,7 @@ describe('invalid plans are refused with a path and a chemist-readable message',
     const plan = clone(leadPlan) as { steps: { material?: { formula: string } }[] };
     const material = plan.steps[0].material;
     if (material) material.formula = 'Pb(NoO3)2';
-    expectPlanError(plan, ['steps', 0, 'material', 'formula'], /"No" is not an element|"Oo"|not an element/);
+    expectPlanError(plan, ['steps', 0, 'material', 'formula'], /"No" is not an element with a standard atomic weight/);
   });
   it('unknown unit', () => {
     const plan = clone(leadPlan) as { settings: { outputUnit: string } };
@@ -163,7 +163,7 @@ describe('invalid plans are refused with a path and a chemist-readable message',
   it('an unknown step kind', () => {
     const plan = clone(seleniumPlan) as { steps: { kind: string }[] };
     plan.steps[1].kind = 'centrifuge';
-    expectPlanError(plan, ['steps', 1, 'kind'], /.+/);
+    expectPlanError(plan, ['steps', 1, 'kind'], /kind is not known/);
   });
 });
 

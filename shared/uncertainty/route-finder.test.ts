@@ -53,11 +53,14 @@ describe('route finder', () => {
   });
 
   it('every route meets its target and respects the items on hand', () => {
-    for (const route of findRoutes(small).routes) {
+    const routes = findRoutes(small).routes;
+    expect(routes.length).toBeGreaterThan(1);
+    for (const route of routes) {
       expect(Math.abs(route.value / 10 - 1)).toBeLessThanOrEqual(0.005);
       const steps = route.plan.steps as { kind: string; flask?: { itemId: string; nominalMl: number }; volumeMl?: number }[];
       const flasks = steps.filter((step) => step.flask).map((step) => step.flask?.itemId);
       expect(new Set(flasks).size).toBe(flasks.length);
+      expect(flasks.length).toBeGreaterThan(0);
       let previousMl = Infinity;
       for (const step of steps) {
         if (step.volumeMl !== undefined) expect(step.volumeMl).toBeLessThan(previousMl);

@@ -24,7 +24,7 @@ export const preparationAt = (stage: Stage): PreparationDetail => preparationDet
 export const meOf = (person: Person): Me => meSchema.parse(raw.me[person]);
 
 export type SentRequest = { method: string; url: string; body: unknown; csrf: string | null };
-type Answer = { status: number; body: unknown };
+export type Answer = { status: number; body: unknown };
 
 /**
  * Replaces fetch: every request is kept in `sent`, and `answer` decides the reply (a 404 error when it

@@ -34,7 +34,7 @@ describe('saving a preparation computes and stores its snapshot', () => {
     expect(version.problem).toBeNull();
     const snapshot = version.snapshot;
     // c = m·P·(M_Pb/M_Pb(NO3)2)/V₀ · V_a/V_f with the CIAAW 2021 interval midpoints the engine uses
-    // (Pb [206.14, 207.94] → 207.04, N → 14.006855, O → 15.9994; REFERENCES.md, read):
+    // (Pb [206.14, 207.94] → 207.04, N [14.00643, 14.00728] → 14.006855, O [15.99903, 15.99977] → 15.9994; CIAAW 2021 standard atomic weights, read):
     // 0.1599 g · 0.9998 · 207.04/331.048110 / 0.1 L · 10/100 = 99.982 mg/L. Relative 1e-9: same arithmetic.
     const molarMassLeadNitrate = 207.04 + 2 * (14.006855 + 3 * 15.9994);
     const expected = ((0.1599 * 0.9998 * (207.04 / molarMassLeadNitrate)) / 0.1) * 1000 * (10 / 100);

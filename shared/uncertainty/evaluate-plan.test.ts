@@ -28,7 +28,7 @@ function expectPlanError(plan: unknown, path: (string | number)[], message: RegE
 
 const clone = <T>(value: T): T => structuredClone(value);
 
-describe('EURACHEM/CITAC CG4 Example A1 as a plan document', () => {
+describe('EURACHEM/CITAC CG4 3rd ed. Appendix A, Example A1 as a plan document', () => {
   it('gives c = 1002.7 mg/L and u_c = 0.8352 mg/L (exact path; the guide rounds u(V) to 0.07 and prints 0.9)', () => {
     const result = evaluatePlan(a1.plan);
     // Value: the model is exact arithmetic, so 1e-9 relative.
@@ -74,7 +74,7 @@ describe('example plans', () => {
     });
   });
 
-  it('the demo glassware carries the ISO 1042 / ISO 648 class A tolerances', () => {
+  it('the demo glassware carries the ISO 1042:1998 / ISO 648:2008 class A tolerances', () => {
     const iso = readJson<{ flaskClassAToleranceMl: Record<string, number>; pipetteClassAToleranceMl: Record<string, number> }>('engine/iso-glassware-tolerances.json');
     const plan = leadPlan as unknown as { steps: Record<string, { kind: string; nominalMl: number; toleranceMl: number; toleranceClass: string }>[] };
     const classA = plan.steps.flatMap((step) => [step.flask, step.pipette]).filter((item) => item !== undefined && item.toleranceClass === 'A');

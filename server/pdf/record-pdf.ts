@@ -14,7 +14,7 @@ export interface RecordPdfInput {
   generatedAt: string;
 }
 
-/** The cautions every record carries (DESIGN §5), in our words. */
+/** The cautions every record carries, in our words. */
 export const RECORD_CAUTIONS = [
   'Many analytes prepared with this record are toxic (for example lead, arsenic, mercury, cadmium, chromium(VI)), and stock solutions are usually made in strong acid.',
   'Follow the safety data sheet of every material, the laboratory’s chemical hygiene plan and local regulations.',

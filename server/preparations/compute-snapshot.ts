@@ -9,7 +9,7 @@ export const SERVER_TRIALS = 200_000;
 export type Snapshot = NonNullable<VersionDetail['snapshot']>;
 
 /**
- * Runs the engine on a resolved plan: GUM budget, Monte Carlo with the given seed, and the JCGM 101 §8
+ * Runs the engine on a resolved plan: GUM budget, Monte Carlo with the given seed, and the JCGM 101:2008 §8
  * validation of one against the other. Throws the engine's PlanError for a plan it cannot compute.
  */
 export function computeSnapshot(input: { plan: Record<string, unknown>; items: UsedItem[]; seed: number; computedAt: string; policy: LabPolicy; trials?: number }): Snapshot {

@@ -22,7 +22,7 @@ export interface PistonTemplate {
   provenance: 'read' | 'memory';
 }
 
-/** ISO 1042 one-mark volumetric flasks, class A, ± mL (read: a national verification table identical to ISO 1042 class A; 5 mL from memory). */
+/** ISO 1042:1998 one-mark volumetric flasks, class A, ± mL (read: a national verification table identical to ISO 1042:1998 class A; 5 mL from memory). */
 const ISO_1042_CLASS_A: [number, number, 'read' | 'memory'][] = [
   [5, 0.025, 'memory'],
   [10, 0.025, 'read'],
@@ -37,7 +37,7 @@ const ISO_1042_CLASS_A: [number, number, 'read' | 'memory'][] = [
   [2000, 0.6, 'read'],
 ];
 
-/** ISO 648 one-mark pipettes, class A, ± mL (from memory). */
+/** ISO 648:2008 one-mark pipettes, class A, ± mL (from memory). */
 const ISO_648_CLASS_A: [number, number][] = [
   [1, 0.008],
   [2, 0.01],
@@ -50,7 +50,7 @@ const ISO_648_CLASS_A: [number, number][] = [
 ];
 
 /**
- * ISO 8655-2 maximum permissible errors of single-channel piston pipettes at nominal volume:
+ * ISO 8655-2:2002 maximum permissible errors of single-channel piston pipettes at nominal volume:
  * systematic (±) and random (as a standard deviation), µL. 1000 µL read; the others from memory.
  */
 const ISO_8655_2: [number, number, number, 'read' | 'memory'][] = [

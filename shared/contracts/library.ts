@@ -87,7 +87,7 @@ export const flaskDataSchema = z.object(glasswareShape).refine(toleranceBelowNom
 export const glassPipetteDataSchema = z.object(glasswareShape).refine(toleranceBelowNominal, TOLERANCE_MESSAGE).refine(datesInOrder, DATES_ORDER_MESSAGE);
 export type GlasswareData = z.infer<typeof flaskDataSchema>;
 
-/** One calibration point of a piston pipette: errors at a set volume (ISO 8655-2 MPEs or the lab's own results). */
+/** One calibration point of a piston pipette: errors at a set volume (ISO 8655-2:2002 MPEs or the lab's own results). */
 export const pistonPointSchema = z.object({
   volumeUl: positive('the set volume'),
   systematicErrorUl: nonNegative('the systematic error'),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** The four per-lab roles (DESIGN.md §2). A member may hold several in one lab. */
+/** The four per-lab roles. A member may hold several in one lab. */
 export const roleSchema = z.enum(['admin', 'qa', 'analyst', 'auditor']);
 export type Role = z.infer<typeof roleSchema>;
 export const ROLES = roleSchema.options;

@@ -89,7 +89,7 @@ export interface MolarMass {
 
 /**
  * Molar mass M = Σ nᵢ·Aᵢ (g/mol) with u(M) = √Σ (nᵢ·u(Aᵢ))², u(Aᵢ) = halfWidthᵢ/√3 (rectangular),
- * the atomic weights of different elements independent (EURACHEM/CITAC CG4 Example A2).
+ * the atomic weights of different elements independent (EURACHEM/CITAC CG4 3rd ed. Example A2).
  * @throws PlanError for an unknown element
  * @example molarMass('NaCl').valueGPerMol // 58.44127
  */

@@ -17,14 +17,14 @@ describe('coverage factors', () => {
     [100, 2.025, 1.984],
     [Infinity, 2.0, 1.96],
   ];
-  it.each(tableG2)('ν = %s: k(95.45 %%) = %s, k(95 %%) = %s (JCGM 100 Table G.2)', (nu, k9545, k95) => {
+  it.each(tableG2)('ν = %s: k(95.45 %%) = %s, k(95 %%) = %s (GUM, JCGM 100:2008 Table G.2)', (nu, k9545, k95) => {
     const digits = (value: number) => (String(value).split('.')[1] ?? '').length;
     const tolerance = (value: number) => 0.5 * 10 ** -Math.max(digits(value), 2) + 1e-12;
     expect(Math.abs(coverageFactor(twoSigmaProbability, nu) - k9545)).toBeLessThanOrEqual(tolerance(k9545));
     expect(Math.abs(coverageFactor(0.95, nu) - k95)).toBeLessThanOrEqual(tolerance(k95));
   });
 
-  it('truncates a fractional ν_eff to the next lower integer (JCGM 100 G.4.1 note)', () => {
+  it('truncates a fractional ν_eff to the next lower integer (JCGM 100:2008 G.4.1, note)', () => {
     expect(coverageFactor(0.95, 10.9)).toBe(coverageFactor(0.95, 10));
   });
 

@@ -50,10 +50,10 @@ export function studentTQuantile(probability: number, degreesOfFreedom: number):
 }
 
 /**
- * Coverage factor k = t_p(ν) for a two-sided coverage probability p (JCGM 100 G.3, G.4):
+ * Coverage factor k = t_p(ν) for a two-sided coverage probability p (JCGM 100:2008 G.3, G.4):
  * the (1 + p)/2 quantile of Student's t with ν degrees of freedom, ν truncated to the next
- * lower integer (JCGM 100 G.4.1, note) and at least 1; ν = ∞ gives the normal quantile.
- * @example coverageFactor(twoSigmaProbability, 10) // 2.28 (JCGM 100 Table G.2)
+ * lower integer (JCGM 100:2008 G.4.1, note) and at least 1; ν = ∞ gives the normal quantile.
+ * @example coverageFactor(twoSigmaProbability, 10) // 2.28 (JCGM 100:2008 Table G.2)
  */
 export function coverageFactor(coverageProbability: number, effectiveDegreesOfFreedom: number): number {
   const degrees = effectiveDegreesOfFreedom === Infinity ? Infinity : Math.max(1, Math.floor(effectiveDegreesOfFreedom));

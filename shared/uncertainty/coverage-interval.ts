@@ -4,7 +4,7 @@ export interface Interval {
   high: number;
 }
 
-/** q = pM if that is an integer, else ⌊pM + ½⌋ (JCGM 101 7.7.1). */
+/** q = pM if that is an integer, else ⌊pM + ½⌋ (JCGM 101:2008 7.7.1). */
 export function coveredCount(sortedLength: number, probability: number): number {
   const product = probability * sortedLength;
   const rounded = Math.round(product);
@@ -107,7 +107,7 @@ function partitionByCell(values: Float64Array, smallest: number, cellsPerUnit: n
 }
 
 /**
- * Probabilistically symmetric coverage interval from sorted (or orderTails-ordered) values (JCGM 101 7.7.2):
+ * Probabilistically symmetric coverage interval from sorted (or orderTails-ordered) values (JCGM 101:2008 7.7.2):
  * r = (M − q)/2 if M − q is even, else (M − q + 1)/2; interval [y₍r₎, y₍r+q₎] (1-based).
  */
 export function symmetricInterval(sorted: Float64Array, probability: number): Interval {
@@ -118,7 +118,7 @@ export function symmetricInterval(sorted: Float64Array, probability: number): In
   return { low: sorted[low - 1], high: sorted[Math.min(low + q, count) - 1] };
 }
 
-/** Shortest coverage interval from sorted (or orderTails-ordered) values (JCGM 101 7.7.3): [y₍r*₎, y₍r*+q₎] with r* minimising y₍r+q₎ − y₍r₎ over r = 1…M − q. */
+/** Shortest coverage interval from sorted (or orderTails-ordered) values (JCGM 101:2008 7.7.3): [y₍r*₎, y₍r*+q₎] with r* minimising y₍r+q₎ − y₍r₎ over r = 1…M − q. */
 export function shortestInterval(sorted: Float64Array, probability: number): Interval {
   const count = sorted.length;
   const q = Math.min(coveredCount(count, probability), count - 1);
@@ -153,7 +153,7 @@ export function histogram(sorted: Float64Array, bins: number): Histogram {
   return { lowerEdge, binWidth, counts };
 }
 
-/** Mean and standard deviation (divisor M − 1, JCGM 101 7.6) with a shifted two-pass sum for stability. */
+/** Mean and standard deviation (divisor M − 1, JCGM 101:2008 7.6) with a shifted two-pass sum for stability. */
 export function meanAndStandardDeviation(values: Float64Array, count = values.length): { mean: number; standardDeviation: number } {
   let sum = 0;
   for (let index = 0; index < count; index += 1) sum += values[index];
@@ -170,7 +170,7 @@ export function meanAndStandardDeviation(values: Float64Array, count = values.le
 }
 
 /**
- * Numerical tolerance of a standard uncertainty (JCGM 101 7.9.2): write u with `significantDigits`
+ * Numerical tolerance of a standard uncertainty (JCGM 101:2008 7.9.2): write u with `significantDigits`
  * significant digits as c × 10^ℓ; δ = ½ × 10^ℓ.
  * @example numericalTolerance(0.835, 2) // 0.005
  */

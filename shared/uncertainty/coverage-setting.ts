@@ -9,7 +9,7 @@ export function coverageProbabilityOf(setting: CoverageSetting): number {
   return setting.probability === 0.9545 ? twoSigmaProbability : 0.95;
 }
 
-/** k for the setting: fixed, or t_p(ν_eff) (JCGM 100 G.4). */
+/** k for the setting: fixed, or t_p(ν_eff) (JCGM 100:2008 G.4). */
 export function coverageFactorOf(setting: CoverageSetting, effectiveDegreesOfFreedom: number): number {
   if ('k' in setting) return setting.k;
   return coverageFactor(coverageProbabilityOf(setting), effectiveDegreesOfFreedom);

@@ -20,8 +20,8 @@ export type Distribution =
 /**
  * Standard uncertainty of a distribution.
  *
- * normal: u (or U/k); rectangular: a/√3 (JCGM 100 4.3.7); triangular: a/√6 (JCGM 100 4.3.9);
- * arcsine: a/√2 (JCGM 101 6.4.6); Student t (Type A, JCGM 100 4.2): s/√n for a mean of n readings, s for a single reading.
+ * normal: u (or U/k); rectangular: a/√3 (JCGM 100:2008 4.3.7); triangular: a/√6 (JCGM 100:2008 4.3.9);
+ * arcsine: a/√2 (JCGM 101:2008 6.4.6); Student t (Type A, JCGM 100:2008 4.2): s/√n for a mean of n readings, s for a single reading.
  *
  * @example standardUncertainty({ shape: 'rectangular', halfWidth: 0.0001 }) // 5.7735e-5
  */
@@ -45,7 +45,7 @@ export function standardUncertainty(distribution: Distribution): number {
 }
 
 /**
- * Degrees of freedom ν of a source's standard uncertainty: n − 1 for Type A (JCGM 100 4.2.6),
+ * Degrees of freedom ν of a source's standard uncertainty: n − 1 for Type A (JCGM 100:2008 4.2.6),
  * the stated value for a normal source that gives one, otherwise infinite (Type B taken as exactly known).
  */
 export function degreesOfFreedom(distribution: Distribution): number {
@@ -54,7 +54,7 @@ export function degreesOfFreedom(distribution: Distribution): number {
   return Infinity;
 }
 
-/** 'A' for statistical evaluation of a series of observations, 'B' for everything else (JCGM 100 4.2, 4.3). */
+/** 'A' for statistical evaluation of a series of observations, 'B' for everything else (JCGM 100:2008 4.2, 4.3). */
 export function evaluationType(distribution: Distribution): 'A' | 'B' {
   return distribution.shape === 'studentT' ? 'A' : 'B';
 }

@@ -4,7 +4,7 @@
  * source's string id, so the same source reached along two paths is one entry and
  * its correlation is automatic: `x.subtract(x)` has no partials left.
  *
- * For y = f(x₁…x_N), `partials.get(id)` is the sensitivity coefficient cᵢ = ∂y/∂xᵢ (JCGM 100 5.1.3).
+ * For y = f(x₁…x_N), `partials.get(id)` is the sensitivity coefficient cᵢ = ∂y/∂xᵢ (JCGM 100:2008 5.1.3).
  */
 export class DualNumber {
   readonly value: number;

@@ -44,7 +44,7 @@ const glasswareFields = {
   ...itemFields,
   nominalMl: positive('The nominal volume'),
   toleranceClass: z.enum(['A', 'B', 'own']),
-  /** Maximum permissible error ± (ISO 1042 for flasks, ISO 648 for pipettes), or the item's own calibration. */
+  /** Maximum permissible error ± (ISO 1042:1998 for flasks, ISO 648:2008 for pipettes), or the item's own calibration. */
   toleranceMl: nonNegative('The tolerance'),
   /** Defaults to the plan's settings.defaultGlasswareDistribution. */
   toleranceDistribution: z.enum(['triangular', 'rectangular']).optional(),
@@ -68,7 +68,7 @@ export const pistonPipetteSchema = z
     /** Selectable volumes; minimumUl = maximumUl for a fixed-volume pipette. */
     volumeRangeUl: z.object({ minimumUl: positive('The smallest volume'), maximumUl: positive('The largest volume') }).strict(),
     /**
-     * ISO 8655-2 maximum permissible errors at given volumes: systematic (± about the set volume)
+     * ISO 8655-2:2002 maximum permissible errors at given volumes: systematic (± about the set volume)
      * and random (a standard deviation), each in µL or % of that volume. Between listed volumes the
      * errors in µL are interpolated linearly; beyond them the nearest entry's µL value applies.
      */

@@ -28,7 +28,7 @@ function expectPlanError(plan: unknown, path: (string | number)[], message: RegE
 
 const clone = <T>(value: T): T => structuredClone(value);
 
-describe('EURACHEM/CITAC CG4 Example A1 as a plan document', () => {
+describe('EURACHEM/CITAC CG4 3rd ed. Appendix A, Example A1 as a plan document', () => {
   it('gives c = 1002.7 mg/L and u_c = 0.8352 mg/L (exact path; the guide rounds u(V) to 0.07 and prints 0.9)', () => {
     const result = evaluatePlan(a1.plan);
     // Value: the model is exact arithmetic, so 1e-9 relative.
@@ -46,6 +46,9 @@ describe('EURACHEM/CITAC CG4 Example A1 as a plan document', () => {
 });
 
 describe('example plans', () => {
+  it('reads the four example plans (so the checks below are not vacuous)', () => {
+    expect(examplePlans).toHaveLength(4);
+  });
   it.each(examplePlans)('%s evaluates, and its contributions sum to 100 %%', (name) => {
     const result = evaluatePlan(readJson<PlanInput>(`plans/${name}`));
     expect(result.standardUncertainty).toBeGreaterThan(0);
@@ -60,6 +63,7 @@ describe('example plans', () => {
   it.each(examplePlans)('%s: sensitivity coefficients match central differences', (name) => {
     const model = compilePlan(readJson<PlanInput>(`plans/${name}`));
     const output = evaluateDuals(model)[model.outputNode];
+    expect(model.sources.length).toBeGreaterThan(0);
     const estimates = model.sources.map((source) => source.estimate);
     model.sources.forEach((source, index) => {
       const h = 1e-4 * Math.max(Math.abs(source.estimate), source.standardUncertainty);
@@ -73,15 +77,14 @@ describe('example plans', () => {
     });
   });
 
-  it('the demo glassware carries the ISO 1042 / ISO 648 class A tolerances', () => {
+  it('the demo glassware carries the ISO 1042:1998 / ISO 648:2008 class A tolerances', () => {
     const iso = readJson<{ flaskClassAToleranceMl: Record<string, number>; pipetteClassAToleranceMl: Record<string, number> }>('engine/iso-glassware-tolerances.json');
     const plan = leadPlan as unknown as { steps: Record<string, { kind: string; nominalMl: number; toleranceMl: number; toleranceClass: string }>[] };
-    for (const step of plan.steps) {
-      for (const item of [step.flask, step.pipette]) {
-        if (item === undefined || item.toleranceClass !== 'A') continue;
-        const table = item.kind === 'volumetricFlask' ? iso.flaskClassAToleranceMl : iso.pipetteClassAToleranceMl;
-        expect(item.toleranceMl).toBe(table[String(item.nominalMl)]);
-      }
+    const classA = plan.steps.flatMap((step) => [step.flask, step.pipette]).filter((item) => item !== undefined && item.toleranceClass === 'A');
+    expect(classA.length).toBeGreaterThan(0);
+    for (const item of classA) {
+      const table = item.kind === 'volumetricFlask' ? iso.flaskClassAToleranceMl : iso.pipetteClassAToleranceMl;
+      expect(item.toleranceMl).toBe(table[String(item.nominalMl)]);
     }
   });
 });
@@ -143,7 +146,7 @@ describe('invalid plans are refused with a path and a chemist-readable message',
     const plan = clone(leadPlan) as { steps: { material?: { formula: string } }[] };
     const material = plan.steps[0].material;
     if (material) material.formula = 'Pb(NoO3)2';
-    expectPlanError(plan, ['steps', 0, 'material', 'formula'], /"No" is not an element|"Oo"|not an element/);
+    expectPlanError(plan, ['steps', 0, 'material', 'formula'], /"No" is not an element with a standard atomic weight/);
   });
   it('unknown unit', () => {
     const plan = clone(leadPlan) as { settings: { outputUnit: string } };
@@ -163,7 +166,7 @@ describe('invalid plans are refused with a path and a chemist-readable message',
   it('an unknown step kind', () => {
     const plan = clone(seleniumPlan) as { steps: { kind: string }[] };
     plan.steps[1].kind = 'centrifuge';
-    expectPlanError(plan, ['steps', 1, 'kind'], /.+/);
+    expectPlanError(plan, ['steps', 1, 'kind'], /kind is not known/);
   });
 });
 

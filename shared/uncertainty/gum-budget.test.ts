@@ -8,7 +8,7 @@ function source(builder: ModelBuilder, id: string, estimate: number, distributio
 }
 
 /**
- * EURACHEM/CITAC Guide CG4, 3rd ed. (2012), Example A1: c = 1000·m·P/V (mg/L), m = 100.28 mg (u 0.05 mg),
+ * EURACHEM/CITAC Guide CG4, 3rd ed. (2012), Appendix A, Example A1: c = 1000·m·P/V (mg/L), m = 100.28 mg (u 0.05 mg),
  * P = 0.9999 ± 0.0001 (rectangular), V = 100 mL with tolerance ±0.1 mL (triangular), fill repeatability
  * 0.02 mL (standard deviation) and temperature ±4 °C × 2.1e-4 °C⁻¹ × 100 mL (rectangular).
  * Guide result: c = 1002.7 mg/L, u_c = 0.9 mg/L (summary table read; component details from memory).
@@ -30,12 +30,12 @@ function exampleA1(volumeUncertainty?: number) {
 }
 
 describe('GUM propagation', () => {
-  it('reproduces EURACHEM/CITAC CG4 Example A1 (exact path, no intermediate rounding)', () => {
+  it('reproduces EURACHEM/CITAC CG4 3rd ed. Example A1 (exact path, no intermediate rounding)', () => {
     const result = exampleA1();
     // c = 1000·100.28·0.9999/100 = 1002.69972 mg/L (guide: 1002.7)
     expect(result.value).toBeCloseTo(1002.69972, 5);
     const uVolume = Math.sqrt((0.1 / Math.sqrt(6)) ** 2 + 0.02 ** 2 + (0.084 / Math.sqrt(3)) ** 2);
-    expect(uVolume).toBeCloseTo(0.0665, 4); // REFERENCES: 0.0665 mL without the guide's rounding
+    expect(uVolume).toBeCloseTo(0.0665, 4); // 0.0665 mL: CG4 3rd ed. Example A1 components without the guide's rounding to 0.07 mL (computed)
     const relative = Math.sqrt((0.05 / 100.28) ** 2 + (0.0001 / Math.sqrt(3) / 0.9999) ** 2 + (uVolume / 100) ** 2);
     expect(result.standardUncertainty).toBeCloseTo(result.value * relative, 10);
     // To the guide's single digit: 0.84 → 0.8 here, while the guide's rounded u(V) gives 0.9 (next test).
@@ -43,7 +43,7 @@ describe('GUM propagation', () => {
     expect(result.expandedUncertainty).toBeCloseTo(1.67, 2);
   });
 
-  it('reproduces EURACHEM/CITAC CG4 Example A1 (guide path, u(V) rounded to 0.07 mL)', () => {
+  it('reproduces EURACHEM/CITAC CG4 3rd ed. Example A1 (guide path, u(V) rounded to 0.07 mL)', () => {
     const result = exampleA1(0.07);
     expect(result.value).toBeCloseTo(1002.7, 1);
     // Guide: u_c = 0.9 mg/L, U = 1.8 mg/L (k = 2), both printed to one decimal.
@@ -69,7 +69,7 @@ describe('GUM propagation', () => {
     expect(result.standardUncertainty).toBe(0);
   });
 
-  it('Welch–Satterthwaite: two equal Type A sources with ν = 4 give ν_eff = 8 (analytic, JCGM 100 G.4.1)', () => {
+  it('Welch–Satterthwaite: two equal Type A sources with ν = 4 give ν_eff = 8 (analytic, JCGM 100:2008 G.4.1)', () => {
     const builder = new ModelBuilder();
     const typeA: Distribution = { shape: 'studentT', standardDeviation: 1, observations: 5, meanOfReadings: false };
     const y = builder.add(source(builder, 'a', 1, typeA), source(builder, 'b', 1, typeA));

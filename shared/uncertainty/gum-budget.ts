@@ -56,9 +56,9 @@ export interface BudgetResult {
 }
 
 /**
- * GUM first-order propagation (JCGM 100 5.1.2) for independent sources:
+ * GUM first-order propagation (JCGM 100:2008 5.1.2) for independent sources:
  * u_c²(y) = Σ (cᵢ·u(xᵢ))², cᵢ = ∂y/∂xᵢ exact by automatic differentiation;
- * ν_eff = u_c⁴ / Σ (uᵢ(y)⁴/νᵢ) (Welch–Satterthwaite, JCGM 100 G.4.1); U = k·u_c
+ * ν_eff = u_c⁴ / Σ (uᵢ(y)⁴/νᵢ) (Welch–Satterthwaite, JCGM 100:2008 G.4.1); U = k·u_c
  * with k = t_p(ν_eff) or the fixed k of the setting.
  */
 export function propagate(model: CompiledModel, coverage: CoverageSetting): BudgetResult {

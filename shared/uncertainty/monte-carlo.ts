@@ -26,7 +26,7 @@ export interface MonteCarloOptions {
   seed: number;
   /** Fixed number of trials M, at most MAXIMUM_MONTE_CARLO_TRIALS. Give this or `adaptive`. */
   trials?: number;
-  /** The adaptive procedure of JCGM 101 7.9.4, stopped at `maximumTrials` (at most, and by default, MAXIMUM_MONTE_CARLO_TRIALS). */
+  /** The adaptive procedure of JCGM 101:2008 7.9.4, stopped at `maximumTrials` (at most, and by default, MAXIMUM_MONTE_CARLO_TRIALS). */
   adaptive?: { significantDigits?: 1 | 2; maximumTrials?: number };
   /** Defaults to the plan's coverage setting, or 2Φ(2) − 1 for a compiled model. */
   coverageProbability?: number;
@@ -73,7 +73,7 @@ function isCompiledModel(input: CompiledModel | PlanInput | Plan): input is Comp
 }
 
 /**
- * Starts a Monte Carlo propagation of distributions (JCGM 101): for each trial every source is drawn from
+ * Starts a Monte Carlo propagation of distributions (JCGM 101:2008): for each trial every source is drawn from
  * its distribution (see fillSamples) with the seeded xoshiro128** generator, and the model is evaluated.
  * Sources are drawn chunk by chunk in a fixed order (chunk, then source, then trial), so only the outputs
  * are kept: one Float64Array of M values, whose tails are then put in order for the coverage intervals.
@@ -163,7 +163,7 @@ function assertTrialsWithinCap(trials: number, path: string[]): void {
 }
 
 /**
- * JCGM 101 7.9.4: batches of M = max(⌈100/(1 − p)⌉, 10⁴) trials; after each batch h ≥ 2 the standard deviations
+ * JCGM 101:2008 7.9.4: batches of M = max(⌈100/(1 − p)⌉, 10⁴) trials; after each batch h ≥ 2 the standard deviations
  * s = √(Σ(x⁽ʳ⁾ − x̄)²/(h(h − 1))) of the batch means, standard uncertainties and interval ends are compared with
  * the numerical tolerance δ of u(y) from all trials; stop when 2s ≤ δ for all four.
  */

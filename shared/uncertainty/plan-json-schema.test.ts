@@ -23,11 +23,24 @@ describe('budget CLI', () => {
     expect(result.stderr).toMatch(/Invalid plan/);
     const plan = run('tests/fixtures/plans/selenium-working-standard.json', '--trials', '20000', '--seed', '3');
     expect(plan.status).toBe(0);
-    const output = JSON.parse(plan.stdout) as { value: number; unit: string; monteCarlo: { seed: number; trials: number }; validation: { passed: boolean }; contributions: unknown[] };
+    const output = JSON.parse(plan.stdout) as {
+      value: number;
+      unit: string;
+      expandedUncertainty: number;
+      monteCarlo: { seed: number; trials: number; symmetricInterval: { low: number; high: number } };
+      validation: { passed: boolean; numericalTolerance: number; lowEndDifference: number; highEndDifference: number };
+      contributions: unknown[];
+    };
     expect(output.unit).toBe('µg/L');
     expect(output.value).toBeCloseTo(100, 6);
     expect(output.monteCarlo).toMatchObject({ seed: 3, trials: 20000 });
-    expect(typeof output.validation.passed).toBe('boolean');
+    // The printed validation follows from the printed numbers (JCGM 101:2008 §8): d_low = |y − U − y_low|,
+    // d_high = |y + U − y_high|, passed when both are within δ. JSON carries the same doubles, so 9 decimals.
+    const { validation, monteCarlo } = output;
+    expect(validation.lowEndDifference).toBeCloseTo(Math.abs(output.value - output.expandedUncertainty - monteCarlo.symmetricInterval.low), 9);
+    expect(validation.highEndDifference).toBeCloseTo(Math.abs(output.value + output.expandedUncertainty - monteCarlo.symmetricInterval.high), 9);
+    expect(validation.numericalTolerance).toBeGreaterThan(0);
+    expect(validation.passed).toBe(validation.lowEndDifference <= validation.numericalTolerance && validation.highEndDifference <= validation.numericalTolerance);
     expect(output.contributions.length).toBeGreaterThan(5);
   });
 

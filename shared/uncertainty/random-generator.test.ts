@@ -64,7 +64,7 @@ describe('samplers reproduce the moments of their distributions', () => {
     ['rectangular', { shape: 'rectangular', halfWidth: 1 }, Math.sqrt(jStat.uniform.variance(-1, 1))],
     ['triangular', { shape: 'triangular', halfWidth: 1 }, Math.sqrt(jStat.triangular.variance(-1, 1, 0))],
     ['arcsine', { shape: 'arcsine', halfWidth: 1 }, Math.sqrt(jStat.arcsine.variance(-1, 1))],
-    // JCGM 101 6.4.9: scaled t with ν = n − 1 = 5 and scale s/√n has variance (s²/n)·ν/(ν − 2).
+    // JCGM 101:2008 §6.4.9 (from memory): scaled t with ν = n − 1 = 5 and scale s/√n has variance (s²/n)·ν/(ν − 2).
     ['Student t (ν = 5)', { shape: 'studentT', standardDeviation: 1, observations: 6, meanOfReadings: true }, Math.sqrt((1 / 6) * (5 / 3))],
   ];
   it.each(cases)('%s', (_name, distribution, sigma) => {

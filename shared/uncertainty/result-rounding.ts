@@ -9,7 +9,7 @@ export interface RoundedResult {
 }
 
 /**
- * Rounds an uncertainty to `significantDigits` significant digits (two by default, JCGM 100 7.2.6)
+ * Rounds an uncertainty to `significantDigits` significant digits (two by default, JCGM 100:2008 7.2.6)
  * and the value to the same decimal place, rounding half away from zero.
  * decimals = significantDigits − 1 − ⌊log₁₀ u⌋.
  * @example roundToUncertainty(1002.6997, 1.6706) // { value: 1002.7, uncertainty: 1.7, decimals: 1, valueText: '1002.7', uncertaintyText: '1.7' }

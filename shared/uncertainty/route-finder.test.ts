@@ -47,17 +47,20 @@ describe('route finder', () => {
     expect(twoDigits(result.routes[0].relativeExpandedUncertainty)).toBe(twoDigits(best));
     const keys = result.routes.map((route) => twoDigits(route.relativeExpandedUncertainty));
     expect([...keys].sort((left, right) => left - right)).toEqual(keys);
-    // The glass 1 mL pipette (±0.008 mL, ISO 648 class A) beats the piston pipette (±8 µL systematic + 3 µL random).
+    // The glass 1 mL pipette (±0.008 mL, ISO 648:2008 class A, from memory) beats the piston pipette (±8 µL systematic + 3 µL random, ISO 8655-2:2002 at 1000 µL, read).
     const oneStep = result.routes.filter((route) => route.dilutionSteps === 1);
     expect(oneStep[0].description).toContain('GP-1-A');
   });
 
   it('every route meets its target and respects the items on hand', () => {
-    for (const route of findRoutes(small).routes) {
+    const routes = findRoutes(small).routes;
+    expect(routes.length).toBeGreaterThan(1);
+    for (const route of routes) {
       expect(Math.abs(route.value / 10 - 1)).toBeLessThanOrEqual(0.005);
       const steps = route.plan.steps as { kind: string; flask?: { itemId: string; nominalMl: number }; volumeMl?: number }[];
       const flasks = steps.filter((step) => step.flask).map((step) => step.flask?.itemId);
       expect(new Set(flasks).size).toBe(flasks.length);
+      expect(flasks.length).toBeGreaterThan(0);
       let previousMl = Infinity;
       for (const step of steps) {
         if (step.volumeMl !== undefined) expect(step.volumeMl).toBeLessThan(previousMl);

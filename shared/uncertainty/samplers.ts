@@ -7,9 +7,9 @@ const wordToUniform = 2.3283064365386963e-10; // 2⁻³²
 const signOffset = 2147483648; // 2³¹: a signed word k plus 2³¹ is the unsigned word
 
 /**
- * Fills `target[0..count)` with draws of `estimate + deviation` for one source (JCGM 101 §6.4):
+ * Fills `target[0..count)` with draws of `estimate + deviation` for one source (JCGM 101:2008 §6.4):
  * normal by the ziggurat method (normal-ziggurat.ts); rectangular a(2r − 1); symmetric triangular
- * a(r₁ + r₂ − 1); arcsine a·sin(2πr); Student t (Type A, JCGM 101 6.4.9) as scale·t_ν with ν = n − 1,
+ * a(r₁ + r₂ − 1); arcsine a·sin(2πr); Student t (Type A, JCGM 101:2008 6.4.9) as scale·t_ν with ν = n − 1,
  * scale s/√n for a mean of n readings or s for a single reading, t_ν by Bailey's polar method.
  * Uniforms r = (k + ½)/2³² come from the generator's 32-bit words k, in order: for each source `count` words
  * (2·count for triangular), then any extra words the ziggurat's rare slow path or the polar method needs.

@@ -3,7 +3,7 @@ import type { BudgetResult } from './gum-budget';
 import type { MonteCarloResult } from './monte-carlo';
 
 export interface GumValidation {
-  /** δ from u_c with `significantDigits` significant digits (JCGM 101 7.9.2). */
+  /** δ from u_c with `significantDigits` significant digits (JCGM 101:2008 7.9.2). */
   numericalTolerance: number;
   /** |y − U_p − y_low| */
   lowEndDifference: number;
@@ -14,7 +14,7 @@ export interface GumValidation {
 }
 
 /**
- * Validation of the GUM uncertainty framework by Monte Carlo (JCGM 101 §8): with the GUM interval
+ * Validation of the GUM uncertainty framework by Monte Carlo (JCGM 101:2008 §8): with the GUM interval
  * y ± U_p and the Monte Carlo probabilistically symmetric interval [y_low, y_high] for the same p,
  * d_low = |y − U_p − y_low|, d_high = |y + U_p − y_high|; validated when both ≤ δ.
  */

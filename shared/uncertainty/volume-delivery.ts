@@ -5,7 +5,7 @@ import { itemLabel, type StepContext } from './step-context';
 
 /**
  * Temperature effect on a delivered or contained volume V (mL): δ_T = V·γ·ΔT with ΔT rectangular
- * over ± the lab's half-range, drawn afresh for each use (JCGM 100 4.3.7; EURACHEM/CITAC CG4 A1).
+ * over ± the lab's half-range, drawn afresh for each use (JCGM 100:2008 4.3.7; EURACHEM/CITAC CG4 3rd ed. A1).
  */
 function temperatureEffect(context: StepContext, volumeMl: number, label: string): NodeReference | undefined {
   const halfWidth = volumeMl * context.settings.solutionExpansionPerC * context.settings.temperatureHalfRangeC;
@@ -25,7 +25,7 @@ function temperatureEffect(context: StepContext, volumeMl: number, label: string
 
 /**
  * Volume of a one-mark flask or glass pipette, in mL: V = V₀ + δ_tolerance + δ_fill + δ_T.
- * δ_tolerance (triangular or rectangular over ± the class tolerance, ISO 1042 / ISO 648) belongs to the item
+ * δ_tolerance (triangular or rectangular over ± the class tolerance, ISO 1042:1998 / ISO 648:2008) belongs to the item
  * and is shared by every use; δ_fill (normal, fill repeatability) and δ_T are per use.
  */
 export function glasswareVolume(context: StepContext, item: VolumetricFlask | GlassPipette, field: 'flask' | 'pipette'): NodeReference {
@@ -71,7 +71,7 @@ export function glasswareVolume(context: StepContext, item: VolumetricFlask | Gl
 }
 
 /**
- * ISO 8655-2 errors of a piston pipette at a set volume, in µL: listed entries are converted to µL
+ * ISO 8655-2:2002 errors of a piston pipette at a set volume, in µL: listed entries are converted to µL
  * (percent of their own volume), interpolated linearly between neighbours, and held at the nearest
  * entry beyond the listed range.
  */

@@ -10,8 +10,11 @@ const tanaka = JSON.parse(readFileSync(new URL('../../tests/fixtures/engine/tana
 };
 
 describe('water density (Tanaka et al. 2001)', () => {
-  // Table values of Tanaka et al., Metrologia 38 (2001) 301, to 4 decimals (from memory; 15/20/25 °C also in REFERENCES.md).
+  // Table values of Tanaka et al., Metrologia 38 (2001) 301, to 4 decimals (from memory; 15/20/25 °C also computed from the paper's fitted formula).
   // Tolerance 0.00015 kg/m³: rounding of the 4th decimal plus the formula's fit to its own table.
+  it('reads the six table values (so the checks below are not vacuous)', () => {
+    expect(tanaka.cases).toHaveLength(6);
+  });
   it.each(tanaka.cases)('ρ($temperatureC °C) = $densityKgPerM3 kg/m³', ({ temperatureC, densityKgPerM3 }) => {
     expect(Math.abs(waterDensityKgPerM3(temperatureC) - densityKgPerM3)).toBeLessThanOrEqual(0.00015);
   });
@@ -21,7 +24,7 @@ describe('water density (Tanaka et al. 2001)', () => {
 });
 
 describe('USP <41> minimum weight', () => {
-  // USP <41>: 2·s/m ≤ 0.10 % → m_min = 2000·s; example s = 0.00015 g → 0.30000 g (REFERENCES.md, read).
+  // USP <41>: 2·s/m ≤ 0.10 % → m_min = 2000·s; example s = 0.00015 g → 0.30000 g (USP <41> Weights and Balances, read).
   it('s = 0.00015 g gives 0.3 g', () => {
     expect(minimumWeightG(0.00015, 0.0001)).toBeCloseTo(0.3, 12);
   });

@@ -1,7 +1,7 @@
 import type { Role } from '../../shared/contracts/roles';
 import type { Me } from '../../shared/contracts/auth';
 
-/** What a member may do in a lab, and which roles grant it (DESIGN.md §2). */
+/** What a member may do in a lab, and which roles grant it. */
 export const PERMISSIONS = {
   manageMembers: ['admin'],
   reviewRecords: ['qa'],

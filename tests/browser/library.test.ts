@@ -75,7 +75,7 @@ describe('the tolerance library, kept by QA', () => {
 
     await page.getByRole('link', { name: 'Add volumetric flask' }).click();
     await page.getByRole('heading', { level: 1, name: 'Add a volumetric flask' }).waitFor();
-    // ISO 1042 class A, 50 mL: ± 0.06 mL (the shared template table, read from the standard's table).
+    // ISO 1042:1998 class A, 50 mL: ± 0.06 mL (the shared template table; read from a national verification table identical to it).
     await page.getByLabel('Template').selectOption({ label: 'ISO 1042 class A, 50 mL (± 0.06 mL)' });
     await expect(page.getByLabel('Tolerance (±)').inputValue()).resolves.toBe('0.06');
     await expect(page.getByLabel('Nominal volume').inputValue()).resolves.toBe('50');
@@ -130,7 +130,7 @@ describe('the tolerance library, kept by QA', () => {
     const { page, problems } = await openPage();
     await signIn(page, 'qa');
     await openLibraryTab(page, 'Balances');
-    // BAL-05: s = 0.015 mg, d = 0.01 mg, so m_min = 2000 · max(s, 0.41·d) = 0.03 g (demo data, USP <41> rule).
+    // BAL-05: s = 0.015 mg, d = 0.01 mg, so m_min = 2000 · max(s, 0.41·d) = 0.03 g (demo data, USP <41> Weights and Balances rule, read).
     const row = page.locator('tbody tr', { has: page.getByRole('link', { name: 'BAL-05' }) });
     await expect(row.innerText()).resolves.toContain('0.03');
     await screenshot(page, 'library-balances');
@@ -174,7 +174,7 @@ describe('the tolerance library, kept by QA', () => {
     await signIn(page, 'qa');
     await openLibraryTab(page, 'Piston pipettes');
     await page.getByRole('link', { name: 'Add piston pipette' }).click();
-    // ISO 8655-2 at 100 µL: ± 0.8 µL systematic, 0.3 µL random (the shared template table; recalled, so the form says so).
+    // ISO 8655-2:2002 at 100 µL: ± 0.8 µL systematic, 0.3 µL random (the shared template table; from memory, so the form says so).
     await page.getByLabel('Template').selectOption({ label: 'ISO 8655-2, 100 µL (± 0.8 µL, s 0.3 µL)' });
     await expect(page.getByLabel('Nominal (largest) volume').inputValue()).resolves.toBe('100');
     await expect(page.getByLabel('Systematic error (±)').inputValue()).resolves.toBe('0.8');

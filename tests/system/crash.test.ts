@@ -69,6 +69,7 @@ describe.runIf(!process.env.DATABASE_URL)('a SIGKILL in the middle of writes los
     const db = knex({ client: 'better-sqlite3', connection: { filename: file }, useNullAsDefault: true });
     try {
       const codes = new Set((await db('equipment_items').whereLike('code', 'CRASH-%').select('code')).map((r: { code: string }) => r.code));
+      expect(acknowledged.length).toBeGreaterThan(0);
       const missing = acknowledged.filter((code) => !codes.has(code));
       expect(missing).toEqual([]);
       const halfWritten = await db('equipment_items as i').leftJoin('equipment_revisions as r', 'r.id', 'i.current_revision_id').whereNull('r.id').select('i.code');
@@ -76,10 +77,10 @@ describe.runIf(!process.env.DATABASE_URL)('a SIGKILL in the middle of writes los
       const orphanRevisions = await db('equipment_revisions as r').leftJoin('equipment_items as i', 'i.id', 'r.item_id').whereNull('i.id').select('r.id');
       expect(orphanRevisions).toEqual([]);
       const titles = new Set((await db('preparations').whereLike('title', 'CRASH-%').select('title')).map((r: { title: string }) => r.title));
+      expect(acknowledgedPlans.length).toBeGreaterThan(0);
       expect(acknowledgedPlans.filter((title) => !titles.has(title))).toEqual([]);
       const versionless = await db('preparations as p').leftJoin('preparation_versions as v', 'v.preparation_id', 'p.id').whereNull('v.id').select('p.title');
       expect(versionless).toEqual([]);
-      expect(acknowledgedPlans.length).toBeGreaterThan(0);
       console.log(`crash test: ${RUNS} SIGKILLs survived, ${acknowledged.length} acknowledged items and ${acknowledgedPlans.length} acknowledged preparations all present, ${codes.size} items and ${titles.size} preparations written`);
     } finally {
       await db.destroy();

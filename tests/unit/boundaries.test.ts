@@ -2,7 +2,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { describe, expect, it } from 'vitest';
 
-/** Layer rules of CONVENTIONS.md §2, checked by reading every import in the tree. */
+/** Layer rules (the engine imports no Node, DOM or framework; src and server never import each other), checked by reading every import in the tree. */
 const root = join(import.meta.dirname, '..', '..');
 
 function sourceFiles(dir: string): string[] {

@@ -2,7 +2,7 @@ import { ROLE_LABELS, ROLES, type Role } from '../../../../shared/contracts/role
 import { Link } from 'react-router';
 import { paths } from '../../../config/paths';
 
-/** What each role does in Dilutrace, said plainly (DESIGN.md §2). */
+/** What each role does in Dilutrace, said plainly. */
 const WORK_OF_ROLE: Record<Role, { summary: string; items: string[] }> = {
   analyst: {
     summary: 'Plan how a standard is made and see what limits its uncertainty.',

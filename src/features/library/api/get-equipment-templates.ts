@@ -25,7 +25,7 @@ const pistonTemplateSchema: z.ZodType<PistonTemplate> = z.object({
 const equipmentTemplatesSchema = z.object({ glassware: z.array(glasswareTemplateSchema), piston: z.array(pistonTemplateSchema) });
 export type EquipmentTemplates = z.infer<typeof equipmentTemplatesSchema>;
 
-/** ISO 1042, ISO 648 and ISO 8655-2 tolerances for the common nominal volumes. */
+/** ISO 1042:1998, ISO 648:2008 and ISO 8655-2:2002 tolerances for the common nominal volumes. */
 export function getEquipmentTemplates(labId: number): Promise<EquipmentTemplates> {
   return api.get(`/api/labs/${labId}/equipment-templates`, equipmentTemplatesSchema);
 }

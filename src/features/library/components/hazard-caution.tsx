@@ -1,4 +1,4 @@
-/** The caution box for a reference material's hazard notes (DESIGN.md §5), with the standing advice. */
+/** The caution box for a reference material's hazard notes, with the standing advice (safety data sheet, chemical hygiene plan, local rules). */
 export function HazardCaution({ notes }: { notes: string }) {
   return (
     <aside aria-labelledby="hazard-heading" className="rounded-md border-l-4 border-caution bg-caution-tint px-4 py-3 text-ink">

@@ -1,4 +1,4 @@
-/** The line DESIGN.md §5 puts beside every hazard note. */
+/** The standing advice shown beside every hazard note. */
 export const SAFETY_LINE = 'Follow the safety data sheet, your lab’s chemical hygiene plan and local regulations.';
 
 /** A material's hazard notes with the safety line, wherever the material is used. */

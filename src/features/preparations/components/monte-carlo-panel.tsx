@@ -21,7 +21,7 @@ type MonteCarloPanelProps = {
 };
 
 /**
- * Monte Carlo (JCGM 101) for the plan on screen: progress, cancel, the seed, the histogram and the verdict
+ * Monte Carlo (JCGM 101:2008) for the plan on screen: progress, cancel, the seed, the histogram and the verdict
  * against GUM. The run's state lives here, so progress repaints only this panel, never the editor.
  */
 export const MonteCarloPanel = memo(function MonteCarloPanel({ plan, budget, seed, onSeedChange, seedEditable }: MonteCarloPanelProps) {

@@ -2,7 +2,7 @@ import { memo } from 'react';
 import type { BudgetResult } from '../../../../shared/uncertainty';
 import { formatDegreesOfFreedom, formatPercent } from '../utils/format-number';
 
-/** The result as the GUM asks for it (JCGM 100 7.2.3): value, U, k, coverage probability and ν_eff. */
+/** The result as the GUM asks for it (JCGM 100:2008 7.2.3): value, U, k, coverage probability and ν_eff. */
 export const ResultStatement = memo(function ResultStatement({ budget }: { budget: BudgetResult }) {
   const { rounded } = budget;
   const facts: [string, string][] = [

@@ -2,7 +2,7 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import type { MonteCarloResult, PlanInput } from '../../../../shared/uncertainty';
 import type { MonteCarloReply, MonteCarloRequest } from '../worker/monte-carlo-messages';
 
-/** Trials of a browser run: JCGM 101 7.2.2 suggests M = 10⁶ for a 95 % interval good to one or two digits. */
+/** Trials of a browser run: JCGM 101:2008 7.2.2 suggests M = 10⁶ for a 95 % interval good to one or two digits. */
 export const BROWSER_TRIALS = 1_000_000;
 
 /** How long edits must rest before Monte Carlo starts by itself. */

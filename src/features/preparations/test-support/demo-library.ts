@@ -29,7 +29,7 @@ export const DEMO_LIBRARY: EquipmentItem[] = [
     calibration: 'overdue',
     flags: ['calibration overdue'],
   }),
-  // ISO 1042 class A / B tolerances for 100 mL flasks (0.10 / 0.20 mL), ISO 648 class A for a 10 mL pipette (0.020 mL).
+  // ISO 1042:1998 class A / B tolerances for 100 mL flasks (0.10 / 0.20 mL), ISO 648:2008 class A for a 10 mL pipette (0.020 mL).
   flask(3, 'VF-100-A', 100, 0.1, 'A'),
   flask(4, 'VF-100-B', 100, 0.2, 'B'),
   flask(5, 'VF-250-A', 250, 0.15, 'A'),

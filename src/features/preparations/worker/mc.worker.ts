@@ -9,7 +9,7 @@ const PROGRESS_INTERVAL_MS = 100;
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 const reply = (message: MonteCarloReply) => scope.postMessage(message);
 
-// Runs one JCGM 101 Monte Carlo calculation off the main thread; the page cancels by terminating the worker.
+// Runs one JCGM 101:2008 Monte Carlo calculation off the main thread; the page cancels by terminating the worker.
 scope.onmessage = (event: MessageEvent<MonteCarloRequest>) => {
   const { runId, plan, seed, trials } = event.data;
   try {

@@ -1,6 +1,6 @@
 import type { UsedItem } from '../../../../shared/contracts/preparations';
 
-/** The hazard notes QA set on the materials used (DESIGN.md §5), with the standing advice; nothing when none has notes. */
+/** The hazard notes QA set on the materials used, with the standing advice; nothing when none has notes. */
 export function HazardCautions({ items }: { items: UsedItem[] }) {
   const hazardous = items.filter((item) => item.hazardNotes.trim() !== '');
   if (hazardous.length === 0) return null;

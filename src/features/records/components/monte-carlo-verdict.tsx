@@ -5,7 +5,7 @@ import { validationWords } from '../utils/validation-words';
 
 type MonteCarloVerdictProps = { monteCarlo: MonteCarloView | null; validation: ValidationView | null; unit: string };
 
-/** Whether Monte Carlo (JCGM 101) confirms the GUM interval, in words, with the run that decided it. */
+/** Whether Monte Carlo (JCGM 101:2008) confirms the GUM interval, in words, with the run that decided it. */
 export function MonteCarloVerdict({ monteCarlo, validation, unit }: MonteCarloVerdictProps) {
   return (
     <section aria-labelledby="monte-carlo-heading" className="rounded-lg border border-line bg-surface p-6">

@@ -1,7 +1,7 @@
 import { formatDegreesOfFreedom, formatSignificant } from '../utils/format-figures';
 import type { BudgetView } from '../utils/snapshot-view';
 
-/** The result as the GUM asks for it (JCGM 100 7.2.3), prominently, with the figures it is made of. */
+/** The result as the GUM asks for it (JCGM 100:2008 7.2.3), prominently, with the figures it is made of. */
 export function ResultStatementPanel({ budget }: { budget: BudgetView }) {
   const facts: [string, string][] = [
     [budget.measurand, `${budget.rounded.valueText} ${budget.unit}`],

@@ -1,7 +1,7 @@
 import { formatSignificant } from './format-figures';
 import type { ValidationView } from './snapshot-view';
 
-/** The JCGM 101 §8 comparison of the GUM interval with the Monte Carlo interval, in words, with the numbers that decide it. */
+/** The JCGM 101:2008 §8 comparison of the GUM interval with the Monte Carlo interval, in words, with the numbers that decide it. */
 export function validationWords(validation: ValidationView, unit: string): string {
   const tolerance = `δ = ${formatSignificant(validation.numericalTolerance)} ${unit}`;
   const ends = `the interval ends differ by ${formatSignificant(validation.lowEndDifference)} ${unit} and ${formatSignificant(validation.highEndDifference)} ${unit}`;

@@ -1,0 +1,132 @@
+// @vitest-environment happy-dom
+import { cleanup, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import type { Me } from '../../../../shared/contracts/auth';
+import type { Role } from '../../../../shared/contracts/roles';
+import { paths } from '../../../config/paths';
+import { authKeys } from '../../../features/auth/api/auth-keys';
+import { recordQueryOptions } from '../../../features/records/api/get-record';
+import { recordVersionQueryOptions } from '../../../features/records/api/get-record-version';
+import { meOf, preparationAt, renderAt, stubServer, type Answer, type SentRequest } from '../../../test-support/component-harness';
+import { Component as RecordRoute } from './record';
+
+type Stage = Parameters<typeof preparationAt>[0];
+
+const ACTIONS = ['Submit for review', 'Approve and sign', 'Return with comments', 'Start a new version'] as const;
+const STATUS_WORDS: Record<Stage, string> = { draft: 'Draft', prepared: 'Prepared (readings recorded)', submitted: 'Waiting for review', approved: 'Approved' };
+const approveUrl = '/api/labs/1/preparations/1/versions/1/approve';
+const emptyAuditPage = (request: SentRequest): Answer | undefined => (request.method === 'GET' && request.url.startsWith('/api/labs/1/audit-events?') ? { status: 200, body: { events: [], total: 0 } } : undefined);
+
+/** `me` with other roles in the demo lab (and, when given, another user id). */
+const withRoles = (me: Me, roles: Role[], userId = me.user.id): Me => ({ ...me, user: { ...me.user, id: userId }, labs: me.labs.map((lab) => ({ ...lab, roles })) });
+
+/** The record page of version 1 at `stage`, for `me`, with the server's answers already in the cache. */
+async function showRecord(stage: Stage, me: Me, answer: (request: SentRequest) => Answer | undefined = emptyAuditPage) {
+  const sent = stubServer(answer);
+  const detail = preparationAt(stage);
+  renderAt(<RecordRoute />, {
+    pattern: paths.app.record.path,
+    path: paths.app.record.href(detail.id, 1),
+    seed: (client) => {
+      client.setQueryData(authKeys.me(), me);
+      client.setQueryData(recordQueryOptions(1, detail.id).queryKey, detail);
+      client.setQueryData(recordVersionQueryOptions(1, detail.id, 1).queryKey, detail.current);
+    },
+  });
+  await screen.findByRole('heading', { level: 1, name: detail.title });
+  return sent;
+}
+
+/** The record actions on screen, in the order of ACTIONS. */
+const actionsShown = () => ACTIONS.filter((name) => screen.queryByRole('button', { name }) !== null);
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+describe('record actions by role and state', () => {
+  it('the fixture is the analyst’s own preparation, read by the demo people', () => {
+    expect(preparationAt('draft').createdById).toBe(meOf('analyst').user.id);
+    expect(meOf('qa').user.id).not.toBe(meOf('analyst').user.id);
+    expect(meOf('auditor').labs[0].roles).toEqual(['auditor']);
+  });
+
+  it.each([
+    ['draft', 'analyst', ['Submit for review']],
+    ['prepared', 'analyst', ['Submit for review']],
+    ['submitted', 'analyst', []],
+    ['approved', 'analyst', ['Start a new version']],
+    ['draft', 'qa', []],
+    ['submitted', 'qa', ['Approve and sign', 'Return with comments']],
+    ['approved', 'qa', []],
+    ['submitted', 'auditor', []],
+    ['approved', 'auditor', []],
+  ] as const)('%s version, seen by the %s: actions %j', async (stage, person, expected) => {
+    await showRecord(stage, meOf(person));
+    expect(screen.getAllByText(STATUS_WORDS[stage]).length).toBeGreaterThan(0); // the page shows the version in that state
+    expect(actionsShown()).toEqual(expected);
+  });
+
+  it('does not let another analyst submit someone else’s draft', async () => {
+    await showRecord('draft', withRoles(meOf('analyst'), ['analyst'], 99));
+    expect(actionsShown()).toEqual([]);
+  });
+
+  it('tells a QA member who submitted the version that someone else must review it, and offers no approval', async () => {
+    const author = withRoles(meOf('analyst'), ['analyst', 'qa']);
+    await showRecord('submitted', author);
+    expect(screen.getByText('You submitted this version; another member of QA must review it.')).toHaveProperty('tagName', 'P');
+    expect(actionsShown()).toEqual([]);
+  });
+});
+
+describe('approving a submitted version', () => {
+  const approveDialog = () => screen.getByRole('dialog', { name: 'Approve and sign version 1' });
+
+  it('asks for a statement and the password before sending anything', async () => {
+    const sent = await showRecord('submitted', meOf('qa'));
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: 'Approve and sign' }));
+    const dialog = approveDialog();
+    await user.click(within(dialog).getByRole('button', { name: 'Approve and sign' }));
+    const statement = within(dialog).getByRole('textbox', { name: 'What you approve' });
+    await vi.waitFor(() => expect(statement.getAttribute('aria-invalid')).toBe('true'));
+    expect(dialog.textContent).toMatch(/State what you approve/);
+    expect(dialog.textContent).toMatch(/Re-enter your password to sign the approval/);
+    expect(sent.filter((request) => request.method === 'POST')).toEqual([]);
+  });
+
+  it('keeps the dialog open with the password emptied when the server refuses the password, then signs with the right one', async () => {
+    let attempts = 0;
+    const sent = await showRecord('submitted', meOf('qa'), (request) => {
+      if (request.method !== 'POST' || request.url !== approveUrl) return emptyAuditPage(request);
+      attempts += 1;
+      if (attempts === 1) {
+        return { status: 400, body: { error: { code: 'validation_failed', message: 'The password is not right; the approval was not signed.', details: [{ path: 'password', message: 'This is not your password.' }] } } };
+      }
+      return { status: 200, body: preparationAt('approved') };
+    });
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: 'Approve and sign' }));
+    const dialog = approveDialog();
+    const password = within(dialog).getByLabelText('Your password') as HTMLInputElement;
+    await user.type(within(dialog).getByRole('textbox', { name: 'What you approve' }), 'Budget reviewed; equipment in calibration.');
+    await user.type(password, 'not-my-password');
+    await user.click(within(dialog).getByRole('button', { name: 'Approve and sign' }));
+
+    await vi.waitFor(() => expect(password.getAttribute('aria-invalid')).toBe('true'));
+    expect(dialog.textContent).toMatch(/This is not your password/);
+    expect(password.value).toBe('');
+    expect(dialog).toHaveProperty('open', true);
+
+    await user.type(password, 'the-right-password');
+    await user.click(within(dialog).getByRole('button', { name: 'Approve and sign' }));
+    await vi.waitFor(() => expect(dialog).toHaveProperty('open', false));
+    expect(sent.filter((request) => request.method === 'POST').map(({ url, body, csrf }) => ({ url, body, csrf }))).toEqual([
+      { url: approveUrl, body: { statement: 'Budget reviewed; equipment in calibration.', password: 'not-my-password' }, csrf: 'test-csrf-token' },
+      { url: approveUrl, body: { statement: 'Budget reviewed; equipment in calibration.', password: 'the-right-password' }, csrf: 'test-csrf-token' },
+    ]);
+  });
+});

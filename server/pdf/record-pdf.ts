@@ -1,6 +1,5 @@
 import PDFDocument from 'pdfkit';
-import type { UsedItem, VersionDetail } from '../../shared/contracts/preparations';
-import type { BudgetResult, GumValidation, MonteCarloResult } from '../../shared/uncertainty';
+import type { VersionDetail } from '../../shared/contracts/preparations';
 import { PDF_FONTS } from './fonts';
 import { percent, significant, utc } from './format';
 import { drawContributionBars, drawHistogram } from './pdf-charts';
@@ -58,10 +57,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
   const { version } = input;
   const snapshot = version.snapshot;
   if (!snapshot) return Promise.reject(new Error('A version without a computed snapshot has no record to print.'));
-  const budget = snapshot.budget as unknown as BudgetResult;
-  const monteCarlo = snapshot.monteCarlo as unknown as MonteCarloResult;
-  const validation = snapshot.validation as unknown as GumValidation;
-  const items = snapshot.items as UsedItem[];
+  const { budget, monteCarlo, validation, items } = snapshot;
   const approved = version.status === 'approved';
 
   return new Promise((resolve, reject) => {
@@ -114,16 +110,15 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
 
     // Plan
     heading('Plan');
-    const steps = (snapshot.plan.steps as (Record<string, unknown> & { kind: string })[]) ?? [];
+    const { steps, settings } = snapshot.plan;
     steps.forEach((step, index) => {
       const checkpoint = budget.checkpoints.find((c) => c.stepIndex === index);
       const after = checkpoint ? ` → ${significant(checkpoint.value, 5)} ${checkpoint.unit}` : '';
       paragraph(`${index + 1}. ${stepText(step, items)}${after}`);
       doc.moveDown(0.15);
     });
-    const settings = snapshot.plan.settings as { labTemperatureC?: number; temperatureHalfRangeC?: number; defaultGlasswareDistribution?: string };
     paragraph(
-      `Lab temperature ${settings.labTemperatureC ?? 20} °C ± ${settings.temperatureHalfRangeC ?? '—'} °C (rectangular); glassware tolerances taken as ${settings.defaultGlasswareDistribution ?? '—'} unless an item says otherwise. Engine ${snapshot.engineVersion}.`,
+      `Lab temperature ${settings.labTemperatureC} °C ± ${settings.temperatureHalfRangeC} °C (rectangular); glassware tolerances taken as ${settings.defaultGlasswareDistribution} unless an item says otherwise. Engine ${snapshot.engineVersion}.`,
       { size: 8, color: '#4a5a60' },
     );
 

@@ -1,5 +1,6 @@
 import PDFDocument from 'pdfkit';
 import type { VersionDetail } from '../../shared/contracts/preparations';
+import { formatDegreesOfFreedom } from '../../shared/uncertainty';
 import { PDF_FONTS } from './fonts';
 import { percent, significant, utc } from './format';
 import { drawContributionBars, drawHistogram } from './pdf-charts';
@@ -97,7 +98,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     doc.font('bold').fontSize(12).fillColor(INK).text(budget.statement, MARGIN + 8, boxTop + 8, { width: CONTENT_WIDTH - 16 });
     doc.font('regular').fontSize(8.5).text(
       `Combined standard uncertainty u_c = ${significant(budget.standardUncertainty, 3)} ${budget.unit} (relative ${percent(100 * budget.relativeStandardUncertainty, 3)}); ` +
-        `effective degrees of freedom ν_eff = ${Number.isFinite(budget.effectiveDegreesOfFreedom) ? budget.effectiveDegreesOfFreedom.toFixed(0) : '∞'}; ` +
+        `effective degrees of freedom ν_eff = ${formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)}; ` +
         `coverage factor k = ${budget.coverageFactor.toFixed(2)} for a coverage probability of ${(100 * budget.coverageProbability).toFixed(2)} %; ` +
         `expanded uncertainty U = ${significant(budget.expandedUncertainty, 3)} ${budget.unit} (relative ${percent(100 * budget.relativeExpandedUncertainty, 2)}).`,
       MARGIN + 8,

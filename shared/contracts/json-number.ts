@@ -5,11 +5,11 @@ import { z } from 'zod';
  * results are therefore written as JSON numbers when finite and as one of these strings when not, and
  * read back as the number they name.
  */
-export const NON_FINITE_NUMBER_TEXTS = ['Infinity', '-Infinity', 'NaN'] as const;
+const NON_FINITE_NUMBER_TEXTS = ['Infinity', '-Infinity', 'NaN'] as const;
 type NonFiniteNumberText = (typeof NON_FINITE_NUMBER_TEXTS)[number];
 
 /** 8.7 → 8.7, ∞ → "Infinity", −∞ → "-Infinity", NaN → "NaN". */
-export function encodeNumber(value: number): number | NonFiniteNumberText {
+function encodeNumber(value: number): number | NonFiniteNumberText {
   return Number.isFinite(value) ? value : (String(value) as NonFiniteNumberText);
 }
 

@@ -12,7 +12,7 @@ import { degreesOfFreedomSchema, storedNumberSchema as number } from './json-num
  */
 
 /** One library item as a computed version used it. */
-export const usedItemSchema = z.object({
+const usedItemSchema = z.object({
   libraryId: z.string(),
   code: z.string(),
   kind: z.string(),
@@ -27,7 +27,7 @@ export type UsedItem = z.infer<typeof usedItemSchema>;
 
 const stepIndex = z.number().int().min(0);
 
-export const budgetRowSchema = z.object({
+const budgetRowSchema = z.object({
   sourceId: z.string(),
   label: z.string(),
   category: z.enum(SOURCE_CATEGORIES),
@@ -44,9 +44,9 @@ export const budgetRowSchema = z.object({
   indexPercent: number,
 });
 
-export const budgetGroupSchema = z.object({ key: z.string(), label: z.string(), contribution: number, indexPercent: number });
+const budgetGroupSchema = z.object({ key: z.string(), label: z.string(), contribution: number, indexPercent: number });
 
-export const roundedResultSchema = z.object({ value: number, uncertainty: number, decimals: z.number().int(), valueText: z.string(), uncertaintyText: z.string() });
+const roundedResultSchema = z.object({ value: number, uncertainty: number, decimals: z.number().int(), valueText: z.string(), uncertaintyText: z.string() });
 
 /** The GUM budget (engine: BudgetResult). */
 export const budgetSchema = z.object({

@@ -3,6 +3,7 @@ import { join, resolve } from 'node:path';
 import express from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
+import { nonFiniteNumberReplacer } from '../shared/contracts/json-number';
 import { auditRepository } from './audit/audit-repository';
 import { createComputePool, type Computer } from './compute/compute-pool';
 import { auditRouter } from './audit/audit-router';
@@ -101,6 +102,8 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
 
   const app = express();
   app.disable('x-powered-by');
+  // JSON has no Infinity or NaN: responses write them as the strings the shared schemas decode (json-number.ts).
+  app.set('json replacer', nonFiniteNumberReplacer);
   if (config.trustProxy) app.set('trust proxy', 1);
   app.use(
     helmet({

@@ -8,6 +8,7 @@
  * Non-finite numbers (ν_eff = ∞) are written as null.
  */
 import { readFileSync } from 'node:fs';
+import { nonFiniteNumberReplacer } from '../../shared/contracts/json-number';
 import { evaluatePlan, parsePlan, PlanError, planJsonSchema, runMonteCarlo, validateAgainstGum } from '../../shared/uncertainty/index';
 
 const usage = 'usage: npm run budget -- <plan.json> [--trials N] [--seed S]   |   npm run budget -- --schema';
@@ -78,7 +79,7 @@ try {
     validation: monteCarlo ? validateAgainstGum(budget, monteCarlo) : null,
     warnings: budget.warnings,
   };
-  process.stdout.write(`${JSON.stringify(output, (_key, value: unknown) => (typeof value === 'number' && !Number.isFinite(value) ? null : value), 2)}\n`);
+  process.stdout.write(`${JSON.stringify(output, nonFiniteNumberReplacer, 2)}\n`);
 } catch (error) {
   if (error instanceof PlanError) fail(1, `Invalid plan at ${error.path.join('.') || '(top level)'}: ${error.message}`);
   throw error;

@@ -1,8 +1,8 @@
 import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
+import type { Snapshot } from '../../shared/contracts/snapshot';
 import { PlanError, type RouteRequest, type RouteResult } from '../../shared/uncertainty';
 import { AppError } from '../lib/errors';
-import type { Snapshot } from '../preparations/compute-snapshot';
 import type { ComputeJob, ComputeReply } from './compute-worker';
 import { LabTurns } from './lab-turns';
 

@@ -1,5 +1,6 @@
+import type { Snapshot } from '../../shared/contracts/snapshot';
 import { findRoutes, PlanError, type RouteRequest, type RouteResult } from '../../shared/uncertainty';
-import { computeSnapshot, type Snapshot } from '../preparations/compute-snapshot';
+import { computeSnapshot } from '../preparations/compute-snapshot';
 
 /** What a worker thread is asked to do: a stored budget's snapshot, or a route search. */
 export type ComputeJob = { kind: 'snapshot'; input: Parameters<typeof computeSnapshot>[0] } | { kind: 'routes'; request: RouteRequest };

@@ -81,6 +81,31 @@ describe('the PDF record', () => {
     expect(image.length).toBeGreaterThan(4000);
   });
 
+  it('prints ν_eff truncated to the integer the coverage factor was read at (8.7 → 8, never 9)', async () => {
+    const library = await libraryByCode(analyst, labId);
+    const plan = leadPlan(library);
+    // A dominant Type A source with 8 degrees of freedom makes ν_eff ≈ 8.7 by Welch–Satterthwaite (JCGM 100:2008 G.4.1).
+    Object.assign(plan.steps[0], { extraSources: [{ name: 'Drift between weighings', effect: 'relative', distribution: { shape: 'normal', standardUncertainty: 0.0091, degreesOfFreedom: 8 } }] });
+    const created = (await analyst.post(url('/preparations'), { title: 'Pb with a Type A source', plan, seed: 5 }).expect(201)).body;
+    preparationId = created.id;
+    const budget = created.current.snapshot.budget;
+    expect(budget.effectiveDegreesOfFreedom).toBeGreaterThan(8.5);
+    expect(budget.effectiveDegreesOfFreedom).toBeLessThan(9);
+    // k = t at 8 degrees of freedom for 95.45 %: 2.37 (JCGM 100:2008 Table G.2 gives 2.37 for ν = 8, p = 95.45 %).
+    expect(budget.coverageFactor.toFixed(2)).toBe('2.37');
+    const flat = pdfText(await downloadPdf(analyst), 'type-a').replace(/\s+/g, ' ');
+    expect(flat).toContain('effective degrees of freedom ν_eff = 8; coverage factor k = 2.37');
+    expect(flat).not.toContain('ν_eff = 9');
+  });
+
+  it('prints ν_eff = ∞ from a snapshot stored before snapshots were typed, where it is null', async () => {
+    const legacy = JSON.parse(readFileSync(new URL('../../tests/fixtures/snapshots/lead-standard-stored-before-typing.json', import.meta.url), 'utf8'));
+    await t.db('preparation_versions').where({ preparation_id: preparationId, number: 1 }).update({ snapshot_json: legacy.snapshotJson, snapshot_sha256: legacy.snapshotSha256 });
+    const flat = pdfText(await downloadPdf(analyst), 'stored-before-typing').replace(/\s+/g, ' ');
+    expect(flat).toContain('effective degrees of freedom ν_eff = ∞; coverage factor k = 2.00');
+    expect(flat).toContain(legacy.snapshotSha256);
+  });
+
   it('is refused for a version with no computed budget', async () => {
     const library = await libraryByCode(analyst, labId);
     const plan = leadPlan(library);

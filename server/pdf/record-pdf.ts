@@ -1,6 +1,6 @@
 import PDFDocument from 'pdfkit';
-import type { UsedItem, VersionDetail } from '../../shared/contracts/preparations';
-import type { BudgetResult, GumValidation, MonteCarloResult } from '../../shared/uncertainty';
+import type { VersionDetail } from '../../shared/contracts/preparations';
+import { formatDegreesOfFreedom } from '../../shared/uncertainty';
 import { PDF_FONTS } from './fonts';
 import { percent, significant, utc } from './format';
 import { drawContributionBars, drawHistogram } from './pdf-charts';
@@ -58,10 +58,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
   const { version } = input;
   const snapshot = version.snapshot;
   if (!snapshot) return Promise.reject(new Error('A version without a computed snapshot has no record to print.'));
-  const budget = snapshot.budget as unknown as BudgetResult;
-  const monteCarlo = snapshot.monteCarlo as unknown as MonteCarloResult;
-  const validation = snapshot.validation as unknown as GumValidation;
-  const items = snapshot.items as UsedItem[];
+  const { budget, monteCarlo, validation, items } = snapshot;
   const approved = version.status === 'approved';
 
   return new Promise((resolve, reject) => {
@@ -101,7 +98,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     doc.font('bold').fontSize(12).fillColor(INK).text(budget.statement, MARGIN + 8, boxTop + 8, { width: CONTENT_WIDTH - 16 });
     doc.font('regular').fontSize(8.5).text(
       `Combined standard uncertainty u_c = ${significant(budget.standardUncertainty, 3)} ${budget.unit} (relative ${percent(100 * budget.relativeStandardUncertainty, 3)}); ` +
-        `effective degrees of freedom ν_eff = ${Number.isFinite(budget.effectiveDegreesOfFreedom) ? budget.effectiveDegreesOfFreedom.toFixed(0) : '∞'}; ` +
+        `effective degrees of freedom ν_eff = ${formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)}; ` +
         `coverage factor k = ${budget.coverageFactor.toFixed(2)} for a coverage probability of ${(100 * budget.coverageProbability).toFixed(2)} %; ` +
         `expanded uncertainty U = ${significant(budget.expandedUncertainty, 3)} ${budget.unit} (relative ${percent(100 * budget.relativeExpandedUncertainty, 2)}).`,
       MARGIN + 8,
@@ -114,16 +111,15 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
 
     // Plan
     heading('Plan');
-    const steps = (snapshot.plan.steps as (Record<string, unknown> & { kind: string })[]) ?? [];
+    const { steps, settings } = snapshot.plan;
     steps.forEach((step, index) => {
       const checkpoint = budget.checkpoints.find((c) => c.stepIndex === index);
       const after = checkpoint ? ` → ${significant(checkpoint.value, 5)} ${checkpoint.unit}` : '';
       paragraph(`${index + 1}. ${stepText(step, items)}${after}`);
       doc.moveDown(0.15);
     });
-    const settings = snapshot.plan.settings as { labTemperatureC?: number; temperatureHalfRangeC?: number; defaultGlasswareDistribution?: string };
     paragraph(
-      `Lab temperature ${settings.labTemperatureC ?? 20} °C ± ${settings.temperatureHalfRangeC ?? '—'} °C (rectangular); glassware tolerances taken as ${settings.defaultGlasswareDistribution ?? '—'} unless an item says otherwise. Engine ${snapshot.engineVersion}.`,
+      `Lab temperature ${settings.labTemperatureC} °C ± ${settings.temperatureHalfRangeC} °C (rectangular); glassware tolerances taken as ${settings.defaultGlasswareDistribution} unless an item says otherwise. Engine ${snapshot.engineVersion}.`,
       { size: 8, color: '#4a5a60' },
     );
 

@@ -1,4 +1,4 @@
-import type { UsedItem } from '../../shared/contracts/preparations';
+import type { UsedItem } from '../../shared/contracts/snapshot';
 
 type Equipment = { itemId?: string; libraryId?: string; nominalMl?: number; certifiedValue?: number; certifiedUnit?: string; name?: string };
 type Step = Record<string, unknown> & { kind: string };

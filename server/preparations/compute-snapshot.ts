@@ -1,12 +1,10 @@
 import { withPolicy } from '../../shared/contracts/engine-equipment';
 import type { LabPolicy } from '../../shared/contracts/library';
-import type { UsedItem, VersionDetail } from '../../shared/contracts/preparations';
+import type { Snapshot, UsedItem } from '../../shared/contracts/snapshot';
 import { ENGINE_VERSION, evaluatePlan, parsePlan, runMonteCarlo, validateAgainstGum } from '../../shared/uncertainty';
 
 /** Monte Carlo trials for a stored budget: enough for two significant digits of u in typical chains. */
 export const SERVER_TRIALS = 200_000;
-
-export type Snapshot = NonNullable<VersionDetail['snapshot']>;
 
 /**
  * Runs the engine on a resolved plan: GUM budget, Monte Carlo with the given seed, and the JCGM 101:2008 §8
@@ -18,16 +16,5 @@ export function computeSnapshot(input: { plan: Record<string, unknown>; items: U
   const monteCarlo = runMonteCarlo(plan, { seed: input.seed, trials: input.trials ?? SERVER_TRIALS });
   const validation = validateAgainstGum(budget, monteCarlo);
   const warnings = input.policy.minimumWeightRule ? budget.warnings : budget.warnings.filter((w) => !/minimum weight|USP/i.test(w));
-  return {
-    engineVersion: ENGINE_VERSION,
-    computedAt: input.computedAt,
-    seed: input.seed,
-    trials: monteCarlo.trials,
-    plan: plan as unknown as Record<string, unknown>,
-    items: input.items,
-    budget: budget as unknown as Record<string, unknown>,
-    monteCarlo: monteCarlo as unknown as Record<string, unknown>,
-    validation: validation as unknown as Record<string, unknown>,
-    warnings,
-  };
+  return { engineVersion: ENGINE_VERSION, computedAt: input.computedAt, seed: input.seed, trials: monteCarlo.trials, plan, items: input.items, budget, monteCarlo, validation, warnings };
 }

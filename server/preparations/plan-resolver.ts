@@ -1,6 +1,7 @@
 import { toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem, EquipmentKind } from '../../shared/contracts/library';
-import type { Override, UsedItem } from '../../shared/contracts/preparations';
+import type { Override } from '../../shared/contracts/preparations';
+import type { UsedItem } from '../../shared/contracts/snapshot';
 import { PlanError, type PlanPathSegment } from '../../shared/uncertainty';
 import { AppError } from '../lib/errors';
 

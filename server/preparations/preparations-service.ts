@@ -5,13 +5,13 @@ import { parsePlan, PlanError } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
 import type { Db } from '../db/connection';
-import { canonicalJson, sha256Hex } from '../lib/canonical-json';
+import { sha256Hex } from '../lib/canonical-json';
 import { AppError, conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
 import type { PolicyService } from '../policy/policy-service';
 import type { Computer } from '../compute/compute-pool';
-import type { Snapshot } from './compute-snapshot';
 import { resolvePlan } from './plan-resolver';
+import { readStoredSnapshot, storedSnapshotJson } from './stored-snapshot';
 import { EDITABLE_STATUSES, type PreparationRow, type PreparationsRepository, type ReviewRow, type VersionRow, type VersionWrite } from './preparations-repository';
 import type { Review } from '../../shared/contracts/reviews';
 import { approvedAsOf } from '../reviews/approved-record';
@@ -42,7 +42,7 @@ export function toVersionDetail(row: VersionRow, reviews: ReviewRow[]): VersionD
     overrides: JSON.parse(row.overrides_json),
     seed: Number(row.seed),
     problem: parse<PlanProblem>(row.problem_json),
-    snapshot: parse<Snapshot>(row.snapshot_json),
+    snapshot: row.snapshot_json === null ? null : readStoredSnapshot(row.snapshot_json),
     snapshotSha256: row.snapshot_sha256,
     approvedAs: approvedAsOf(row),
     recordSha256: row.record_sha256 ?? null,
@@ -107,8 +107,8 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     try {
       const resolved = resolvePlan(plan, library, overrides);
       const snapshot = await computer.snapshot(labId, { plan: resolved.plan, items: resolved.items, seed, computedAt: at, policy: await policy.read(labId) }, signal);
-      const budget = snapshot.budget as { statement: string; value: number; unit: string; relativeExpandedUncertainty: number };
-      const snapshotJson = canonicalJson(snapshot);
+      const { budget } = snapshot;
+      const snapshotJson = storedSnapshotJson(snapshot);
       const material = resolved.items.find((i) => i.kind.endsWith('-material'));
       return {
         ...base,
@@ -137,6 +137,13 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     }
   }
 
+  async function versionRow(labId: number, id: number, number: number): Promise<VersionRow> {
+    if (!(await preparations.find(labId, id))) throw notFound('The preparation');
+    const row = await preparations.version(id, number);
+    if (!row) throw notFound(`Version ${number}`);
+    return row;
+  }
+
   async function detail(labId: number, id: number): Promise<PreparationDetail> {
     const prep = await preparations.find(labId, id);
     if (!prep) throw notFound('The preparation');
@@ -162,10 +169,18 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
     },
 
     async version(labId: number, id: number, number: number): Promise<VersionDetail> {
-      if (!(await preparations.find(labId, id))) throw notFound('The preparation');
-      const row = await preparations.version(id, number);
-      if (!row) throw notFound(`Version ${number}`);
+      const row = await versionRow(labId, id, number);
       return toVersionDetail(row, await preparations.reviewsOf(row.id));
+    },
+
+    /**
+     * The snapshot download: the snapshot as stored, not decoded, so that its canonical JSON is the very text its
+     * SHA-256 covers (older snapshots keep their null for ∞), with the hashes, frozen fields and reviews.
+     */
+    async snapshotDownload(labId: number, id: number, number: number) {
+      const row = await versionRow(labId, id, number);
+      const snapshot: unknown = row.snapshot_json === null ? null : JSON.parse(row.snapshot_json);
+      return { snapshot, snapshotSha256: row.snapshot_sha256, approvedAs: approvedAsOf(row), recordSha256: row.record_sha256 ?? null, reviews: (await preparations.reviewsOf(row.id)).map(toReview) };
     },
 
     async create(labId: number, actor: SessionUser, input: PreparationWrite & { overrides: Override[] }, signal?: AbortSignal): Promise<PreparationDetail> {

@@ -45,8 +45,7 @@ export function reviewRouter(deps: { reviews: ReviewService; preparations: Prepa
 
   router.get(`${base}/snapshot.json`, authorize.lab('member'), validate({ params: versionParams }), async (req, res) => {
     const { params } = valid(req, { params: versionParams });
-    const version = await preparations.version(lab(req), params.preparationId, params.number);
-    res.attachment(`dilutrace-preparation-${params.preparationId}-v${params.number}-snapshot.json`).json({ snapshot: version.snapshot, snapshotSha256: version.snapshotSha256, approvedAs: version.approvedAs, recordSha256: version.recordSha256, reviews: version.reviews });
+    res.attachment(`dilutrace-preparation-${params.preparationId}-v${params.number}-snapshot.json`).json(await preparations.snapshotDownload(lab(req), params.preparationId, params.number));
   });
 
   router.get('/review-queue', authorize.lab(['qa']), async (req, res) => {

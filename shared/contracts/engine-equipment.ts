@@ -92,7 +92,7 @@ export function policySettings(policy: LabPolicy): Pick<PlanInput['settings'], '
 }
 
 /** The plan with the lab policy's settings in force; client (live budget) and server (stored budget) both apply it. */
-export function withPolicy(plan: Record<string, unknown>, policy: LabPolicy): Record<string, unknown> {
-  const settings = typeof plan.settings === 'object' && plan.settings !== null ? (plan.settings as Record<string, unknown>) : {};
+export function withPolicy<Plan extends { settings?: unknown }>(plan: Plan, policy: LabPolicy): Plan {
+  const settings = typeof plan.settings === 'object' && plan.settings !== null ? plan.settings : {};
   return { ...plan, settings: { ...settings, ...policySettings(policy) } };
 }

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { MAXIMUM_FORMULA_LENGTH, MAXIMUM_MONTE_CARLO_TRIALS } from '../uncertainty/plan-limits';
 import { concentrationUnitNames } from '../uncertainty/units';
 import { approvedAsSchema, reviewSchema } from './reviews';
+import { snapshotSchema } from './snapshot';
 
 /**
  * Preparations and their versions. The plan is the engine's plan document (shared/uncertainty
@@ -43,20 +44,6 @@ export const preparationListQuerySchema = z.object({
   to: z.iso.date({ message: 'Give the date as YYYY-MM-DD.' }).optional(),
   q: z.string().trim().max(200).optional(),
 });
-
-/** One library item as a computed version used it. */
-export const usedItemSchema = z.object({
-  libraryId: z.string(),
-  code: z.string(),
-  kind: z.string(),
-  revisionId: z.string(),
-  revisionNumber: z.number().int(),
-  certificateReference: z.string(),
-  flags: z.array(z.string()),
-  override: z.string().nullable(),
-  hazardNotes: z.string(),
-});
-export type UsedItem = z.infer<typeof usedItemSchema>;
 
 /** A mass actually weighed at the bench for one step (the planned value stays in the record). */
 export const readingSchema = z.object({
@@ -129,21 +116,8 @@ export const versionDetailSchema = versionSummarySchema.extend({
   overrides: z.array(overrideSchema),
   seed: z.number().int(),
   problem: planProblemSchema.nullable(),
-  snapshot: z
-    .object({
-      engineVersion: z.string(),
-      computedAt: z.string(),
-      seed: z.number().int(),
-      trials: z.number().int(),
-      /** The plan exactly as computed, with the library data inline. */
-      plan: z.record(z.string(), z.unknown()),
-      items: z.array(usedItemSchema),
-      budget: z.record(z.string(), z.unknown()),
-      monteCarlo: z.record(z.string(), z.unknown()),
-      validation: z.record(z.string(), z.unknown()),
-      warnings: z.array(z.string()),
-    })
-    .nullable(),
+  /** Decoded from the stored JSON on the server and from the response on the client (see snapshot.ts). */
+  snapshot: snapshotSchema.nullable(),
   snapshotSha256: z.string().nullable(),
   /** Approved versions: the title, analyte, preparation name and lab name frozen at approval (null before they were stored). */
   approvedAs: approvedAsSchema.nullable().default(null),

@@ -1,3 +1,4 @@
+import { truncateDegreesOfFreedom } from './effective-degrees';
 import { regularizedIncompleteBeta, regularizedLowerGamma } from './special-functions';
 
 /** The coverage probability of ±2σ of a normal distribution, 2Φ(2) − 1, which the GUM writes as 95.45 %. */
@@ -52,12 +53,11 @@ export function studentTQuantile(probability: number, degreesOfFreedom: number):
 /**
  * Coverage factor k = t_p(ν) for a two-sided coverage probability p (JCGM 100:2008 G.3, G.4):
  * the (1 + p)/2 quantile of Student's t with ν degrees of freedom, ν truncated to the next
- * lower integer (JCGM 100:2008 G.4.1, note) and at least 1; ν = ∞ gives the normal quantile.
+ * lower integer (JCGM 100:2008 G.4.1, note; see truncateDegreesOfFreedom) and at least 1; ν = ∞ gives the normal quantile.
  * @example coverageFactor(twoSigmaProbability, 10) // 2.28 (JCGM 100:2008 Table G.2)
  */
 export function coverageFactor(coverageProbability: number, effectiveDegreesOfFreedom: number): number {
-  const degrees = effectiveDegreesOfFreedom === Infinity ? Infinity : Math.max(1, Math.floor(effectiveDegreesOfFreedom));
-  return studentTQuantile((1 + coverageProbability) / 2, degrees);
+  return studentTQuantile((1 + coverageProbability) / 2, truncateDegreesOfFreedom(effectiveDegreesOfFreedom));
 }
 
 /** Two-sided coverage probability of ±k for a normal distribution, 2Φ(k) − 1 (used when the plan fixes k). */

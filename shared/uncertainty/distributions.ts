@@ -17,6 +17,9 @@ export type Distribution =
   | { shape: 'arcsine'; halfWidth: number }
   | { shape: 'studentT'; standardDeviation: number; observations: number; meanOfReadings: boolean };
 
+/** Every distribution shape, as `Distribution['shape']` lists them. */
+export const DISTRIBUTION_SHAPES = ['normal', 'rectangular', 'triangular', 'arcsine', 'studentT'] as const satisfies readonly Distribution['shape'][];
+
 /**
  * Standard uncertainty of a distribution.
  *

@@ -33,6 +33,7 @@ export { standardUncertainty, degreesOfFreedom, type Distribution } from './dist
 export { DualNumber } from './dual-number';
 export { MAXIMUM_COVERAGE_FACTOR, coverageFactor, studentTQuantile, studentTCumulative, normalCumulative, twoSigmaProbability } from './coverage-factor';
 export type { CoverageSetting } from './coverage-setting';
+export { formatDegreesOfFreedom } from './effective-degrees';
 export { roundToUncertainty, formatResultStatement, type RoundedResult } from './result-rounding';
 export { parseFormula, molarMass, type Composition, type MolarMass } from './chemical-formula';
 export { standardAtomicWeights, atomicWeightSource, parseAtomicWeightTable, type AtomicWeight, type AtomicWeightTable } from './atomic-weights';

@@ -1,21 +1,23 @@
 import type { Distribution } from './distributions';
 
 /** What physical effect a source stands for; budgets are also summed per category. */
-export type SourceCategory =
-  | 'balanceRepeatability'
-  | 'balanceReadability'
-  | 'balanceLinearity'
-  | 'balanceSensitivity'
-  | 'volumetricTolerance'
-  | 'fillRepeatability'
-  | 'pipetteSystematicError'
-  | 'pipetteRandomError'
-  | 'temperature'
-  | 'purity'
-  | 'certifiedValue'
-  | 'atomicWeight'
-  | 'density'
-  | 'userDefined';
+export const SOURCE_CATEGORIES = [
+  'balanceRepeatability',
+  'balanceReadability',
+  'balanceLinearity',
+  'balanceSensitivity',
+  'volumetricTolerance',
+  'fillRepeatability',
+  'pipetteSystematicError',
+  'pipetteRandomError',
+  'temperature',
+  'purity',
+  'certifiedValue',
+  'atomicWeight',
+  'density',
+  'userDefined',
+] as const;
+export type SourceCategory = (typeof SOURCE_CATEGORIES)[number];
 
 /**
  * One independent elementary input of the measurement model.

@@ -3,7 +3,6 @@ import { useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
-import type { BudgetResult, PlanInput } from '../../../../shared/uncertainty';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
@@ -95,7 +94,7 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
     const libraryById = new Map(library.map((item) => [String(item.id), item]));
     return { initialDraft: fromServer, savedKey: JSON.stringify(writeOf(fromServer, libraryById).write) };
   });
-  const stored = !editable && version.snapshot ? { budget: version.snapshot.budget as unknown as BudgetResult, plan: version.snapshot.plan as unknown as PlanInput } : null;
+  const stored = !editable && version.snapshot ? { budget: version.snapshot.budget, plan: version.snapshot.plan } : null;
 
   const failure = duplicate.error ?? newVersion.error;
   const note = failure ? (

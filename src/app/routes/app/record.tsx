@@ -26,7 +26,6 @@ import { ReviewTrail } from '../../../features/records/components/review-trail';
 import { SnapshotHash } from '../../../features/records/components/snapshot-hash';
 import { StartNewVersionButton } from '../../../features/records/components/start-new-version-button';
 import { VersionSwitcher } from '../../../features/records/components/version-switcher';
-import { readSnapshot } from '../../../features/records/utils/snapshot-view';
 import { stepNamer } from '../../../features/records/utils/step-names';
 import { ApproveButton } from '../../../features/reviews/components/approve-button';
 import { ReturnButton } from '../../../features/reviews/components/return-button';
@@ -97,7 +96,7 @@ type RecordPageProps = { labId: number; preparationId: number; versionNumber: nu
 function RecordPage({ labId, preparationId, versionNumber, userId, roles }: RecordPageProps) {
   const preparation = useRecord(labId, preparationId);
   const version = useRecordVersion(labId, preparationId, versionNumber);
-  const snapshot = readSnapshot(version.snapshot);
+  const snapshot = version.snapshot;
   const stepName = snapshot ? stepNamer(snapshot.plan, snapshot.items) : (key: string) => key;
   const reference = { labId, preparationId, versionNumber };
 

@@ -28,7 +28,7 @@ const materialWords = (figures: Column['figures'], code: string | null) => {
 export function CompareView({ preparations, hrefOf }: CompareViewProps) {
   const columns: Column[] = preparations.map((detail) => {
     const snapshot = detail.current.snapshot;
-    const budget = snapshot ? (snapshot.budget as unknown as BudgetResult) : null;
+    const budget = snapshot?.budget ?? null;
     const plan = snapshot?.plan ?? detail.current.plan;
     return { detail, budget, figures: snapshot ? planFigures(plan) : null, steps: (Array.isArray(plan.steps) ? plan.steps : []) as { kind: string }[] };
   });

@@ -1,6 +1,6 @@
 import { memo } from 'react';
-import type { BudgetResult } from '../../../../shared/uncertainty';
-import { formatDegreesOfFreedom, formatPercent } from '../utils/format-number';
+import { formatDegreesOfFreedom, type BudgetResult } from '../../../../shared/uncertainty';
+import { formatPercent } from '../utils/format-number';
 
 /** The result as the GUM asks for it (JCGM 100:2008 7.2.3): value, U, k, coverage probability and ν_eff. */
 export const ResultStatement = memo(function ResultStatement({ budget }: { budget: BudgetResult }) {

@@ -72,7 +72,7 @@ export function fieldMessage(message: string): string {
 export function evaluateDraft(draft: PlanDraft, library: Map<string, EquipmentItem>, policy: LabPolicy): DraftEvaluation {
   const problem = checkDraft(draft, library);
   if (problem) return { ok: false, budget: null, plan: null, problem };
-  const plan = withPolicy(enginePlan(draft, library) as unknown as Record<string, unknown>, policy) as unknown as PlanInput;
+  const plan = withPolicy(enginePlan(draft, library), policy);
   try {
     const budget = evaluatePlan(plan);
     const warnings = policy.minimumWeightRule ? budget.warnings : budget.warnings.filter((warning) => !/minimum weight|USP/i.test(warning));

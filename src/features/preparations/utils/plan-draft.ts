@@ -116,7 +116,7 @@ function buildPlan(draft: PlanDraft, library: Map<string, EquipmentItem>, withTi
   // Each item inline from the library's current revision, with its libraryId and revisionId (an unknown id stays a bare reference).
   const writeEquipment = (id: string) => {
     const item = library.get(id);
-    return item ? (toEngineEquipment(item) as unknown as Record<string, unknown>) : { libraryId: id };
+    return item ? toEngineEquipment(item) : { libraryId: id };
   };
   const material = draft.materialId ? writeEquipment(draft.materialId) : undefined;
   const steps = draft.steps.map((step) => {
@@ -155,7 +155,7 @@ export function enginePlan(draft: PlanDraft, library: Map<string, EquipmentItem>
 
 /** The plan to save, with its title; the server resolves every libraryId to the current revision again before computing. */
 export function storedPlan(draft: PlanDraft, library: Map<string, EquipmentItem>): Record<string, unknown> {
-  return buildPlan(draft, library, true) as unknown as Record<string, unknown>;
+  return buildPlan(draft, library, true);
 }
 
 /** The override reasons worth sending: items the plan uses, with a reason the server accepts (≥ 3 characters). */

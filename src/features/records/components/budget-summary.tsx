@@ -1,14 +1,14 @@
 import { createColumnHelper } from '@tanstack/react-table';
-import { formatDegreesOfFreedom, formatPercentOfVariance, formatSignificant } from '../utils/format-figures';
-import type { BudgetView } from '../utils/snapshot-view';
+import { formatDegreesOfFreedom, type BudgetResult } from '../../../../shared/uncertainty';
+import { formatPercentOfVariance, formatSignificant } from '../utils/format-figures';
 import { RecordTable, type RecordTableFeatures } from './record-table';
 
-type StepRow = BudgetView['byStep'][number];
+type StepRow = BudgetResult['byStep'][number];
 const column = createColumnHelper<RecordTableFeatures, StepRow>();
 const NUMERIC = new Set(['contribution', 'indexPercent']);
 
 /** Contributions by step with each one's share of the combined variance; the full budget is in the workspace and the PDF. */
-export function BudgetSummary({ budget, stepName }: { budget: BudgetView; stepName: (key: string) => string }) {
+export function BudgetSummary({ budget, stepName }: { budget: BudgetResult; stepName: (key: string) => string }) {
   const columns = column.columns([
     column.accessor('key', { header: 'Step', cell: (info) => <span className="font-semibold">{stepName(info.getValue())}</span> }),
     column.accessor('contribution', {

@@ -1,6 +1,6 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { equipmentKindSchema, KIND_LABELS } from '../../../../shared/contracts/library';
-import type { UsedItem } from '../../../../shared/contracts/preparations';
+import type { UsedItem } from '../../../../shared/contracts/snapshot';
 import { RecordTable, type RecordTableFeatures } from './record-table';
 
 const column = createColumnHelper<RecordTableFeatures, UsedItem>();

@@ -1,4 +1,4 @@
-import type { UsedItem } from '../../../../shared/contracts/preparations';
+import type { UsedItem } from '../../../../shared/contracts/snapshot';
 
 /** The hazard notes QA set on the materials used, with the standing advice; nothing when none has notes. */
 export function HazardCautions({ items }: { items: UsedItem[] }) {

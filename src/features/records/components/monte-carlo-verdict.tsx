@@ -1,9 +1,9 @@
+import type { GumValidation, MonteCarloResult } from '../../../../shared/uncertainty';
 import { Badge } from '../../../components/ui/badge';
 import { formatSignificant } from '../utils/format-figures';
-import type { MonteCarloView, ValidationView } from '../utils/snapshot-view';
 import { validationWords } from '../utils/validation-words';
 
-type MonteCarloVerdictProps = { monteCarlo: MonteCarloView | null; validation: ValidationView | null; unit: string };
+type MonteCarloVerdictProps = { monteCarlo: MonteCarloResult; validation: GumValidation; unit: string };
 
 /** Whether Monte Carlo (JCGM 101:2008) confirms the GUM interval, in words, with the run that decided it. */
 export function MonteCarloVerdict({ monteCarlo, validation, unit }: MonteCarloVerdictProps) {
@@ -13,19 +13,17 @@ export function MonteCarloVerdict({ monteCarlo, validation, unit }: MonteCarloVe
         <h2 id="monte-carlo-heading" className="text-lg font-bold">
           Monte Carlo check
         </h2>
-        {validation ? <Badge tone={validation.passed ? 'ok' : 'caution'}>{validation.passed ? 'GUM result confirmed' : 'GUM result not confirmed'}</Badge> : null}
+        <Badge tone={validation.passed ? 'ok' : 'caution'}>{validation.passed ? 'GUM result confirmed' : 'GUM result not confirmed'}</Badge>
       </div>
-      {validation ? <p>{validationWords(validation, unit)}</p> : <p className="text-muted">This record holds no Monte Carlo validation.</p>}
-      {monteCarlo ? (
-        <p className="mt-2 text-sm text-muted">
-          <span className="numeric">{monteCarlo.trials.toLocaleString('en-GB')}</span> trials, seed <span className="numeric">{monteCarlo.seed}</span>; symmetric{' '}
-          {(monteCarlo.coverageProbability * 100).toFixed(2)} % interval{' '}
-          <span className="numeric whitespace-nowrap">
-            [{formatSignificant(monteCarlo.symmetricInterval.low, 6)}, {formatSignificant(monteCarlo.symmetricInterval.high, 6)}] {unit}
-          </span>
-          .
-        </p>
-      ) : null}
+      <p>{validationWords(validation, unit)}</p>
+      <p className="mt-2 text-sm text-muted">
+        <span className="numeric">{monteCarlo.trials.toLocaleString('en-GB')}</span> trials, seed <span className="numeric">{monteCarlo.seed}</span>; symmetric{' '}
+        {(monteCarlo.coverageProbability * 100).toFixed(2)} % interval{' '}
+        <span className="numeric whitespace-nowrap">
+          [{formatSignificant(monteCarlo.symmetricInterval.low, 6)}, {formatSignificant(monteCarlo.symmetricInterval.high, 6)}] {unit}
+        </span>
+        .
+      </p>
     </section>
   );
 }

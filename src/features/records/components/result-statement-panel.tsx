@@ -1,8 +1,8 @@
-import { formatDegreesOfFreedom, formatSignificant } from '../utils/format-figures';
-import type { BudgetView } from '../utils/snapshot-view';
+import { formatDegreesOfFreedom, type BudgetResult } from '../../../../shared/uncertainty';
+import { formatSignificant } from '../utils/format-figures';
 
 /** The result as the GUM asks for it (JCGM 100:2008 7.2.3), prominently, with the figures it is made of. */
-export function ResultStatementPanel({ budget }: { budget: BudgetView }) {
+export function ResultStatementPanel({ budget }: { budget: BudgetResult }) {
   const facts: [string, string][] = [
     [budget.measurand, `${budget.rounded.valueText} ${budget.unit}`],
     ['Expanded uncertainty U', `${budget.rounded.uncertaintyText} ${budget.unit}`],

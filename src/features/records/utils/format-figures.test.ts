@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatDegreesOfFreedom, formatPercentOfVariance, formatSignificant, shortHash } from './format-figures';
+import { formatPercentOfVariance, formatSignificant, shortHash } from './format-figures';
 
 describe('record figures', () => {
   it('keeps two significant digits by default', () => {
@@ -7,11 +7,6 @@ describe('record figures', () => {
     expect(formatSignificant(3.456)).toBe('3.5');
     expect(formatSignificant(0)).toBe('0');
     expect(formatSignificant(1.23e-7)).toBe('1.2 × 10^-7');
-  });
-
-  it('says ∞ for degrees of freedom stored as null (JSON has no Infinity) and floors the rest', () => {
-    expect(formatDegreesOfFreedom(null)).toBe('∞');
-    expect(formatDegreesOfFreedom(41.9)).toBe('41');
   });
 
   it('writes shares of the variance with one decimal, and tiny shares as < 0.1 %', () => {

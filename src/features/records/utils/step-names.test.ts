@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { UsedItem } from '../../../../shared/contracts/preparations';
+import type { UsedItem } from '../../../../shared/contracts/snapshot';
 import { stepNamer } from './step-names';
 
 const used = (libraryId: string, code: string): UsedItem => ({

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { UsedItem } from '../../../../shared/contracts/preparations';
+import type { UsedItem } from '../../../../shared/contracts/snapshot';
 
 /** What each step kind of the plan format does, in the record's words. */
 const STEP_WORDS: Record<string, string> = {

@@ -10,6 +10,7 @@ import { conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { Mailer } from '../mail/mailer';
 import { decisionMessage, submittedMessage } from '../mail/messages';
 import type { PreparationsRepository, VersionRow } from '../preparations/preparations-repository';
+import type { ReviewsRepository } from './reviews-repository';
 import { approvedAsOf, approvedRecordSha256, toApprovedAsColumns, type ApprovedAs } from './approved-record';
 
 /** The plan document's own title, if it has one. */
@@ -25,6 +26,7 @@ function planTitle(planJson: string): string | null {
 export function reviewService(deps: {
   db: Db;
   preparations: PreparationsRepository;
+  reviews: ReviewsRepository;
   users: UsersRepository;
   labs: LabsRepository;
   audit: AuditRepository;
@@ -33,7 +35,7 @@ export function reviewService(deps: {
   publicUrl: (path: string) => string;
   log: (message: string, error?: unknown) => void;
 }) {
-  const { db, preparations, users, labs, audit, mailer, now } = deps;
+  const { db, preparations, reviews, users, labs, audit, mailer, now } = deps;
 
   async function load(labId: number, preparationId: number, number: number) {
     const prep = await preparations.find(labId, preparationId);
@@ -139,13 +141,7 @@ export function reviewService(deps: {
     },
 
     async queue(labId: number): Promise<ReviewQueueItem[]> {
-      const rows: (VersionRow & { title: string; submitted_at: string; submitted_by: string; comment: string })[] = await db('preparation_versions as v')
-        .join('preparations as p', 'p.id', 'v.preparation_id')
-        .join('version_reviews as r', (j) => j.on('r.version_id', 'v.id').andOnVal('r.action', '=', 'submitted'))
-        .join('users as u', 'u.id', 'r.actor_user_id')
-        .where({ 'p.lab_id': labId, 'v.status': 'submitted' })
-        .select('v.*', 'p.title', 'r.at as submitted_at', 'u.name as submitted_by', 'r.comment')
-        .orderBy('r.at', 'asc');
+      const rows = await reviews.submissions(labId);
       const latest = new Map<number, (typeof rows)[number]>();
       for (const row of rows) latest.set(row.id, row);
       const t = now().getTime();
@@ -163,29 +159,7 @@ export function reviewService(deps: {
 
     /** Approved versions, newest first; title and analyte are the frozen ones where the version has them. */
     async approvedRecords(labId: number, q?: string): Promise<ApprovedRecord[]> {
-      const title = db.raw('coalesce(v.approved_title, p.title)');
-      const analyte = db.raw('coalesce(v.approved_analyte, p.analyte)');
-      const query = db('preparation_versions as v')
-        .join('preparations as p', 'p.id', 'v.preparation_id')
-        .join('users as a', 'a.id', 'p.created_by')
-        .join('version_reviews as r', (j) => j.on('r.version_id', 'v.id').andOnVal('r.action', '=', 'approved'))
-        .join('users as u', 'u.id', 'r.actor_user_id')
-        .where({ 'p.lab_id': labId, 'v.status': 'approved' })
-        .select('p.id as preparation_id', { title }, { analyte }, 'v.number', 'a.name as analyst', 'u.name as approved_by', 'r.at as approved_at', 'v.result_statement', 'v.snapshot_sha256')
-        .orderBy('r.at', 'desc')
-        .limit(500);
-      // lower() … like lower(?) and whereILike are case-blind on SQLite and PostgreSQL alike.
-      if (q) {
-        const pattern = `%${q}%`;
-        query.andWhere((w) =>
-          w
-            .whereRaw('lower(coalesce(v.approved_title, p.title)) like lower(?)', [pattern])
-            .orWhereRaw('lower(coalesce(v.approved_analyte, p.analyte)) like lower(?)', [pattern])
-            .orWhereILike('a.name', pattern)
-            .orWhereILike('p.material_code', pattern),
-        );
-      }
-      const rows: { preparation_id: number; title: string; analyte: string; number: number; analyst: string; approved_by: string; approved_at: string; result_statement: string | null; snapshot_sha256: string }[] = await query;
+      const rows = await reviews.approved(labId, q);
       return rows.map((r) => ({
         preparationId: r.preparation_id,
         title: r.title,

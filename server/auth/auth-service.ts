@@ -11,6 +11,7 @@ import type { DatabaseSessionStore } from './session-store';
 import { hashToken, newToken } from './tokens';
 import type { UsersRepository } from './users-repository';
 import type { SessionUser } from './authorize';
+import { isoAfter } from '../lib/clock';
 
 const RESET_LIFETIME_MS = 60 * 60 * 1000;
 
@@ -84,7 +85,7 @@ export function authService(deps: {
         user_id: user.id,
         token_hash: tokenHash,
         created_at: created.toISOString(),
-        expires_at: new Date(created.getTime() + RESET_LIFETIME_MS).toISOString(),
+        expires_at: isoAfter(created, RESET_LIFETIME_MS),
       });
       // Account mail is filed by recipient only: no lab's delivery log lists it (lab id null).
       await audit.record({ labId: null, actorUserId: user.id, action: 'auth.password_reset_requested', entityType: 'user', entityId: user.id, summary: `Password reset requested for ${user.email}` });

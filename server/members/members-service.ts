@@ -13,6 +13,7 @@ import { toFieldIssues } from '../lib/validate';
 import type { Mailer } from '../mail/mailer';
 import { invitationMessage } from '../mail/messages';
 import { invitationsRepository, type InvitationRow } from './invitations-repository';
+import { isoAfter } from '../lib/clock';
 
 const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
@@ -88,7 +89,7 @@ export function membersService(deps: {
       }
       const { token, tokenHash } = newToken();
       const created = now();
-      const expiresAt = new Date(created.getTime() + INVITATION_LIFETIME_MS).toISOString();
+      const expiresAt = isoAfter(created, INVITATION_LIFETIME_MS);
       const id = await invitations.insert({
         lab_id: labId,
         email: input.email,

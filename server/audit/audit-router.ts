@@ -8,7 +8,7 @@ import type { AuditService } from './audit-service';
 export function auditRouter(deps: { audit: AuditService; authorize: Authorize }) {
   const { audit } = deps;
   const router = Router({ mergeParams: true });
-  const readers = deps.authorize.lab(['auditor', 'qa', 'admin']);
+  const readers = deps.authorize.lab('readAuditTrail');
 
   router.get('/audit-events', readers, validate({ query: auditQuerySchema }), async (req, res) => {
     const { query } = valid(req, { query: auditQuerySchema });

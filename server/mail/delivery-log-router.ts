@@ -8,7 +8,7 @@ import type { DeliveryLogService } from './delivery-log-service';
  */
 export function deliveryLogRouter(deps: { deliveryLog: DeliveryLogService; authorize: Authorize }) {
   const router = Router({ mergeParams: true });
-  router.get('/delivery-log', deps.authorize.lab(['admin']), async (req, res) => {
+  router.get('/delivery-log', deps.authorize.lab('readDeliveryLog'), async (req, res) => {
     res.json(await deps.deliveryLog.entries((req.lab as LabContext).id));
   });
   return router;

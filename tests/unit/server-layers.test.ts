@@ -36,6 +36,11 @@ describe('server layers', () => {
     expect(leaks).toEqual([]);
   });
 
+  it('routers name a permission of shared/contracts/permissions.ts, never an inline list of roles', () => {
+    const inline = routers.filter((file) => /authorize\.lab\(\s*\[/.test(readFileSync(file, 'utf8'))).map((file) => relative(root, file));
+    expect(inline).toEqual([]);
+  });
+
   it('services build no SQL of their own (queries live in repositories)', () => {
     const queries = services.filter((file) => /\b(db|trx)\s*\(|\.raw\s*\(/.test(readFileSync(file, 'utf8'))).map((file) => relative(root, file));
     expect(queries).toEqual([]);

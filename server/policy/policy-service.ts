@@ -1,8 +1,8 @@
 import { DEFAULT_LAB_POLICY, labPolicySchema, type LabPolicy } from '../../shared/contracts/library';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
-import type { Db } from '../db/connection';
 import type { PolicyRepository } from './policy-repository';
+import type { Transact } from '../db/transaction';
 
 export interface StoredPolicy extends LabPolicy {
   updatedAt: string | null;
@@ -10,8 +10,8 @@ export interface StoredPolicy extends LabPolicy {
 }
 
 /** Each lab's policy for budgets; a lab that never set one gets DEFAULT_LAB_POLICY. */
-export function policyService(deps: { db: Db; policies: PolicyRepository; audit: AuditRepository; now: () => Date }) {
-  const { db, policies, audit, now } = deps;
+export function policyService(deps: { transact: Transact; policies: PolicyRepository; audit: AuditRepository; now: () => Date }) {
+  const { transact, policies, audit, now } = deps;
 
   async function read(labId: number): Promise<StoredPolicy> {
     const row = await policies.find(labId);
@@ -24,7 +24,7 @@ export function policyService(deps: { db: Db; policies: PolicyRepository; audit:
     async update(labId: number, actor: SessionUser, policy: LabPolicy): Promise<StoredPolicy> {
       const before = await read(labId);
       const at = now().toISOString();
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         await policies.save({ labId, policyJson: JSON.stringify(policy), updatedAt: at, updatedBy: actor.id }, trx);
         const { updatedAt: _a, updatedBy: _b, ...previous } = before;
         await audit.record(

@@ -3,7 +3,6 @@ import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
 import { verifyPassword } from '../auth/password';
 import type { UsersRepository } from '../auth/users-repository';
-import type { Db } from '../db/connection';
 import type { LabsRepository } from '../labs/labs-repository';
 import { sha256Hex } from '../lib/canonical-json';
 import { conflict, forbidden, notFound, validationError } from '../lib/errors';
@@ -12,6 +11,7 @@ import { decisionMessage, submittedMessage } from '../mail/messages';
 import type { PreparationsRepository, VersionRow } from '../preparations/preparations-repository';
 import type { ReviewsRepository } from './reviews-repository';
 import { approvedAsOf, approvedRecordSha256, toApprovedAsColumns, type ApprovedAs } from './approved-record';
+import type { Transact } from '../db/transaction';
 
 /** The plan document's own title, if it has one. */
 function planTitle(planJson: string): string | null {
@@ -24,7 +24,7 @@ function planTitle(planJson: string): string | null {
  * (signed with the reviewer's password) or returned with comments (QA, never the submitter).
  */
 export function reviewService(deps: {
-  db: Db;
+  transact: Transact;
   preparations: PreparationsRepository;
   reviews: ReviewsRepository;
   users: UsersRepository;
@@ -35,7 +35,7 @@ export function reviewService(deps: {
   publicUrl: (path: string) => string;
   log: (message: string, error?: unknown) => void;
 }) {
-  const { db, preparations, reviews, users, labs, audit, mailer, now } = deps;
+  const { transact, preparations, reviews, users, labs, audit, mailer, now } = deps;
 
   async function load(labId: number, preparationId: number, number: number) {
     const prep = await preparations.find(labId, preparationId);
@@ -63,7 +63,7 @@ export function reviewService(deps: {
       if (!['draft', 'prepared', 'returned'].includes(version.status)) throw conflict('not_draft', `Version ${number} is ${version.status}; only a draft, prepared or returned version can be submitted.`);
       if (!version.snapshot_json) throw validationError('This version has no computed budget yet: fix the problem shown in the plan, then submit.');
       const at = now().toISOString();
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         if ((await preparations.setStatus(version.id, version.status, 'submitted', trx)) === 0) throw conflict('not_draft', 'The version changed meanwhile; reload it.');
         await preparations.insertReview({ version_id: version.id, action: 'submitted', actor_user_id: actor.id, at, comment, snapshot_sha256: version.snapshot_sha256 }, trx);
         await audit.record({ labId, actorUserId: actor.id, action: 'preparation.submitted', entityType: 'preparation', entityId: preparationId, summary: `${actor.name} submitted version ${number} of “${prep.title}”`, before: { status: version.status }, after: { status: 'submitted' } }, trx);
@@ -107,7 +107,7 @@ export function reviewService(deps: {
           ? { title: prep.title, analyte: prep.analyte, preparationName: planTitle(version.plan_json) ?? prep.title, labName: (await labs.findById(labId))?.name ?? '' }
           : null;
       const recordSha256 = approvedAs && version.snapshot_sha256 ? approvedRecordSha256(version.snapshot_sha256, approvedAs) : null;
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         const changed =
           approvedAs && recordSha256
             ? await preparations.approve(version.id, { ...toApprovedAsColumns(approvedAs), record_sha256: recordSha256 }, trx)

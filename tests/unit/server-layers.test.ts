@@ -41,9 +41,13 @@ describe('server layers', () => {
     expect(inline).toEqual([]);
   });
 
-  it('services build no SQL of their own (queries live in repositories)', () => {
-    const queries = services.filter((file) => /\b(db|trx)\s*\(|\.raw\s*\(/.test(readFileSync(file, 'utf8'))).map((file) => relative(root, file));
+  it('services build no SQL of their own: queries live in repositories, transactions come through Transact', () => {
+    const queries = services.filter((file) => /\bdb\s*[.(]|\btrx\s*\(|\.raw\s*\(/.test(readFileSync(file, 'utf8'))).map((file) => relative(root, file));
     expect(queries).toEqual([]);
+    const handles = services.flatMap((file) =>
+      [...readFileSync(file, 'utf8').matchAll(/^import (?!type )[^;]*from '([^']*(?:knex|db\/connection))';/gm)].map((m) => `${relative(root, file)} imports ${m[1]}`),
+    );
+    expect(handles).toEqual([]);
   });
 
   it('services read the time from the injected clock, never new Date()', () => {

@@ -43,7 +43,6 @@ export function auditRepository(db: Db, now: () => Date) {
       if (trx.isTransaction) await appendAuditEvent(trx as Knex.Transaction, row);
       else await trx.transaction((inner) => appendAuditEvent(inner, row));
     },
-    listForLab: (labId: number, limit = 200) => db('audit_events').where({ lab_id: labId }).orderBy('id', 'desc').limit(limit),
   };
 }
 export type AuditRepository = ReturnType<typeof auditRepository>;

@@ -1,30 +1,25 @@
 import { Router } from 'express';
 import { auditQuerySchema } from '../../shared/contracts/audit';
 import type { Authorize, LabContext } from '../auth/authorize';
-import type { Db } from '../db/connection';
-import { toSafeCsv } from '../lib/csv-cells';
 import { valid, validate } from '../lib/validate';
-import { auditQuery } from './audit-query';
+import type { AuditService } from './audit-service';
 
 /** The audit trail for auditors, QA and the lab's administrator: filtered pages and a CSV export. */
-export function auditRouter(deps: { db: Db; authorize: Authorize }) {
-  const trail = auditQuery(deps.db);
+export function auditRouter(deps: { audit: AuditService; authorize: Authorize }) {
+  const { audit } = deps;
   const router = Router({ mergeParams: true });
-  const readers = deps.authorize.lab(['auditor', 'qa', 'admin']);
+  const readers = deps.authorize.lab('readAuditTrail');
 
   router.get('/audit-events', readers, validate({ query: auditQuerySchema }), async (req, res) => {
     const { query } = valid(req, { query: auditQuerySchema });
-    res.json(await trail.page((req.lab as LabContext).id, query));
+    res.json(await audit.page((req.lab as LabContext).id, query));
   });
 
   router.get('/audit-events.csv', readers, validate({ query: auditQuerySchema }), async (req, res) => {
     const { query } = valid(req, { query: auditQuerySchema });
-    const events = await trail.all((req.lab as LabContext).id, query);
-    const csv = toSafeCsv([
-      ['id', 'time_utc', 'actor', 'action', 'entity_type', 'entity_id', 'summary', 'before', 'after'],
-      ...events.map((e) => [e.id, e.at, e.actor ?? '', e.action, e.entityType, e.entityId ?? '', e.summary, e.before == null ? '' : JSON.stringify(e.before), e.after == null ? '' : JSON.stringify(e.after)]),
-    ]);
-    res.attachment(`dilutrace-audit-${new Date().toISOString().slice(0, 10)}.csv`).type('text/csv').send(csv);
+    const { limit: _limit, offset: _offset, ...filters } = query;
+    res.attachment(audit.csvFileName()).type('text/csv');
+    await audit.writeCsv((req.lab as LabContext).id, filters, res);
   });
 
   return router;

@@ -1,30 +1,31 @@
 import type { Me } from '../../shared/contracts/auth';
 import type { Role } from '../../shared/contracts/roles';
 import type { AuditRepository } from '../audit/audit-repository';
-import type { Db } from '../db/connection';
 import { notFound, validationError } from '../lib/errors';
 import type { Mailer } from '../mail/mailer';
 import { passwordResetMessage } from '../mail/messages';
 import { DUMMY_HASH, hashPassword, needsRehash, verifyPassword } from './password';
-import { passwordResetsRepository } from './password-resets-repository';
+import type { PasswordResetsRepository } from './password-resets-repository';
 import type { DatabaseSessionStore } from './session-store';
 import { hashToken, newToken } from './tokens';
 import type { UsersRepository } from './users-repository';
 import type { SessionUser } from './authorize';
+import { isoAfter } from '../lib/clock';
+import type { Transact } from '../db/transaction';
 
 const RESET_LIFETIME_MS = 60 * 60 * 1000;
 
 export function authService(deps: {
-  db: Db;
+  transact: Transact;
   users: UsersRepository;
+  resets: PasswordResetsRepository;
   audit: AuditRepository;
   mailer: Mailer;
   sessions: DatabaseSessionStore;
   now: () => Date;
   publicUrl: (path: string) => string;
 }) {
-  const { db, users, audit, mailer, now } = deps;
-  const resets = passwordResetsRepository(db);
+  const { transact, users, resets, audit, mailer, now } = deps;
 
   return {
     /** Checks e-mail and password; an unknown e-mail costs the same time as a wrong password. */
@@ -84,7 +85,7 @@ export function authService(deps: {
         user_id: user.id,
         token_hash: tokenHash,
         created_at: created.toISOString(),
-        expires_at: new Date(created.getTime() + RESET_LIFETIME_MS).toISOString(),
+        expires_at: isoAfter(created, RESET_LIFETIME_MS),
       });
       // Account mail is filed by recipient only: no lab's delivery log lists it (lab id null).
       await audit.record({ labId: null, actorUserId: user.id, action: 'auth.password_reset_requested', entityType: 'user', entityId: user.id, summary: `Password reset requested for ${user.email}` });
@@ -101,7 +102,7 @@ export function authService(deps: {
       const user = await users.findById(reset.user_id);
       if (!user || !user.active) throw notFound('The account');
       const passwordHash = await hashPassword(password);
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         // Consumed by one conditional update: of simultaneous uses of one link, exactly one gets a row.
         if ((await resets.consume(reset.id, now().toISOString(), trx)) !== 1) {
           throw validationError('This reset link has expired or was already used. Ask for a new one.');

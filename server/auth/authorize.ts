@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express';
 import { idParam } from '../../shared/contracts/auth';
+import { can, type Permission } from '../../shared/contracts/permissions';
 import type { Role } from '../../shared/contracts/roles';
 import { forbidden, notFound, unauthenticated } from '../lib/errors';
 import type { LabsRepository } from '../labs/labs-repository';
@@ -33,8 +34,8 @@ declare global {
 /**
  * The one authorization check every protected route uses.
  * - `authorize.signedIn`: any signed-in, active user.
- * - `authorize.lab(roles)`: the route has `:labId`; the user must be a member of that lab and hold
- *   one of `roles` (or any role when `roles` is 'member'). A lab the user is not in answers 404,
+ * - `authorize.lab(permission)`: the route has `:labId`; the user must be a member of that lab and hold
+ *   a role that grants `permission` (shared/contracts/permissions.ts), or any role for 'member'. A lab the user is not in answers 404,
  *   so its existence is not revealed.
  * - `authorize.operator`: the instance operator, a flag on the account held outside every lab's roles.
  */
@@ -44,14 +45,14 @@ export function createAuthorize(labs: LabsRepository, users: UsersRepository) {
     next();
   };
   const lab =
-    (roles: readonly Role[] | 'member'): RequestHandler =>
+    (permission: Permission | 'member'): RequestHandler =>
     async (req, _res, next) => {
       if (!req.user) throw unauthenticated();
       const parsed = idParam.safeParse(req.params.labId);
       if (!parsed.success) throw notFound('The lab');
       const held = await labs.rolesOf(req.user.id, parsed.data);
       if (held.length === 0) throw notFound('The lab');
-      if (roles !== 'member' && !held.some((role) => roles.includes(role))) throw forbidden();
+      if (permission !== 'member' && !can(held, permission)) throw forbidden();
       req.lab = { id: parsed.data, roles: held };
       next();
     };

@@ -18,3 +18,4 @@ export function passwordResetsRepository(db: Db) {
       Number(await trx('password_resets').where({ id }).whereNull('used_at').where('expires_at', '>', at).update({ used_at: at })),
   };
 }
+export type PasswordResetsRepository = ReturnType<typeof passwordResetsRepository>;

@@ -1,6 +1,7 @@
 import { join, dirname } from 'node:path';
 import { loadEnv } from '../config/env';
 import { backupDatabase } from '../db/backup';
+import { systemClock } from '../lib/clock';
 
 /** `npm run backup [-- <file>]`: an online, consistent copy of the database (default data/backups/…). */
 const env = loadEnv();
@@ -8,7 +9,7 @@ if (env.DATABASE_URL) {
   console.error('DATABASE_URL is set: back up PostgreSQL with its own tools (pg_dump), and copy DILUTRACE_FILES/certificates too.');
   process.exit(2);
 }
-const stamp = new Date().toISOString().replace(/[:.]/g, '-');
+const stamp = systemClock.now().toISOString().replace(/[:.]/g, '-');
 const destination = process.argv[2] ?? join(dirname(env.DILUTRACE_DB), 'backups', `dilutrace-${stamp}.sqlite`);
 try {
   const { pages } = await backupDatabase(env.DILUTRACE_DB, destination);

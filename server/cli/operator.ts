@@ -3,7 +3,9 @@ import { DatabaseSessionStore } from '../auth/session-store';
 import { usersRepository } from '../auth/users-repository';
 import { databaseTarget, loadEnv } from '../config/env';
 import { openDatabase } from '../db/connection';
+import { systemClock } from '../lib/clock';
 import { AppError } from '../lib/errors';
+import { outboxRepository } from '../mail/outbox-repository';
 import { operatorService } from '../operator/operator-service';
 
 const USAGE = `Usage: npm run operator -- <command> <email>
@@ -21,7 +23,12 @@ if (!command || !email || !commands.includes(command)) {
 }
 const db = await openDatabase(databaseTarget(loadEnv()));
 try {
-  const operator = operatorService({ db, users: usersRepository(db), audit: auditRepository(db, () => new Date()), sessions: new DatabaseSessionStore(db, () => Date.now()) });
+  const operator = operatorService({
+    users: usersRepository(db),
+    outbox: outboxRepository(db),
+    audit: auditRepository(db, () => systemClock.now()),
+    sessions: new DatabaseSessionStore(db, () => Date.now()),
+  });
   const find = { email: email.toLowerCase() };
   const account =
     command === 'disable-account'

@@ -1,3 +1,5 @@
+import { pipeline } from 'node:stream/promises';
+import { stringify as stringifyStream } from 'csv-stringify';
 import { stringify } from 'csv-stringify/sync';
 
 /** A cell a spreadsheet would evaluate: OWASP's CSV-injection list (= + - @, tab, carriage return first). */
@@ -24,4 +26,19 @@ export function restoreCell(cell: string): string {
 /** Every CSV the app writes goes through here: each cell neutralised, then quoted as CSV needs. */
 export function toSafeCsv(rows: unknown[][]): string {
   return stringify(rows.map((row) => row.map(neutraliseCell)));
+}
+
+/**
+ * The streaming form of toSafeCsv: rows are neutralised one by one and csv-stringify's stream is
+ * piped straight into `out` (an HTTP response), so memory stays flat however many rows there are.
+ * Resolves when the last byte is written; rejects (and destroys `out`) if reading or writing fails.
+ */
+export async function writeSafeCsv(rows: AsyncIterable<unknown[]>, out: NodeJS.WritableStream): Promise<void> {
+  await pipeline(
+    async function* neutralised() {
+      for await (const row of rows) yield row.map(neutraliseCell);
+    },
+    stringifyStream(),
+    out,
+  );
 }

@@ -40,7 +40,13 @@ interface HttpishError {
 
 /** Maps error classes to statuses and the one JSON error shape; never sends a stack. */
 export function errorHandler(log: (message: string, error: unknown) => void): ErrorRequestHandler {
-  return (error, _req, res, _next) => {
+  return (error, _req, res, next) => {
+    // A download that failed half-way (a streamed CSV) cannot change its status any more: Express's
+    // own handler closes the connection, so the client sees a cut-off file, never a silent one.
+    if (res.headersSent) {
+      next(error);
+      return;
+    }
     if (isDatabaseBusy(error)) {
       res.set('Retry-After', String(RETRY_AFTER_SECONDS));
       res.status(503).json({ error: { code: 'database_busy', message: 'The database is busy. Try again in a few seconds.' } });

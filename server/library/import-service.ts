@@ -1,18 +1,18 @@
 import { equipmentDataSchemas, type EquipmentKind, type ImportResult } from '../../shared/contracts/library';
 import type { SessionUser } from '../auth/authorize';
-import type { Db } from '../db/connection';
 import { AppError } from '../lib/errors';
 import { columnFor, parseLibraryCsv } from './csv-io';
 import type { LibraryRepository } from './library-repository';
 import type { LibraryService } from './library-service';
 import { canonicalJson } from '../lib/canonical-json';
+import type { Transact } from '../db/transaction';
 
 /**
  * CSV import: every row is checked first and reported with its line number; only a file with no
  * errors is written, in one transaction. An existing ID gets a new revision, a new ID a new item.
  */
-export function importService(deps: { db: Db; library: LibraryRepository; items: LibraryService }) {
-  const { db, library, items } = deps;
+export function importService(deps: { transact: Transact; library: LibraryRepository; items: LibraryService }) {
+  const { transact, library, items } = deps;
 
   return {
     async run(labId: number, actor: SessionUser, input: { kind: EquipmentKind; csv: string; dryRun: boolean }): Promise<ImportResult> {
@@ -64,7 +64,7 @@ export function importService(deps: { db: Db; library: LibraryRepository; items:
           result,
         });
       }
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         for (const step of plan) {
           const reason = `CSV import, line ${step.line}`;
           if (step.action === 'create') await items.create(labId, actor, { kind, data: step.data, reason }, trx);

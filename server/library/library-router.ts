@@ -18,14 +18,12 @@ const revisionParams = z.object({ labId: idParam, itemId: idParam, number: idPar
 const certificateParams = z.object({ labId: idParam, certificateId: idParam });
 const kindQuery = z.object({ kind: equipmentKindSchema });
 
-/** QA keeps the library (admins too); every member of the lab reads it. */
-const KEEPERS = ['qa', 'admin'] as const;
-
+/** The tolerance library: every member of the lab reads it; QA (and admins) keep it (permission keepLibrary). */
 export function libraryRouter(deps: { items: LibraryService; certificates: CertificatesService; imports: ReturnType<typeof importService>; authorize: Authorize }) {
   const { items, certificates, imports, authorize } = deps;
   const router = Router({ mergeParams: true });
   const read = authorize.lab('member');
-  const keep = authorize.lab(KEEPERS);
+  const keep = authorize.lab('keepLibrary');
   const lab = (req: Request) => (req.lab as LabContext).id;
   const actor = (req: Request) => req.user as SessionUser;
 

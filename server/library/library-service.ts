@@ -15,6 +15,7 @@ import { toFieldIssues } from '../lib/validate';
 import { calibrationState, expiryState, flagWords, isMaterial } from './item-status';
 import type { CertificateRow, ItemRow, LibraryRepository, RevisionRow } from './library-repository';
 import { canonicalJson } from '../lib/canonical-json';
+import type { Transact } from '../db/transaction';
 
 export const toRevision = (row: RevisionRow): Revision => ({
   id: row.id,
@@ -48,8 +49,8 @@ export function parseItemData(kind: EquipmentKind, data: unknown) {
   return result.data as { code: string } & Record<string, unknown>;
 }
 
-export function libraryService(deps: { db: Db; library: LibraryRepository; audit: AuditRepository; now: () => Date }) {
-  const { db, library, audit, now } = deps;
+export function libraryService(deps: { transact: Transact; library: LibraryRepository; audit: AuditRepository; now: () => Date }) {
+  const { transact, library, audit, now } = deps;
   const today = () => now().toISOString().slice(0, 10);
 
   function summarise(item: ItemRow, current: RevisionRow, certificateCount: number): EquipmentItem {
@@ -117,7 +118,7 @@ export function libraryService(deps: { db: Db; library: LibraryRepository; audit
         );
         return itemId;
       };
-      return trx ? run(trx) : db.transaction(run);
+      return trx ? run(trx) : transact(run);
     },
 
     /** Adds a revision; earlier revisions, and every budget that points at them, stay as they were. */
@@ -138,11 +139,11 @@ export function libraryService(deps: { db: Db; library: LibraryRepository; audit
         );
         return 'revised' as const;
       };
-      return trx ? run(trx) : db.transaction(run);
+      return trx ? run(trx) : transact(run);
     },
 
     async retire(labId: number, actor: SessionUser, itemId: number, reason: string): Promise<EquipmentDetail> {
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         const item = await library.item(labId, itemId, trx);
         if (!item) throw notFound('The item');
         if (item.status === 'retired') throw conflict('retired', `${item.code} is already retired.`);

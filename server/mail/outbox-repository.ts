@@ -31,3 +31,4 @@ export function outboxRepository(db: Db) {
     },
   };
 }
+export type OutboxRepository = ReturnType<typeof outboxRepository>;

@@ -42,3 +42,4 @@ export function invitationsRepository(db: Db) {
       Number(await db('invitations').where({ id, lab_id: labId }).whereNull('accepted_at').whereNull('revoked_at').update({ revoked_at: at, revoked_by: by })) === 1,
   };
 }
+export type InvitationsRepository = ReturnType<typeof invitationsRepository>;

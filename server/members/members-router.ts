@@ -16,7 +16,7 @@ const invitationParams = z.object({ labId: idParam, invitationId: idParam });
 export function labMembersRouter(deps: { members: MembersService; authorize: Authorize }) {
   const { members, authorize } = deps;
   const router = Router({ mergeParams: true });
-  const admin = authorize.lab(['admin']);
+  const admin = authorize.lab('manageMembers');
   const labId = (req: Request) => (req.lab as { id: number }).id;
 
   router.get('/members', admin, async (req, res) => {

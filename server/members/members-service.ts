@@ -5,14 +5,15 @@ import type { SessionUser } from '../auth/authorize';
 import { hashPassword } from '../auth/password';
 import { hashToken, newToken } from '../auth/tokens';
 import type { UsersRepository } from '../auth/users-repository';
-import type { Db } from '../db/connection';
 import { isUniqueViolation } from '../db/unique-violation';
 import type { LabsRepository, MemberRow } from '../labs/labs-repository';
 import { conflict, forbidden, notFound, unauthenticated, validationError } from '../lib/errors';
 import { toFieldIssues } from '../lib/validate';
 import type { Mailer } from '../mail/mailer';
 import { invitationMessage } from '../mail/messages';
-import { invitationsRepository, type InvitationRow } from './invitations-repository';
+import type { InvitationRow, InvitationsRepository } from './invitations-repository';
+import { isoAfter } from '../lib/clock';
+import type { Transact } from '../db/transaction';
 
 const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
@@ -49,16 +50,16 @@ const toInvitation = (row: InvitationRow): Invitation => ({
 const invitationUsed = () => conflict('invitation_used', 'This invitation has just been accepted. Sign in to continue.');
 
 export function membersService(deps: {
-  db: Db;
+  transact: Transact;
   users: UsersRepository;
+  invitations: InvitationsRepository;
   labs: LabsRepository;
   audit: AuditRepository;
   mailer: Mailer;
   now: () => Date;
   publicUrl: (path: string) => string;
 }) {
-  const { db, users, labs, audit, mailer, now } = deps;
-  const invitations = invitationsRepository(db);
+  const { transact, users, invitations, labs, audit, mailer, now } = deps;
 
   async function openInvitation(token: string): Promise<InvitationRow> {
     const row = await invitations.findByTokenHash(hashToken(token));
@@ -88,7 +89,7 @@ export function membersService(deps: {
       }
       const { token, tokenHash } = newToken();
       const created = now();
-      const expiresAt = new Date(created.getTime() + INVITATION_LIFETIME_MS).toISOString();
+      const expiresAt = isoAfter(created, INVITATION_LIFETIME_MS);
       const id = await invitations.insert({
         lab_id: labId,
         email: input.email,
@@ -151,7 +152,7 @@ export function membersService(deps: {
           throw forbidden(`This invitation is for ${row.email}. Sign out, then sign in as ${row.email} to accept it.`);
         }
         userId = existing.id;
-        await db.transaction(async (trx) => {
+        await transact(async (trx) => {
           if (!(await invitations.claim(row.id, at, trx))) throw invitationUsed();
           await invitations.setAcceptedUser(row.id, userId, trx);
           await labs.addRole(userId, row.lab_id, row.role, at, trx);
@@ -163,8 +164,7 @@ export function membersService(deps: {
           throw validationError(`${issues[0].path}: ${issues[0].message}`, issues);
         }
         const passwordHash = await hashPassword(parsed.data.password);
-        userId = await db
-          .transaction(async (trx) => {
+        userId = await transact(async (trx) => {
             if (!(await invitations.claim(row.id, at, trx))) throw invitationUsed();
             const id = await users.insert({ email: row.email, name: parsed.data.name, passwordHash, createdAt: at }, trx);
             await invitations.setAcceptedUser(row.id, id, trx);
@@ -214,7 +214,7 @@ export function membersService(deps: {
     /** Changes a member's roles in this lab; the lab always keeps at least one active admin. */
     async update(labId: number, actor: SessionUser, userId: number, change: MemberUpdate): Promise<Member> {
       const before = await member(labId, userId);
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         await labs.setRoles(userId, labId, [...new Set(change.roles)], now().toISOString(), trx);
         if ((await labs.countActiveAdmins(labId, trx)) === 0) throw lastAdmin();
       });
@@ -238,7 +238,7 @@ export function membersService(deps: {
      */
     async remove(labId: number, actor: SessionUser, userId: number): Promise<void> {
       const before = await member(labId, userId);
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         await labs.removeMember(userId, labId, trx);
         if ((await labs.countActiveAdmins(labId, trx)) === 0) throw lastAdmin();
       });

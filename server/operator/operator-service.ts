@@ -2,9 +2,8 @@ import type { CapturedMessage, OperatorAccount } from '../../shared/contracts/op
 import type { AuditRepository } from '../audit/audit-repository';
 import type { DatabaseSessionStore } from '../auth/session-store';
 import type { UserRow, UsersRepository } from '../auth/users-repository';
-import type { Db } from '../db/connection';
 import { conflict, notFound } from '../lib/errors';
-import { outboxRepository } from '../mail/outbox-repository';
+import type { OutboxRepository } from '../mail/outbox-repository';
 
 /** Who acts: a signed-in operator through the API, or someone at the command line (no account). */
 export type OperatorActor = { id: number; name: string } | 'command line';
@@ -14,9 +13,8 @@ export type OperatorActor = { id: number; name: string } | 'command line';
  * everywhere, make another account operator, read the captured mail. Each action is an audit event
  * with no lab (instance-level).
  */
-export function operatorService(deps: { db: Db; users: UsersRepository; audit: AuditRepository; sessions: DatabaseSessionStore }) {
-  const { users, audit } = deps;
-  const outbox = outboxRepository(deps.db);
+export function operatorService(deps: { users: UsersRepository; outbox: OutboxRepository; audit: AuditRepository; sessions: DatabaseSessionStore }) {
+  const { users, outbox, audit } = deps;
 
   async function account(find: { id: number } | { email: string }): Promise<UserRow> {
     const user = 'id' in find ? await users.findById(find.id) : await users.findByEmail(find.email.trim());

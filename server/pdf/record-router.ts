@@ -2,7 +2,7 @@ import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
 import type { Authorize, LabContext } from '../auth/authorize';
-import type { LabsRepository } from '../labs/labs-repository';
+import type { LabsService } from '../labs/labs-service';
 import type { Clock } from '../lib/clock';
 import { validationError } from '../lib/errors';
 import { valid, validate } from '../lib/validate';
@@ -12,7 +12,7 @@ import { renderRecordPdf } from './record-pdf';
 const versionParams = z.object({ labId: idParam, preparationId: idParam, number: idParam });
 
 /** GET …/versions/:number/record.pdf — the signed record (or a watermarked draft) for any lab member. */
-export function recordRouter(deps: { preparations: PreparationsService; labs: LabsRepository; authorize: Authorize; clock: Clock }) {
+export function recordRouter(deps: { preparations: PreparationsService; labs: LabsService; authorize: Authorize; clock: Clock }) {
   const router = Router({ mergeParams: true });
   router.get('/preparations/:preparationId/versions/:number/record.pdf', deps.authorize.lab('member'), validate({ params: versionParams }), async (req: Request, res) => {
     const { params } = valid(req, { params: versionParams });
@@ -22,7 +22,7 @@ export function recordRouter(deps: { preparations: PreparationsService; labs: La
     if (!version.snapshot) throw validationError('This version has no computed budget yet, so there is no record to print.');
     // An approved version prints what it was signed under, not what later versions renamed.
     const frozen = version.approvedAs;
-    const labName = frozen?.labName ?? (await deps.labs.findById(labId))?.name ?? '';
+    const labName = frozen?.labName ?? (await deps.labs.name(labId));
     const shown = frozen ? { ...preparation, title: frozen.title } : preparation;
     const pdf = await renderRecordPdf({ labName, preparation: shown, version, generatedAt: deps.clock.now().toISOString() });
     const name = `dilutrace-${params.preparationId}-v${params.number}${version.status === 'approved' ? '' : '-draft'}.pdf`;

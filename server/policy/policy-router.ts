@@ -10,7 +10,7 @@ export function policyRouter(deps: { policy: PolicyService; authorize: Authorize
   router.get('/policy', deps.authorize.lab('member'), async (req, res) => {
     res.json(await deps.policy.read((req.lab as LabContext).id));
   });
-  router.put('/policy', deps.authorize.lab(['qa']), validate({ body: labPolicySchema }), async (req, res) => {
+  router.put('/policy', deps.authorize.lab('setPolicy'), validate({ body: labPolicySchema }), async (req, res) => {
     const { body } = valid(req, { body: labPolicySchema });
     res.json(await deps.policy.update((req.lab as LabContext).id, req.user as SessionUser, body));
   });

@@ -1,7 +1,8 @@
 import { DEFAULT_LAB_POLICY, labPolicySchema, type LabPolicy } from '../../shared/contracts/library';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
-import type { Db } from '../db/connection';
+import type { PolicyRepository } from './policy-repository';
+import type { Transact } from '../db/transaction';
 
 export interface StoredPolicy extends LabPolicy {
   updatedAt: string | null;
@@ -9,15 +10,11 @@ export interface StoredPolicy extends LabPolicy {
 }
 
 /** Each lab's policy for budgets; a lab that never set one gets DEFAULT_LAB_POLICY. */
-export function policyService(deps: { db: Db; audit: AuditRepository; now: () => Date }) {
-  const { db, audit, now } = deps;
+export function policyService(deps: { transact: Transact; policies: PolicyRepository; audit: AuditRepository; now: () => Date }) {
+  const { transact, policies, audit, now } = deps;
 
   async function read(labId: number): Promise<StoredPolicy> {
-    const row: { policy_json: string; updated_at: string; updated_by_name: string | null } | undefined = await db('lab_policies as p')
-      .leftJoin('users as u', 'u.id', 'p.updated_by')
-      .where('p.lab_id', labId)
-      .select('p.policy_json', 'p.updated_at', 'u.name as updated_by_name')
-      .first();
+    const row = await policies.find(labId);
     if (!row) return { ...DEFAULT_LAB_POLICY, updatedAt: null, updatedBy: null };
     return { ...labPolicySchema.parse(JSON.parse(row.policy_json)), updatedAt: row.updated_at, updatedBy: row.updated_by_name };
   }
@@ -27,11 +24,8 @@ export function policyService(deps: { db: Db; audit: AuditRepository; now: () =>
     async update(labId: number, actor: SessionUser, policy: LabPolicy): Promise<StoredPolicy> {
       const before = await read(labId);
       const at = now().toISOString();
-      await db.transaction(async (trx) => {
-        await trx('lab_policies')
-          .insert({ lab_id: labId, policy_json: JSON.stringify(policy), updated_at: at, updated_by: actor.id })
-          .onConflict('lab_id')
-          .merge();
+      await transact(async (trx) => {
+        await policies.save({ labId, policyJson: JSON.stringify(policy), updatedAt: at, updatedBy: actor.id }, trx);
         const { updatedAt: _a, updatedBy: _b, ...previous } = before;
         await audit.record(
           { labId, actorUserId: actor.id, action: 'policy.updated', entityType: 'lab_policy', entityId: labId, summary: `${actor.name} changed the lab policy`, before: previous, after: policy },

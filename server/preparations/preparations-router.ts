@@ -17,7 +17,7 @@ export function preparationsRouter(deps: { preparations: PreparationsService; ro
   const { preparations, routes, authorize } = deps;
   const router = Router({ mergeParams: true });
   const read = authorize.lab('member');
-  const plan = authorize.lab(['analyst']);
+  const plan = authorize.lab('planPreparations');
   const lab = (req: Request) => (req.lab as LabContext).id;
   const actor = (req: Request) => req.user as SessionUser;
 
@@ -61,12 +61,12 @@ export function preparationsRouter(deps: { preparations: PreparationsService; ro
     res.status(201).json(await preparations.duplicate(lab(req), actor(req), params.preparationId, body.title, clientSignal(res)));
   });
 
-  router.post('/compute', authorize.lab(['analyst', 'qa']), validate({ body: computeRequestSchema }), async (req, res) => {
+  router.post('/compute', authorize.lab('computeBudgets'), validate({ body: computeRequestSchema }), async (req, res) => {
     const { body } = valid(req, { body: computeRequestSchema });
     res.json(await preparations.computeOnly(lab(req), body, clientSignal(res)));
   });
 
-  router.post('/route-finder', authorize.lab(['analyst', 'qa']), validate({ body: routeFinderRequestSchema }), async (req, res) => {
+  router.post('/route-finder', authorize.lab('findRoutes'), validate({ body: routeFinderRequestSchema }), async (req, res) => {
     const { body } = valid(req, { body: routeFinderRequestSchema });
     res.json(await routes.find(lab(req), body, clientSignal(res)));
   });

@@ -4,7 +4,6 @@ import type { Override, PlanProblem, ReadingsRequest, RecordedReadings, Preparat
 import { parsePlan, PlanError } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
-import type { Db } from '../db/connection';
 import { sha256Hex } from '../lib/canonical-json';
 import { AppError, conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
@@ -15,6 +14,7 @@ import { readStoredSnapshot, storedSnapshotJson } from './stored-snapshot';
 import { EDITABLE_STATUSES, type PreparationRow, type PreparationsRepository, type ReviewRow, type VersionRow, type VersionWrite } from './preparations-repository';
 import type { Review } from '../../shared/contracts/reviews';
 import { approvedAsOf } from '../reviews/approved-record';
+import type { Transact } from '../db/transaction';
 
 const parse = <T>(json: string | null): T | null => (json === null ? null : (JSON.parse(json) as T));
 
@@ -76,8 +76,8 @@ const MASS_FIELDS: Record<string, RecordedReadings['readings'][number]['field']>
 
 const analyteOf = (plan: Record<string, unknown>) => String((plan.analyte as { formula?: unknown } | undefined)?.formula ?? '').slice(0, 40);
 
-export function preparationsService(deps: { db: Db; preparations: PreparationsRepository; items: LibraryService; policy: PolicyService; audit: AuditRepository; computer: Computer; now: () => Date }) {
-  const { db, preparations, items, policy, audit, computer, now } = deps;
+export function preparationsService(deps: { transact: Transact; preparations: PreparationsRepository; items: LibraryService; policy: PolicyService; audit: AuditRepository; computer: Computer; now: () => Date }) {
+  const { transact, preparations, items, policy, audit, computer, now } = deps;
 
   async function libraryOf(labId: number): Promise<Map<string, EquipmentItem>> {
     return new Map((await items.list(labId, { status: 'all' })).map((item) => [String(item.id), item]));
@@ -188,7 +188,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       const computed = await compute(labId, input.plan, input.overrides, seed, signal);
       const { materialCode, ...write } = computed;
       const at = now().toISOString();
-      const id = await db.transaction(async (trx) => {
+      const id = await transact(async (trx) => {
         const preparationId = await preparations.insertPreparation({ labId, title: input.title, analyte: analyteOf(input.plan), materialCode, createdBy: actor.id, at }, trx);
         await preparations.insertVersion(preparationId, 1, { ...write, created_by: actor.id, created_at: at }, trx);
         await audit.record(
@@ -210,7 +210,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can change its draft. Duplicate it to make your own variant.');
       const computed = await compute(labId, input.plan, input.overrides, input.seed ?? Number(current.seed), signal);
       const { materialCode, ...write } = computed;
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         const changed = await preparations.updateDraft(current.id, write, trx);
         if (changed === 0) throw conflict('not_draft', `Version ${number} is no longer a draft.`);
         await preparations.touchPreparation(id, { title: input.title, analyte: analyteOf(input.plan), materialCode, at: write.updated_at }, trx);
@@ -241,7 +241,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       if (latest.status === 'submitted') throw conflict('under_review', `Version ${latest.number} is waiting for review; a new version can start once it is approved or returned.`);
       const computed = await compute(labId, JSON.parse(latest.plan_json), JSON.parse(latest.overrides_json), Number(latest.seed), signal);
       const { materialCode: _material, ...write } = computed;
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         await preparations.insertVersion(id, latest.number + 1, { ...write, created_by: actor.id, created_at: write.updated_at }, trx);
         await preparations.touchPreparation(id, { title: prep.title, analyte: prep.analyte, materialCode: prep.material_code, at: write.updated_at }, trx);
         await audit.record({ labId, actorUserId: actor.id, action: 'preparation.versioned', entityType: 'preparation', entityId: id, summary: `${actor.name} started version ${latest.number + 1} of “${prep.title}”` }, trx);
@@ -290,7 +290,7 @@ export function preparationsService(deps: { db: Db; preparations: PreparationsRe
       }
       const { materialCode, ...write } = computed;
       const readings: RecordedReadings = { recordedAt: write.updated_at, recordedBy: actor.name, deviations: input.deviations, readings: recorded };
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         const changed = await preparations.recordReadings(current.id, { ...write, readings_json: JSON.stringify(readings), status: 'prepared' }, trx);
         if (changed === 0) throw conflict('not_draft', `Version ${number} changed meanwhile; reload it.`);
         await preparations.touchPreparation(id, { title: prep.title, analyte: prep.analyte, materialCode, at: write.updated_at }, trx);

@@ -19,20 +19,20 @@ export function reviewRouter(deps: { reviews: ReviewService; preparations: Prepa
   const actor = (req: Request) => req.user as SessionUser;
   const base = '/preparations/:preparationId/versions/:number';
 
-  router.post(`${base}/submit`, authorize.lab(['analyst']), validate({ params: versionParams, body: submitRequestSchema }), async (req, res) => {
+  router.post(`${base}/submit`, authorize.lab('planPreparations'), validate({ params: versionParams, body: submitRequestSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: versionParams, body: submitRequestSchema });
     await reviews.submit(lab(req), actor(req), params.preparationId, params.number, body.comment);
     res.json(await preparations.detail(lab(req), params.preparationId));
   });
 
   const signature = deps.limits.guard('approval', (req) => req.user?.email);
-  router.post(`${base}/approve`, authorize.lab(['qa']), validate({ params: versionParams, body: approveRequestSchema }), signature, async (req, res) => {
+  router.post(`${base}/approve`, authorize.lab('reviewRecords'), validate({ params: versionParams, body: approveRequestSchema }), signature, async (req, res) => {
     const { params, body } = valid(req, { params: versionParams, body: approveRequestSchema });
     await reviews.decide(lab(req), actor(req), params.preparationId, params.number, { kind: 'approved', ...body });
     res.json(await preparations.detail(lab(req), params.preparationId));
   });
 
-  router.post(`${base}/return`, authorize.lab(['qa']), validate({ params: versionParams, body: returnRequestSchema }), async (req, res) => {
+  router.post(`${base}/return`, authorize.lab('reviewRecords'), validate({ params: versionParams, body: returnRequestSchema }), async (req, res) => {
     const { params, body } = valid(req, { params: versionParams, body: returnRequestSchema });
     await reviews.decide(lab(req), actor(req), params.preparationId, params.number, { kind: 'returned', comment: body.comment });
     res.json(await preparations.detail(lab(req), params.preparationId));
@@ -48,7 +48,7 @@ export function reviewRouter(deps: { reviews: ReviewService; preparations: Prepa
     res.attachment(`dilutrace-preparation-${params.preparationId}-v${params.number}-snapshot.json`).json(await preparations.snapshotDownload(lab(req), params.preparationId, params.number));
   });
 
-  router.get('/review-queue', authorize.lab(['qa']), async (req, res) => {
+  router.get('/review-queue', authorize.lab('reviewRecords'), async (req, res) => {
     res.json(await reviews.queue(lab(req)));
   });
 

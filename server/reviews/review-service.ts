@@ -3,14 +3,15 @@ import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
 import { verifyPassword } from '../auth/password';
 import type { UsersRepository } from '../auth/users-repository';
-import type { Db } from '../db/connection';
 import type { LabsRepository } from '../labs/labs-repository';
 import { sha256Hex } from '../lib/canonical-json';
 import { conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { Mailer } from '../mail/mailer';
 import { decisionMessage, submittedMessage } from '../mail/messages';
 import type { PreparationsRepository, VersionRow } from '../preparations/preparations-repository';
+import type { ReviewsRepository } from './reviews-repository';
 import { approvedAsOf, approvedRecordSha256, toApprovedAsColumns, type ApprovedAs } from './approved-record';
+import type { Transact } from '../db/transaction';
 
 /** The plan document's own title, if it has one. */
 function planTitle(planJson: string): string | null {
@@ -23,8 +24,9 @@ function planTitle(planJson: string): string | null {
  * (signed with the reviewer's password) or returned with comments (QA, never the submitter).
  */
 export function reviewService(deps: {
-  db: Db;
+  transact: Transact;
   preparations: PreparationsRepository;
+  reviews: ReviewsRepository;
   users: UsersRepository;
   labs: LabsRepository;
   audit: AuditRepository;
@@ -33,7 +35,7 @@ export function reviewService(deps: {
   publicUrl: (path: string) => string;
   log: (message: string, error?: unknown) => void;
 }) {
-  const { db, preparations, users, labs, audit, mailer, now } = deps;
+  const { transact, preparations, reviews, users, labs, audit, mailer, now } = deps;
 
   async function load(labId: number, preparationId: number, number: number) {
     const prep = await preparations.find(labId, preparationId);
@@ -61,7 +63,7 @@ export function reviewService(deps: {
       if (!['draft', 'prepared', 'returned'].includes(version.status)) throw conflict('not_draft', `Version ${number} is ${version.status}; only a draft, prepared or returned version can be submitted.`);
       if (!version.snapshot_json) throw validationError('This version has no computed budget yet: fix the problem shown in the plan, then submit.');
       const at = now().toISOString();
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         if ((await preparations.setStatus(version.id, version.status, 'submitted', trx)) === 0) throw conflict('not_draft', 'The version changed meanwhile; reload it.');
         await preparations.insertReview({ version_id: version.id, action: 'submitted', actor_user_id: actor.id, at, comment, snapshot_sha256: version.snapshot_sha256 }, trx);
         await audit.record({ labId, actorUserId: actor.id, action: 'preparation.submitted', entityType: 'preparation', entityId: preparationId, summary: `${actor.name} submitted version ${number} of “${prep.title}”`, before: { status: version.status }, after: { status: 'submitted' } }, trx);
@@ -105,7 +107,7 @@ export function reviewService(deps: {
           ? { title: prep.title, analyte: prep.analyte, preparationName: planTitle(version.plan_json) ?? prep.title, labName: (await labs.findById(labId))?.name ?? '' }
           : null;
       const recordSha256 = approvedAs && version.snapshot_sha256 ? approvedRecordSha256(version.snapshot_sha256, approvedAs) : null;
-      await db.transaction(async (trx) => {
+      await transact(async (trx) => {
         const changed =
           approvedAs && recordSha256
             ? await preparations.approve(version.id, { ...toApprovedAsColumns(approvedAs), record_sha256: recordSha256 }, trx)
@@ -139,13 +141,7 @@ export function reviewService(deps: {
     },
 
     async queue(labId: number): Promise<ReviewQueueItem[]> {
-      const rows: (VersionRow & { title: string; submitted_at: string; submitted_by: string; comment: string })[] = await db('preparation_versions as v')
-        .join('preparations as p', 'p.id', 'v.preparation_id')
-        .join('version_reviews as r', (j) => j.on('r.version_id', 'v.id').andOnVal('r.action', '=', 'submitted'))
-        .join('users as u', 'u.id', 'r.actor_user_id')
-        .where({ 'p.lab_id': labId, 'v.status': 'submitted' })
-        .select('v.*', 'p.title', 'r.at as submitted_at', 'u.name as submitted_by', 'r.comment')
-        .orderBy('r.at', 'asc');
+      const rows = await reviews.submissions(labId);
       const latest = new Map<number, (typeof rows)[number]>();
       for (const row of rows) latest.set(row.id, row);
       const t = now().getTime();
@@ -163,29 +159,7 @@ export function reviewService(deps: {
 
     /** Approved versions, newest first; title and analyte are the frozen ones where the version has them. */
     async approvedRecords(labId: number, q?: string): Promise<ApprovedRecord[]> {
-      const title = db.raw('coalesce(v.approved_title, p.title)');
-      const analyte = db.raw('coalesce(v.approved_analyte, p.analyte)');
-      const query = db('preparation_versions as v')
-        .join('preparations as p', 'p.id', 'v.preparation_id')
-        .join('users as a', 'a.id', 'p.created_by')
-        .join('version_reviews as r', (j) => j.on('r.version_id', 'v.id').andOnVal('r.action', '=', 'approved'))
-        .join('users as u', 'u.id', 'r.actor_user_id')
-        .where({ 'p.lab_id': labId, 'v.status': 'approved' })
-        .select('p.id as preparation_id', { title }, { analyte }, 'v.number', 'a.name as analyst', 'u.name as approved_by', 'r.at as approved_at', 'v.result_statement', 'v.snapshot_sha256')
-        .orderBy('r.at', 'desc')
-        .limit(500);
-      // lower() … like lower(?) and whereILike are case-blind on SQLite and PostgreSQL alike.
-      if (q) {
-        const pattern = `%${q}%`;
-        query.andWhere((w) =>
-          w
-            .whereRaw('lower(coalesce(v.approved_title, p.title)) like lower(?)', [pattern])
-            .orWhereRaw('lower(coalesce(v.approved_analyte, p.analyte)) like lower(?)', [pattern])
-            .orWhereILike('a.name', pattern)
-            .orWhereILike('p.material_code', pattern),
-        );
-      }
-      const rows: { preparation_id: number; title: string; analyte: string; number: number; analyst: string; approved_by: string; approved_at: string; result_statement: string | null; snapshot_sha256: string }[] = await query;
+      const rows = await reviews.approved(labId, q);
       return rows.map((r) => ({
         preparationId: r.preparation_id,
         title: r.title,

@@ -9,20 +9,19 @@ import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me
 import { csvColumnsQueryOptions, csvTemplateUrl, useCsvColumns } from '../../../features/library/api/get-csv-columns';
 import { CsvColumnList } from '../../../features/library/components/csv-column-list';
 import { CsvImportForm } from '../../../features/library/components/csv-import-form';
-import { canKeepLibrary } from '../../../features/library/utils/can-keep-library';
 import { KIND_TABS, kindFromSearch } from '../../../features/library/utils/equipment-kinds';
-import { activeMembership, activeRoles } from '../../../lib/authorization';
+import { activeMembership, activeRoles, can } from '../../../lib/authorization';
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
-  if (me?.activeLabId && canKeepLibrary(activeRoles(me))) await queryClient.ensureQueryData(csvColumnsQueryOptions(me.activeLabId));
+  if (me?.activeLabId && can(activeRoles(me), 'keepLibrary')) await queryClient.ensureQueryData(csvColumnsQueryOptions(me.activeLabId));
   return null;
 };
 
 export function Component() {
   const me = useSignedInMe();
   const membership = activeMembership(me);
-  if (!membership || !canKeepLibrary(membership.roles)) {
+  if (!membership || !can(membership.roles, 'keepLibrary')) {
     return (
       <>
         <title>Import CSV · Dilutrace</title>

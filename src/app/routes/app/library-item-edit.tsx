@@ -9,16 +9,15 @@ import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me
 import { equipmentItemQueryOptions, useEquipmentItem } from '../../../features/library/api/get-equipment-item';
 import { equipmentTemplatesQueryOptions } from '../../../features/library/api/get-equipment-templates';
 import { EquipmentForm } from '../../../features/library/components/equipment-form';
-import { canKeepLibrary } from '../../../features/library/utils/can-keep-library';
 import { singularOf } from '../../../features/library/utils/equipment-kinds';
-import { activeMembership, activeRoles } from '../../../lib/authorization';
+import { activeMembership, activeRoles, can } from '../../../lib/authorization';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
     const itemId = Number(params.itemId);
-    if (me?.activeLabId && canKeepLibrary(activeRoles(me)) && Number.isInteger(itemId)) {
+    if (me?.activeLabId && can(activeRoles(me), 'keepLibrary') && Number.isInteger(itemId)) {
       await Promise.all([
         queryClient.ensureQueryData(equipmentItemQueryOptions(me.activeLabId, itemId)),
         queryClient.ensureQueryData(equipmentTemplatesQueryOptions(me.activeLabId)),
@@ -31,7 +30,7 @@ export function Component() {
   const me = useSignedInMe();
   const membership = activeMembership(me);
   const itemId = Number(useParams().itemId);
-  if (!membership || !canKeepLibrary(membership.roles)) {
+  if (!membership || !can(membership.roles, 'keepLibrary')) {
     return (
       <>
         <title>Edit item · Dilutrace</title>

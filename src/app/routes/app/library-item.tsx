@@ -14,9 +14,8 @@ import { ItemStatusBadges } from '../../../features/library/components/item-stat
 import { MinimumWeightNote } from '../../../features/library/components/minimum-weight-note';
 import { RetireItemButton } from '../../../features/library/components/retire-item-button';
 import { RevisionHistory } from '../../../features/library/components/revision-history';
-import { canKeepLibrary } from '../../../features/library/utils/can-keep-library';
 import { singularOf } from '../../../features/library/utils/equipment-kinds';
-import { activeMembership } from '../../../lib/authorization';
+import { activeMembership, can } from '../../../lib/authorization';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -38,7 +37,7 @@ export function Component() {
       </Alert>
     );
   }
-  return <ItemPage labId={membership.id} itemId={itemId} keeper={canKeepLibrary(membership.roles)} />;
+  return <ItemPage labId={membership.id} itemId={itemId} keeper={can(membership.roles, 'keepLibrary')} />;
 }
 
 function ItemPage({ labId, itemId, keeper }: { labId: number; itemId: number; keeper: boolean }) {

@@ -7,13 +7,12 @@ import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
 import { equipmentTemplatesQueryOptions } from '../../../features/library/api/get-equipment-templates';
 import { EquipmentForm } from '../../../features/library/components/equipment-form';
-import { canKeepLibrary } from '../../../features/library/utils/can-keep-library';
 import { kindFromSearch, singularOf } from '../../../features/library/utils/equipment-kinds';
-import { activeMembership, activeRoles } from '../../../lib/authorization';
+import { activeMembership, activeRoles, can } from '../../../lib/authorization';
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
-  if (me?.activeLabId && canKeepLibrary(activeRoles(me))) await queryClient.ensureQueryData(equipmentTemplatesQueryOptions(me.activeLabId));
+  if (me?.activeLabId && can(activeRoles(me), 'keepLibrary')) await queryClient.ensureQueryData(equipmentTemplatesQueryOptions(me.activeLabId));
   return null;
 };
 
@@ -23,7 +22,7 @@ export function Component() {
   const [searchParams] = useSearchParams();
   const kind = kindFromSearch(searchParams.get('kind'));
   const title = `Add a ${singularOf(kind)}`;
-  if (!membership || !canKeepLibrary(membership.roles)) {
+  if (!membership || !can(membership.roles, 'keepLibrary')) {
     return (
       <>
         <title>{`${title} · Dilutrace`}</title>

@@ -9,9 +9,8 @@ import { equipmentListQueryOptions, useEquipmentList } from '../../../features/l
 import { EquipmentTable } from '../../../features/library/components/equipment-table';
 import { KindTabs } from '../../../features/library/components/kind-tabs';
 import { StatusFilter, statusFromSearch } from '../../../features/library/components/status-filter';
-import { canKeepLibrary } from '../../../features/library/utils/can-keep-library';
 import { KIND_TABS, kindFromSearch } from '../../../features/library/utils/equipment-kinds';
-import { activeMembership } from '../../../lib/authorization';
+import { activeMembership, can } from '../../../lib/authorization';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -41,7 +40,7 @@ export function Component() {
       </>
     );
   }
-  return <LibraryPage labId={membership.id} keeper={canKeepLibrary(membership.roles)} />;
+  return <LibraryPage labId={membership.id} keeper={can(membership.roles, 'keepLibrary')} />;
 }
 
 function LibraryPage({ labId, keeper }: { labId: number; keeper: boolean }) {

@@ -5,7 +5,7 @@ import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me
 import { policyQueryOptions, usePolicy } from '../../../features/policy/api/get-policy';
 import { PolicyForm } from '../../../features/policy/components/policy-form';
 import { PolicySummary } from '../../../features/policy/components/policy-summary';
-import { activeMembership } from '../../../lib/authorization';
+import { activeMembership, can } from '../../../lib/authorization';
 import { formatDateTime } from '../../../lib/format-date';
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
@@ -29,7 +29,7 @@ export function Component() {
     );
   }
   // Only QA sets the policy (the server's rule); everyone else reads it.
-  return <PolicyPage labId={membership.id} labName={membership.name} editable={membership.roles.includes('qa')} />;
+  return <PolicyPage labId={membership.id} labName={membership.name} editable={can(membership.roles, 'setPolicy')} />;
 }
 
 function PolicyPage({ labId, labName, editable }: { labId: number; labName: string; editable: boolean }) {

@@ -13,8 +13,10 @@ interface Row {
   after_json: string | null;
 }
 
+export type AuditFilters = Omit<AuditQuery, 'limit' | 'offset'>;
+
 const toEvent = (row: Row): AuditEvent => ({
-  id: row.id,
+  id: Number(row.id),
   at: row.created_at,
   actor: row.actor_name,
   action: row.action,
@@ -25,9 +27,12 @@ const toEvent = (row: Row): AuditEvent => ({
   after: row.after_json ? JSON.parse(row.after_json) : null,
 });
 
+/** Rows read per query by `events`: small enough to keep memory flat, large enough to be quick. */
+const EXPORT_PAGE = 2000;
+
 /** Reads one lab's audit trail, newest first, with the filters of the audit page. */
-export function auditQuery(db: Db) {
-  function filtered(labId: number, query: Omit<AuditQuery, 'limit' | 'offset'>) {
+export function auditTrailRepository(db: Db) {
+  function filtered(labId: number, query: AuditFilters) {
     const q = db('audit_events as e').leftJoin('users as u', 'u.id', 'e.actor_user_id').where('e.lab_id', labId);
     // whereILike: `like` on SQLite (case-blind for ASCII), `ilike` on PostgreSQL, so searches match alike.
     if (query.actor) q.andWhere((w) => w.whereILike('u.name', `%${query.actor}%`).orWhereILike('u.email', `%${query.actor}%`));
@@ -46,9 +51,24 @@ export function auditQuery(db: Db) {
       const rows: Row[] = await filtered(labId, query).select(columns).orderBy('e.id', 'desc').limit(query.limit).offset(query.offset);
       return { events: rows.map(toEvent), total };
     },
-    async all(labId: number, query: Omit<AuditQuery, 'limit' | 'offset'>): Promise<AuditEvent[]> {
-      const rows: Row[] = await filtered(labId, query).select(columns).orderBy('e.id', 'desc').limit(100_000);
-      return rows.map(toEvent);
+
+    /**
+     * Every matching event, newest first, read page by page (keyset on the id, so no page is
+     * skipped or repeated, on SQLite and PostgreSQL alike). Events are never changed, and one
+     * appended meanwhile has a higher id than the first page, so the export is the trail as it
+     * stood when it started. No cap: the caller streams what it gets.
+     */
+    async *events(labId: number, query: AuditFilters): AsyncGenerator<AuditEvent> {
+      let before = Number.POSITIVE_INFINITY;
+      for (;;) {
+        const q = filtered(labId, query).select(columns).orderBy('e.id', 'desc').limit(EXPORT_PAGE);
+        if (Number.isFinite(before)) q.andWhere('e.id', '<', before);
+        const rows: Row[] = await q;
+        for (const row of rows) yield toEvent(row);
+        if (rows.length < EXPORT_PAGE) return;
+        before = Number(rows[rows.length - 1].id);
+      }
     },
   };
 }
+export type AuditTrailRepository = ReturnType<typeof auditTrailRepository>;

@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import knex, { type Knex } from 'knex';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { migrationSource } from '../db/migration-source';
-import { leadPlan, libraryByCode } from '../test-support/demo-plans';
+import { approvedLeadStandard } from '../test-support/demo-plans';
 import { buildTestApp, demo, DEMO_PASSWORD, dropTrigger, signIn, type TestApp } from '../test-support/test-app';
 import { auditEventHash, GENESIS_HASH } from './audit-chain';
 import { auditRepository } from './audit-repository';
@@ -37,10 +37,7 @@ afterEach(async () => {
 async function approveOne() {
   const analyst = await signIn(t.app, demo('analyst'));
   const qa = await signIn(t.app, demo('qa'));
-  const library = await libraryByCode(analyst, labId);
-  const id = (await analyst.post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) }).expect(201)).body.id;
-  await analyst.post(`/api/labs/${labId}/preparations/${id}/versions/1/submit`, {}).expect(200);
-  await qa.post(`/api/labs/${labId}/preparations/${id}/versions/1/approve`, { password: DEMO_PASSWORD, statement: 'Approved for use.' }).expect(200);
+  const id = await approvedLeadStandard(analyst, qa, labId, DEMO_PASSWORD);
   return t.db('preparation_versions').where({ preparation_id: id, number: 1 }).first();
 }
 

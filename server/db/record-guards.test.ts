@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { leadPlan, libraryByCode } from '../test-support/demo-plans';
+import { approvedLeadStandard } from '../test-support/demo-plans';
 import { buildTestApp, demo, DEMO_PASSWORD, signIn, type TestApp } from '../test-support/test-app';
 
 let t: TestApp;
@@ -23,10 +23,7 @@ describe.runIf(!process.env.DATABASE_URL)('INSERT OR REPLACE on a record table',
     const labId = (await t.db('labs').first()).id;
     const analyst = await signIn(t.app, demo('analyst'));
     const qa = await signIn(t.app, demo('qa'));
-    const library = await libraryByCode(analyst, labId);
-    const id = (await analyst.post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) }).expect(201)).body.id;
-    await analyst.post(`/api/labs/${labId}/preparations/${id}/versions/1/submit`, {}).expect(200);
-    await qa.post(`/api/labs/${labId}/preparations/${id}/versions/1/approve`, { password: DEMO_PASSWORD, statement: 'Approved for use.' }).expect(200);
+    const id = await approvedLeadStandard(analyst, qa, labId, DEMO_PASSWORD);
 
     const version = await t.db('preparation_versions').where({ preparation_id: id, number: 1 }).first();
     await expect(replaceRow('preparation_versions', version.id, { result_statement: 'forged' })).rejects.toThrow(/immutable/);

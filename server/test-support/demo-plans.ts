@@ -24,3 +24,12 @@ export function leadPlan(library: Map<string, EquipmentItem>, choice: { balance?
     ],
   };
 }
+
+/** A demo lead standard planned by the analyst, submitted, and approved by QA; returns the preparation id. */
+export async function approvedLeadStandard(analyst: Client, qa: Client, labId: number, password: string): Promise<number> {
+  const library = await libraryByCode(analyst, labId);
+  const id = (await analyst.post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) }).expect(201)).body.id as number;
+  await analyst.post(`/api/labs/${labId}/preparations/${id}/versions/1/submit`, {}).expect(200);
+  await qa.post(`/api/labs/${labId}/preparations/${id}/versions/1/approve`, { password, statement: 'Approved for use.' }).expect(200);
+  return id;
+}

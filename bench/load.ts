@@ -29,7 +29,14 @@ interface Figures {
 async function cannon(name: string, options: autocannon.Options): Promise<Figures> {
   const result = await autocannon({ duration: SECONDS, connections: 4, ...options });
   const bad = result.non2xx + result.errors + result.timeouts;
-  return { name, requests: result.requests.total, perSecond: result.requests.average, p50: result.latency.p50, p99: result.latency.p99, errors: bad };
+  return {
+    name,
+    requests: result.requests.total,
+    perSecond: result.requests.average,
+    p50: result.latency.p50,
+    p99: result.latency.p99,
+    errors: bad,
+  };
 }
 
 /** Sign-in needs a fresh session and CSRF token per attempt, so it is driven by its own loop. */
@@ -53,7 +60,14 @@ async function signInLoad(url: string, email: string): Promise<Figures> {
   );
   latencies.sort((a, b) => a - b);
   const at = (q: number) => latencies[Math.min(latencies.length - 1, Math.floor(q * latencies.length))];
-  return { name: 'sign-in (POST /api/auth/login, scrypt N=2^15)', requests: latencies.length, perSecond: latencies.length / SECONDS, p50: at(0.5), p99: at(0.99), errors };
+  return {
+    name: 'sign-in (POST /api/auth/login, scrypt N=2^15)',
+    requests: latencies.length,
+    perSecond: latencies.length / SECONDS,
+    p50: at(0.5),
+    p99: at(0.99),
+    errors,
+  };
 }
 
 /** Failed sign-ins with random e-mails from `clients` loops at once: each hashes against the dummy hash. */
@@ -66,7 +80,10 @@ async function failedSignIns(url: string, clients: number): Promise<Figures> {
       while (Date.now() < end) {
         const client = await httpClient(url);
         const started = performance.now();
-        const res = await client.request('POST', '/api/auth/login', { email: `${randomBytes(6).toString('hex')}@load.example`, password: 'a-guess-1234' });
+        const res = await client.request('POST', '/api/auth/login', {
+          email: `${randomBytes(6).toString('hex')}@load.example`,
+          password: 'a-guess-1234',
+        });
         if (res.status !== 401) unexpected += 1;
         latencies.push(performance.now() - started);
       }
@@ -74,7 +91,14 @@ async function failedSignIns(url: string, clients: number): Promise<Figures> {
   );
   latencies.sort((a, b) => a - b);
   const at = (q: number) => latencies[Math.min(latencies.length - 1, Math.floor(q * latencies.length))];
-  return { name: `(${clients} failed sign-ins with random e-mails meanwhile)`, requests: latencies.length, perSecond: latencies.length / SECONDS, p50: at(0.5), p99: at(0.99), errors: unexpected };
+  return {
+    name: `(${clients} failed sign-ins with random e-mails meanwhile)`,
+    requests: latencies.length,
+    perSecond: latencies.length / SECONDS,
+    p50: at(0.5),
+    p99: at(0.99),
+    errors: unexpected,
+  };
 }
 
 const file = join(mkdtempSync(join(tmpdir(), 'dilutrace-load-')), 'load.sqlite');
@@ -98,23 +122,51 @@ try {
   const created = await analyst.request('POST', `${lab}/preparations`, { title: 'Load test Pb standard', plan });
   // The raw cookie and token of the analyst's session, for autocannon's fixed headers.
   const session = await analyst.request('GET', '/api/auth/me');
-  const headers = { cookie: analyst.cookie(), 'x-csrf-token': session.body.csrfToken, 'content-type': 'application/json' };
+  const headers = {
+    cookie: analyst.cookie(),
+    'x-csrf-token': session.body.csrfToken,
+    'content-type': 'application/json',
+  };
 
   const figures: Figures[] = [];
   figures.push(await signInLoad(server.url, 'qa@wellmere-water.example'));
-  figures.push(await cannon('library list (GET …/equipment, 24 items)', { url: `${server.url}${lab}/equipment`, headers }));
+  figures.push(
+    await cannon('library list (GET …/equipment, 24 items)', { url: `${server.url}${lab}/equipment`, headers }),
+  );
   const computeBody = JSON.stringify({ plan, trials: 100_000, seed: 1 });
-  figures.push(await cannon('compute, 10⁵ Monte Carlo trials (POST …/compute)', { url: `${server.url}${lab}/compute`, method: 'POST', headers, body: computeBody }));
-  figures.push(await cannon('PDF record (GET …/record.pdf)', { url: `${server.url}${lab}/preparations/${created.body.id}/versions/1/record.pdf`, headers, connections: 2 }));
+  figures.push(
+    await cannon('compute, 10⁵ Monte Carlo trials (POST …/compute)', {
+      url: `${server.url}${lab}/compute`,
+      method: 'POST',
+      headers,
+      body: computeBody,
+    }),
+  );
+  figures.push(
+    await cannon('PDF record (GET …/record.pdf)', {
+      url: `${server.url}${lab}/preparations/${created.body.id}/versions/1/record.pdf`,
+      headers,
+      connections: 2,
+    }),
+  );
   const [listUnderLoad] = await Promise.all([
     cannon('library list while 4 computes run', { url: `${server.url}${lab}/equipment`, headers, connections: 2 }),
-    cannon('(computes running meanwhile)', { url: `${server.url}${lab}/compute`, method: 'POST', headers, body: computeBody }),
+    cannon('(computes running meanwhile)', {
+      url: `${server.url}${lab}/compute`,
+      method: 'POST',
+      headers,
+      body: computeBody,
+    }),
   ]);
   figures.push(listUnderLoad);
 
   // Password hashing runs in libuv's thread pool, so 16 sign-ins at once do not stall other users.
   const [listUnderSignIns, signIns] = await Promise.all([
-    cannon('library list while 16 sign-ins with random e-mails hash', { url: `${server.url}${lab}/equipment`, headers, connections: 2 }),
+    cannon('library list while 16 sign-ins with random e-mails hash', {
+      url: `${server.url}${lab}/equipment`,
+      headers,
+      connections: 2,
+    }),
     failedSignIns(server.url, 16),
   ]);
   figures.push(listUnderSignIns, signIns);
@@ -123,17 +175,42 @@ try {
   // and 4 computes of 10⁶ trials keep the compute pool full.
   const selenium = items.find((item) => item.code === 'RM-SE-1000');
   if (!selenium) throw new Error('The demo library has no RM-SE-1000.');
-  const routeBody = JSON.stringify({ target: { value: 0.0123457, unit: 'mg/L' }, analyte: 'Se', materialLibraryId: String(selenium.id), maximumDilutions: 3 });
+  const routeBody = JSON.stringify({
+    target: { value: 0.0123457, unit: 'mg/L' },
+    analyte: 'Se',
+    materialLibraryId: String(selenium.id),
+    maximumDilutions: 3,
+  });
   const heavyComputeBody = JSON.stringify({ plan, trials: 1_000_000, seed: 1 });
   const [listUnderHeavyLoad, routeSearches, heavyComputes] = await Promise.all([
-    cannon('library list while 4 route searches and 4 computes of 10⁶ trials run', { url: `${server.url}${lab}/equipment`, headers, connections: 2 }),
-    cannon('(route searches meanwhile, POST …/route-finder)', { url: `${server.url}${lab}/route-finder`, method: 'POST', headers, body: routeBody, connections: 4 }),
-    cannon('(computes of 10⁶ trials meanwhile)', { url: `${server.url}${lab}/compute`, method: 'POST', headers, body: heavyComputeBody, connections: 4, timeout: 60 }),
+    cannon('library list while 4 route searches and 4 computes of 10⁶ trials run', {
+      url: `${server.url}${lab}/equipment`,
+      headers,
+      connections: 2,
+    }),
+    cannon('(route searches meanwhile, POST …/route-finder)', {
+      url: `${server.url}${lab}/route-finder`,
+      method: 'POST',
+      headers,
+      body: routeBody,
+      connections: 4,
+    }),
+    cannon('(computes of 10⁶ trials meanwhile)', {
+      url: `${server.url}${lab}/compute`,
+      method: 'POST',
+      headers,
+      body: heavyComputeBody,
+      connections: 4,
+      timeout: 60,
+    }),
   ]);
   figures.push(listUnderHeavyLoad, routeSearches, heavyComputes);
   const alone = figures[1];
 
-  const rows = figures.map((f) => `| ${f.name} | ${f.requests} | ${f.perSecond.toFixed(1)} | ${f.p50.toFixed(1)} | ${f.p99.toFixed(1)} | ${f.errors} |`);
+  const rows = figures.map(
+    (f) =>
+      `| ${f.name} | ${f.requests} | ${f.perSecond.toFixed(1)} | ${f.p50.toFixed(1)} | ${f.p99.toFixed(1)} | ${f.errors} |`,
+  );
   const cpu = cpus()[0]?.model ?? 'unknown CPU';
   const text = `# Performance under load
 

@@ -10,12 +10,25 @@
  */
 import { readFileSync } from 'node:fs';
 import { all, create } from 'mathjs';
-import { compilePlan, findRoutes, propagate, RandomGenerator, runMonteCarlo, type CompiledModel, type PlanInput, type RouteRequest } from '../shared/uncertainty/index';
+import {
+  compilePlan,
+  findRoutes,
+  propagate,
+  RandomGenerator,
+  runMonteCarlo,
+  type CompiledModel,
+  type PlanInput,
+  type RouteRequest,
+} from '../shared/uncertainty/index';
 import { fillSamples } from '../shared/uncertainty/samplers';
 
 const readJson = <T>(path: string): T => JSON.parse(readFileSync(new URL(path, import.meta.url), 'utf8')) as T;
-const lead = readJson<PlanInput & { steps: PlanInput['steps'] }>('../tests/fixtures/plans/lead-standard-from-nitrate.json');
-const { balances, flasks, pipettes } = readJson<Pick<RouteRequest, 'balances' | 'flasks' | 'pipettes'>>('../tests/fixtures/plans/library/demo-equipment-library.json');
+const lead = readJson<PlanInput & { steps: PlanInput['steps'] }>(
+  '../tests/fixtures/plans/lead-standard-from-nitrate.json',
+);
+const { balances, flasks, pipettes } = readJson<Pick<RouteRequest, 'balances' | 'flasks' | 'pipettes'>>(
+  '../tests/fixtures/plans/library/demo-equipment-library.json',
+);
 const library = { balances, flasks, pipettes };
 
 // The 4-step chain: weigh Pb(NO3)2 → 100 mL stock → 10 mL aliquot → 100 mL.
@@ -46,7 +59,9 @@ function expressionOf(compiled: CompiledModel): string {
   compiled.nodes.forEach((node, index) => {
     if (node.operation === 'source') text[index] = `x${node.sourceIndex}`;
     else if (node.operation === 'constant') text[index] = `(${node.value})`;
-    else text[index] = `(${text[node.left]} ${{ add: '+', subtract: '-', multiply: '*', divide: '/' }[node.operation]} ${text[node.right]})`;
+    else
+      text[index] =
+        `(${text[node.left]} ${{ add: '+', subtract: '-', multiply: '*', divide: '/' }[node.operation]} ${text[node.right]})`;
   });
   return text[compiled.outputNode];
 }
@@ -112,11 +127,22 @@ const baselineTrialsPerSecond = baselineTrials / baselineSeconds;
 const peakRssMb = process.resourceUsage().maxRSS / 1024;
 
 console.log(`model: ${model.sources.length} sources, ${model.nodes.length} tape nodes, ${chain.steps.length} steps`);
-console.log(`engine Monte Carlo (median of ${rounds} rounds): ${trials} trials in ${engineSeconds.toFixed(3)} s = ${Math.round(trialsPerSecond)} trials/s (mean ${monteCarlo.mean.toFixed(4)}, sd ${monteCarlo.standardDeviation.toFixed(4)} ${monteCarlo.unit})`);
-console.log(`mathjs baseline (median of ${rounds} rounds): ${baselineTrials} trials in ${baselineSeconds.toFixed(3)} s = ${Math.round(baselineTrialsPerSecond)} trials/s (mean ${baselineMean.toFixed(4)})`);
-console.log(`ratio engine/baseline (median of the rounds' ratios): ${ratio.toFixed(1)}× (rounds: ${engineRounds.map((seconds, round) => (baselineRounds[round] * trials) / (seconds * baselineTrials)).map((value) => value.toFixed(1)).join(', ')})`);
+console.log(
+  `engine Monte Carlo (median of ${rounds} rounds): ${trials} trials in ${engineSeconds.toFixed(3)} s = ${Math.round(trialsPerSecond)} trials/s (mean ${monteCarlo.mean.toFixed(4)}, sd ${monteCarlo.standardDeviation.toFixed(4)} ${monteCarlo.unit})`,
+);
+console.log(
+  `mathjs baseline (median of ${rounds} rounds): ${baselineTrials} trials in ${baselineSeconds.toFixed(3)} s = ${Math.round(baselineTrialsPerSecond)} trials/s (mean ${baselineMean.toFixed(4)})`,
+);
+console.log(
+  `ratio engine/baseline (median of the rounds' ratios): ${ratio.toFixed(1)}× (rounds: ${engineRounds
+    .map((seconds, round) => (baselineRounds[round] * trials) / (seconds * baselineTrials))
+    .map((value) => value.toFixed(1))
+    .join(', ')})`,
+);
 console.log(`GUM propagation: ${gumMicroseconds.toFixed(1)} µs per evaluation`);
-console.log(`route finder (${library.balances?.length} balances × ${library.flasks.length} flasks × ${library.pipettes?.length} pipettes): ${routeMilliseconds.toFixed(1)} ms, ${routes.feasibleCandidates} feasible candidates scored`);
+console.log(
+  `route finder (${library.balances?.length} balances × ${library.flasks.length} flasks × ${library.pipettes?.length} pipettes): ${routeMilliseconds.toFixed(1)} ms, ${routes.feasibleCandidates} feasible candidates scored`,
+);
 console.log(`peak RSS: ${peakRssMb.toFixed(1)} MB (outputs array ${(trials * 8) / 1e6} MB)`);
 console.log(
   JSON.stringify({

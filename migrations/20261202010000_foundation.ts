@@ -28,7 +28,14 @@ export async function up(knex: Knex): Promise<void> {
     t.unique(['user_id', 'lab_id', 'role']);
     t.index(['lab_id']);
   });
-  await refuse(knex, 'memberships_role_check', 'INSERT', 'memberships', 'unknown role', "NEW.role NOT IN ('admin','qa','analyst','auditor')");
+  await refuse(
+    knex,
+    'memberships_role_check',
+    'INSERT',
+    'memberships',
+    'unknown role',
+    "NEW.role NOT IN ('admin','qa','analyst','auditor')",
+  );
 
   await knex.schema.createTable('sessions', (t) => {
     t.string('sid', 128).primary();
@@ -98,8 +105,23 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const table of ['app_settings', 'audit_events', 'outbox', 'password_resets', 'invitations', 'sessions', 'memberships', 'users', 'labs']) {
+  for (const table of [
+    'app_settings',
+    'audit_events',
+    'outbox',
+    'password_resets',
+    'invitations',
+    'sessions',
+    'memberships',
+    'users',
+    'labs',
+  ]) {
     await knex.schema.dropTableIfExists(table);
   }
-  await dropRefusals(knex, ['memberships_role_check', 'audit_events_no_update', 'audit_events_no_delete', 'audit_events_no_truncate']);
+  await dropRefusals(knex, [
+    'memberships_role_check',
+    'audit_events_no_update',
+    'audit_events_no_delete',
+    'audit_events_no_truncate',
+  ]);
 }

@@ -30,9 +30,27 @@ export async function up(knex: Knex): Promise<void> {
     t.unique(['item_id', 'number']);
   });
   // A revision is what a budget points at: it never changes and is never removed.
-  await refuse(knex, 'equipment_revisions_no_update', 'UPDATE', 'equipment_revisions', 'equipment revisions are immutable');
-  await refuse(knex, 'equipment_revisions_no_delete', 'DELETE', 'equipment_revisions', 'equipment revisions are immutable');
-  await refuse(knex, 'equipment_revisions_no_truncate', 'TRUNCATE', 'equipment_revisions', 'equipment revisions are immutable');
+  await refuse(
+    knex,
+    'equipment_revisions_no_update',
+    'UPDATE',
+    'equipment_revisions',
+    'equipment revisions are immutable',
+  );
+  await refuse(
+    knex,
+    'equipment_revisions_no_delete',
+    'DELETE',
+    'equipment_revisions',
+    'equipment revisions are immutable',
+  );
+  await refuse(
+    knex,
+    'equipment_revisions_no_truncate',
+    'TRUNCATE',
+    'equipment_revisions',
+    'equipment revisions are immutable',
+  );
 
   await knex.schema.createTable('certificates', (t) => {
     t.increments('id').primary();
@@ -62,5 +80,9 @@ export async function down(knex: Knex): Promise<void> {
   await knex.schema.dropTableIfExists('certificates');
   await knex.schema.dropTableIfExists('equipment_revisions');
   await knex.schema.dropTableIfExists('equipment_items');
-  await dropRefusals(knex, ['equipment_revisions_no_update', 'equipment_revisions_no_delete', 'equipment_revisions_no_truncate']);
+  await dropRefusals(knex, [
+    'equipment_revisions_no_update',
+    'equipment_revisions_no_delete',
+    'equipment_revisions_no_truncate',
+  ]);
 }

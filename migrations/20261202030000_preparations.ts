@@ -35,8 +35,22 @@ export async function up(knex: Knex): Promise<void> {
     t.string('updated_at', 30).notNullable();
     t.unique(['preparation_id', 'number']);
   });
-  await refuse(knex, 'preparation_versions_approved_no_update', 'UPDATE', 'preparation_versions', 'an approved version is immutable', "OLD.status = 'approved'");
-  await refuse(knex, 'preparation_versions_approved_no_delete', 'DELETE', 'preparation_versions', 'an approved version is immutable', "OLD.status = 'approved'");
+  await refuse(
+    knex,
+    'preparation_versions_approved_no_update',
+    'UPDATE',
+    'preparation_versions',
+    'an approved version is immutable',
+    "OLD.status = 'approved'",
+  );
+  await refuse(
+    knex,
+    'preparation_versions_approved_no_delete',
+    'DELETE',
+    'preparation_versions',
+    'an approved version is immutable',
+    "OLD.status = 'approved'",
+  );
 }
 
 export async function down(knex: Knex): Promise<void> {

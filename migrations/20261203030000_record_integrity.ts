@@ -44,7 +44,14 @@ export async function up(knex: Knex): Promise<void> {
     previous = hash;
   }
   await refuse(knex, 'audit_events_no_update', 'UPDATE', 'audit_events', 'audit events are append-only');
-  await refuse(knex, 'audit_events_chained', 'INSERT', 'audit_events', 'an audit event must carry its chain hash', 'NEW.event_hash IS NULL OR NEW.previous_hash IS NULL');
+  await refuse(
+    knex,
+    'audit_events_chained',
+    'INSERT',
+    'audit_events',
+    'an audit event must carry its chain hash',
+    'NEW.event_hash IS NULL OR NEW.previous_hash IS NULL',
+  );
   await knex.schema.alterTable('audit_events', (t) => {
     t.index(['event_hash']);
   });
@@ -62,6 +69,13 @@ export async function down(knex: Knex): Promise<void> {
   await knex.schema.alterTable('certificates', (t) => t.dropColumn('contains_script'));
   await knex.schema.alterTable('version_reviews', (t) => t.dropColumn('record_sha256'));
   await knex.schema.alterTable('preparation_versions', (t) => {
-    for (const column of ['approved_title', 'approved_analyte', 'approved_preparation_name', 'approved_lab_name', 'record_sha256']) t.dropColumn(column);
+    for (const column of [
+      'approved_title',
+      'approved_analyte',
+      'approved_preparation_name',
+      'approved_lab_name',
+      'record_sha256',
+    ])
+      t.dropColumn(column);
   });
 }

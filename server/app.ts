@@ -92,8 +92,26 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   const audit = auditRepository(db, now);
   // express-session dates its cookies by the real clock, so the store compares with the same one.
   const sessions = new DatabaseSessionStore(db, () => Date.now());
-  const auth = authService({ transact, users, resets: passwordResetsRepository(db), audit, mailer, sessions, now, publicUrl });
-  const members = membersService({ transact, users, invitations: invitationsRepository(db), labs, audit, mailer, now, publicUrl });
+  const auth = authService({
+    transact,
+    users,
+    resets: passwordResetsRepository(db),
+    audit,
+    mailer,
+    sessions,
+    now,
+    publicUrl,
+  });
+  const members = membersService({
+    transact,
+    users,
+    invitations: invitationsRepository(db),
+    labs,
+    audit,
+    mailer,
+    now,
+    publicUrl,
+  });
   const outbox = outboxRepository(db);
   const operator = operatorService({ users, outbox, audit, sessions });
   const deliveryLog = deliveryLogService({ outbox });
@@ -105,12 +123,39 @@ export function createApp({ db, mailer, clock, config, computer = createComputeP
   const imports = importService({ transact, library, items });
   const policy = policyService({ transact, policies: policyRepository(db), audit, now });
   const preparationRows = preparationsRepository(db);
-  const preparations = preparationsService({ transact, preparations: preparationRows, items, policy, audit, computer, now });
-  const reviews = reviewService({ transact, preparations: preparationRows, reviews: reviewsRepository(db), users, labs, audit, mailer, now, publicUrl, log });
+  const preparations = preparationsService({
+    transact,
+    preparations: preparationRows,
+    items,
+    policy,
+    audit,
+    computer,
+    now,
+  });
+  const reviews = reviewService({
+    transact,
+    preparations: preparationRows,
+    reviews: reviewsRepository(db),
+    users,
+    labs,
+    audit,
+    mailer,
+    now,
+    publicUrl,
+    log,
+  });
   const routes = routeFinderService({ items, policy, computer });
   const background = backgroundWork(log);
-  const limits = attemptLimits({ db, audit, background, settings: { ...(config.signInLimit ? { perAccount: config.signInLimit } : {}), ...config.attemptLimits } });
-  const pruneAttempts = setInterval(() => void limits.prune().catch((error: unknown) => log('Pruning attempt counters failed', error)), 60 * 60 * 1000).unref();
+  const limits = attemptLimits({
+    db,
+    audit,
+    background,
+    settings: { ...(config.signInLimit ? { perAccount: config.signInLimit } : {}), ...config.attemptLimits },
+  });
+  const pruneAttempts = setInterval(
+    () => void limits.prune().catch((error: unknown) => log('Pruning attempt counters failed', error)),
+    60 * 60 * 1000,
+  ).unref();
   const csrf = csrfProtection({ secret: config.sessionSecret, secureCookie: config.production && config.trustProxy });
   const passport = createPassport(auth);
   const authorize = createAuthorize(labs, users);

@@ -3,7 +3,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '../shared/contracts/roles';
 import { hashPassword } from './auth/password';
 import { listRoutes } from './lib/list-routes';
-import { agentFor, buildTestApp, demo, DEMO_PASSWORD, signIn, type Client, type TestApp } from './test-support/test-app';
+import {
+  agentFor,
+  buildTestApp,
+  demo,
+  DEMO_PASSWORD,
+  signIn,
+  type Client,
+  type TestApp,
+} from './test-support/test-app';
 
 /**
  * Who may call each API route. A route the app serves but this table does not list fails the
@@ -73,7 +81,12 @@ const ACCESS: Record<string, Access> = {
 };
 
 const ROLES: Role[] = ['admin', 'qa', 'analyst', 'auditor'];
-const LOCAL: Record<Role, 'admin' | 'qa' | 'analyst' | 'auditor'> = { admin: 'admin', qa: 'qa', analyst: 'analyst', auditor: 'auditor' };
+const LOCAL: Record<Role, 'admin' | 'qa' | 'analyst' | 'auditor'> = {
+  admin: 'admin',
+  qa: 'qa',
+  analyst: 'analyst',
+  auditor: 'auditor',
+};
 /** The demo admin account is also the instance operator; no other demo account is. */
 const OPERATOR_ROLE: Role = 'admin';
 
@@ -89,8 +102,19 @@ beforeAll(async () => {
   const at = new Date().toISOString();
   const [lab] = await t.db('labs').insert({ name: 'Other lab', slug: 'other-lab', created_at: at }).returning('id');
   otherLab = typeof lab === 'object' ? lab.id : lab;
-  const [user] = await t.db('users').insert({ email: 'admin@other.example', name: 'Other Admin', password_hash: await hashPassword(DEMO_PASSWORD), active: true, created_at: at }).returning('id');
-  await t.db('memberships').insert({ user_id: typeof user === 'object' ? user.id : user, lab_id: otherLab, role: 'admin', created_at: at });
+  const [user] = await t
+    .db('users')
+    .insert({
+      email: 'admin@other.example',
+      name: 'Other Admin',
+      password_hash: await hashPassword(DEMO_PASSWORD),
+      active: true,
+      created_at: at,
+    })
+    .returning('id');
+  await t
+    .db('memberships')
+    .insert({ user_id: typeof user === 'object' ? user.id : user, lab_id: otherLab, role: 'admin', created_at: at });
   for (const role of ROLES) clients.set(role, await signIn(t.app, demo(LOCAL[role])));
   anonymous = await agentFor(t.app);
 });
@@ -100,7 +124,10 @@ afterAll(async () => {
 
 /** Fills the path with the lab and made-up ids (999 999), so only access decides the status. */
 const concrete = (path: string, labId: number) =>
-  path.replace(':labId', String(labId)).replace(':token', 'x'.repeat(43)).replace(/:[A-Za-z]+/g, '999999');
+  path
+    .replace(':labId', String(labId))
+    .replace(':token', 'x'.repeat(43))
+    .replace(/:[A-Za-z]+/g, '999999');
 
 async function call(client: Client, method: string, path: string) {
   const verb = method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -111,12 +138,21 @@ async function call(client: Client, method: string, path: string) {
 const LAB_HIDDEN = 'The lab was not found.';
 
 describe('authorization matrix: every API route × role × (own lab, other lab, signed out)', () => {
-  const routes = () => listRoutes(t.app).filter((r) => r.path.startsWith('/api/')).map((r) => `${r.method} ${r.path}`);
+  const routes = () =>
+    listRoutes(t.app)
+      .filter((r) => r.path.startsWith('/api/'))
+      .map((r) => `${r.method} ${r.path}`);
 
   it('has an access rule for every route the app serves, and no rule for a route that is gone', () => {
     const served = routes();
-    expect(served.filter((key) => !(key in ACCESS)), 'routes without an access rule').toEqual([]);
-    expect(Object.keys(ACCESS).filter((key) => !served.includes(key)), 'rules for routes that do not exist').toEqual([]);
+    expect(
+      served.filter((key) => !(key in ACCESS)),
+      'routes without an access rule',
+    ).toEqual([]);
+    expect(
+      Object.keys(ACCESS).filter((key) => !served.includes(key)),
+      'rules for routes that do not exist',
+    ).toEqual([]);
   });
 
   it('answers each cell as the table says', async () => {
@@ -129,20 +165,26 @@ describe('authorization matrix: every API route × role × (own lab, other lab, 
       // Signed out: public routes answer something other than 401; all others 401.
       const out = await call(anonymous, method, concrete(path, ownLab));
       cells += 1;
-      if (access === 'public' ? out.status === 401 && !path.includes('login') : out.status !== 401) failures.push(`${key} signed out → ${out.status}`);
+      if (access === 'public' ? out.status === 401 && !path.includes('login') : out.status !== 401)
+        failures.push(`${key} signed out → ${out.status}`);
       for (const role of ROLES) {
         const client = clients.get(role)!;
         const own = await call(client, method, concrete(path, ownLab));
         cells += 1;
         const allowed =
-          access === 'public' || access === 'signedIn' || access === 'member' || (access === 'operator' ? role === OPERATOR_ROLE : access.includes(role));
+          access === 'public' ||
+          access === 'signedIn' ||
+          access === 'member' ||
+          (access === 'operator' ? role === OPERATOR_ROLE : access.includes(role));
         const hidden = own.status === 404 && own.body?.error?.message === LAB_HIDDEN;
-        if (allowed && (own.status === 401 || own.status === 403 || hidden)) failures.push(`${key} as ${role} in own lab → ${own.status}, expected access`);
+        if (allowed && (own.status === 401 || own.status === 403 || hidden))
+          failures.push(`${key} as ${role} in own lab → ${own.status}, expected access`);
         if (!allowed && own.status !== 403) failures.push(`${key} as ${role} in own lab → ${own.status}, expected 403`);
         if (lab) {
           const other = await call(client, method, concrete(path, otherLab));
           cells += 1;
-          if (!(other.status === 404 && other.body?.error?.message === LAB_HIDDEN)) failures.push(`${key} as ${role} in another lab → ${other.status}, expected 404`);
+          if (!(other.status === 404 && other.body?.error?.message === LAB_HIDDEN))
+            failures.push(`${key} as ${role} in another lab → ${other.status}, expected 404`);
         }
       }
       if (method !== 'GET' && path.includes('logout')) {

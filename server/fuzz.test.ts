@@ -33,10 +33,21 @@ beforeAll(async () => {
   agent = request.agent(server);
   token = (await agent.get('/api/auth/csrf')).body.csrfToken;
   // QA and analyst in one account, so one session reaches the library writes and the plan routes.
-  const user = await t.db('users').where({ email: demo('qa') }).first();
+  const user = await t
+    .db('users')
+    .where({ email: demo('qa') })
+    .first();
   labId = (await t.db('labs').first()).id;
-  await t.db('memberships').insert({ user_id: user.id, lab_id: labId, role: 'analyst', created_at: new Date().toISOString() });
-  token = (await agent.post('/api/auth/login').set('x-csrf-token', token).send({ email: demo('qa'), password: DEMO_PASSWORD }).expect(200)).body.csrfToken;
+  await t
+    .db('memberships')
+    .insert({ user_id: user.id, lab_id: labId, role: 'analyst', created_at: new Date().toISOString() });
+  token = (
+    await agent
+      .post('/api/auth/login')
+      .set('x-csrf-token', token)
+      .send({ email: demo('qa'), password: DEMO_PASSWORD })
+      .expect(200)
+  ).body.csrfToken;
   const items = (await agent.get(`/api/labs/${labId}/equipment?status=all`).expect(200)).body as EquipmentItem[];
   library = new Map(items.map((item) => [item.code, item]));
 }, 60_000);
@@ -79,10 +90,15 @@ const junk = fc.oneof(
 const broken = (document: unknown) => {
   const paths = leafPaths(document).filter((p) => p.length > 0);
   return fc.oneof(
-    fc.record({ path: fc.constantFrom(...paths), value: junk, remove: fc.boolean() }).map(({ path, value, remove }) => withValueAt(document, path, value, remove)),
-    fc.record({ path: fc.constantFrom(...paths.filter((p) => typeof p[p.length - 1] === 'string')), key: fc.string({ minLength: 1, maxLength: 8 }) }).map(({ path, key }) =>
-      withValueAt(document, [...path.slice(0, -1), `x_${key}`], 1, false),
-    ),
+    fc
+      .record({ path: fc.constantFrom(...paths), value: junk, remove: fc.boolean() })
+      .map(({ path, value, remove }) => withValueAt(document, path, value, remove)),
+    fc
+      .record({
+        path: fc.constantFrom(...paths.filter((p) => typeof p[p.length - 1] === 'string')),
+        key: fc.string({ minLength: 1, maxLength: 8 }),
+      })
+      .map(({ path, key }) => withValueAt(document, [...path.slice(0, -1), `x_${key}`], 1, false)),
   );
 };
 
@@ -99,7 +115,11 @@ function expectRefusalShape(res: request.Response, what: string) {
 
 /** Sends any JSON value as the raw body (supertest refuses bare numbers and strings). */
 const post = (path: string, body: unknown) =>
-  agent.post(`/api/labs/${labId}${path}`).set('x-csrf-token', token).set('content-type', 'application/json').send(typeof body === 'string' ? body : JSON.stringify(body));
+  agent
+    .post(`/api/labs/${labId}${path}`)
+    .set('x-csrf-token', token)
+    .set('content-type', 'application/json')
+    .send(typeof body === 'string' ? body : JSON.stringify(body));
 
 describe('bad input never breaks the server', () => {
   it('compute: 4000 plans with one field broken', async () => {
@@ -160,14 +180,32 @@ describe('bad input never breaks the server', () => {
 
   it('query strings: 2000 random filters on the list routes', async () => {
     const routes = ['/equipment', '/preparations', '/audit-events', '/approved-records', '/equipment-csv/export'];
-    const keys = fc.constantFrom('kind', 'status', 'analyst', 'material', 'from', 'to', 'q', 'limit', 'offset', 'actor', 'action', 'entityType', 'x');
+    const keys = fc.constantFrom(
+      'kind',
+      'status',
+      'analyst',
+      'material',
+      'from',
+      'to',
+      'q',
+      'limit',
+      'offset',
+      'actor',
+      'action',
+      'entityType',
+      'x',
+    );
     await fc.assert(
-      fc.asyncProperty(fc.constantFrom(...routes), fc.array(fc.tuple(keys, fc.string({ maxLength: 20 })), { maxLength: 4 }), async (route, pairs) => {
-        cases += 1;
-        const query = pairs.map(([k, v]) => `${encodeURIComponent(k)}=${encodeURIComponent(v)}`).join('&');
-        const res = await agent.get(`/api/labs/${labId}${route}?${query}`);
-        expectRefusalShape(res, `GET ${route}?${query}`);
-      }),
+      fc.asyncProperty(
+        fc.constantFrom(...routes),
+        fc.array(fc.tuple(keys, fc.string({ maxLength: 20 })), { maxLength: 4 }),
+        async (route, pairs) => {
+          cases += 1;
+          const query = pairs.map(([k, v]) => `${encodeURIComponent(k)}=${encodeURIComponent(v)}`).join('&');
+          const res = await agent.get(`/api/labs/${labId}${route}?${query}`);
+          expectRefusalShape(res, `GET ${route}?${query}`);
+        },
+      ),
       { numRuns: 2000, seed: 3 },
     );
   }, 300_000);
@@ -190,16 +228,26 @@ describe('refused before any route', () => {
     // Far deeper than the JSON parser will go: refused as unreadable JSON, still a 400.
     const abyss = await post('/compute', `{"plan":${'['.repeat(20_000)}1${']'.repeat(20_000)}}`);
     expect(abyss.status).toBe(400);
-    const text = await agent.post(`/api/labs/${labId}/equipment`).set('x-csrf-token', token).set('content-type', 'text/plain').send('kind=flask');
+    const text = await agent
+      .post(`/api/labs/${labId}/equipment`)
+      .set('x-csrf-token', token)
+      .set('content-type', 'text/plain')
+      .send('kind=flask');
     expect(text.status).toBe(415);
     const infinite = await agent
       .post(`/api/labs/${labId}/equipment`)
       .set('x-csrf-token', token)
       .set('content-type', 'application/json')
-      .send(`{"kind":"flask","data":${JSON.stringify({ ...library.get('VF-100-A')!.current.data, code: 'FZ-INF' }).replace('"toleranceMl":0.1', '"toleranceMl":1e999')}}`);
+      .send(
+        `{"kind":"flask","data":${JSON.stringify({ ...library.get('VF-100-A')!.current.data, code: 'FZ-INF' }).replace('"toleranceMl":0.1', '"toleranceMl":1e999')}}`,
+      );
     expect(infinite.status).toBe(400);
     expect(infinite.body.error.details[0].path).toBe('data.toleranceMl');
-    const nan = await agent.post(`/api/labs/${labId}/equipment`).set('x-csrf-token', token).set('content-type', 'application/json').send('{"kind":"flask","data":{"toleranceMl":NaN}}');
+    const nan = await agent
+      .post(`/api/labs/${labId}/equipment`)
+      .set('x-csrf-token', token)
+      .set('content-type', 'application/json')
+      .send('{"kind":"flask","data":{"toleranceMl":NaN}}');
     expect(nan.status).toBe(400);
     expect(nan.body.error.code).toBe('malformed_json');
     expect(await rowCounts()).toEqual(before);

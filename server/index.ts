@@ -15,7 +15,11 @@ import { usersRepository } from './auth/users-repository';
 const env = loadEnv();
 const db = await openDatabase(databaseTarget(env));
 if (env.DILUTRACE_SEED_DEMO === '1' && (await usersRepository(db).count()) === 0) {
-  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: systemClock.now(), certificateDir: certificateDir(env) });
+  await seedDemoLab(db, {
+    password: env.DILUTRACE_DEMO_PASSWORD,
+    now: systemClock.now(),
+    certificateDir: certificateDir(env),
+  });
   console.log('Seeded the demo lab (Wellmere Regional Water Laboratory).');
 }
 
@@ -24,7 +28,11 @@ const mailer = createSmtpMailer(env.SMTP_URL ?? `smtp://127.0.0.1:${capture?.por
 const production = env.NODE_ENV === 'production';
 const publicUrl = env.DILUTRACE_PUBLIC_URL ?? `http://${env.HOST === '0.0.0.0' ? '127.0.0.1' : env.HOST}:${env.PORT}`;
 
-const { app, sessions, close: closeApp } = createApp({
+const {
+  app,
+  sessions,
+  close: closeApp,
+} = createApp({
   db,
   mailer,
   clock: systemClock,
@@ -53,7 +61,10 @@ const server = app.listen(env.PORT, env.HOST, () => {
   const { port } = server.address() as AddressInfo;
   const url = env.DILUTRACE_PUBLIC_URL ?? `http://${env.HOST === '0.0.0.0' ? '127.0.0.1' : env.HOST}:${port}`;
   console.log(`Dilutrace is running at ${url}${production ? '' : ' (API only; the client runs under Vite on :5173)'}`);
-  if (!env.SMTP_URL) console.log(`Mail is captured locally (SMTP on 127.0.0.1:${capture?.port}); the instance operator reads it under Captured mail.`);
+  if (!env.SMTP_URL)
+    console.log(
+      `Mail is captured locally (SMTP on 127.0.0.1:${capture?.port}); the instance operator reads it under Captured mail.`,
+    );
 });
 
 let stopping = false;

@@ -20,7 +20,15 @@ beforeAll(async () => {
     db,
     mailer: { send: async () => undefined, close: () => undefined },
     clock: testClock(),
-    config: { sessionSecret: 's'.repeat(40), publicUrl: 'http://x', production: true, trustProxy: false, certificateDir: dir, clientDir: join(dir, 'client'), log: () => undefined },
+    config: {
+      sessionSecret: 's'.repeat(40),
+      publicUrl: 'http://x',
+      production: true,
+      trustProxy: false,
+      certificateDir: dir,
+      clientDir: join(dir, 'client'),
+      log: () => undefined,
+    },
   });
 });
 afterAll(async () => {

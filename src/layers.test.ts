@@ -31,7 +31,9 @@ describe('client layers', () => {
     const crossings = files.flatMap(({ file, imports }) => {
       const [top, feature] = file.split('/');
       if (top !== 'features') return [];
-      return imports.filter((target) => target.startsWith('features/') && target.split('/')[1] !== feature).map((target) => `${file} → ${target}`);
+      return imports
+        .filter((target) => target.startsWith('features/') && target.split('/')[1] !== feature)
+        .map((target) => `${file} → ${target}`);
     });
     expect(crossings).toEqual([]);
   });

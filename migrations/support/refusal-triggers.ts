@@ -19,11 +19,17 @@ export async function refuse(
   when?: string,
 ): Promise<void> {
   if (knex.client.config.client === 'pg') {
-    await knex.raw(`CREATE FUNCTION ${trigger}() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RAISE EXCEPTION '${message}'; END $$`);
+    await knex.raw(
+      `CREATE FUNCTION ${trigger}() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RAISE EXCEPTION '${message}'; END $$`,
+    );
     const level = event === 'TRUNCATE' ? 'FOR EACH STATEMENT' : 'FOR EACH ROW';
-    await knex.raw(`CREATE TRIGGER ${trigger} BEFORE ${event} ON ${table} ${level} ${when ? `WHEN (${when}) ` : ''}EXECUTE FUNCTION ${trigger}()`);
+    await knex.raw(
+      `CREATE TRIGGER ${trigger} BEFORE ${event} ON ${table} ${level} ${when ? `WHEN (${when}) ` : ''}EXECUTE FUNCTION ${trigger}()`,
+    );
   } else if (event !== 'TRUNCATE') {
-    await knex.raw(`CREATE TRIGGER ${trigger} BEFORE ${event} ON ${table}${when ? ` WHEN ${when}` : ''} BEGIN SELECT RAISE(ABORT, '${message}'); END`);
+    await knex.raw(
+      `CREATE TRIGGER ${trigger} BEFORE ${event} ON ${table}${when ? ` WHEN ${when}` : ''} BEGIN SELECT RAISE(ABORT, '${message}'); END`,
+    );
   }
 }
 

@@ -15,7 +15,12 @@ const root = join(import.meta.dirname, '..', '..');
 /** `npm run verify` against a SQLite file: its exit code and everything it printed. */
 function runVerify(file: string): { code: number; output: string } {
   try {
-    const out = execFileSync(process.execPath, ['--import', 'tsx', join(root, 'server', 'cli', 'verify.ts')], { env: { ...process.env, DILUTRACE_DB: file }, encoding: 'utf8', cwd: root, stdio: 'pipe' });
+    const out = execFileSync(process.execPath, ['--import', 'tsx', join(root, 'server', 'cli', 'verify.ts')], {
+      env: { ...process.env, DILUTRACE_DB: file },
+      encoding: 'utf8',
+      cwd: root,
+      stdio: 'pipe',
+    });
     return { code: 0, output: out };
   } catch (error) {
     const e = error as { status: number; stdout: string; stderr: string };
@@ -41,7 +46,8 @@ async function approveOne() {
   return t.db('preparation_versions').where({ preparation_id: id, number: 1 }).first();
 }
 
-const events = (): Promise<{ id: number; previous_hash: string; event_hash: string; summary: string }[]> => t.db('audit_events').orderBy('id');
+const events = (): Promise<{ id: number; previous_hash: string; event_hash: string; summary: string }[]> =>
+  t.db('audit_events').orderBy('id');
 
 describe('the audit trail is a hash chain', () => {
   it('links every event to the one before it, from the chain start', async () => {
@@ -56,7 +62,18 @@ describe('the audit trail is a hash chain', () => {
 
   it('does not fork under concurrent writers', async () => {
     const audit = auditRepository(t.db, () => new Date());
-    await Promise.all(Array.from({ length: 25 }, (_, i) => audit.record({ labId, actorUserId: null, action: 'test.concurrent', entityType: 'lab', entityId: labId, summary: `writer ${i}` })));
+    await Promise.all(
+      Array.from({ length: 25 }, (_, i) =>
+        audit.record({
+          labId,
+          actorUserId: null,
+          action: 'test.concurrent',
+          entityType: 'lab',
+          entityId: labId,
+          summary: `writer ${i}`,
+        }),
+      ),
+    );
     const trail = await events();
     expect(trail.length).toBeGreaterThanOrEqual(26);
     expect(new Set(trail.map((e) => e.previous_hash)).size).toBe(trail.length);
@@ -64,7 +81,17 @@ describe('the audit trail is a hash chain', () => {
   });
 
   it('refuses an event written without its chain hash', async () => {
-    await expect(t.db('audit_events').insert({ lab_id: labId, action: 'x', entity_type: 'lab', summary: 'unchained', created_at: new Date().toISOString() })).rejects.toThrow(/chain hash/);
+    await expect(
+      t
+        .db('audit_events')
+        .insert({
+          lab_id: labId,
+          action: 'x',
+          entity_type: 'lab',
+          summary: 'unchained',
+          created_at: new Date().toISOString(),
+        }),
+    ).rejects.toThrow(/chain hash/);
   });
 
   it('names the altered event, the removed one and the altered approved snapshot', async () => {
@@ -75,15 +102,28 @@ describe('the audit trail is a hash chain', () => {
     await dropTrigger(t.db, 'preparation_versions_approved_no_update', 'preparation_versions');
     await t.db('audit_events').where({ id: trail[1].id }).update({ summary: 'Nothing happened here' });
     await t.db('audit_events').where({ id: trail[3].id }).delete();
-    await t.db('preparation_versions').where({ id: version.id }).update({ snapshot_json: version.snapshot_json.replace('"seed":', '"seed": ') });
+    await t
+      .db('preparation_versions')
+      .where({ id: version.id })
+      .update({ snapshot_json: version.snapshot_json.replace('"seed":', '"seed": ') });
     const { breaks } = await verifyRecords(t.db);
     expect(breaks).toEqual([
       { table: 'audit_events', id: trail[1].id, problem: expect.stringMatching(/^event_hash differs .*altered/) },
-      { table: 'audit_events', id: trail[4].id, problem: expect.stringMatching(new RegExp(`previous_hash does not match the hash of event ${trail[2].id} .*removed`)) },
+      {
+        table: 'audit_events',
+        id: trail[4].id,
+        problem: expect.stringMatching(
+          new RegExp(`previous_hash does not match the hash of event ${trail[2].id} .*removed`),
+        ),
+      },
       { table: 'preparation_versions', id: version.id, problem: expect.stringMatching(/snapshot_json does not hash/) },
       { table: 'preparation_versions', id: version.id, problem: expect.stringMatching(/signed at approval differs/) },
       { table: 'preparation_versions', id: version.id, problem: expect.stringMatching(/do not hash to record_sha256/) },
-      { table: 'preparation_versions', id: version.id, problem: expect.stringMatching(/record hash signed at approval differs/) },
+      {
+        table: 'preparation_versions',
+        id: version.id,
+        problem: expect.stringMatching(/record hash signed at approval differs/),
+      },
     ]);
   });
 });
@@ -105,17 +145,32 @@ describe.runIf(!process.env.DATABASE_URL)('npm run verify', () => {
 
   it('chains the events that existed before the migration', async () => {
     const file = join(mkdtempSync(join(tmpdir(), 'dilutrace-chain-')), 'old.sqlite');
-    const before: Knex.MigrationSource<string> = { ...migrationSource, getMigrations: async () => (await migrationSource.getMigrations([])).filter((name) => name < '20261203030000') };
+    const before: Knex.MigrationSource<string> = {
+      ...migrationSource,
+      getMigrations: async () => (await migrationSource.getMigrations([])).filter((name) => name < '20261203030000'),
+    };
     const db = knex({ client: 'better-sqlite3', connection: { filename: file }, useNullAsDefault: true });
     try {
       await db.migrate.latest({ migrationSource: before });
-      const [lab] = await db('labs').insert({ name: 'Old Lab', slug: 'old', created_at: '2026-01-01T00:00:00.000Z' }).returning('id');
-      for (const summary of ['first', 'second', 'third']) await db('audit_events').insert({ lab_id: lab.id, action: 'old.event', entity_type: 'lab', summary, created_at: '2026-01-01T00:00:00.000Z' });
+      const [lab] = await db('labs')
+        .insert({ name: 'Old Lab', slug: 'old', created_at: '2026-01-01T00:00:00.000Z' })
+        .returning('id');
+      for (const summary of ['first', 'second', 'third'])
+        await db('audit_events').insert({
+          lab_id: lab.id,
+          action: 'old.event',
+          entity_type: 'lab',
+          summary,
+          created_at: '2026-01-01T00:00:00.000Z',
+        });
       await db.migrate.latest({ migrationSource });
-      const trail: { previous_hash: string; event_hash: string; summary: string }[] = await db('audit_events').orderBy('id');
+      const trail: { previous_hash: string; event_hash: string; summary: string }[] =
+        await db('audit_events').orderBy('id');
       expect(trail.map((e) => e.summary)).toEqual(['first', 'second', 'third']);
       expect(trail[0].previous_hash).toBe(GENESIS_HASH);
-      expect(trail[2].event_hash).toBe(auditEventHash((await db('audit_events').orderBy('id'))[2], trail[1].event_hash));
+      expect(trail[2].event_hash).toBe(
+        auditEventHash((await db('audit_events').orderBy('id'))[2], trail[1].event_hash),
+      );
       await expect(db('audit_events').update({ summary: 'x' })).rejects.toThrow(/append-only/);
       expect((await verifyRecords(db)).breaks).toEqual([]);
     } finally {

@@ -39,7 +39,17 @@ describe('audit CSV export', () => {
     const response = await auditor.get(`/api/labs/${labId}/audit-events.csv?action=bulk.`).expect(200);
     expect(response.headers['content-type']).toMatch(/^text\/csv/);
     const [header, ...rows] = parse(response.text) as string[][];
-    expect(header).toEqual(['id', 'time_utc', 'actor', 'action', 'entity_type', 'entity_id', 'summary', 'before', 'after']);
+    expect(header).toEqual([
+      'id',
+      'time_utc',
+      'actor',
+      'action',
+      'entity_type',
+      'entity_id',
+      'summary',
+      'before',
+      'after',
+    ]);
     expect(rows).toHaveLength(EVENTS);
     // Newest first, each event once: entity ids run from EVENTS down to 1 with no gap or repeat.
     expect(rows[0][5]).toBe(String(EVENTS));

@@ -20,9 +20,16 @@ export interface AuditEventInput {
  */
 export async function appendAuditEvent(trx: Knex.Transaction, row: ChainedEvent): Promise<void> {
   if (isPostgres(trx)) await trx.raw('select pg_advisory_xact_lock(hashtext(?))', ['dilutrace audit chain']);
-  const last: { event_hash: string } | undefined = await trx('audit_events').select('event_hash').orderBy('id', 'desc').first();
+  const last: { event_hash: string } | undefined = await trx('audit_events')
+    .select('event_hash')
+    .orderBy('id', 'desc')
+    .first();
   const previousHash = last?.event_hash ?? GENESIS_HASH;
-  await trx('audit_events').insert({ ...row, previous_hash: previousHash, event_hash: auditEventHash(row, previousHash) });
+  await trx('audit_events').insert({
+    ...row,
+    previous_hash: previousHash,
+    event_hash: auditEventHash(row, previousHash),
+  });
 }
 
 /** The append-only, hash-chained audit trail (the table refuses UPDATE, DELETE and unchained rows). */

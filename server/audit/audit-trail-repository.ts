@@ -35,7 +35,8 @@ export function auditTrailRepository(db: Db) {
   function filtered(labId: number, query: AuditFilters) {
     const q = db('audit_events as e').leftJoin('users as u', 'u.id', 'e.actor_user_id').where('e.lab_id', labId);
     // whereILike: `like` on SQLite (case-blind for ASCII), `ilike` on PostgreSQL, so searches match alike.
-    if (query.actor) q.andWhere((w) => w.whereILike('u.name', `%${query.actor}%`).orWhereILike('u.email', `%${query.actor}%`));
+    if (query.actor)
+      q.andWhere((w) => w.whereILike('u.name', `%${query.actor}%`).orWhereILike('u.email', `%${query.actor}%`));
     if (query.action) q.andWhereILike('e.action', `${query.action}%`);
     if (query.entityType) q.andWhere('e.entity_type', query.entityType);
     if (query.entityId) q.andWhere('e.entity_id', query.entityId);
@@ -43,12 +44,26 @@ export function auditTrailRepository(db: Db) {
     if (query.to) q.andWhere('e.created_at', '<=', `${query.to}T23:59:59.999Z`);
     return q;
   }
-  const columns = ['e.id', 'e.created_at', 'u.name as actor_name', 'e.action', 'e.entity_type', 'e.entity_id', 'e.summary', 'e.before_json', 'e.after_json'];
+  const columns = [
+    'e.id',
+    'e.created_at',
+    'u.name as actor_name',
+    'e.action',
+    'e.entity_type',
+    'e.entity_id',
+    'e.summary',
+    'e.before_json',
+    'e.after_json',
+  ];
 
   return {
     async page(labId: number, query: AuditQuery): Promise<AuditPage> {
       const total = Number((await filtered(labId, query).count({ n: '*' }).first())?.n ?? 0);
-      const rows: Row[] = await filtered(labId, query).select(columns).orderBy('e.id', 'desc').limit(query.limit).offset(query.offset);
+      const rows: Row[] = await filtered(labId, query)
+        .select(columns)
+        .orderBy('e.id', 'desc')
+        .limit(query.limit)
+        .offset(query.offset);
       return { events: rows.map(toEvent), total };
     },
 

@@ -23,11 +23,13 @@ describe('audit trail', () => {
     const failures = (await auditor.get(`/api/labs/${labId}/audit-events?action=auth.sign_in_failed`).expect(200)).body;
     expect(failures.total).toBe(1);
     expect(failures.events[0].summary).toContain(demo('analyst'));
-    const byActor = (await auditor.get(`/api/labs/${labId}/audit-events?actor=Okonjo&action=auth.sign_in`).expect(200)).body;
+    const byActor = (await auditor.get(`/api/labs/${labId}/audit-events?actor=Okonjo&action=auth.sign_in`).expect(200))
+      .body;
     expect(byActor.events.length).toBeGreaterThan(0);
     expect(new Set(byActor.events.map((e: { actor: string }) => e.actor))).toEqual(new Set(['Dev Okonjo']));
 
-    const seeded = (await auditor.get(`/api/labs/${labId}/audit-events?entityType=lab&entityId=${labId}`).expect(200)).body;
+    const seeded = (await auditor.get(`/api/labs/${labId}/audit-events?entityType=lab&entityId=${labId}`).expect(200))
+      .body;
     expect(seeded.events.map((e: { action: string }) => e.action)).toEqual(['lab.seeded']);
 
     const csv = await auditor.get(`/api/labs/${labId}/audit-events.csv?action=auth`).expect(200);

@@ -1,7 +1,12 @@
 import { createHash } from 'node:crypto';
 import type { Request, RequestHandler } from 'express';
 import { ipKeyGenerator } from 'express-rate-limit';
-import { RateLimiterPostgres, RateLimiterRes, RateLimiterSQLite, type RateLimiterAbstract } from 'rate-limiter-flexible';
+import {
+  RateLimiterPostgres,
+  RateLimiterRes,
+  RateLimiterSQLite,
+  type RateLimiterAbstract,
+} from 'rate-limiter-flexible';
 import { normaliseEmail } from '../../shared/contracts/auth';
 import type { AuditRepository } from '../audit/audit-repository';
 import { isPostgres, type Db } from '../db/connection';
@@ -82,7 +87,12 @@ const accountKey = (email: string) => createHash('sha256').update(normaliseEmail
 /** The client's address; IPv6 by its /56 network, as one client usually holds the whole block. */
 const clientKey = (req: Request) => ipKeyGenerator(req.ip ?? 'unknown');
 
-export function attemptLimits(deps: { db: Db; audit: AuditRepository; settings?: Partial<AttemptLimitSettings>; background: BackgroundWork }) {
+export function attemptLimits(deps: {
+  db: Db;
+  audit: AuditRepository;
+  settings?: Partial<AttemptLimitSettings>;
+  background: BackgroundWork;
+}) {
   const settings = { ...DEFAULT_ATTEMPT_LIMITS, ...deps.settings };
   const account = databaseLimiter(deps.db, 'password-account', settings.perAccount);
   const client = databaseLimiter(deps.db, 'password-client', settings.perClient);
@@ -94,14 +104,18 @@ export function attemptLimits(deps: { db: Db; audit: AuditRepository; settings?:
     const address = clientKey(req);
     if (kind === 'reset_request') {
       return [
-        ...(email ? [{ limiter: resetAccount, key: accountKey(email), who: `reset requests for ${normaliseEmail(email)}` }] : []),
+        ...(email
+          ? [{ limiter: resetAccount, key: accountKey(email), who: `reset requests for ${normaliseEmail(email)}` }]
+          : []),
         { limiter: resetClient, key: address, who: `reset requests from client address ${address}` },
       ];
     }
     return [
       { limiter: instance, key: 'all', who: 'password checks on this instance' },
       { limiter: client, key: address, who: `password checks from client address ${address}` },
-      ...(email ? [{ limiter: account, key: accountKey(email), who: `password checks for ${normaliseEmail(email)}` }] : []),
+      ...(email
+        ? [{ limiter: account, key: accountKey(email), who: `password checks for ${normaliseEmail(email)}` }]
+        : []),
     ];
   }
 
@@ -152,7 +166,11 @@ export function attemptLimits(deps: { db: Db; audit: AuditRepository; settings?:
   return {
     guard,
     /** Deletes counters that expired more than an hour ago. */
-    prune: (now = Date.now()) => deps.db(ATTEMPTS_TABLE).where('expire', '<', now - 60 * 60 * 1000).delete(),
+    prune: (now = Date.now()) =>
+      deps
+        .db(ATTEMPTS_TABLE)
+        .where('expire', '<', now - 60 * 60 * 1000)
+        .delete(),
   };
 }
 export type AttemptLimits = ReturnType<typeof attemptLimits>;

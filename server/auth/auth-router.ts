@@ -88,7 +88,9 @@ export function authRouter(deps: {
     async (req, res) => {
       const { body } = valid(req, { body: passwordResetRequestSchema });
       // Answer first, then look the address up and mail: known and unknown addresses take the same time.
-      res.status(202).json({ message: 'If an account uses that address, a reset link is on its way. It works for one hour.' });
+      res
+        .status(202)
+        .json({ message: 'If an account uses that address, a reset link is on its way. It works for one hour.' });
       deps.background.run('Password reset request', () => auth.requestPasswordReset(body.email));
     },
   );

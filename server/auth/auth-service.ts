@@ -43,12 +43,16 @@ export function authService(deps: {
             action: 'auth.sign_in_failed',
             entityType: 'user',
             entityId: user?.id ?? null,
-            summary: user && ok && !user.active ? `Sign-in refused for disabled account ${email}` : `Failed sign-in for ${email}`,
+            summary:
+              user && ok && !user.active
+                ? `Sign-in refused for disabled account ${email}`
+                : `Failed sign-in for ${email}`,
           });
         }
         return null;
       }
-      if (needsRehash(user.password_hash)) await users.replacePasswordHash(user.id, user.password_hash, await hashPassword(password));
+      if (needsRehash(user.password_hash))
+        await users.replacePasswordHash(user.id, user.password_hash, await hashPassword(password));
       return { id: user.id, email: user.email, name: user.name };
     },
 
@@ -67,12 +71,20 @@ export function authService(deps: {
         labs.set(row.lab_id, lab);
       }
       const list = [...labs.values()];
-      const activeLabId = requestedLabId !== undefined && labs.has(requestedLabId) ? requestedLabId : (list[0]?.id ?? null);
+      const activeLabId =
+        requestedLabId !== undefined && labs.has(requestedLabId) ? requestedLabId : (list[0]?.id ?? null);
       return { user, labs: list, activeLabId, operator: await users.isOperator(user.id), csrfToken };
     },
 
     async recordSignIn(user: SessionUser, labId: number | null): Promise<void> {
-      await audit.record({ labId, actorUserId: user.id, action: 'auth.sign_in', entityType: 'user', entityId: user.id, summary: `${user.email} signed in` });
+      await audit.record({
+        labId,
+        actorUserId: user.id,
+        action: 'auth.sign_in',
+        entityType: 'user',
+        entityId: user.id,
+        summary: `${user.email} signed in`,
+      });
     },
 
     /** Sends a reset link when the address belongs to an active account; says nothing either way. */
@@ -88,7 +100,14 @@ export function authService(deps: {
         expires_at: isoAfter(created, RESET_LIFETIME_MS),
       });
       // Account mail is filed by recipient only: no lab's delivery log lists it (lab id null).
-      await audit.record({ labId: null, actorUserId: user.id, action: 'auth.password_reset_requested', entityType: 'user', entityId: user.id, summary: `Password reset requested for ${user.email}` });
+      await audit.record({
+        labId: null,
+        actorUserId: user.id,
+        action: 'auth.password_reset_requested',
+        entityType: 'user',
+        entityId: user.id,
+        summary: `Password reset requested for ${user.email}`,
+      });
       const message = passwordResetMessage({ name: user.name, link: deps.publicUrl(`/reset-password/${token}`) });
       await mailer.send({ to: user.email, labId: null, ...message });
     },
@@ -110,7 +129,14 @@ export function authService(deps: {
         await users.setPassword(user.id, passwordHash, trx);
       });
       await deps.sessions.destroyForUser(user.id);
-      await audit.record({ labId: null, actorUserId: user.id, action: 'auth.password_reset', entityType: 'user', entityId: user.id, summary: `Password reset for ${user.email}` });
+      await audit.record({
+        labId: null,
+        actorUserId: user.id,
+        action: 'auth.password_reset',
+        entityType: 'user',
+        entityId: user.id,
+        summary: `Password reset for ${user.email}`,
+      });
     },
   };
 }

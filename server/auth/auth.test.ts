@@ -1,6 +1,14 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { agentFor, buildTestApp, demo, DEMO_PASSWORD, signIn, tokenFromOutbox, type TestApp } from '../test-support/test-app';
+import {
+  agentFor,
+  buildTestApp,
+  demo,
+  DEMO_PASSWORD,
+  signIn,
+  tokenFromOutbox,
+  type TestApp,
+} from '../test-support/test-app';
 
 let t: TestApp;
 beforeEach(async () => {
@@ -47,7 +55,9 @@ describe('sign-in', () => {
   it('gives the same answer for a wrong password and an unknown e-mail, and audits both', async () => {
     const client = await agentFor(t.app);
     const wrong = await client.post('/api/auth/login', { email: demo('qa'), password: 'not-the-password' }).expect(401);
-    const unknown = await client.post('/api/auth/login', { email: 'nobody@wellmere-water.example', password: 'not-the-password' }).expect(401);
+    const unknown = await client
+      .post('/api/auth/login', { email: 'nobody@wellmere-water.example', password: 'not-the-password' })
+      .expect(401);
     expect(wrong.body).toEqual(unknown.body);
     expect(wrong.body.error.code).toBe('invalid_credentials');
     const failures = await t.db('audit_events').where({ action: 'auth.sign_in_failed' });
@@ -61,7 +71,10 @@ describe('sign-in', () => {
   });
 
   it('refuses a state-changing request without the CSRF token', async () => {
-    const res = await request(t.app).post('/api/auth/login').send({ email: demo('qa'), password: DEMO_PASSWORD }).expect(403);
+    const res = await request(t.app)
+      .post('/api/auth/login')
+      .send({ email: demo('qa'), password: DEMO_PASSWORD })
+      .expect(403);
     expect(res.body.error.code).toBe('csrf_invalid');
   });
 
@@ -81,7 +94,9 @@ describe('sign-in', () => {
     const client = await signIn(t.app, demo('auditor'));
     const restarted = await t.restart();
     t = restarted;
-    const cookieHeader = (await client.agent.jar.getCookies({ domain: '127.0.0.1', path: '/', secure: false, script: false }))
+    const cookieHeader = (
+      await client.agent.jar.getCookies({ domain: '127.0.0.1', path: '/', secure: false, script: false })
+    )
       .map((c) => `${c.name}=${c.value}`)
       .join('; ');
     expect(cookieHeader).toMatch(/^dilutrace\.sid=/);
@@ -120,7 +135,9 @@ describe('password reset by e-mail link', () => {
     await client.post('/api/auth/password-reset', { email: demo('qa') }).expect(202);
     const token = await tokenFromOutbox(t.db, demo('qa'), '/reset-password/');
     t.clock.advance(61 * 60 * 1000);
-    const res = await client.post(`/api/auth/password-reset/${token}`, { password: 'a-brand-new-password' }).expect(400);
+    const res = await client
+      .post(`/api/auth/password-reset/${token}`, { password: 'a-brand-new-password' })
+      .expect(400);
     expect(res.body.error.message).toMatch(/expired/);
   });
 });

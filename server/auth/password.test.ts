@@ -45,9 +45,15 @@ describe('password hashing', () => {
 describe('upgrade of old hashes at sign-in', () => {
   it('signs in a user whose stored hash is bcrypt and stores a scrypt hash afterwards', async () => {
     t = await buildTestApp();
-    await t.db('users').where({ email: demo('qa') }).update({ password_hash: bcrypt.hashSync(DEMO_PASSWORD, 4) });
+    await t
+      .db('users')
+      .where({ email: demo('qa') })
+      .update({ password_hash: bcrypt.hashSync(DEMO_PASSWORD, 4) });
     const client = await signIn(t.app, demo('qa'));
-    const row = await t.db('users').where({ email: demo('qa') }).first();
+    const row = await t
+      .db('users')
+      .where({ email: demo('qa') })
+      .first();
     expect(row.password_hash).toMatch(/^\$scrypt\$/);
     expect(await verifyPassword(DEMO_PASSWORD, row.password_hash)).toBe(true);
     await client.post('/api/auth/logout').expect(204);
@@ -57,11 +63,21 @@ describe('upgrade of old hashes at sign-in', () => {
   it('leaves a bcrypt hash alone after a wrong password', async () => {
     t = await buildTestApp();
     const old = bcrypt.hashSync(DEMO_PASSWORD, 4);
-    await t.db('users').where({ email: demo('qa') }).update({ password_hash: old });
+    await t
+      .db('users')
+      .where({ email: demo('qa') })
+      .update({ password_hash: old });
     const { agentFor } = await import('../test-support/test-app');
     const client = await agentFor(t.app);
     await client.post('/api/auth/login', { email: demo('qa'), password: 'not-the-password' }).expect(401);
-    expect((await t.db('users').where({ email: demo('qa') }).first()).password_hash).toBe(old);
+    expect(
+      (
+        await t
+          .db('users')
+          .where({ email: demo('qa') })
+          .first()
+      ).password_hash,
+    ).toBe(old);
   });
 
   it('seeds the demo people with scrypt hashes', async () => {

@@ -36,7 +36,8 @@ function decode(stored: string): ScryptHash | null {
   const match = SCRYPT_HASH.exec(stored);
   if (!match) return null;
   const [log2Cost, blockSize, parallelism] = [Number(match[1]), Number(match[2]), Number(match[3])];
-  if (log2Cost < 10 || log2Cost > 20 || blockSize < 1 || blockSize > 16 || parallelism < 1 || parallelism > 4) return null;
+  if (log2Cost < 10 || log2Cost > 20 || blockSize < 1 || blockSize > 16 || parallelism < 1 || parallelism > 4)
+    return null;
   const salt = Buffer.from(match[4], 'base64');
   const key = Buffer.from(match[5], 'base64');
   if (salt.length < SALT_BYTES || key.length < 16) return null;
@@ -44,8 +45,17 @@ function decode(stored: string): ScryptHash | null {
 }
 
 function derive(password: string, hash: Omit<ScryptHash, 'key'>, keyLength: number): Promise<Buffer> {
-  const options: ScryptOptions = { N: 2 ** hash.log2Cost, r: hash.blockSize, p: hash.parallelism, maxmem: maxmem(hash.log2Cost, hash.blockSize) };
-  return new Promise((resolve, reject) => scrypt(password.normalize('NFC'), hash.salt, keyLength, options, (error, key) => (error ? reject(error) : resolve(key))));
+  const options: ScryptOptions = {
+    N: 2 ** hash.log2Cost,
+    r: hash.blockSize,
+    p: hash.parallelism,
+    maxmem: maxmem(hash.log2Cost, hash.blockSize),
+  };
+  return new Promise((resolve, reject) =>
+    scrypt(password.normalize('NFC'), hash.salt, keyLength, options, (error, key) =>
+      error ? reject(error) : resolve(key),
+    ),
+  );
 }
 
 const current = () => ({ log2Cost: LOG2_COST, blockSize: BLOCK_SIZE, parallelism: PARALLELISM });
@@ -69,7 +79,13 @@ export async function verifyPassword(password: string, stored: string): Promise<
 /** True when the stored hash is not scrypt with today's parameters (so sign-in stores a new one). */
 export function needsRehash(stored: string): boolean {
   const hash = decode(stored);
-  return !hash || hash.log2Cost !== LOG2_COST || hash.blockSize !== BLOCK_SIZE || hash.parallelism !== PARALLELISM || hash.key.length !== KEY_BYTES;
+  return (
+    !hash ||
+    hash.log2Cost !== LOG2_COST ||
+    hash.blockSize !== BLOCK_SIZE ||
+    hash.parallelism !== PARALLELISM ||
+    hash.key.length !== KEY_BYTES
+  );
 }
 
 /**

@@ -20,18 +20,25 @@ describe('web security', () => {
   it('locks sign-in after 10 attempts in 15 minutes with a message that does not reveal whether the account exists', async () => {
     t = await buildTestApp();
     const client = await agentFor(t.app);
-    for (let i = 0; i < 10; i += 1) await client.post('/api/auth/login', { email: demo('qa'), password: 'wrong-password' }).expect(401);
+    for (let i = 0; i < 10; i += 1)
+      await client.post('/api/auth/login', { email: demo('qa'), password: 'wrong-password' }).expect(401);
     const locked = await client.post('/api/auth/login', { email: demo('qa'), password: DEMO_PASSWORD }).expect(429);
     expect(locked.body.error.message).toMatch(/Too many sign-in attempts/);
-    for (let i = 0; i < 10; i += 1) await client.post('/api/auth/login', { email: 'nobody@wellmere-water.example', password: 'wrong-password' }).expect(401);
-    const unknown = await client.post('/api/auth/login', { email: 'nobody@wellmere-water.example', password: 'x' }).expect(429);
+    for (let i = 0; i < 10; i += 1)
+      await client
+        .post('/api/auth/login', { email: 'nobody@wellmere-water.example', password: 'wrong-password' })
+        .expect(401);
+    const unknown = await client
+      .post('/api/auth/login', { email: 'nobody@wellmere-water.example', password: 'x' })
+      .expect(429);
     expect(unknown.body).toEqual(locked.body);
   });
 
   it('limits password-reset requests the same way', async () => {
     t = await buildTestApp();
     const client = await agentFor(t.app);
-    for (let i = 0; i < 5; i += 1) await client.post('/api/auth/password-reset', { email: demo('analyst') }).expect(202);
+    for (let i = 0; i < 5; i += 1)
+      await client.post('/api/auth/password-reset', { email: demo('analyst') }).expect(202);
     const res = await client.post('/api/auth/password-reset', { email: demo('analyst') }).expect(429);
     expect(res.body.error.code).toBe('rate_limited');
   });
@@ -55,7 +62,14 @@ describe('web security', () => {
       db,
       mailer,
       clock: testClock(),
-      config: { sessionSecret: 'x'.repeat(40), publicUrl: 'https://lab.example', production: true, trustProxy: true, certificateDir: '/tmp', log: () => undefined },
+      config: {
+        sessionSecret: 'x'.repeat(40),
+        publicUrl: 'https://lab.example',
+        production: true,
+        trustProxy: true,
+        certificateDir: '/tmp',
+        log: () => undefined,
+      },
     });
     const res = await request(app).get('/api/auth/csrf').set('X-Forwarded-Proto', 'https').expect(200);
     expect(res.headers['set-cookie']?.[0]).toMatch(/; Secure/);

@@ -61,7 +61,15 @@ export class DatabaseSessionStore extends session.Store {
   /** Ends every session of one user (deactivation, password reset). */
   async destroyForUser(userId: number): Promise<void> {
     const rows: { sid: string; sess: string }[] = await this.db('sessions').select('sid', 'sess');
-    const doomed = rows.filter((row) => (JSON.parse(row.sess) as { passport?: { user?: number } }).passport?.user === userId);
-    if (doomed.length > 0) await this.db('sessions').whereIn('sid', doomed.map((row) => row.sid)).delete();
+    const doomed = rows.filter(
+      (row) => (JSON.parse(row.sess) as { passport?: { user?: number } }).passport?.user === userId,
+    );
+    if (doomed.length > 0)
+      await this.db('sessions')
+        .whereIn(
+          'sid',
+          doomed.map((row) => row.sid),
+        )
+        .delete();
   }
 }

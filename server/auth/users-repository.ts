@@ -20,20 +20,33 @@ export interface MembershipRow {
 
 export function usersRepository(db: Db) {
   return {
-    findByEmail: (email: string): Promise<UserRow | undefined> => db('users').where({ email: email.toLowerCase() }).first(),
+    findByEmail: (email: string): Promise<UserRow | undefined> =>
+      db('users').where({ email: email.toLowerCase() }).first(),
     findById: (id: number): Promise<UserRow | undefined> => db('users').where({ id }).first(),
-    async insert(user: { email: string; name: string; passwordHash: string; createdAt: string }, trx: Db = db): Promise<number> {
+    async insert(
+      user: { email: string; name: string; passwordHash: string; createdAt: string },
+      trx: Db = db,
+    ): Promise<number> {
       const [row] = await trx('users')
-        .insert({ email: user.email.toLowerCase(), name: user.name, password_hash: user.passwordHash, active: true, created_at: user.createdAt })
+        .insert({
+          email: user.email.toLowerCase(),
+          name: user.name,
+          password_hash: user.passwordHash,
+          active: true,
+          created_at: user.createdAt,
+        })
         .returning('id');
       return insertedId(row);
     },
-    setPassword: (id: number, passwordHash: string, trx: Db = db) => trx('users').where({ id }).update({ password_hash: passwordHash }),
+    setPassword: (id: number, passwordHash: string, trx: Db = db) =>
+      trx('users').where({ id }).update({ password_hash: passwordHash }),
     /** Swaps in a rehashed password only if the stored hash is still `old` (a reset meanwhile wins). */
-    replacePasswordHash: (id: number, old: string, next: string) => db('users').where({ id, password_hash: old }).update({ password_hash: next }),
+    replacePasswordHash: (id: number, old: string, next: string) =>
+      db('users').where({ id, password_hash: old }).update({ password_hash: next }),
     setActive: (id: number, active: boolean, trx: Db = db) => trx('users').where({ id }).update({ active }),
     setOperator: (id: number, operator: boolean, trx: Db = db) => trx('users').where({ id }).update({ operator }),
-    isOperator: async (id: number): Promise<boolean> => Boolean((await db('users').where({ id, active: true }).first('operator'))?.operator),
+    isOperator: async (id: number): Promise<boolean> =>
+      Boolean((await db('users').where({ id, active: true }).first('operator'))?.operator),
     list: (): Promise<UserRow[]> => db('users').orderBy('email'),
     labNamesByUser: async (): Promise<Map<number, string[]>> => {
       const rows: { user_id: number; name: string }[] = await db('memberships as m')

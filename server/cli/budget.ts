@@ -9,7 +9,14 @@
  */
 import { readFileSync } from 'node:fs';
 import { nonFiniteNumberReplacer } from '../../shared/contracts/json-number';
-import { evaluatePlan, parsePlan, PlanError, planJsonSchema, runMonteCarlo, validateAgainstGum } from '../../shared/uncertainty/index';
+import {
+  evaluatePlan,
+  parsePlan,
+  PlanError,
+  planJsonSchema,
+  runMonteCarlo,
+  validateAgainstGum,
+} from '../../shared/uncertainty/index';
 
 const usage = 'usage: npm run budget -- <plan.json> [--trials N] [--seed S]   |   npm run budget -- --schema';
 
@@ -55,7 +62,8 @@ try {
 try {
   const plan = parsePlan(document);
   const budget = evaluatePlan(plan);
-  const monteCarlo = options.trials >= 2 ? runMonteCarlo(plan, { trials: options.trials, seed: options.seed }) : undefined;
+  const monteCarlo =
+    options.trials >= 2 ? runMonteCarlo(plan, { trials: options.trials, seed: options.seed }) : undefined;
   const output = {
     engineVersion: budget.engineVersion,
     title: plan.title,

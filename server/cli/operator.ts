@@ -38,7 +38,9 @@ try {
         : command === 'grant'
           ? await operator.grant('command line', find)
           : await operator.revoke('command line', find);
-  console.log(`${account.email}: ${account.active ? 'active' : 'disabled'}${account.operator ? ', instance operator' : ''}; labs: ${account.labs.join(', ') || 'none'}.`);
+  console.log(
+    `${account.email}: ${account.active ? 'active' : 'disabled'}${account.operator ? ', instance operator' : ''}; labs: ${account.labs.join(', ') || 'none'}.`,
+  );
 } catch (error) {
   if (!(error instanceof AppError)) throw error;
   console.error(error.message);

@@ -17,7 +17,9 @@ if (!backup) {
 }
 try {
   await restoreDatabase(backup, env.DILUTRACE_DB);
-  console.log(`Restored ${env.DILUTRACE_DB} from ${backup} (integrity ok). Everyone signs in again. Start Dilutrace again.`);
+  console.log(
+    `Restored ${env.DILUTRACE_DB} from ${backup} (integrity ok). Everyone signs in again. Start Dilutrace again.`,
+  );
 } catch (error) {
   console.error((error as Error).message);
   process.exitCode = error instanceof DatabaseInUseError ? 3 : 1;

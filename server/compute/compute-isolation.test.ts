@@ -16,7 +16,10 @@ afterEach(async () => {
 });
 
 /** The demo lab on a fresh database, with a compute pool of the given limits the test can watch. */
-async function setUp(limits: Partial<ComputeLimits> = {}, wrap: (computer: Computer) => Computer = (computer) => computer) {
+async function setUp(
+  limits: Partial<ComputeLimits> = {},
+  wrap: (computer: Computer) => Computer = (computer) => computer,
+) {
   pool = createComputePool(limits);
   t = await buildTestApp({ computer: wrap(pool) });
   const labId = Number((await t.db('labs').first()).id);
@@ -66,7 +69,9 @@ describe('compute isolation', () => {
     await new Promise((resolve) => server.once('listening', resolve));
     try {
       const body = JSON.stringify({ plan: leadPlan(library), trials: 1_000_000, seed: 1 });
-      const cookie = (analyst.agent as unknown as { jar: { getCookies: (access: object) => { toValueString: () => string }[] } }).jar
+      const cookie = (
+        analyst.agent as unknown as { jar: { getCookies: (access: object) => { toValueString: () => string }[] } }
+      ).jar
         .getCookies({ domain: '127.0.0.1', path: '/', secure: false, script: false })
         .map((c) => c.toValueString())
         .join('; ');
@@ -81,7 +86,10 @@ describe('compute isolation', () => {
       req.end(body);
       await vi.waitFor(() => expect(pool!.stats().active).toBe(1), { timeout: 10_000, interval: 10 });
       req.destroy();
-      await vi.waitFor(() => expect(pool!.stats()).toMatchObject({ active: 0, cancelled: 1 }), { timeout: 10_000, interval: 20 });
+      await vi.waitFor(() => expect(pool!.stats()).toMatchObject({ active: 0, cancelled: 1 }), {
+        timeout: 10_000,
+        interval: 20,
+      });
     } finally {
       server.close();
     }
@@ -89,12 +97,17 @@ describe('compute isolation', () => {
 });
 
 describe('no 5xx from input', () => {
-  const refusedPlan = async (analyst: Client, path: string, plan: object) => (await analyst.post(path, { plan, trials: 1000 })).body.error;
+  const refusedPlan = async (analyst: Client, path: string, plan: object) =>
+    (await analyst.post(path, { plan, trials: 1000 })).body.error;
 
   it('refuses a plan of 2002 steps with the cap in plain words, before any compute', async () => {
     const { analyst, library, url } = await setUp();
     const plan = leadPlan(library);
-    const steps = [plan.steps[0], plan.steps[1], ...Array.from({ length: 1000 }, () => [plan.steps[2], plan.steps[3]]).flat()];
+    const steps = [
+      plan.steps[0],
+      plan.steps[1],
+      ...Array.from({ length: 1000 }, () => [plan.steps[2], plan.steps[3]]).flat(),
+    ];
     const res = await analyst.post(url('/compute'), { plan: { ...plan, steps }, trials: 1000 }).expect(400);
     expect(res.body.error.message).toBe('A plan can have at most 20 steps; this one has 2002.');
     const saved = await analyst.post(url('/preparations'), { title: 'Too long', plan: { ...plan, steps } }).expect(400);
@@ -105,8 +118,14 @@ describe('no 5xx from input', () => {
   it('refuses 5000 extra sources on a step', async () => {
     const { analyst, library, url } = await setUp();
     const plan = leadPlan(library);
-    const source = { name: 'evaporation', effect: 'relative', distribution: { shape: 'rectangular', halfWidth: 0.001 } };
-    const steps = plan.steps.map((step, index) => (index === 1 ? { ...step, extraSources: Array.from({ length: 5000 }, () => source) } : step));
+    const source = {
+      name: 'evaporation',
+      effect: 'relative',
+      distribution: { shape: 'rectangular', halfWidth: 0.001 },
+    };
+    const steps = plan.steps.map((step, index) =>
+      index === 1 ? { ...step, extraSources: Array.from({ length: 5000 }, () => source) } : step,
+    );
     const error = await refusedPlan(analyst, url('/compute'), { ...plan, steps });
     expect(error.message).toMatch(/at most 20 extra sources; it has 5000\./);
   });
@@ -114,7 +133,10 @@ describe('no 5xx from input', () => {
   it('answers 400, not 500, for a formula nested 200 000 levels deep', async () => {
     const { analyst, library, url } = await setUp();
     const abyss = `${'('.repeat(200_000)}Pb${')'.repeat(200_000)}`;
-    const res = await analyst.post(url('/compute'), { plan: { ...leadPlan(library), analyte: { formula: abyss } }, trials: 1000 });
+    const res = await analyst.post(url('/compute'), {
+      plan: { ...leadPlan(library), analyte: { formula: abyss } },
+      trials: 1000,
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/at most 100 characters/);
     const routes = await analyst.post(url('/route-finder'), { ...routeRequest(library), analyte: abyss });
@@ -125,7 +147,11 @@ describe('no 5xx from input', () => {
     const { app, analyst, library, url } = await setUp();
     const qa = await signIn(app, demo('qa'));
     const policy = (await qa.get(url('/policy')).expect(200)).body;
-    const write = (k: number) => qa.agent.put(url('/policy')).set('x-csrf-token', qa.token).send({ ...policy, updatedAt: undefined, updatedBy: undefined, coverage: { mode: 'fixed-k', k } });
+    const write = (k: number) =>
+      qa.agent
+        .put(url('/policy'))
+        .set('x-csrf-token', qa.token)
+        .send({ ...policy, updatedAt: undefined, updatedBy: undefined, coverage: { mode: 'fixed-k', k } });
     const refused = await write(8.5);
     expect(refused.status).toBe(400);
     expect(refused.body.error.message).toMatch(/at most 8/);
@@ -158,19 +184,23 @@ describe.runIf(!process.env.DATABASE_URL)('a locked database', () => {
 });
 
 describe.runIf(process.env.DATABASE_URL)('a locked PostgreSQL table', () => {
-  it('waits for the lock timeout, then answers 503 with Retry-After; health still answers', { timeout: 60_000 }, async () => {
-    const { app, analyst, library, url } = await setUp();
-    const holder = await t!.db.transaction();
-    await holder.raw('lock table preparations in share mode');
-    try {
-      const res = await analyst.post(url('/preparations'), { title: 'While locked', plan: leadPlan(library) });
-      expect(res.status).toBe(503);
-      expect(res.headers['retry-after']).toBe('5');
-      expect(res.body.error.code).toBe('database_busy');
-      await request(app).get('/api/health').expect(200);
-    } finally {
-      await holder.rollback();
-    }
-    await analyst.post(url('/preparations'), { title: 'After the lock', plan: leadPlan(library) }).expect(201);
-  });
+  it(
+    'waits for the lock timeout, then answers 503 with Retry-After; health still answers',
+    { timeout: 60_000 },
+    async () => {
+      const { app, analyst, library, url } = await setUp();
+      const holder = await t!.db.transaction();
+      await holder.raw('lock table preparations in share mode');
+      try {
+        const res = await analyst.post(url('/preparations'), { title: 'While locked', plan: leadPlan(library) });
+        expect(res.status).toBe(503);
+        expect(res.headers['retry-after']).toBe('5');
+        expect(res.body.error.code).toBe('database_busy');
+        await request(app).get('/api/health').expect(200);
+      } finally {
+        await holder.rollback();
+      }
+      await analyst.post(url('/preparations'), { title: 'After the lock', plan: leadPlan(library) }).expect(201);
+    },
+  );
 });

@@ -67,9 +67,12 @@ export function createComputePool(limits: Partial<ComputeLimits> = {}): Computer
   async function run(labId: number, job: ComputeJob, clientSignal?: AbortSignal): Promise<ComputeReply> {
     const ofLab = activeByLab.get(labId) ?? 0;
     if (ofLab >= jobsPerLab) {
-      throw busy(`Your lab already has ${jobsPerLab} computations running or waiting. Try again when one has finished.`);
+      throw busy(
+        `Your lab already has ${jobsPerLab} computations running or waiting. Try again when one has finished.`,
+      );
     }
-    if (active >= threads + queuedJobs) throw busy('The server is busy with other computations. Try again in a few seconds.');
+    if (active >= threads + queuedJobs)
+      throw busy('The server is busy with other computations. Try again in a few seconds.');
     const deadline = AbortSignal.timeout(timeoutMs);
     const signal = clientSignal ? AbortSignal.any([clientSignal, deadline]) : deadline;
     activeByLab.set(labId, ofLab + 1);
@@ -85,13 +88,22 @@ export function createComputePool(limits: Partial<ComputeLimits> = {}): Computer
     } catch (error) {
       if (deadline.aborted) {
         timedOut += 1;
-        throw new AppError('unavailable', 'compute_timeout', `The computation did not finish within ${Math.round(timeoutMs / 1000)} s and was stopped. Try again later, or use fewer Monte Carlo trials.`);
+        throw new AppError(
+          'unavailable',
+          'compute_timeout',
+          `The computation did not finish within ${Math.round(timeoutMs / 1000)} s and was stopped. Try again later, or use fewer Monte Carlo trials.`,
+        );
       }
       if (clientSignal?.aborted) {
         cancelled += 1;
-        throw new AppError('unavailable', 'compute_cancelled', 'The computation was stopped because the request was closed.');
+        throw new AppError(
+          'unavailable',
+          'compute_cancelled',
+          'The computation was stopped because the request was closed.',
+        );
       }
-      if ((error as Error).message === 'Task queue is at limit') throw busy('The server is busy with other computations. Try again in a few seconds.');
+      if ((error as Error).message === 'Task queue is at limit')
+        throw busy('The server is busy with other computations. Try again in a few seconds.');
       throw error;
     } finally {
       active -= 1;
@@ -141,10 +153,14 @@ export function createComputePool(limits: Partial<ComputeLimits> = {}): Computer
 
   return {
     async snapshot(labId, input, signal) {
-      return unwrap(await run(labId, { kind: 'snapshot', input }, signal), (reply) => ('snapshot' in reply ? reply.snapshot : undefined));
+      return unwrap(await run(labId, { kind: 'snapshot', input }, signal), (reply) =>
+        'snapshot' in reply ? reply.snapshot : undefined,
+      );
     },
     async routes(labId, request, signal) {
-      return unwrap(await run(labId, { kind: 'routes', request }, signal), (reply) => ('routes' in reply ? reply.routes : undefined));
+      return unwrap(await run(labId, { kind: 'routes', request }, signal), (reply) =>
+        'routes' in reply ? reply.routes : undefined,
+      );
     },
     stats: () => ({ active, cancelled, timedOut }),
     async close() {

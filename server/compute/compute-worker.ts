@@ -3,10 +3,12 @@ import { findRoutes, PlanError, type RouteRequest, type RouteResult } from '../.
 import { computeSnapshot } from '../preparations/compute-snapshot';
 
 /** What a worker thread is asked to do: a stored budget's snapshot, or a route search. */
-export type ComputeJob = { kind: 'snapshot'; input: Parameters<typeof computeSnapshot>[0] } | { kind: 'routes'; request: RouteRequest };
+export type ComputeJob =
+  { kind: 'snapshot'; input: Parameters<typeof computeSnapshot>[0] } | { kind: 'routes'; request: RouteRequest };
 
 /** A PlanError does not survive the trip between threads as a class, so it travels as data. */
-export type ComputeReply = { snapshot: Snapshot } | { routes: RouteResult } | { planError: { path: PlanError['path']; message: string } };
+export type ComputeReply =
+  { snapshot: Snapshot } | { routes: RouteResult } | { planError: { path: PlanError['path']; message: string } };
 
 /** Runs one job in a worker thread of the compute pool (piscina calls the default export). */
 export default function runComputeJob(job: ComputeJob): ComputeReply {

@@ -17,7 +17,10 @@ const envSchema = z.object({
   DILUTRACE_SESSION_SECRET: z.string().min(32, 'DILUTRACE_SESSION_SECRET must be at least 32 characters').optional(),
   DILUTRACE_PUBLIC_URL: z.url().optional(),
   DILUTRACE_SEED_DEMO: z.enum(['0', '1']).default('1'),
-  DILUTRACE_DEMO_PASSWORD: z.string().min(10, 'DILUTRACE_DEMO_PASSWORD must be at least 10 characters').default('wellmere-demo-2026'),
+  DILUTRACE_DEMO_PASSWORD: z
+    .string()
+    .min(10, 'DILUTRACE_DEMO_PASSWORD must be at least 10 characters')
+    .default('wellmere-demo-2026'),
   DILUTRACE_TRUST_PROXY: z.enum(['0', '1']).default('0'),
   /** Failed password checks allowed per e-mail address in 15 minutes (raise only for load tests). */
   DILUTRACE_SIGNIN_LIMIT: z.coerce.number().int().min(1).default(10),
@@ -48,7 +51,8 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
 export const databaseTarget = (env: Env) => env.DATABASE_URL ?? env.DILUTRACE_DB;
 
 /** A name for the database in messages, without the PostgreSQL password. */
-export const databaseName = (env: Env) => (env.DATABASE_URL ? env.DATABASE_URL.replace(/\/\/([^:@/]+):[^@/]*@/, '//$1:***@') : env.DILUTRACE_DB);
+export const databaseName = (env: Env) =>
+  env.DATABASE_URL ? env.DATABASE_URL.replace(/\/\/([^:@/]+):[^@/]*@/, '//$1:***@') : env.DILUTRACE_DB;
 
 /**
  * Uploaded certificates live outside the web root, in DILUTRACE_FILES/certificates, or beside the

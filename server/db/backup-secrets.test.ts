@@ -14,7 +14,12 @@ const DEMO_PASSWORD = 'backup-test-demo-password';
 /** Runs one of the backup CLIs; its exit code and everything it printed. */
 function run(script: 'backup.ts' | 'restore.ts', args: string[], file: string): { code: number; output: string } {
   try {
-    const out = execFileSync(process.execPath, ['--import', 'tsx', join(root, 'server', 'cli', script), ...args], { env: { ...process.env, DILUTRACE_DB: file }, encoding: 'utf8', cwd: root, stdio: 'pipe' });
+    const out = execFileSync(process.execPath, ['--import', 'tsx', join(root, 'server', 'cli', script), ...args], {
+      env: { ...process.env, DILUTRACE_DB: file },
+      encoding: 'utf8',
+      cwd: root,
+      stdio: 'pipe',
+    });
     return { code: 0, output: out };
   } catch (error) {
     const e = error as { status: number; stdout: string; stderr: string };
@@ -39,13 +44,16 @@ afterEach(async () => {
 });
 
 /** An express-session cookie value for `sid`, signed the way express-session signs it (HMAC-SHA256, base64 without padding). */
-const signSid = (sid: string, secret: string) => `s:${sid}.${createHmac('sha256', secret).update(sid).digest('base64').replace(/=+$/, '')}`;
+const signSid = (sid: string, secret: string) =>
+  `s:${sid}.${createHmac('sha256', secret).update(sid).digest('base64').replace(/=+$/, '')}`;
 
 /** Reads a SQLite file directly, as anyone holding a copy of it could. */
 function readKeys(file: string): { secret: string | undefined; sids: string[] } {
   const db = new Database(file, { readonly: true, fileMustExist: true });
   try {
-    const secret = (db.prepare("select value from app_settings where key = 'session_secret'").get() as { value: string } | undefined)?.value;
+    const secret = (
+      db.prepare("select value from app_settings where key = 'session_secret'").get() as { value: string } | undefined
+    )?.value;
     const sids = (db.prepare('select sid from sessions').all() as { sid: string }[]).map((r) => r.sid);
     return { secret, sids };
   } finally {
@@ -53,7 +61,8 @@ function readKeys(file: string): { secret: string | undefined; sids: string[] } 
   }
 }
 
-const me = (server: RunningServer, cookie: string) => fetch(`${server.url}/api/auth/me`, { headers: { cookie } }).then((r) => r.status);
+const me = (server: RunningServer, cookie: string) =>
+  fetch(`${server.url}/api/auth/me`, { headers: { cookie } }).then((r) => r.status);
 
 // The SQLite file's own backup and restore; PostgreSQL uses pg_dump and pg_restore.
 describe.runIf(!process.env.DATABASE_URL)('backups and the keys to sessions', () => {

@@ -99,7 +99,8 @@ export async function backupDatabase(source: string, destination: string): Promi
  */
 export async function restoreDatabase(backup: string, target: string): Promise<void> {
   const check = integrityCheck(backup);
-  if (check !== 'ok') throw new Error(`The backup ${backup} failed its integrity check (${check}); the database was left as it was.`);
+  if (check !== 'ok')
+    throw new Error(`The backup ${backup} failed its integrity check (${check}); the database was left as it was.`);
   assertNotInUse(target);
   mkdirSync(dirname(target), { recursive: true });
   for (const suffix of ['-wal', '-shm']) rmSync(`${target}${suffix}`, { force: true });

@@ -11,7 +11,11 @@ describe.runIf(postgresUrl)('several instances starting at once on one empty Pos
     const opened = await Promise.allSettled([1, 2, 3].map(() => openDatabase(postgresUrl as string, { schema })));
     const dbs = opened.flatMap((result) => (result.status === 'fulfilled' ? [result.value] : []));
     try {
-      expect(opened.map((result) => (result.status === 'rejected' ? String(result.reason) : 'opened'))).toEqual(['opened', 'opened', 'opened']);
+      expect(opened.map((result) => (result.status === 'rejected' ? String(result.reason) : 'opened'))).toEqual([
+        'opened',
+        'opened',
+        'opened',
+      ]);
       const [db] = dbs;
       expect(await db('knex_migrations_lock').select('is_locked')).toEqual([{ is_locked: 0 }]);
       const applied = (await db('knex_migrations').select('name')).map((row: { name: string }) => row.name);

@@ -59,7 +59,10 @@ function openPostgres(url: string, options: OpenOptions): Db {
     pool: {
       min: 0,
       max: 10,
-      afterCreate: (conn: { query: (sql: string, done: (error: Error | null) => void) => void }, done: (error: Error | null, conn: unknown) => void) => {
+      afterCreate: (
+        conn: { query: (sql: string, done: (error: Error | null) => void) => void },
+        done: (error: Error | null, conn: unknown) => void,
+      ) => {
         conn.query(`set lock_timeout = ${POSTGRES_LOCK_TIMEOUT_MS}`, (error) => done(error, conn));
       },
     },

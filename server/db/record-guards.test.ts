@@ -14,7 +14,10 @@ afterEach(async () => {
 async function replaceRow(table: string, id: number, change: Record<string, unknown>) {
   const row = { ...(await t.db(table).where({ id }).first()), ...change };
   const columns = Object.keys(row);
-  await t.db.raw(`insert or replace into ${table} (${columns.join(', ')}) values (${columns.map(() => '?').join(', ')})`, columns.map((c) => row[c]));
+  await t.db.raw(
+    `insert or replace into ${table} (${columns.join(', ')}) values (${columns.map(() => '?').join(', ')})`,
+    columns.map((c) => row[c]),
+  );
 }
 
 // REPLACE is SQLite's own statement; PostgreSQL has no such bypass (its upsert is an UPDATE, which the guards refuse).
@@ -26,7 +29,9 @@ describe.runIf(!process.env.DATABASE_URL)('INSERT OR REPLACE on a record table',
     const id = await approvedLeadStandard(analyst, qa, labId, DEMO_PASSWORD);
 
     const version = await t.db('preparation_versions').where({ preparation_id: id, number: 1 }).first();
-    await expect(replaceRow('preparation_versions', version.id, { result_statement: 'forged' })).rejects.toThrow(/immutable/);
+    await expect(replaceRow('preparation_versions', version.id, { result_statement: 'forged' })).rejects.toThrow(
+      /immutable/,
+    );
     expect(await t.db('preparation_versions').where({ id: version.id }).first()).toEqual(version);
 
     const review = await t.db('version_reviews').where({ version_id: version.id, action: 'approved' }).first();

@@ -7,7 +7,11 @@ import { SeedRefusedError, seedDemoLab } from './seed-demo';
 const env = loadEnv();
 const db = await openDatabase(databaseTarget(env));
 try {
-  await seedDemoLab(db, { password: env.DILUTRACE_DEMO_PASSWORD, now: systemClock.now(), certificateDir: certificateDir(env) });
+  await seedDemoLab(db, {
+    password: env.DILUTRACE_DEMO_PASSWORD,
+    now: systemClock.now(),
+    certificateDir: certificateDir(env),
+  });
   console.log(`Demo lab seeded into ${databaseName(env)}.`);
 } catch (error) {
   if (!(error instanceof SeedRefusedError)) throw error;

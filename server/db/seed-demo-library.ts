@@ -11,7 +11,9 @@ const day = 86_400_000;
 const dateOffset = (now: Date, days: number) => new Date(now.getTime() + days * day).toISOString().slice(0, 10);
 
 function isoTolerance(kind: 'flask' | 'glass-pipette', glassClass: 'A' | 'B', nominalMl: number): number {
-  const row = GLASSWARE_TEMPLATES.find((t) => t.kind === kind && t.glassClass === glassClass && t.nominalMl === nominalMl);
+  const row = GLASSWARE_TEMPLATES.find(
+    (t) => t.kind === kind && t.glassClass === glassClass && t.nominalMl === nominalMl,
+  );
   if (!row) throw new Error(`no ${kind} template for ${glassClass} ${nominalMl} mL`);
   return row.toleranceMl;
 }
@@ -21,7 +23,9 @@ function isoTolerance(kind: 'flask' | 'glass-pipette', glassClass: 'A' | 'B', no
  * reference materials. Tolerances come from the ISO templates; everything else (IDs, fill
  * repeatabilities, certificate figures, lots) is invented for the demo.
  */
-export function demoLibrary(now: Date): { kind: EquipmentKind; data: Record<string, unknown>; certificate?: Parameters<typeof demoCertificatePdf>[0] }[] {
+export function demoLibrary(
+  now: Date,
+): { kind: EquipmentKind; data: Record<string, unknown>; certificate?: Parameters<typeof demoCertificatePdf>[0] }[] {
   const calibrated = dateOffset(now, -150);
   const due = dateOffset(now, 215);
   const flasks = [10, 25, 50, 100, 200, 250, 500, 1000].map((nominalMl) => ({
@@ -171,7 +175,8 @@ export function demoLibrary(now: Date): { kind: EquipmentKind; data: Record<stri
         expiresOn: dateOffset(now, 240),
         openedOn: dateOffset(now, -20),
         certificateReference: 'NRM-SE-25-0731',
-        hazardNotes: 'Selenium is toxic if swallowed or inhaled; the solution is in 2 % nitric acid (corrosive). Work in a fume hood with gloves and eye protection.',
+        hazardNotes:
+          'Selenium is toxic if swallowed or inhaled; the solution is in 2 % nitric acid (corrosive). Work in a fume hood with gloves and eye protection.',
         analyte: 'Se',
         certifiedValue: 1000,
         certifiedUnit: 'mg/L',
@@ -197,13 +202,23 @@ export function demoLibrary(now: Date): { kind: EquipmentKind; data: Record<stri
 }
 
 /** Writes the demo library into the lab, as `ownerId`, inside the caller's transaction. */
-export async function seedDemoLibrary(trx: Db, input: { labId: number; ownerId: number; now: Date; certificateDir: string }): Promise<void> {
+export async function seedDemoLibrary(
+  trx: Db,
+  input: { labId: number; ownerId: number; now: Date; certificateDir: string },
+): Promise<void> {
   const library = libraryRepository(trx);
   const at = input.now.toISOString();
   for (const entry of demoLibrary(input.now)) {
     const data = equipmentDataSchemas[entry.kind].parse(entry.data) as { code: string };
-    const itemId = await library.insertItem({ labId: input.labId, kind: entry.kind, code: data.code, createdAt: at, createdBy: input.ownerId }, trx);
-    const revisionId = await library.appendRevision(itemId, { data, reason: 'Demo lab library', createdAt: at, createdBy: input.ownerId, code: data.code }, trx);
+    const itemId = await library.insertItem(
+      { labId: input.labId, kind: entry.kind, code: data.code, createdAt: at, createdBy: input.ownerId },
+      trx,
+    );
+    const revisionId = await library.appendRevision(
+      itemId,
+      { data, reason: 'Demo lab library', createdAt: at, createdBy: input.ownerId, code: data.code },
+      trx,
+    );
     if (!entry.certificate) continue;
     const pdf = await demoCertificatePdf(entry.certificate);
     mkdirSync(input.certificateDir, { recursive: true });

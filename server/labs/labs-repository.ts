@@ -13,13 +13,18 @@ export interface MemberRow {
 
 export function labsRepository(db: Db) {
   return {
-    findById: (id: number): Promise<{ id: number; name: string; slug: string } | undefined> => db('labs').where({ id }).first(),
+    findById: (id: number): Promise<{ id: number; name: string; slug: string } | undefined> =>
+      db('labs').where({ id }).first(),
     async insert(lab: { name: string; slug: string; createdAt: string }, trx: Db = db): Promise<number> {
-      const [row] = await trx('labs').insert({ name: lab.name, slug: lab.slug, created_at: lab.createdAt }).returning('id');
+      const [row] = await trx('labs')
+        .insert({ name: lab.name, slug: lab.slug, created_at: lab.createdAt })
+        .returning('id');
       return insertedId(row);
     },
     rolesOf: async (userId: number, labId: number): Promise<Role[]> =>
-      (await db('memberships').where({ user_id: userId, lab_id: labId }).select('role')).map((row: { role: Role }) => row.role),
+      (await db('memberships').where({ user_id: userId, lab_id: labId }).select('role')).map(
+        (row: { role: Role }) => row.role,
+      ),
     members: (labId: number): Promise<MemberRow[]> =>
       db('memberships as m')
         .join('users as u', 'u.id', 'm.user_id')
@@ -27,12 +32,18 @@ export function labsRepository(db: Db) {
         .orderBy(['u.name', 'm.role'])
         .select('u.id as user_id', 'u.email', 'u.name', 'u.active', 'm.role', 'm.created_at'),
     async addRole(userId: number, labId: number, role: Role, createdAt: string, trx: Db = db): Promise<void> {
-      await trx('memberships').insert({ user_id: userId, lab_id: labId, role, created_at: createdAt }).onConflict(['user_id', 'lab_id', 'role']).ignore();
+      await trx('memberships')
+        .insert({ user_id: userId, lab_id: labId, role, created_at: createdAt })
+        .onConflict(['user_id', 'lab_id', 'role'])
+        .ignore();
     },
     async setRoles(userId: number, labId: number, roles: Role[], createdAt: string, trx: Db): Promise<void> {
       await trx('memberships').where({ user_id: userId, lab_id: labId }).whereNotIn('role', roles).delete();
       for (const role of roles) {
-        await trx('memberships').insert({ user_id: userId, lab_id: labId, role, created_at: createdAt }).onConflict(['user_id', 'lab_id', 'role']).ignore();
+        await trx('memberships')
+          .insert({ user_id: userId, lab_id: labId, role, created_at: createdAt })
+          .onConflict(['user_id', 'lab_id', 'role'])
+          .ignore();
       }
     },
     removeMember: async (userId: number, labId: number, trx: Db): Promise<number> =>

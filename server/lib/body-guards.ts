@@ -12,8 +12,13 @@ export const requireJsonBody: RequestHandler = (req, _res, next) => {
   const length = Number(req.get('content-length') ?? 0);
   const chunked = req.get('transfer-encoding') !== undefined;
   if (length === 0 && !chunked) return next();
-  if (req.is('application/json') || (req.is('multipart/form-data') && req.path.endsWith('/certificates'))) return next();
-  throw new AppError('unsupported_media_type', 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).');
+  if (req.is('application/json') || (req.is('multipart/form-data') && req.path.endsWith('/certificates')))
+    return next();
+  throw new AppError(
+    'unsupported_media_type',
+    'unsupported_media_type',
+    'Send the request body as JSON (Content-Type: application/json).',
+  );
 };
 
 /** Deepest nesting of arrays and objects in a parsed body, measured without recursion. */

@@ -49,16 +49,28 @@ export function errorHandler(log: (message: string, error: unknown) => void): Er
     }
     if (isDatabaseBusy(error)) {
       res.set('Retry-After', String(RETRY_AFTER_SECONDS));
-      res.status(503).json({ error: { code: 'database_busy', message: 'The database is busy. Try again in a few seconds.' } });
+      res
+        .status(503)
+        .json({ error: { code: 'database_busy', message: 'The database is busy. Try again in a few seconds.' } });
       return;
     }
     if (error instanceof AppError) {
       if (error.kind === 'unavailable') res.set('Retry-After', String(RETRY_AFTER_SECONDS));
-      res.status(STATUS[error.kind]).json({ error: { code: error.code, message: error.message, details: error.details } });
+      res
+        .status(STATUS[error.kind])
+        .json({ error: { code: error.code, message: error.message, details: error.details } });
       return;
     }
     if (error instanceof PlanError) {
-      res.status(400).json({ error: { code: 'plan_invalid', message: error.message, details: [{ path: error.path.join('.'), message: error.message }] } });
+      res
+        .status(400)
+        .json({
+          error: {
+            code: 'plan_invalid',
+            message: error.message,
+            details: [{ path: error.path.join('.'), message: error.message }],
+          },
+        });
       return;
     }
     const http = error as HttpishError;
@@ -76,6 +88,8 @@ export function errorHandler(log: (message: string, error: unknown) => void): Er
       return;
     }
     log('Unexpected error', error);
-    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on the server. The error has been logged.' } });
+    res
+      .status(500)
+      .json({ error: { code: 'internal', message: 'Something went wrong on the server. The error has been logged.' } });
   };
 }

@@ -8,7 +8,9 @@ describe('certificateDisplayName', () => {
     expect(certificateDisplayName('scan.html', 'png')).toBe('scan.png');
   });
   it('drops path parts, control characters, bidi and zero-width marks and leading dots', () => {
-    expect(certificateDisplayName('C:\\Users\\x\\..\\.hidden\u0000\u0007\u001b[31m\u202Egpj\u200B.exe', 'pdf')).toBe('hidden[31mgpj.pdf');
+    expect(certificateDisplayName('C:\\Users\\x\\..\\.hidden\u0000\u0007\u001b[31m\u202Egpj\u200B.exe', 'pdf')).toBe(
+      'hidden[31mgpj.pdf',
+    );
   });
   it('normalises to NFC and caps the length by characters', () => {
     expect(certificateDisplayName('Pru\u0308fung.pdf', 'pdf')).toBe('Prüfung.pdf');
@@ -29,7 +31,11 @@ describe('pdfHoldsJavaScript', () => {
   });
   it('finds them inside a compressed object stream', () => {
     const hidden = deflateSync(Buffer.from('<</S/JavaScript/JS(app.launchURL("http://x"))>>'));
-    const file = Buffer.concat([Buffer.from('%PDF-1.7\n1 0 obj<</Type/ObjStm/Filter/FlateDecode>>stream\n'), hidden, Buffer.from('\nendstream endobj\n%%EOF\n')]);
+    const file = Buffer.concat([
+      Buffer.from('%PDF-1.7\n1 0 obj<</Type/ObjStm/Filter/FlateDecode>>stream\n'),
+      hidden,
+      Buffer.from('\nendstream endobj\n%%EOF\n'),
+    ]);
     expect(pdfHoldsJavaScript(file)).toBe(true);
   });
   it('passes a PDF without script, even with look-alike names', () => {

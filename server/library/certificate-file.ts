@@ -54,7 +54,9 @@ function pdfTexts(pdf: Buffer): string[] {
  */
 export function pdfHoldsJavaScript(pdf: Buffer): boolean {
   return pdfTexts(pdf).some((text) => {
-    const names = text.replace(/\/[^\s/<>[\]()]+/g, (name) => name.replace(/#([0-9A-Fa-f]{2})/g, (_m, hex: string) => String.fromCharCode(parseInt(hex, 16))));
+    const names = text.replace(/\/[^\s/<>[\]()]+/g, (name) =>
+      name.replace(/#([0-9A-Fa-f]{2})/g, (_m, hex: string) => String.fromCharCode(parseInt(hex, 16))),
+    );
     return /\/(JS|JavaScript)(?![A-Za-z0-9])/.test(names);
   });
 }

@@ -20,23 +20,49 @@ const ACCEPTED: Record<string, string> = { 'application/pdf': 'pdf', 'image/png'
  * only for display, cleaned and ending in the sniffed type's extension. A PDF that can run
  * JavaScript is stored but flagged (and the flag audited).
  */
-export function certificatesService(deps: { library: LibraryRepository; audit: AuditRepository; directory: string; now: () => Date }) {
+export function certificatesService(deps: {
+  library: LibraryRepository;
+  audit: AuditRepository;
+  directory: string;
+  now: () => Date;
+}) {
   const { library, audit, directory, now } = deps;
 
   return {
-    async upload(labId: number, actor: SessionUser, itemId: number, revisionNumber: number, file: { originalname: string; buffer: Buffer } | undefined): Promise<Certificate> {
-      if (!file || file.buffer.length === 0) throw validationError('Choose a certificate file (PDF, PNG or JPEG) to upload.', [{ path: 'file', message: 'No file was sent.' }]);
+    async upload(
+      labId: number,
+      actor: SessionUser,
+      itemId: number,
+      revisionNumber: number,
+      file: { originalname: string; buffer: Buffer } | undefined,
+    ): Promise<Certificate> {
+      if (!file || file.buffer.length === 0)
+        throw validationError('Choose a certificate file (PDF, PNG or JPEG) to upload.', [
+          { path: 'file', message: 'No file was sent.' },
+        ]);
       const item = await library.item(labId, itemId);
       if (!item) throw notFound('The item');
-      if (item.status === 'retired') throw conflict('item_retired', `${item.code} is retired, so it takes no new certificates. Attach the certificate to the item that replaced it.`);
+      if (item.status === 'retired')
+        throw conflict(
+          'item_retired',
+          `${item.code} is retired, so it takes no new certificates. Attach the certificate to the item that replaced it.`,
+        );
       const revision = (await library.revisionsOf(itemId)).find((r) => r.number === revisionNumber);
       if (!revision) throw notFound(`Revision ${revisionNumber} of ${item.code}`);
       const detected = await fileTypeFromBuffer(file.buffer);
       const extension = detected ? ACCEPTED[detected.mime] : undefined;
       if (!detected || !extension) {
-        throw new AppError('validation', 'unsupported_file_type', 'A certificate must be a PDF, PNG or JPEG file; this file is none of those, whatever its name says.', [
-          { path: 'file', message: detected ? `The file is ${detected.mime}.` : 'The file type could not be recognised.' },
-        ]);
+        throw new AppError(
+          'validation',
+          'unsupported_file_type',
+          'A certificate must be a PDF, PNG or JPEG file; this file is none of those, whatever its name says.',
+          [
+            {
+              path: 'file',
+              message: detected ? `The file is ${detected.mime}.` : 'The file type could not be recognised.',
+            },
+          ],
+        );
       }
       await mkdir(directory, { recursive: true });
       const storedName = `${randomUUID()}.${extension}`;

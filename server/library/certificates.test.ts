@@ -9,7 +9,15 @@ beforeEach(async () => {
   t = await buildTestApp();
   labId = (await t.db('labs').first()).id;
   qa = await signIn(t.app, demo('qa'));
-  const flask = { code: 'T-VF-25', nominalMl: 25, glassClass: 'A', toleranceMl: 0.03, toleranceDistribution: null, fillRepeatabilityMl: 0.01, calibrationTemperatureC: 20 };
+  const flask = {
+    code: 'T-VF-25',
+    nominalMl: 25,
+    glassClass: 'A',
+    toleranceMl: 0.03,
+    toleranceDistribution: null,
+    fillRepeatabilityMl: 0.01,
+    calibrationTemperatureC: 20,
+  };
   itemId = (await qa.post(url('/equipment'), { kind: 'flask', data: flask }).expect(201)).body.id;
 });
 afterEach(async () => {
@@ -18,12 +26,19 @@ afterEach(async () => {
 const url = (path: string) => `/api/labs/${labId}${path}`;
 
 const cleanPdf = Buffer.from('%PDF-1.4\n1 0 obj<</Type/Catalog>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n');
-const scriptedPdf = Buffer.from('%PDF-1.4\n1 0 obj<</Type/Catalog/OpenAction 2 0 R>>endobj\n2 0 obj<</S/JavaScript/JS(app.alert(1))>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n');
+const scriptedPdf = Buffer.from(
+  '%PDF-1.4\n1 0 obj<</Type/Catalog/OpenAction 2 0 R>>endobj\n2 0 obj<</S/JavaScript/JS(app.alert(1))>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n',
+);
 /** The same action with its names written in PDF's #xx escapes, as evasive files do. */
-const escapedScriptPdf = Buffer.from('%PDF-1.4\n1 0 obj<</Type/Catalog/OpenAction<</S/J#61vaScript/J#53(app.alert(1))>>>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n');
+const escapedScriptPdf = Buffer.from(
+  '%PDF-1.4\n1 0 obj<</Type/Catalog/OpenAction<</S/J#61vaScript/J#53(app.alert(1))>>>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n',
+);
 
 const upload = (content: Buffer, filename: string, item = itemId) =>
-  qa.agent.post(url(`/equipment/${item}/revisions/1/certificates`)).set('x-csrf-token', qa.token).attach('file', content, { filename, contentType: 'application/octet-stream' });
+  qa.agent
+    .post(url(`/equipment/${item}/revisions/1/certificates`))
+    .set('x-csrf-token', qa.token)
+    .attach('file', content, { filename, contentType: 'application/octet-stream' });
 
 describe('certificate names', () => {
   it('shows and serves a file under the extension of its sniffed type, whatever it was called', async () => {
@@ -40,7 +55,9 @@ describe('certificate names', () => {
     const res = await upload(cleanPdf, name).expect(201);
     expect(res.body.originalName).toBe(name);
     const download = await qa.get(url(`/certificates/${res.body.id}`)).expect(200);
-    expect(download.headers['content-disposition']).toContain(`filename*=UTF-8''${encodeURIComponent(name).replace(/'/g, '%27')}`);
+    expect(download.headers['content-disposition']).toContain(
+      `filename*=UTF-8''${encodeURIComponent(name).replace(/'/g, '%27')}`,
+    );
   });
 
   it('drops path parts and bidi overrides, and caps the length', async () => {
@@ -52,7 +69,10 @@ describe('certificate names', () => {
 
   it('answers 400, not 500, to a form whose file name has control characters', async () => {
     const res = await upload(cleanPdf, 'report\u0007.pdf').expect(400);
-    expect(res.body.error).toMatchObject({ code: 'upload_invalid', message: expect.stringMatching(/could not be read/) });
+    expect(res.body.error).toMatchObject({
+      code: 'upload_invalid',
+      message: expect.stringMatching(/could not be read/),
+    });
   });
 });
 
@@ -65,7 +85,12 @@ describe('certificates that hold JavaScript', () => {
     const clean = (await upload(cleanPdf, 'cert3.pdf').expect(201)).body;
     expect(clean.containsScript).toBe(false);
     const detail = (await qa.get(url(`/equipment/${itemId}`)).expect(200)).body;
-    expect(detail.certificates.map((c: { originalName: string; containsScript: boolean }) => [c.originalName, c.containsScript])).toEqual([
+    expect(
+      detail.certificates.map((c: { originalName: string; containsScript: boolean }) => [
+        c.originalName,
+        c.containsScript,
+      ]),
+    ).toEqual([
       ['cert3.pdf', false],
       ['cert2.pdf', true],
       ['cert.pdf', true],
@@ -82,7 +107,10 @@ describe('retired items', () => {
   it('take no new certificates', async () => {
     await qa.post(url(`/equipment/${itemId}/retire`), { reason: 'Chipped neck' }).expect(200);
     const res = await upload(cleanPdf, 'late.pdf').expect(409);
-    expect(res.body.error).toMatchObject({ code: 'item_retired', message: expect.stringMatching(/T-VF-25 is retired/) });
+    expect(res.body.error).toMatchObject({
+      code: 'item_retired',
+      message: expect.stringMatching(/T-VF-25 is retired/),
+    });
     expect(await t.db('certificates').where({ item_id: itemId })).toEqual([]);
   });
 });

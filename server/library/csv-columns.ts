@@ -11,7 +11,12 @@ export interface CsvColumn {
   help: string;
 }
 
-const text = (column: string, help: string, path = [column]): CsvColumn => ({ column, path: path.map(camel), type: 'text', help });
+const text = (column: string, help: string, path = [column]): CsvColumn => ({
+  column,
+  path: path.map(camel),
+  type: 'text',
+  help,
+});
 const num = (column: string, help: string): CsvColumn => ({ column, path: [camel(column)], type: 'number', help });
 function camel(name: string | number): string | number {
   return typeof name === 'number' ? name : name.replace(/_([a-z0-9])/g, (_m, c: string) => c.toUpperCase());
@@ -20,7 +25,12 @@ function camel(name: string | number): string | number {
 const common: CsvColumn[] = [
   text('code', 'ID or asset tag, unique in the lab'),
   { column: 'description', path: ['description'], type: 'optional-text', help: 'free text' },
-  { column: 'certificate_reference', path: ['certificateReference'], type: 'optional-text', help: 'certificate number' },
+  {
+    column: 'certificate_reference',
+    path: ['certificateReference'],
+    type: 'optional-text',
+    help: 'certificate number',
+  },
 ];
 const calibration: CsvColumn[] = [
   { column: 'calibrated_on', path: ['calibratedOn'], type: 'optional-date', help: 'YYYY-MM-DD' },
@@ -31,9 +41,19 @@ const glassware: CsvColumn[] = [
   num('nominal_ml', 'nominal volume, mL'),
   { column: 'glass_class', path: ['glassClass'], type: 'text', help: 'A, B or own' },
   num('tolerance_ml', '± tolerance, mL'),
-  { column: 'tolerance_distribution', path: ['toleranceDistribution'], type: 'optional-text', help: 'triangular, rectangular, or empty for the lab policy' },
+  {
+    column: 'tolerance_distribution',
+    path: ['toleranceDistribution'],
+    type: 'optional-text',
+    help: 'triangular, rectangular, or empty for the lab policy',
+  },
   num('fill_repeatability_ml', 'standard deviation of filling, mL'),
-  { column: 'calibration_temperature_c', path: ['calibrationTemperatureC'], type: 'optional-number', help: '°C, default 20' },
+  {
+    column: 'calibration_temperature_c',
+    path: ['calibrationTemperatureC'],
+    type: 'optional-number',
+    help: '°C, default 20',
+  },
   ...calibration,
 ];
 const material: CsvColumn[] = [
@@ -65,9 +85,24 @@ export const CSV_COLUMNS: Record<EquipmentKind, CsvColumn[]> = {
     num('max_volume_ul', 'nominal volume, µL'),
     { column: 'error_basis', path: ['errorBasis'], type: 'text', help: 'iso-8655 or own' },
     ...[1, 2, 3].flatMap((n): CsvColumn[] => [
-      { column: `volume_ul_${n}`, path: ['points', n - 1, 'volumeUl'], type: n === 1 ? 'number' : 'optional-number', help: `set volume ${n}, µL` },
-      { column: `systematic_error_ul_${n}`, path: ['points', n - 1, 'systematicErrorUl'], type: n === 1 ? 'number' : 'optional-number', help: `± systematic error at volume ${n}, µL` },
-      { column: `random_error_ul_${n}`, path: ['points', n - 1, 'randomErrorUl'], type: n === 1 ? 'number' : 'optional-number', help: `random error (standard deviation) at volume ${n}, µL` },
+      {
+        column: `volume_ul_${n}`,
+        path: ['points', n - 1, 'volumeUl'],
+        type: n === 1 ? 'number' : 'optional-number',
+        help: `set volume ${n}, µL`,
+      },
+      {
+        column: `systematic_error_ul_${n}`,
+        path: ['points', n - 1, 'systematicErrorUl'],
+        type: n === 1 ? 'number' : 'optional-number',
+        help: `± systematic error at volume ${n}, µL`,
+      },
+      {
+        column: `random_error_ul_${n}`,
+        path: ['points', n - 1, 'randomErrorUl'],
+        type: n === 1 ? 'number' : 'optional-number',
+        help: `random error (standard deviation) at volume ${n}, µL`,
+      },
     ]),
     ...calibration,
   ],
@@ -76,10 +111,30 @@ export const CSV_COLUMNS: Record<EquipmentKind, CsvColumn[]> = {
     text('formula', 'e.g. Pb(NO3)2'),
     text('analyte', 'element or ion reported, e.g. Pb'),
     num('purity', 'mass fraction, e.g. 0.9998'),
-    { column: 'purity_uncertainty_shape', path: ['purityUncertainty', 'shape'], type: 'text', help: 'normal or rectangular' },
-    { column: 'purity_expanded_uncertainty', path: ['purityUncertainty', 'expandedUncertainty'], type: 'optional-number', help: 'U, for normal' },
-    { column: 'purity_coverage_factor', path: ['purityUncertainty', 'coverageFactor'], type: 'optional-number', help: 'k, for normal' },
-    { column: 'purity_half_width', path: ['purityUncertainty', 'halfWidth'], type: 'optional-number', help: '± half-width, for rectangular' },
+    {
+      column: 'purity_uncertainty_shape',
+      path: ['purityUncertainty', 'shape'],
+      type: 'text',
+      help: 'normal or rectangular',
+    },
+    {
+      column: 'purity_expanded_uncertainty',
+      path: ['purityUncertainty', 'expandedUncertainty'],
+      type: 'optional-number',
+      help: 'U, for normal',
+    },
+    {
+      column: 'purity_coverage_factor',
+      path: ['purityUncertainty', 'coverageFactor'],
+      type: 'optional-number',
+      help: 'k, for normal',
+    },
+    {
+      column: 'purity_half_width',
+      path: ['purityUncertainty', 'halfWidth'],
+      type: 'optional-number',
+      help: '± half-width, for rectangular',
+    },
   ],
   'solution-material': [
     ...material,
@@ -90,7 +145,12 @@ export const CSV_COLUMNS: Record<EquipmentKind, CsvColumn[]> = {
     num('coverage_factor', 'k'),
     { column: 'matrix', path: ['matrix'], type: 'optional-text', help: 'e.g. 2 % HNO3' },
     { column: 'density_g_per_ml', path: ['densityGPerMl'], type: 'optional-number', help: 'g/mL, if certified' },
-    { column: 'density_uncertainty_g_per_ml', path: ['densityUncertaintyGPerMl'], type: 'optional-number', help: 'standard uncertainty, g/mL' },
+    {
+      column: 'density_uncertainty_g_per_ml',
+      path: ['densityUncertaintyGPerMl'],
+      type: 'optional-number',
+      help: 'standard uncertainty, g/mL',
+    },
     { column: 'opened_on', path: ['openedOn'], type: 'optional-date', help: 'YYYY-MM-DD' },
   ],
 };

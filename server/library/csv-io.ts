@@ -22,7 +22,10 @@ function setPath(target: Record<string, unknown>, path: (string | number)[], val
 }
 
 function getPath(source: unknown, path: (string | number)[]): unknown {
-  return path.reduce<unknown>((node, key) => (node == null ? undefined : (node as Record<string | number, unknown>)[key]), source);
+  return path.reduce<unknown>(
+    (node, key) => (node == null ? undefined : (node as Record<string | number, unknown>)[key]),
+    source,
+  );
 }
 
 /** Reads one cell; the apostrophe our exports put before formula-like text is taken off first. */
@@ -37,7 +40,9 @@ function readCell(column: CsvColumn, raw: string): { value?: unknown; error?: st
     case 'number':
     case 'optional-number': {
       const value = Number(cell.replace(',', '.'));
-      return Number.isFinite(value) && /^[+-]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/.test(cell) ? { value } : { error: `“${cell}” is not a number.` };
+      return Number.isFinite(value) && /^[+-]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/.test(cell)
+        ? { value }
+        : { error: `“${cell}” is not a number.` };
     }
     case 'boolean':
       if (/^(yes|true|1|y)$/i.test(cell)) return { value: true };
@@ -56,15 +61,27 @@ export function parseLibraryCsv(kind: EquipmentKind, csv: string): { headerError
   const columns = CSV_COLUMNS[kind];
   let records: { record: Record<string, string>; info: { lines: number } }[];
   try {
-    records = parse(csv, { columns: (header: string[]) => header.map((h) => h.trim().toLowerCase()), bom: true, skip_empty_lines: true, relax_column_count: false, info: true, trim: false });
+    records = parse(csv, {
+      columns: (header: string[]) => header.map((h) => h.trim().toLowerCase()),
+      bom: true,
+      skip_empty_lines: true,
+      relax_column_count: false,
+      info: true,
+      trim: false,
+    });
   } catch (error) {
     return { headerErrors: [`The file is not readable as CSV: ${(error as Error).message}`], rows: [] };
   }
-  const header = records.length > 0 ? Object.keys(records[0].record) : (csv.split(/\r?\n/)[0] ?? '').split(',').map((h) => h.trim().toLowerCase());
+  const header =
+    records.length > 0
+      ? Object.keys(records[0].record)
+      : (csv.split(/\r?\n/)[0] ?? '').split(',').map((h) => h.trim().toLowerCase());
   const known = new Set(columns.map((c) => c.column));
   const headerErrors = [
     ...header.filter((h) => !known.has(h)).map((h) => `Unknown column “${h}” for ${kind}.`),
-    ...columns.filter((c) => !c.type.startsWith('optional') && !header.includes(c.column) && !/_[23]$/.test(c.column)).map((c) => `Missing column “${c.column}” (${c.help}).`),
+    ...columns
+      .filter((c) => !c.type.startsWith('optional') && !header.includes(c.column) && !/_[23]$/.test(c.column))
+      .map((c) => `Missing column “${c.column}” (${c.help}).`),
   ];
   const rows = records.map(({ record, info }) => {
     const data: Record<string, unknown> = {};
@@ -76,7 +93,8 @@ export function parseLibraryCsv(kind: EquipmentKind, csv: string): { headerError
       if (error) errors.push({ column: column.column, message: error });
       else if (value !== undefined) setPath(data, column.path, value);
     }
-    if (Array.isArray(data.points)) data.points = (data.points as unknown[]).filter((p) => p !== undefined && p !== null);
+    if (Array.isArray(data.points))
+      data.points = (data.points as unknown[]).filter((p) => p !== undefined && p !== null);
     return { line: info.lines, data, errors };
   });
   return { headerErrors, rows };
@@ -85,7 +103,9 @@ export function parseLibraryCsv(kind: EquipmentKind, csv: string): { headerError
 /** Maps a schema issue path inside `data` back to its CSV column name. */
 export function columnFor(kind: EquipmentKind, path: string): string {
   const dataPath = path.replace(/^data\.?/, '');
-  const column = CSV_COLUMNS[kind].find((c) => c.path.join('.') === dataPath) ?? CSV_COLUMNS[kind].find((c) => dataPath && c.path.join('.').startsWith(dataPath));
+  const column =
+    CSV_COLUMNS[kind].find((c) => c.path.join('.') === dataPath) ??
+    CSV_COLUMNS[kind].find((c) => dataPath && c.path.join('.').startsWith(dataPath));
   return column?.column ?? (dataPath || '(row)');
 }
 

@@ -15,15 +15,29 @@ export function importService(deps: { transact: Transact; library: LibraryReposi
   const { transact, library, items } = deps;
 
   return {
-    async run(labId: number, actor: SessionUser, input: { kind: EquipmentKind; csv: string; dryRun: boolean }): Promise<ImportResult> {
+    async run(
+      labId: number,
+      actor: SessionUser,
+      input: { kind: EquipmentKind; csv: string; dryRun: boolean },
+    ): Promise<ImportResult> {
       const { kind } = input;
       const { headerErrors, rows } = parseLibraryCsv(kind, input.csv);
       const result: ImportResult = { kind, dryRun: input.dryRun, written: false, rows: [], errorCount: 0 };
       if (headerErrors.length > 0) {
-        result.rows.push({ line: 1, code: '', action: 'error', errors: headerErrors.map((message) => ({ column: '(header)', message })) });
+        result.rows.push({
+          line: 1,
+          code: '',
+          action: 'error',
+          errors: headerErrors.map((message) => ({ column: '(header)', message })),
+        });
       }
       if (rows.length === 0 && headerErrors.length === 0) {
-        result.rows.push({ line: 1, code: '', action: 'error', errors: [{ column: '(file)', message: 'The file has a header but no rows.' }] });
+        result.rows.push({
+          line: 1,
+          code: '',
+          action: 'error',
+          errors: [{ column: '(file)', message: 'The file has a header but no rows.' }],
+        });
       }
       const seen = new Map<string, number>();
       const plan: { line: number; action: 'create' | 'revise'; itemId?: number; data: unknown }[] = [];
@@ -39,30 +53,42 @@ export function importService(deps: { transact: Transact; library: LibraryReposi
           }
         }
         const previous = seen.get(code.toLowerCase());
-        if (code && previous !== undefined) errors.push({ column: 'code', message: `The ID ${code} is also on line ${previous}.` });
+        if (code && previous !== undefined)
+          errors.push({ column: 'code', message: `The ID ${code} is also on line ${previous}.` });
         if (code) seen.set(code.toLowerCase(), row.line);
         let action: 'create' | 'revise' | 'unchanged' | 'error' = 'create';
         let itemId: number | undefined;
         if (errors.length === 0 && parsed.success) {
           const existing = await library.itemByCode(labId, code);
-          if (existing && existing.kind !== kind) errors.push({ column: 'code', message: `The ID ${code} belongs to a ${existing.kind} in this lab.` });
-          else if (existing && existing.status === 'retired') errors.push({ column: 'code', message: `${code} is retired and cannot be changed.` });
+          if (existing && existing.kind !== kind)
+            errors.push({ column: 'code', message: `The ID ${code} belongs to a ${existing.kind} in this lab.` });
+          else if (existing && existing.status === 'retired')
+            errors.push({ column: 'code', message: `${code} is retired and cannot be changed.` });
           else if (existing) {
             itemId = existing.id;
             const current = await library.revision(existing.current_revision_id);
-            action = current && canonicalJson(JSON.parse(current.data_json)) === canonicalJson(parsed.data) ? 'unchanged' : 'revise';
+            action =
+              current && canonicalJson(JSON.parse(current.data_json)) === canonicalJson(parsed.data)
+                ? 'unchanged'
+                : 'revise';
           }
         }
         if (errors.length > 0) action = 'error';
         result.rows.push({ line: row.line, code, action, errors });
-        if (action === 'create' || action === 'revise') plan.push({ line: row.line, action, itemId, data: parsed.data });
+        if (action === 'create' || action === 'revise')
+          plan.push({ line: row.line, action, itemId, data: parsed.data });
       }
       result.errorCount = result.rows.reduce((n, r) => n + r.errors.length, 0);
       if (input.dryRun) return result;
       if (result.errorCount > 0) {
-        throw new AppError('validation', 'import_rejected', `Nothing was imported: the file has ${result.errorCount} error(s). Correct them and try again.`, {
-          result,
-        });
+        throw new AppError(
+          'validation',
+          'import_rejected',
+          `Nothing was imported: the file has ${result.errorCount} error(s). Correct them and try again.`,
+          {
+            result,
+          },
+        );
       }
       await transact(async (trx) => {
         for (const step of plan) {

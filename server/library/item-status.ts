@@ -3,7 +3,8 @@ import type { EquipmentKind } from '../../shared/contracts/library';
 /** Days of warning before a calibration falls due or a material expires (common practice: one month). */
 export const WARNING_DAYS = 30;
 
-const addDays = (isoDate: string, days: number) => new Date(Date.parse(`${isoDate}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+const addDays = (isoDate: string, days: number) =>
+  new Date(Date.parse(`${isoDate}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 
 export type CalibrationState = 'ok' | 'due-soon' | 'overdue' | 'not-tracked';
 export type ExpiryState = 'ok' | 'expires-soon' | 'expired' | 'not-applicable';

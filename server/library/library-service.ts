@@ -49,13 +49,23 @@ export function parseItemData(kind: EquipmentKind, data: unknown) {
   return result.data as { code: string } & Record<string, unknown>;
 }
 
-export function libraryService(deps: { transact: Transact; library: LibraryRepository; audit: AuditRepository; now: () => Date }) {
+export function libraryService(deps: {
+  transact: Transact;
+  library: LibraryRepository;
+  audit: AuditRepository;
+  now: () => Date;
+}) {
   const { transact, library, audit, now } = deps;
   const today = () => now().toISOString().slice(0, 10);
 
   function summarise(item: ItemRow, current: RevisionRow, certificateCount: number): EquipmentItem {
     const revision = toRevision(current);
-    const data = revision.data as { calibrationDueOn?: string | null; expiresOn?: string; repeatabilityG?: number; readabilityG?: number };
+    const data = revision.data as {
+      calibrationDueOn?: string | null;
+      expiresOn?: string;
+      repeatabilityG?: number;
+      readabilityG?: number;
+    };
     const calibration = isMaterial(item.kind) ? 'not-tracked' : calibrationState(data.calibrationDueOn, today());
     const expiry = isMaterial(item.kind) ? expiryState(data.expiresOn, today()) : 'not-applicable';
     return {
@@ -69,7 +79,13 @@ export function libraryService(deps: { transact: Transact; library: LibraryRepos
       expiry,
       minimumWeightG: item.kind === 'balance' ? minimumWeightG(data.repeatabilityG ?? 0, data.readabilityG ?? 0) : null,
       certificateCount,
-      flags: flagWords({ retiredReason: item.retired_reason, calibration, dueOn: data.calibrationDueOn, expiry, expiresOn: data.expiresOn }),
+      flags: flagWords({
+        retiredReason: item.retired_reason,
+        calibration,
+        dueOn: data.calibrationDueOn,
+        expiry,
+        expiresOn: data.expiresOn,
+      }),
     };
   }
 
@@ -79,21 +95,33 @@ export function libraryService(deps: { transact: Transact; library: LibraryRepos
     const revisions = await library.revisionsOf(itemId);
     const certificates = await library.certificatesOf(itemId);
     const current = revisions.find((r) => r.id === item.current_revision_id) as RevisionRow;
-    return { ...summarise(item, current, certificates.length), revisions: revisions.map(toRevision), certificates: certificates.map(toCertificate) };
+    return {
+      ...summarise(item, current, certificates.length),
+      revisions: revisions.map(toRevision),
+      certificates: certificates.map(toCertificate),
+    };
   }
 
   async function assertCodeFree(labId: number, code: string, itemId: number | null, trx: Db) {
     const clash = await library.itemByCode(labId, code, trx);
-    if (clash && clash.id !== itemId) throw conflict('code_taken', `The ID ${code} is already used by another item in this lab's library.`);
+    if (clash && clash.id !== itemId)
+      throw conflict('code_taken', `The ID ${code} is already used by another item in this lab's library.`);
   }
 
   return {
     detail,
 
-    async list(labId: number, filter: { kind?: EquipmentKind; status: 'active' | 'retired' | 'all' }): Promise<EquipmentItem[]> {
+    async list(
+      labId: number,
+      filter: { kind?: EquipmentKind; status: 'active' | 'retired' | 'all' },
+    ): Promise<EquipmentItem[]> {
       const items = await library.items(labId, filter);
-      const revisions = new Map((await library.revisionsByIds(items.map((i) => i.current_revision_id))).map((r) => [r.id, r]));
-      return items.map((item) => summarise(item, revisions.get(item.current_revision_id) as RevisionRow, Number(item.certificate_count)));
+      const revisions = new Map(
+        (await library.revisionsByIds(items.map((i) => i.current_revision_id))).map((r) => [r.id, r]),
+      );
+      return items.map((item) =>
+        summarise(item, revisions.get(item.current_revision_id) as RevisionRow, Number(item.certificate_count)),
+      );
     },
 
     async revision(labId: number, itemId: number, number: number): Promise<Revision> {
@@ -105,15 +133,35 @@ export function libraryService(deps: { transact: Transact; library: LibraryRepos
     },
 
     /** Creates an item with its first revision. `trx` lets a CSV import put many in one transaction. */
-    async create(labId: number, actor: SessionUser, input: { kind: EquipmentKind; data: unknown; reason?: string }, trx?: Db): Promise<number> {
+    async create(
+      labId: number,
+      actor: SessionUser,
+      input: { kind: EquipmentKind; data: unknown; reason?: string },
+      trx?: Db,
+    ): Promise<number> {
       const data = parseItemData(input.kind, input.data);
       const at = now().toISOString();
       const run = async (t: Db) => {
         await assertCodeFree(labId, data.code, null, t);
-        const itemId = await library.insertItem({ labId, kind: input.kind, code: data.code, createdAt: at, createdBy: actor.id }, t);
-        await library.appendRevision(itemId, { data, reason: input.reason || 'First entry', createdAt: at, createdBy: actor.id, code: data.code }, t);
+        const itemId = await library.insertItem(
+          { labId, kind: input.kind, code: data.code, createdAt: at, createdBy: actor.id },
+          t,
+        );
+        await library.appendRevision(
+          itemId,
+          { data, reason: input.reason || 'First entry', createdAt: at, createdBy: actor.id, code: data.code },
+          t,
+        );
         await audit.record(
-          { labId, actorUserId: actor.id, action: 'library.created', entityType: 'equipment', entityId: itemId, summary: `${actor.name} added ${input.kind} ${data.code}`, after: data },
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'library.created',
+            entityType: 'equipment',
+            entityId: itemId,
+            summary: `${actor.name} added ${input.kind} ${data.code}`,
+            after: data,
+          },
           t,
         );
         return itemId;
@@ -122,19 +170,39 @@ export function libraryService(deps: { transact: Transact; library: LibraryRepos
     },
 
     /** Adds a revision; earlier revisions, and every budget that points at them, stay as they were. */
-    async revise(labId: number, actor: SessionUser, itemId: number, input: { data: unknown; reason: string }, trx?: Db): Promise<'revised' | 'unchanged'> {
+    async revise(
+      labId: number,
+      actor: SessionUser,
+      itemId: number,
+      input: { data: unknown; reason: string },
+      trx?: Db,
+    ): Promise<'revised' | 'unchanged'> {
       const run = async (t: Db) => {
         const item = await library.item(labId, itemId, t);
         if (!item) throw notFound('The item');
-        if (item.status === 'retired') throw conflict('retired', `${item.code} is retired; its record can be read but not changed.`);
+        if (item.status === 'retired')
+          throw conflict('retired', `${item.code} is retired; its record can be read but not changed.`);
         const data = parseItemData(item.kind, input.data);
         const current = await library.revision(item.current_revision_id, t);
         const before = JSON.parse((current as RevisionRow).data_json);
         if (canonicalJson(before) === canonicalJson(data)) return 'unchanged' as const;
         await assertCodeFree(labId, data.code, itemId, t);
-        await library.appendRevision(itemId, { data, reason: input.reason, createdAt: now().toISOString(), createdBy: actor.id, code: data.code }, t);
+        await library.appendRevision(
+          itemId,
+          { data, reason: input.reason, createdAt: now().toISOString(), createdBy: actor.id, code: data.code },
+          t,
+        );
         await audit.record(
-          { labId, actorUserId: actor.id, action: 'library.revised', entityType: 'equipment', entityId: itemId, summary: `${actor.name} revised ${data.code}: ${input.reason}`, before, after: data },
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'library.revised',
+            entityType: 'equipment',
+            entityId: itemId,
+            summary: `${actor.name} revised ${data.code}: ${input.reason}`,
+            before,
+            after: data,
+          },
           t,
         );
         return 'revised' as const;
@@ -149,7 +217,14 @@ export function libraryService(deps: { transact: Transact; library: LibraryRepos
         if (item.status === 'retired') throw conflict('retired', `${item.code} is already retired.`);
         await library.retire(itemId, { at: now().toISOString(), by: actor.id, reason }, trx);
         await audit.record(
-          { labId, actorUserId: actor.id, action: 'library.retired', entityType: 'equipment', entityId: itemId, summary: `${actor.name} retired ${item.code}: ${reason}` },
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'library.retired',
+            entityType: 'equipment',
+            entityId: itemId,
+            summary: `${actor.name} retired ${item.code}: ${reason}`,
+          },
           trx,
         );
       });

@@ -58,7 +58,11 @@ describe('library items and roles', () => {
       expect(list.map((i) => i.code)).toEqual(expect.arrayContaining(['T-BAL-1', 'T-VF-100']));
       await client.get(url(`/equipment/${created.body.id}`)).expect(200);
       await client.post(url('/equipment'), { kind: 'flask', data: { ...flask100, code: 'X' } }).expect(403);
-      await client.agent.put(url(`/equipment/${created.body.id}`)).set('x-csrf-token', client.token).send({ data: flask100, reason: 'try' }).expect(403);
+      await client.agent
+        .put(url(`/equipment/${created.body.id}`))
+        .set('x-csrf-token', client.token)
+        .send({ data: flask100, reason: 'try' })
+        .expect(403);
       await client.post(url(`/equipment/${created.body.id}/retire`), { reason: 'try it' }).expect(403);
     }
   });
@@ -77,12 +81,16 @@ describe('library items and roles', () => {
   });
 
   it('names the field and says what is wrong for bad data', async () => {
-    const res = await qa.post(url('/equipment'), { kind: 'flask', data: { ...flask100, toleranceMl: -0.1 } }).expect(400);
+    const res = await qa
+      .post(url('/equipment'), { kind: 'flask', data: { ...flask100, toleranceMl: -0.1 } })
+      .expect(400);
     expect(res.body.error.details[0].path).toBe('data.toleranceMl');
     expect(res.body.error.details[0].message).toMatch(/greater than zero/);
     const clash = await qa.post(url('/equipment'), { kind: 'flask', data: flask100 }).expect(201);
     expect(clash.body.code).toBe('T-VF-100');
-    const again = await qa.post(url('/equipment'), { kind: 'flask', data: { ...flask100, code: 't-vf-100' } }).expect(409);
+    const again = await qa
+      .post(url('/equipment'), { kind: 'flask', data: { ...flask100, code: 't-vf-100' } })
+      .expect(409);
     expect(again.body.error.code).toBe('code_taken');
   });
 });
@@ -93,9 +101,17 @@ describe('revisions, not overwrites', () => {
     const firstRevisionId = created.current.id;
     const before = await t.db('equipment_revisions').where({ id: firstRevisionId }).first();
 
-    await qa.agent.put(url(`/equipment/${created.id}`)).set('x-csrf-token', qa.token).send({ data: { ...flask100, fillRepeatabilityMl: 0.03 } }).expect(400);
+    await qa.agent
+      .put(url(`/equipment/${created.id}`))
+      .set('x-csrf-token', qa.token)
+      .send({ data: { ...flask100, fillRepeatabilityMl: 0.03 } })
+      .expect(400);
     const revised = (
-      await qa.agent.put(url(`/equipment/${created.id}`)).set('x-csrf-token', qa.token).send({ data: { ...flask100, fillRepeatabilityMl: 0.03 }, reason: 'New fill check, Nov 2026' }).expect(200)
+      await qa.agent
+        .put(url(`/equipment/${created.id}`))
+        .set('x-csrf-token', qa.token)
+        .send({ data: { ...flask100, fillRepeatabilityMl: 0.03 }, reason: 'New fill check, Nov 2026' })
+        .expect(200)
     ).body;
     expect(revised.current.number).toBe(2);
     expect(revised.revisions.map((r: { number: number }) => r.number)).toEqual([2, 1]);
@@ -104,18 +120,27 @@ describe('revisions, not overwrites', () => {
     const first = (await qa.get(url(`/equipment/${created.id}/revisions/1`)).expect(200)).body;
     expect(first.data.fillRepeatabilityMl).toBe(0.02);
     expect(await t.db('equipment_revisions').where({ id: firstRevisionId }).first()).toEqual(before);
-    await expect(t.db('equipment_revisions').where({ id: firstRevisionId }).update({ reason: 'tamper' })).rejects.toThrow(/immutable/);
+    await expect(
+      t.db('equipment_revisions').where({ id: firstRevisionId }).update({ reason: 'tamper' }),
+    ).rejects.toThrow(/immutable/);
     expect((await t.db('audit_events').where({ action: 'library.revised' })).length).toBe(1);
   });
 
   it('retires an item: it leaves the active list, stays readable, and cannot be revised', async () => {
     const created = (await qa.post(url('/equipment'), { kind: 'flask', data: flask100 }).expect(201)).body;
-    const retired = (await qa.post(url(`/equipment/${created.id}/retire`), { reason: 'Chipped neck' }).expect(200)).body;
+    const retired = (await qa.post(url(`/equipment/${created.id}/retire`), { reason: 'Chipped neck' }).expect(200))
+      .body;
     expect(retired.status).toBe('retired');
     const active = (await qa.get(url('/equipment?kind=flask')).expect(200)).body as { code: string }[];
     expect(active.map((i) => i.code)).not.toContain('T-VF-100');
-    expect((await qa.get(url('/equipment?status=retired')).expect(200)).body[0].flags).toContain('Retired: Chipped neck');
-    await qa.agent.put(url(`/equipment/${created.id}`)).set('x-csrf-token', qa.token).send({ data: flask100, reason: 'fix' }).expect(409);
+    expect((await qa.get(url('/equipment?status=retired')).expect(200)).body[0].flags).toContain(
+      'Retired: Chipped neck',
+    );
+    await qa.agent
+      .put(url(`/equipment/${created.id}`))
+      .set('x-csrf-token', qa.token)
+      .send({ data: flask100, reason: 'fix' })
+      .expect(409);
   });
 
   it('flags an expired reference material', async () => {
@@ -149,7 +174,11 @@ describe('certificates', () => {
       .set('x-csrf-token', qa.token)
       .attach('file', pdf, { filename: 'calibration 2026.pdf', contentType: 'application/pdf' })
       .expect(201);
-    expect(res.body).toMatchObject({ mediaType: 'application/pdf', revisionNumber: 1, originalName: 'calibration 2026.pdf' });
+    expect(res.body).toMatchObject({
+      mediaType: 'application/pdf',
+      revisionNumber: 1,
+      originalName: 'calibration 2026.pdf',
+    });
     const stored = await t.db('certificates').where({ id: res.body.id }).first();
     expect(stored.stored_name).toMatch(/^[0-9a-f-]{36}\.pdf$/);
 
@@ -160,7 +189,9 @@ describe('certificates', () => {
     expect(Buffer.from(download.body).subarray(0, 5).toString()).toBe('%PDF-');
 
     await qa.post('/api/auth/logout').expect(204);
-    await request(t.app).get(url(`/certificates/${res.body.id}`)).expect(401);
+    await request(t.app)
+      .get(url(`/certificates/${res.body.id}`))
+      .expect(401);
   });
 
   it('refuses a renamed executable and accepts a PNG whatever it is called', async () => {
@@ -208,7 +239,9 @@ describe('CSV import and export', () => {
     const exported = (await qa.get(url('/equipment-csv/export?kind=flask')).expect(200)).text;
     expect(exported.split('\n')[0]).toBe(csv.split('\n')[0]);
     expect(exported).toContain('VF-IMP-500B');
-    const again = (await qa.post(url('/equipment-csv/import'), { kind: 'flask', csv: exported, dryRun: true }).expect(200)).body;
+    const again = (
+      await qa.post(url('/equipment-csv/import'), { kind: 'flask', csv: exported, dryRun: true }).expect(200)
+    ).body;
     const actions = again.rows.map((r: { action: string }) => r.action);
     expect(actions.length).toBeGreaterThanOrEqual(3 + 11); // the three imported flasks and the demo lab's eleven
     expect(new Set(actions)).toEqual(new Set(['unchanged']));
@@ -217,7 +250,9 @@ describe('CSV import and export', () => {
   it('reports every broken row by line number and writes nothing', async () => {
     const csv = readFileSync(join(fixtures, 'flasks-broken.csv'), 'utf8');
     const dry = (await qa.post(url('/equipment-csv/import'), { kind: 'flask', csv, dryRun: true }).expect(200)).body;
-    const byLine = Object.fromEntries(dry.rows.map((r: { line: number; errors: { column: string }[] }) => [r.line, r.errors.map((e) => e.column)]));
+    const byLine = Object.fromEntries(
+      dry.rows.map((r: { line: number; errors: { column: string }[] }) => [r.line, r.errors.map((e) => e.column)]),
+    );
     expect(byLine[2]).toEqual([]);
     expect(byLine[3]).toEqual(['tolerance_ml']);
     expect(byLine[4]).toEqual(['glass_class']);
@@ -229,9 +264,15 @@ describe('CSV import and export', () => {
   });
 
   it('reports unknown and missing columns against the header line', async () => {
-    const res = (await qa.post(url('/equipment-csv/import'), { kind: 'balance', csv: 'code,colour\nB-1,red\n', dryRun: true }).expect(200)).body;
+    const res = (
+      await qa
+        .post(url('/equipment-csv/import'), { kind: 'balance', csv: 'code,colour\nB-1,red\n', dryRun: true })
+        .expect(200)
+    ).body;
     expect(res.rows[0].line).toBe(1);
-    expect(res.rows[0].errors.map((e: { message: string }) => e.message).join(' ')).toMatch(/Unknown column “colour”.*Missing column “capacity_g”/);
+    expect(res.rows[0].errors.map((e: { message: string }) => e.message).join(' ')).toMatch(
+      /Unknown column “colour”.*Missing column “capacity_g”/,
+    );
   });
 
   it('offers a template with the documented columns', async () => {
@@ -244,13 +285,26 @@ describe('CSV import and export', () => {
 describe('lab policy', () => {
   it('starts from the default, lets QA change it, and refuses others', async () => {
     const initial = (await qa.get(url('/policy')).expect(200)).body;
-    expect(initial).toMatchObject({ coverage: { mode: 'probability', probability: 0.9545 }, glasswareDistribution: 'triangular', updatedAt: null });
-    const next = { coverage: { mode: 'fixed-k', k: 2 }, glasswareDistribution: 'rectangular', temperatureHalfRangeC: 3, minimumWeightRule: true };
+    expect(initial).toMatchObject({
+      coverage: { mode: 'probability', probability: 0.9545 },
+      glasswareDistribution: 'triangular',
+      updatedAt: null,
+    });
+    const next = {
+      coverage: { mode: 'fixed-k', k: 2 },
+      glasswareDistribution: 'rectangular',
+      temperatureHalfRangeC: 3,
+      minimumWeightRule: true,
+    };
     const saved = (await qa.agent.put(url('/policy')).set('x-csrf-token', qa.token).send(next).expect(200)).body;
     expect(saved).toMatchObject({ ...next, updatedBy: 'Imogen Tasker' });
     const analyst = await signIn(t.app, demo('analyst'));
     await analyst.agent.put(url('/policy')).set('x-csrf-token', analyst.token).send(next).expect(403);
-    const bad = await qa.agent.put(url('/policy')).set('x-csrf-token', qa.token).send({ ...next, coverage: { mode: 'probability', probability: 0.9 } }).expect(400);
+    const bad = await qa.agent
+      .put(url('/policy'))
+      .set('x-csrf-token', qa.token)
+      .send({ ...next, coverage: { mode: 'probability', probability: 0.9 } })
+      .expect(400);
     expect(bad.body.error.details[0].path).toMatch(/^coverage/);
   });
 });

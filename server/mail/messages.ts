@@ -54,7 +54,15 @@ export function passwordResetMessage(input: { name: string; link: string }) {
   };
 }
 
-export function submittedMessage(input: { reviewerName: string; analyst: string; title: string; version: number; statement: string | null; comment: string; link: string }) {
+export function submittedMessage(input: {
+  reviewerName: string;
+  analyst: string;
+  title: string;
+  version: number;
+  statement: string | null;
+  comment: string;
+  link: string;
+}) {
   return {
     subject: `Review requested: ${input.title} (version ${input.version})`,
     ...layout(
@@ -69,7 +77,15 @@ export function submittedMessage(input: { reviewerName: string; analyst: string;
   };
 }
 
-export function decisionMessage(input: { analystName: string; reviewer: string; title: string; version: number; decision: 'approved' | 'returned'; comment: string; link: string }) {
+export function decisionMessage(input: {
+  analystName: string;
+  reviewer: string;
+  title: string;
+  version: number;
+  decision: 'approved' | 'returned';
+  comment: string;
+  link: string;
+}) {
   const approved = input.decision === 'approved';
   return {
     subject: `${approved ? 'Approved' : 'Returned'}: ${input.title} (version ${input.version})`,

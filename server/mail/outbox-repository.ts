@@ -22,7 +22,11 @@ export function outboxRepository(db: Db) {
   return {
     insert: (row: Omit<OutboxRow, 'id'>) => db('outbox').insert(row),
     deliveryLog: (labId: number): Promise<DeliveryLogRow[]> =>
-      db('outbox').where({ lab_id: labId }).orderBy('id', 'desc').limit(200).select('id', 'to_address', 'subject', 'created_at'),
+      db('outbox')
+        .where({ lab_id: labId })
+        .orderBy('id', 'desc')
+        .limit(200)
+        .select('id', 'to_address', 'subject', 'created_at'),
     /** Bodies included: for the instance operator only. */
     captured: (to?: string): Promise<OutboxRow[]> => {
       const query = db('outbox').orderBy('id', 'desc').limit(200);

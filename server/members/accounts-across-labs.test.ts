@@ -1,7 +1,16 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { hashPassword } from '../auth/password';
 import { insertedId } from '../db/inserted-id';
-import { agentFor, buildTestApp, countRows, demo, DEMO_PASSWORD, signIn, tokenFromOutbox, type TestApp } from '../test-support/test-app';
+import {
+  agentFor,
+  buildTestApp,
+  countRows,
+  demo,
+  DEMO_PASSWORD,
+  signIn,
+  tokenFromOutbox,
+  type TestApp,
+} from '../test-support/test-app';
 
 /**
  * Two labs on one instance: the demo lab (A, Wellmere) and Harrowgate (B) with its own admin.
@@ -18,9 +27,24 @@ beforeEach(async () => {
   t = await buildTestApp();
   labA = (await t.db('labs').where({ slug: 'wellmere-water' }).first()).id;
   const at = t.clock.now().toISOString();
-  labB = insertedId((await t.db('labs').insert({ name: 'Harrowgate Food Testing', slug: 'harrowgate', created_at: at }).returning('id'))[0]);
+  labB = insertedId(
+    (
+      await t.db('labs').insert({ name: 'Harrowgate Food Testing', slug: 'harrowgate', created_at: at }).returning('id')
+    )[0],
+  );
   const adminB = insertedId(
-    (await t.db('users').insert({ email: ADMIN_B, name: 'Ode Marlow', password_hash: await hashPassword(DEMO_PASSWORD), active: true, created_at: at }).returning('id'))[0],
+    (
+      await t
+        .db('users')
+        .insert({
+          email: ADMIN_B,
+          name: 'Ode Marlow',
+          password_hash: await hashPassword(DEMO_PASSWORD),
+          active: true,
+          created_at: at,
+        })
+        .returning('id')
+    )[0],
   );
   await t.db('memberships').insert({ user_id: adminB, lab_id: labB, role: 'admin', created_at: at });
 });
@@ -42,7 +66,9 @@ async function joinLabB(email: string, role: 'qa' | 'auditor' | 'admin') {
 
 /** The same guest membership written directly, so a finding reproduces whatever the accept route does. */
 async function guestInLabB(email: string, role: 'qa' | 'auditor' | 'admin') {
-  await t.db('memberships').insert({ user_id: await userId(email), lab_id: labB, role, created_at: t.clock.now().toISOString() });
+  await t
+    .db('memberships')
+    .insert({ user_id: await userId(email), lab_id: labB, role, created_at: t.clock.now().toISOString() });
   return signIn(t.app, ADMIN_B);
 }
 
@@ -61,7 +87,10 @@ describe('reset links stay with their recipient', () => {
       expect(JSON.stringify(res.body)).not.toContain('/reset-password/');
     }
     // Nor does lab A's own admin (who is not the instance operator here) read it.
-    await t.db('users').where({ email: demo('admin') }).update({ operator: false });
+    await t
+      .db('users')
+      .where({ email: demo('admin') })
+      .update({ operator: false });
     const adminA = await signIn(t.app, demo('admin'));
     expect(JSON.stringify((await adminA.get(`/api/labs/${labA}/delivery-log`).expect(200)).body)).not.toContain(token);
     await adminA.get('/api/operator/mail').expect(403);
@@ -69,9 +98,21 @@ describe('reset links stay with their recipient', () => {
 
   it('shows a lab admin a delivery log of their own lab: to, subject and time, no bodies or links', async () => {
     const adminA = await signIn(t.app, demo('admin'));
-    await adminA.post(`/api/labs/${labA}/invitations`, { email: 'new.person@wellmere-water.example', name: 'New Person', role: 'analyst' }).expect(201);
+    await adminA
+      .post(`/api/labs/${labA}/invitations`, {
+        email: 'new.person@wellmere-water.example',
+        name: 'New Person',
+        role: 'analyst',
+      })
+      .expect(201);
     const adminB = await signIn(t.app, ADMIN_B);
-    await adminB.post(`/api/labs/${labB}/invitations`, { email: 'b.person@harrowgate.example', name: 'B Person', role: 'analyst' }).expect(201);
+    await adminB
+      .post(`/api/labs/${labB}/invitations`, {
+        email: 'b.person@harrowgate.example',
+        name: 'B Person',
+        role: 'analyst',
+      })
+      .expect(201);
 
     const log = (await adminA.get(`/api/labs/${labA}/delivery-log`).expect(200)).body as Record<string, unknown>[];
     expect(log).toHaveLength(1);
@@ -84,7 +125,9 @@ describe('reset links stay with their recipient', () => {
 describe('invitations for an existing account', () => {
   it('asks no password through the link: the person accepts signed in as themselves', async () => {
     const adminB = await signIn(t.app, ADMIN_B);
-    await adminB.post(`/api/labs/${labB}/invitations`, { email: demo('qa'), name: 'Imogen Tasker', role: 'qa' }).expect(201);
+    await adminB
+      .post(`/api/labs/${labB}/invitations`, { email: demo('qa'), name: 'Imogen Tasker', role: 'qa' })
+      .expect(201);
     const token = await tokenFromOutbox(t.db, demo('qa'), '/invitation/');
 
     const visitor = await agentFor(t.app);
@@ -104,7 +147,10 @@ describe('invitations for an existing account', () => {
     const invitee = await signIn(t.app, 'QA@Wellmere-Water.example');
     const me = (await invitee.post(`/api/invitations/${token}/accept`, {}).expect(200)).body;
     expect(me.activeLabId).toBe(labB);
-    expect(me.labs.map((l: { name: string }) => l.name).sort()).toEqual(['Harrowgate Food Testing', 'Wellmere Regional Water Laboratory']);
+    expect(me.labs.map((l: { name: string }) => l.name).sort()).toEqual([
+      'Harrowgate Food Testing',
+      'Wellmere Regional Water Laboratory',
+    ]);
     await invitee.post(`/api/invitations/${token}/accept`, {}).expect(404);
     // The mail tells her to sign in, not to set a password.
     const mail = await t.db('outbox').where('text_body', 'like', '%/invitation/%').first();
@@ -114,19 +160,37 @@ describe('invitations for an existing account', () => {
 
   it('answers 409 to all but one of four concurrent accepts of one invitation', async () => {
     const adminA = await signIn(t.app, demo('admin'));
-    await adminA.post(`/api/labs/${labA}/invitations`, { email: 'rush@wellmere-water.example', name: 'Rush Hour', role: 'analyst' }).expect(201);
+    await adminA
+      .post(`/api/labs/${labA}/invitations`, {
+        email: 'rush@wellmere-water.example',
+        name: 'Rush Hour',
+        role: 'analyst',
+      })
+      .expect(201);
     const token = await tokenFromOutbox(t.db, 'rush@wellmere-water.example', '/invitation/');
     const visitors = await Promise.all([1, 2, 3, 4].map(() => agentFor(t.app)));
-    const answers = await Promise.all(visitors.map((v) => v.post(`/api/invitations/${token}/accept`, { name: 'Rush Hour', password: 'bench-ready-2026' })));
+    const answers = await Promise.all(
+      visitors.map((v) =>
+        v.post(`/api/invitations/${token}/accept`, { name: 'Rush Hour', password: 'bench-ready-2026' }),
+      ),
+    );
     expect(answers.map((a) => a.status).sort()).toEqual([200, 409, 409, 409]);
     expect(await countRows(t.db('users').where({ email: 'rush@wellmere-water.example' }))).toBe(1);
   });
 
   it('answers 409, not 5xx, when invitations from two labs to one new e-mail are accepted at once', async () => {
     const email = 'both.labs@example.org';
-    await (await signIn(t.app, demo('admin'))).post(`/api/labs/${labA}/invitations`, { email, name: 'Both Labs', role: 'analyst' }).expect(201);
+    await (
+      await signIn(t.app, demo('admin'))
+    )
+      .post(`/api/labs/${labA}/invitations`, { email, name: 'Both Labs', role: 'analyst' })
+      .expect(201);
     const tokenA = await tokenFromOutbox(t.db, email, '/invitation/');
-    await (await signIn(t.app, ADMIN_B)).post(`/api/labs/${labB}/invitations`, { email, name: 'Both Labs', role: 'qa' }).expect(201);
+    await (
+      await signIn(t.app, ADMIN_B)
+    )
+      .post(`/api/labs/${labB}/invitations`, { email, name: 'Both Labs', role: 'qa' })
+      .expect(201);
     const tokenB = await tokenFromOutbox(t.db, email, '/invitation/');
     expect(tokenB).not.toBe(tokenA);
     const [first, second] = await Promise.all([agentFor(t.app), agentFor(t.app)]);
@@ -145,7 +209,15 @@ describe('invitations for an existing account', () => {
 
   it('lets the lab admin revoke a pending invitation, after which the link is dead', async () => {
     const adminA = await signIn(t.app, demo('admin'));
-    const invitation = (await adminA.post(`/api/labs/${labA}/invitations`, { email: 'later@wellmere-water.example', name: 'Later', role: 'analyst' }).expect(201)).body;
+    const invitation = (
+      await adminA
+        .post(`/api/labs/${labA}/invitations`, {
+          email: 'later@wellmere-water.example',
+          name: 'Later',
+          role: 'analyst',
+        })
+        .expect(201)
+    ).body;
     const token = await tokenFromOutbox(t.db, 'later@wellmere-water.example', '/invitation/');
     const adminB = await signIn(t.app, ADMIN_B);
     await adminB.post(`/api/labs/${labB}/invitations/${invitation.id}/revoke`).expect(404);
@@ -153,7 +225,11 @@ describe('invitations for an existing account', () => {
     expect(revoked.revokedAt).not.toBeNull();
     await adminA.post(`/api/labs/${labA}/invitations/${invitation.id}/revoke`).expect(409);
     await (await agentFor(t.app)).get(`/api/invitations/${token}`).expect(404);
-    await (await agentFor(t.app)).post(`/api/invitations/${token}/accept`, { name: 'Later', password: 'bench-ready-2026' }).expect(404);
+    await (
+      await agentFor(t.app)
+    )
+      .post(`/api/invitations/${token}/accept`, { name: 'Later', password: 'bench-ready-2026' })
+      .expect(404);
     expect(await t.db('audit_events').where({ action: 'member.invitation_revoked', lab_id: labA })).toHaveLength(1);
   });
 });
@@ -195,7 +271,9 @@ describe('a lab admin manages memberships of their own lab only', () => {
     const adminB = await signIn(t.app, ADMIN_B);
     const self = await userId(ADMIN_B);
     expect((await adminB.delete(`/api/labs/${labB}/members/${self}`).expect(409)).body.error.code).toBe('last_admin');
-    expect((await adminB.patch(`/api/labs/${labB}/members/${self}`, { roles: ['qa'] }).expect(409)).body.error.code).toBe('last_admin');
+    expect(
+      (await adminB.patch(`/api/labs/${labB}/members/${self}`, { roles: ['qa'] }).expect(409)).body.error.code,
+    ).toBe('last_admin');
     // An admin of lab A who is also admin of lab B does not count for lab B once removed from it.
     await joinLabB(demo('admin'), 'admin');
     await adminB.delete(`/api/labs/${labB}/members/${await userId(demo('admin'))}`).expect(204);
@@ -204,10 +282,16 @@ describe('a lab admin manages memberships of their own lab only', () => {
 });
 
 describe('failed sign-ins are filed with every lab of the account', () => {
-  it("shows lab A a failed sign-in of its QA even when she is also a guest of lab B", async () => {
+  it('shows lab A a failed sign-in of its QA even when she is also a guest of lab B', async () => {
     await guestInLabB(demo('qa'), 'auditor');
-    await (await agentFor(t.app)).post('/api/auth/login', { email: demo('qa'), password: 'not-her-password-1' }).expect(401);
-    const failures = await t.db('audit_events').where({ action: 'auth.sign_in_failed', entity_id: String(await userId(demo('qa'))) });
+    await (
+      await agentFor(t.app)
+    )
+      .post('/api/auth/login', { email: demo('qa'), password: 'not-her-password-1' })
+      .expect(401);
+    const failures = await t
+      .db('audit_events')
+      .where({ action: 'auth.sign_in_failed', entity_id: String(await userId(demo('qa'))) });
     expect(failures.map((row) => row.lab_id).sort()).toEqual([labA, labB].sort());
   });
 });

@@ -20,13 +20,20 @@ export interface InvitationRow {
 
 export function invitationsRepository(db: Db) {
   return {
-    async insert(row: Omit<InvitationRow, 'id' | 'accepted_at' | 'accepted_user_id' | 'revoked_at' | 'invited_by_name'>): Promise<number> {
+    async insert(
+      row: Omit<InvitationRow, 'id' | 'accepted_at' | 'accepted_user_id' | 'revoked_at' | 'invited_by_name'>,
+    ): Promise<number> {
       const [inserted] = await db('invitations').insert(row).returning('id');
       return insertedId(inserted);
     },
-    findByTokenHash: (tokenHash: string): Promise<InvitationRow | undefined> => db('invitations').where({ token_hash: tokenHash }).first(),
+    findByTokenHash: (tokenHash: string): Promise<InvitationRow | undefined> =>
+      db('invitations').where({ token_hash: tokenHash }).first(),
     findById: (id: number): Promise<InvitationRow | undefined> =>
-      db('invitations as i').join('users as u', 'u.id', 'i.invited_by').where('i.id', id).select('i.*', 'u.name as invited_by_name').first(),
+      db('invitations as i')
+        .join('users as u', 'u.id', 'i.invited_by')
+        .where('i.id', id)
+        .select('i.*', 'u.name as invited_by_name')
+        .first(),
     listForLab: (labId: number): Promise<InvitationRow[]> =>
       db('invitations as i')
         .join('users as u', 'u.id', 'i.invited_by')
@@ -35,11 +42,24 @@ export function invitationsRepository(db: Db) {
         .select('i.*', 'u.name as invited_by_name'),
     /** Claims a pending invitation; the affected-row count (0 or 1) says whether this call won it. */
     claim: async (id: number, at: string, trx: Db): Promise<boolean> =>
-      Number(await trx('invitations').where({ id }).whereNull('accepted_at').whereNull('revoked_at').update({ accepted_at: at })) === 1,
-    setAcceptedUser: (id: number, userId: number, trx: Db) => trx('invitations').where({ id }).update({ accepted_user_id: userId }),
+      Number(
+        await trx('invitations')
+          .where({ id })
+          .whereNull('accepted_at')
+          .whereNull('revoked_at')
+          .update({ accepted_at: at }),
+      ) === 1,
+    setAcceptedUser: (id: number, userId: number, trx: Db) =>
+      trx('invitations').where({ id }).update({ accepted_user_id: userId }),
     /** Revokes a pending invitation of this lab; false when it was already accepted or revoked. */
     revoke: async (id: number, labId: number, by: number, at: string): Promise<boolean> =>
-      Number(await db('invitations').where({ id, lab_id: labId }).whereNull('accepted_at').whereNull('revoked_at').update({ revoked_at: at, revoked_by: by })) === 1,
+      Number(
+        await db('invitations')
+          .where({ id, lab_id: labId })
+          .whereNull('accepted_at')
+          .whereNull('revoked_at')
+          .update({ revoked_at: at, revoked_by: by }),
+      ) === 1,
   };
 }
 export type InvitationsRepository = ReturnType<typeof invitationsRepository>;

@@ -23,10 +23,15 @@ export function labMembersRouter(deps: { members: MembersService; authorize: Aut
     res.json(await members.list(labId(req)));
   });
 
-  router.patch('/members/:userId', admin, validate({ params: memberParams, body: memberUpdateSchema }), async (req, res) => {
-    const { params, body } = valid(req, { params: memberParams, body: memberUpdateSchema });
-    res.json(await members.update(labId(req), req.user as SessionUser, params.userId, body));
-  });
+  router.patch(
+    '/members/:userId',
+    admin,
+    validate({ params: memberParams, body: memberUpdateSchema }),
+    async (req, res) => {
+      const { params, body } = valid(req, { params: memberParams, body: memberUpdateSchema });
+      res.json(await members.update(labId(req), req.user as SessionUser, params.userId, body));
+    },
+  );
 
   router.delete('/members/:userId', admin, validate({ params: memberParams }), async (req, res) => {
     const { params } = valid(req, { params: memberParams });
@@ -64,17 +69,22 @@ export function invitationsRouter(deps: { members: MembersService; auth: AuthSer
     res.json(await members.preview(params.token));
   });
 
-  router.post('/:token/accept', deps.limits.guard('invitation'), validate({ params: tokenParamsSchema, body: invitationAcceptSchema }), async (req, res) => {
-    const { params, body } = valid(req, { params: tokenParamsSchema, body: invitationAcceptSchema });
-    const signedIn = req.user as SessionUser | undefined;
-    const user = await members.accept(params.token, signedIn, body);
-    if (signedIn?.id !== user.id) {
-      await new Promise<void>((resolve, reject) => req.login(user, (error) => (error ? reject(error) : resolve())));
-    }
-    const me = await auth.me(user, await members.labOf(params.token), csrfToken(req));
-    req.session.activeLabId = me.activeLabId ?? undefined;
-    res.json(me);
-  });
+  router.post(
+    '/:token/accept',
+    deps.limits.guard('invitation'),
+    validate({ params: tokenParamsSchema, body: invitationAcceptSchema }),
+    async (req, res) => {
+      const { params, body } = valid(req, { params: tokenParamsSchema, body: invitationAcceptSchema });
+      const signedIn = req.user as SessionUser | undefined;
+      const user = await members.accept(params.token, signedIn, body);
+      if (signedIn?.id !== user.id) {
+        await new Promise<void>((resolve, reject) => req.login(user, (error) => (error ? reject(error) : resolve())));
+      }
+      const me = await auth.me(user, await members.labOf(params.token), csrfToken(req));
+      req.session.activeLabId = me.activeLabId ?? undefined;
+      res.json(me);
+    },
+  );
 
   return router;
 }

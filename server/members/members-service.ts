@@ -1,4 +1,10 @@
-import { invitationJoinNewSchema, type Invitation, type InvitationPreview, type Member, type MemberUpdate } from '../../shared/contracts/members';
+import {
+  invitationJoinNewSchema,
+  type Invitation,
+  type InvitationPreview,
+  type Member,
+  type MemberUpdate,
+} from '../../shared/contracts/members';
 import type { Role } from '../../shared/contracts/roles';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
@@ -47,7 +53,8 @@ const toInvitation = (row: InvitationRow): Invitation => ({
   revokedAt: row.revoked_at,
 });
 
-const invitationUsed = () => conflict('invitation_used', 'This invitation has just been accepted. Sign in to continue.');
+const invitationUsed = () =>
+  conflict('invitation_used', 'This invitation has just been accepted. Sign in to continue.');
 
 export function membersService(deps: {
   transact: Transact;
@@ -78,14 +85,22 @@ export function membersService(deps: {
   return {
     list: async (labId: number): Promise<Member[]> => groupMembers(await labs.members(labId)),
 
-    listInvitations: async (labId: number): Promise<Invitation[]> => (await invitations.listForLab(labId)).map(toInvitation),
+    listInvitations: async (labId: number): Promise<Invitation[]> =>
+      (await invitations.listForLab(labId)).map(toInvitation),
 
-    async invite(labId: number, actor: SessionUser, input: { email: string; name: string; role: Role }): Promise<Invitation> {
+    async invite(
+      labId: number,
+      actor: SessionUser,
+      input: { email: string; name: string; role: Role },
+    ): Promise<Invitation> {
       const lab = await labs.findById(labId);
       if (!lab) throw notFound('The lab');
       const existing = await users.findByEmail(input.email);
       if (existing && (await labs.rolesOf(existing.id, labId)).length > 0) {
-        throw conflict('already_member', `${input.email} is already a member of this lab. Change their roles in the member list instead.`);
+        throw conflict(
+          'already_member',
+          `${input.email} is already a member of this lab. Change their roles in the member list instead.`,
+        );
       }
       const { token, tokenHash } = newToken();
       const created = now();
@@ -141,13 +156,20 @@ export function membersService(deps: {
      * The invitation is claimed by a conditional update, so of concurrent accepts one wins and the
      * others get a conflict.
      */
-    async accept(token: string, signedIn: SessionUser | undefined, input: { name?: string; password?: string }): Promise<SessionUser> {
+    async accept(
+      token: string,
+      signedIn: SessionUser | undefined,
+      input: { name?: string; password?: string },
+    ): Promise<SessionUser> {
       const row = await openInvitation(token);
       const existing = await users.findByEmail(row.email);
       const at = now().toISOString();
       let userId: number;
       if (existing) {
-        if (!signedIn) throw unauthenticated(`You already have a Dilutrace account. Sign in as ${row.email} to accept this invitation.`);
+        if (!signedIn)
+          throw unauthenticated(
+            `You already have a Dilutrace account. Sign in as ${row.email} to accept this invitation.`,
+          );
         if (signedIn.email.toLowerCase() !== row.email.toLowerCase()) {
           throw forbidden(`This invitation is for ${row.email}. Sign out, then sign in as ${row.email} to accept it.`);
         }
@@ -165,19 +187,21 @@ export function membersService(deps: {
         }
         const passwordHash = await hashPassword(parsed.data.password);
         userId = await transact(async (trx) => {
-            if (!(await invitations.claim(row.id, at, trx))) throw invitationUsed();
-            const id = await users.insert({ email: row.email, name: parsed.data.name, passwordHash, createdAt: at }, trx);
-            await invitations.setAcceptedUser(row.id, id, trx);
-            await labs.addRole(id, row.lab_id, row.role, at, trx);
-            return id;
-          })
-          .catch((error: unknown) => {
-            // Another lab's invitation to the same e-mail made the account a moment ago: this one stays open.
-            if (isUniqueViolation(error, 'users', 'email')) {
-              throw conflict('account_exists', `An account for ${row.email} was just created. Sign in as ${row.email} to accept this invitation.`);
-            }
-            throw error;
-          });
+          if (!(await invitations.claim(row.id, at, trx))) throw invitationUsed();
+          const id = await users.insert({ email: row.email, name: parsed.data.name, passwordHash, createdAt: at }, trx);
+          await invitations.setAcceptedUser(row.id, id, trx);
+          await labs.addRole(id, row.lab_id, row.role, at, trx);
+          return id;
+        }).catch((error: unknown) => {
+          // Another lab's invitation to the same e-mail made the account a moment ago: this one stays open.
+          if (isUniqueViolation(error, 'users', 'email')) {
+            throw conflict(
+              'account_exists',
+              `An account for ${row.email} was just created. Sign in as ${row.email} to accept this invitation.`,
+            );
+          }
+          throw error;
+        });
       }
       await audit.record({
         labId: row.lab_id,
@@ -192,7 +216,8 @@ export function membersService(deps: {
     },
 
     /** The lab an invitation (by its token) is for, once accepted: the session switches to it. */
-    labOf: async (token: string): Promise<number | undefined> => (await invitations.findByTokenHash(hashToken(token)))?.lab_id,
+    labOf: async (token: string): Promise<number | undefined> =>
+      (await invitations.findByTokenHash(hashToken(token)))?.lab_id,
 
     async revokeInvitation(labId: number, actor: SessionUser, invitationId: number): Promise<Invitation> {
       const row = await invitations.findById(invitationId);
@@ -254,5 +279,6 @@ export function membersService(deps: {
     },
   };
 }
-const lastAdmin = () => conflict('last_admin', 'The lab needs at least one active administrator. Make someone else admin first.');
+const lastAdmin = () =>
+  conflict('last_admin', 'The lab needs at least one active administrator. Make someone else admin first.');
 export type MembersService = ReturnType<typeof membersService>;

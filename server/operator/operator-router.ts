@@ -21,10 +21,15 @@ export function operatorRouter(deps: { operator: OperatorService; authorize: Aut
     res.json(await operator.listAccounts());
   });
 
-  router.post('/accounts/:userId/disable', authorize.operator, validate({ params: accountParams }), async (req, res) => {
-    const { params } = valid(req, { params: accountParams });
-    res.json(await operator.disable(actor(req.user), { id: params.userId }));
-  });
+  router.post(
+    '/accounts/:userId/disable',
+    authorize.operator,
+    validate({ params: accountParams }),
+    async (req, res) => {
+      const { params } = valid(req, { params: accountParams });
+      res.json(await operator.disable(actor(req.user), { id: params.userId }));
+    },
+  );
 
   router.post('/accounts/:userId/enable', authorize.operator, validate({ params: accountParams }), async (req, res) => {
     const { params } = valid(req, { params: accountParams });

@@ -13,7 +13,12 @@ export type OperatorActor = { id: number; name: string } | 'command line';
  * everywhere, make another account operator, read the captured mail. Each action is an audit event
  * with no lab (instance-level).
  */
-export function operatorService(deps: { users: UsersRepository; outbox: OutboxRepository; audit: AuditRepository; sessions: DatabaseSessionStore }) {
+export function operatorService(deps: {
+  users: UsersRepository;
+  outbox: OutboxRepository;
+  audit: AuditRepository;
+  sessions: DatabaseSessionStore;
+}) {
   const { users, outbox, audit } = deps;
 
   async function account(find: { id: number } | { email: string }): Promise<UserRow> {
@@ -24,10 +29,24 @@ export function operatorService(deps: { users: UsersRepository; outbox: OutboxRe
 
   async function toAccount(user: UserRow): Promise<OperatorAccount> {
     const labs = (await users.memberships(user.id)).map((m) => m.lab_name);
-    return { id: user.id, email: user.email, name: user.name, active: Boolean(user.active), operator: Boolean(user.operator), labs: [...new Set(labs)] };
+    return {
+      id: user.id,
+      email: user.email,
+      name: user.name,
+      active: Boolean(user.active),
+      operator: Boolean(user.operator),
+      labs: [...new Set(labs)],
+    };
   }
 
-  async function record(actor: OperatorActor, action: string, user: UserRow, summary: string, before: object, after: object) {
+  async function record(
+    actor: OperatorActor,
+    action: string,
+    user: UserRow,
+    summary: string,
+    before: object,
+    after: object,
+  ) {
     const who = actor === 'command line' ? 'The operator at the command line' : actor.name;
     await audit.record({
       labId: null,
@@ -58,18 +77,35 @@ export function operatorService(deps: { users: UsersRepository; outbox: OutboxRe
     async disable(actor: OperatorActor, find: { id: number } | { email: string }): Promise<OperatorAccount> {
       const user = await account(find);
       if (actor !== 'command line' && actor.id === user.id) {
-        throw conflict('own_account', 'You cannot disable your own account here. Use the command line, or ask another operator.');
+        throw conflict(
+          'own_account',
+          'You cannot disable your own account here. Use the command line, or ask another operator.',
+        );
       }
       await users.setActive(user.id, false);
       await deps.sessions.destroyForUser(user.id);
-      await record(actor, 'account.disabled', user, `disabled the account ${user.email} everywhere`, { active: Boolean(user.active) }, { active: false });
+      await record(
+        actor,
+        'account.disabled',
+        user,
+        `disabled the account ${user.email} everywhere`,
+        { active: Boolean(user.active) },
+        { active: false },
+      );
       return toAccount(await account({ id: user.id }));
     },
 
     async enable(actor: OperatorActor, find: { id: number } | { email: string }): Promise<OperatorAccount> {
       const user = await account(find);
       await users.setActive(user.id, true);
-      await record(actor, 'account.enabled', user, `enabled the account ${user.email}`, { active: Boolean(user.active) }, { active: true });
+      await record(
+        actor,
+        'account.enabled',
+        user,
+        `enabled the account ${user.email}`,
+        { active: Boolean(user.active) },
+        { active: true },
+      );
       return toAccount(await account({ id: user.id }));
     },
 
@@ -77,14 +113,28 @@ export function operatorService(deps: { users: UsersRepository; outbox: OutboxRe
     async grant(actor: OperatorActor, find: { email: string }): Promise<OperatorAccount> {
       const user = await account(find);
       await users.setOperator(user.id, true);
-      await record(actor, 'operator.granted', user, `made ${user.email} an instance operator`, { operator: Boolean(user.operator) }, { operator: true });
+      await record(
+        actor,
+        'operator.granted',
+        user,
+        `made ${user.email} an instance operator`,
+        { operator: Boolean(user.operator) },
+        { operator: true },
+      );
       return toAccount(await account({ id: user.id }));
     },
 
     async revoke(actor: OperatorActor, find: { email: string }): Promise<OperatorAccount> {
       const user = await account(find);
       await users.setOperator(user.id, false);
-      await record(actor, 'operator.revoked', user, `ended the operator rights of ${user.email}`, { operator: Boolean(user.operator) }, { operator: false });
+      await record(
+        actor,
+        'operator.revoked',
+        user,
+        `ended the operator rights of ${user.email}`,
+        { operator: Boolean(user.operator) },
+        { operator: false },
+      );
       return toAccount(await account({ id: user.id }));
     },
 

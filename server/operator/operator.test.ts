@@ -5,7 +5,15 @@ import { join, resolve } from 'node:path';
 import knex from 'knex';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { migrationSource } from '../db/migration-source';
-import { agentFor, buildTestApp, demo, DEMO_PASSWORD, signIn, tokenFromOutbox, type TestApp } from '../test-support/test-app';
+import {
+  agentFor,
+  buildTestApp,
+  demo,
+  DEMO_PASSWORD,
+  signIn,
+  tokenFromOutbox,
+  type TestApp,
+} from '../test-support/test-app';
 
 let t: TestApp;
 beforeEach(async () => {
@@ -27,7 +35,10 @@ describe('the instance operator', () => {
     await (await agentFor(t.app)).post('/api/auth/password-reset', { email: demo('qa') }).expect(202);
     const token = await tokenFromOutbox(t.db, demo('qa'), '/reset-password/');
     const operator = await signIn(t.app, demo('admin'));
-    const mail = (await operator.get(`/api/operator/mail?to=${encodeURIComponent(demo('qa'))}`).expect(200)).body as { to: string; text: string }[];
+    const mail = (await operator.get(`/api/operator/mail?to=${encodeURIComponent(demo('qa'))}`).expect(200)).body as {
+      to: string;
+      text: string;
+    }[];
     expect(mail).toHaveLength(1);
     expect(mail[0].text).toContain(token);
     expect((await operator.get('/api/operator/mail?to=nobody%40wellmere-water.example').expect(200)).body).toEqual([]);
@@ -57,18 +68,36 @@ describe('the instance operator', () => {
       ['account.enabled', null],
     ]);
 
-    const accounts = (await operator.get('/api/operator/accounts').expect(200)).body as { email: string; operator: boolean }[];
+    const accounts = (await operator.get('/api/operator/accounts').expect(200)).body as {
+      email: string;
+      operator: boolean;
+    }[];
     expect(accounts.find((a) => a.email === demo('admin'))?.operator).toBe(true);
     expect(accounts).toHaveLength(5);
   });
 
   it('refuses operator actions to a lab admin who is not the operator, and the operator disabling itself', async () => {
     const operator = await signIn(t.app, demo('admin'));
-    expect((await operator.post(`/api/operator/accounts/${await userId(demo('admin'))}/disable`).expect(409)).body.error.code).toBe('own_account');
-    await t.db('users').where({ email: demo('admin') }).update({ operator: false });
+    expect(
+      (await operator.post(`/api/operator/accounts/${await userId(demo('admin'))}/disable`).expect(409)).body.error
+        .code,
+    ).toBe('own_account');
+    await t
+      .db('users')
+      .where({ email: demo('admin') })
+      .update({ operator: false });
     await operator.post(`/api/operator/accounts/${await userId(demo('qa'))}/disable`).expect(403);
     await operator.get('/api/operator/accounts').expect(403);
-    expect(Boolean((await t.db('users').where({ email: demo('qa') }).first()).active)).toBe(true);
+    expect(
+      Boolean(
+        (
+          await t
+            .db('users')
+            .where({ email: demo('qa') })
+            .first()
+        ).active,
+      ),
+    ).toBe(true);
   });
 });
 
@@ -83,11 +112,18 @@ describe.runIf(!process.env.DATABASE_URL)('the operator command line', () => {
 
   it('disables, enables and grants by e-mail, each an audit event of the instance', async () => {
     expect(run('disable-account', demo('analyst'))).toMatch(/analyst@wellmere-water\.example: disabled/);
-    await (await agentFor(t.app)).post('/api/auth/login', { email: demo('analyst'), password: DEMO_PASSWORD }).expect(401);
+    await (
+      await agentFor(t.app)
+    )
+      .post('/api/auth/login', { email: demo('analyst'), password: DEMO_PASSWORD })
+      .expect(401);
     expect(run('enable-account', demo('analyst'))).toMatch(/: active/);
     expect(run('grant', demo('qa'))).toMatch(/instance operator/);
     expect((await (await signIn(t.app, demo('qa'))).get('/api/auth/me')).body.operator).toBe(true);
-    const events = await t.db('audit_events').whereIn('action', ['account.disabled', 'account.enabled', 'operator.granted']).whereNull('lab_id');
+    const events = await t
+      .db('audit_events')
+      .whereIn('action', ['account.disabled', 'account.enabled', 'operator.granted'])
+      .whereNull('lab_id');
     expect(events).toHaveLength(3);
     expect(() => run('disable-account', 'nobody@nowhere.example')).toThrow(/The account was not found/);
   }, 30_000);
@@ -96,7 +132,11 @@ describe.runIf(!process.env.DATABASE_URL)('the operator command line', () => {
 describe.runIf(!process.env.DATABASE_URL)('the operator migration', () => {
   it('makes an existing demo admin account the operator', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'dilutrace-operator-'));
-    const db = knex({ client: 'better-sqlite3', connection: { filename: join(dir, 'old.sqlite') }, useNullAsDefault: true });
+    const db = knex({
+      client: 'better-sqlite3',
+      connection: { filename: join(dir, 'old.sqlite') },
+      useNullAsDefault: true,
+    });
     try {
       for (;;) {
         const [, pending] = (await db.migrate.list({ migrationSource })) as [unknown[], { file?: string }[] | string[]];
@@ -127,7 +167,9 @@ describe('an invitation mailed to a person reaches them through the operator', (
   it('files the invitation under its lab for the log, with the body only for the operator', async () => {
     const admin = await signIn(t.app, demo('admin'));
     const labId = (await t.db('labs').first()).id;
-    await admin.post(`/api/labs/${labId}/invitations`, { email: 'new@wellmere-water.example', name: 'New', role: 'analyst' }).expect(201);
+    await admin
+      .post(`/api/labs/${labId}/invitations`, { email: 'new@wellmere-water.example', name: 'New', role: 'analyst' })
+      .expect(201);
     const token = await tokenFromOutbox(t.db, 'new@wellmere-water.example', '/invitation/');
     const mail = (await admin.get('/api/operator/mail').expect(200)).body as { text: string }[];
     expect(mail[0].text).toContain(token);

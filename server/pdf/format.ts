@@ -11,8 +11,24 @@ export function significant(value: number, digits = 4): string {
   return `${mantissa.replace('-', '−')} × 10${superscript(Number(exponent))}`;
 }
 
-const SUPERSCRIPTS: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
-const superscript = (n: number) => String(n).split('').map((c) => SUPERSCRIPTS[c] ?? c).join('');
+const SUPERSCRIPTS: Record<string, string> = {
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
+};
+const superscript = (n: number) =>
+  String(n)
+    .split('')
+    .map((c) => SUPERSCRIPTS[c] ?? c)
+    .join('');
 
 export const percent = (value: number, digits = 1) => `${value.toFixed(digits)} %`;
 

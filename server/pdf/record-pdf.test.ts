@@ -13,14 +13,21 @@ let preparationId: number;
 const work = mkdtempSync(join(tmpdir(), 'dilutrace-pdf-'));
 
 const url = (path: string) => `/api/labs/${labId}${path}`;
-const binary = (res: NodeJS.ReadableStream & { setEncoding(e: string): void; on(e: string, cb: (c?: unknown) => void): void }, cb: (e: Error | null, body: Buffer) => void) => {
+const binary = (
+  res: NodeJS.ReadableStream & { setEncoding(e: string): void; on(e: string, cb: (c?: unknown) => void): void },
+  cb: (e: Error | null, body: Buffer) => void,
+) => {
   const chunks: Buffer[] = [];
   res.on('data', (chunk) => chunks.push(chunk as Buffer));
   res.on('end', () => cb(null, Buffer.concat(chunks)));
 };
 
 async function downloadPdf(client: Client, number = 1): Promise<Buffer> {
-  const res = await client.agent.get(url(`/preparations/${preparationId}/versions/${number}/record.pdf`)).buffer(true).parse(binary as never).expect(200);
+  const res = await client.agent
+    .get(url(`/preparations/${preparationId}/versions/${number}/record.pdf`))
+    .buffer(true)
+    .parse(binary as never)
+    .expect(200);
   expect(res.headers['content-type']).toBe('application/pdf');
   return res.body as Buffer;
 }
@@ -38,7 +45,11 @@ beforeEach(async () => {
   labId = (await t.db('labs').first()).id;
   analyst = await signIn(t.app, demo('analyst'));
   const library = await libraryByCode(analyst, labId);
-  preparationId = (await analyst.post(url('/preparations'), { title: 'Pb 100 mg/L intermediate', plan: leadPlan(library), seed: 77 }).expect(201)).body.id;
+  preparationId = (
+    await analyst
+      .post(url('/preparations'), { title: 'Pb 100 mg/L intermediate', plan: leadPlan(library), seed: 77 })
+      .expect(201)
+  ).body.id;
 });
 afterEach(async () => {
   await t.close();
@@ -52,10 +63,22 @@ describe('the PDF record', () => {
   });
 
   it('holds the result statement, budget rows, signatures, hash and cautions of an approved version, and page 1 is not blank', async () => {
-    await analyst.post(url(`/preparations/${preparationId}/versions/1/readings`), { readings: [{ stepIndex: 0, actualMassG: 0.16011 }], deviations: 'None.' }).expect(200);
+    await analyst
+      .post(url(`/preparations/${preparationId}/versions/1/readings`), {
+        readings: [{ stepIndex: 0, actualMassG: 0.16011 }],
+        deviations: 'None.',
+      })
+      .expect(200);
     await analyst.post(url(`/preparations/${preparationId}/versions/1/submit`), {}).expect(200);
     const qa = await signIn(t.app, demo('qa'));
-    const approved = (await qa.post(url(`/preparations/${preparationId}/versions/1/approve`), { password: DEMO_PASSWORD, statement: 'Reviewed against SOP-CHEM-014.' }).expect(200)).body;
+    const approved = (
+      await qa
+        .post(url(`/preparations/${preparationId}/versions/1/approve`), {
+          password: DEMO_PASSWORD,
+          statement: 'Reviewed against SOP-CHEM-014.',
+        })
+        .expect(200)
+    ).body;
     const auditor = await signIn(t.app, demo('auditor'));
     const pdf = await downloadPdf(auditor);
     const text = pdfText(pdf, 'approved');
@@ -85,8 +108,18 @@ describe('the PDF record', () => {
     const library = await libraryByCode(analyst, labId);
     const plan = leadPlan(library);
     // A dominant Type A source with 8 degrees of freedom makes ν_eff ≈ 8.7 by Welch–Satterthwaite (JCGM 100:2008 G.4.1).
-    Object.assign(plan.steps[0], { extraSources: [{ name: 'Drift between weighings', effect: 'relative', distribution: { shape: 'normal', standardUncertainty: 0.0091, degreesOfFreedom: 8 } }] });
-    const created = (await analyst.post(url('/preparations'), { title: 'Pb with a Type A source', plan, seed: 5 }).expect(201)).body;
+    Object.assign(plan.steps[0], {
+      extraSources: [
+        {
+          name: 'Drift between weighings',
+          effect: 'relative',
+          distribution: { shape: 'normal', standardUncertainty: 0.0091, degreesOfFreedom: 8 },
+        },
+      ],
+    });
+    const created = (
+      await analyst.post(url('/preparations'), { title: 'Pb with a Type A source', plan, seed: 5 }).expect(201)
+    ).body;
     preparationId = created.id;
     const budget = created.current.snapshot.budget;
     expect(budget.effectiveDegreesOfFreedom).toBeGreaterThan(8.5);
@@ -99,8 +132,16 @@ describe('the PDF record', () => {
   });
 
   it('prints ν_eff = ∞ from a snapshot stored before snapshots were typed, where it is null', async () => {
-    const legacy = JSON.parse(readFileSync(new URL('../../tests/fixtures/snapshots/lead-standard-stored-before-typing.json', import.meta.url), 'utf8'));
-    await t.db('preparation_versions').where({ preparation_id: preparationId, number: 1 }).update({ snapshot_json: legacy.snapshotJson, snapshot_sha256: legacy.snapshotSha256 });
+    const legacy = JSON.parse(
+      readFileSync(
+        new URL('../../tests/fixtures/snapshots/lead-standard-stored-before-typing.json', import.meta.url),
+        'utf8',
+      ),
+    );
+    await t
+      .db('preparation_versions')
+      .where({ preparation_id: preparationId, number: 1 })
+      .update({ snapshot_json: legacy.snapshotJson, snapshot_sha256: legacy.snapshotSha256 });
     const flat = pdfText(await downloadPdf(analyst), 'stored-before-typing').replace(/\s+/g, ' ');
     expect(flat).toContain('effective degrees of freedom ν_eff = ∞; coverage factor k = 2.00');
     expect(flat).toContain(legacy.snapshotSha256);

@@ -47,7 +47,13 @@ function stepGroupLabel(key: string, steps: { kind: string }[]): string {
 /** A dimensionless quantity (unit '1') prints without a unit. */
 const withUnit = (text: string, unit: string) => (unit === '1' || unit === '' ? text : `${text} ${unit}`);
 
-const DISTRIBUTION_NAMES: Record<string, string> = { normal: 'normal', rectangular: 'rectangular', triangular: 'triangular', arcsine: 'arcsine', studentT: 'Student t' };
+const DISTRIBUTION_NAMES: Record<string, string> = {
+  normal: 'normal',
+  rectangular: 'rectangular',
+  triangular: 'triangular',
+  arcsine: 'arcsine',
+  studentT: 'Student t',
+};
 
 /**
  * The PDF record of one preparation version: plan, inputs, budget, charts, Monte Carlo and its
@@ -66,7 +72,12 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
       size: 'A4',
       margins: { top: MARGIN + 18, bottom: MARGIN, left: MARGIN, right: MARGIN },
       bufferPages: true,
-      info: { Title: `${input.preparation.title} — version ${version.number}`, Author: input.labName, Subject: 'Dilutrace preparation record', Creator: 'Dilutrace' },
+      info: {
+        Title: `${input.preparation.title} — version ${version.number}`,
+        Author: input.labName,
+        Subject: 'Dilutrace preparation record',
+        Creator: 'Dilutrace',
+      },
     });
     const chunks: Buffer[] = [];
     doc.on('data', (chunk: Buffer) => chunks.push(chunk));
@@ -82,7 +93,11 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
       doc.moveDown(0.25);
     };
     const paragraph = (text: string, options: { size?: number; font?: string; color?: string } = {}) => {
-      doc.font(options.font ?? 'regular').fontSize(options.size ?? 9).fillColor(options.color ?? INK).text(text, MARGIN, doc.y, { width: CONTENT_WIDTH });
+      doc
+        .font(options.font ?? 'regular')
+        .fontSize(options.size ?? 9)
+        .fillColor(options.color ?? INK)
+        .text(text, MARGIN, doc.y, { width: CONTENT_WIDTH });
     };
 
     // Title block
@@ -90,22 +105,36 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     paragraph(
       `${input.labName} · preparation ${input.preparation.id}, version ${version.number} · status: ${approved ? 'APPROVED' : version.status.toUpperCase() + ' — not approved'}`,
     );
-    paragraph(`Planned by ${input.preparation.createdBy} · version created ${utc(version.createdAt)} · computed ${utc(snapshot.computedAt)} · printed ${utc(input.generatedAt)}`, { size: 8, color: '#4a5a60' });
+    paragraph(
+      `Planned by ${input.preparation.createdBy} · version created ${utc(version.createdAt)} · computed ${utc(snapshot.computedAt)} · printed ${utc(input.generatedAt)}`,
+      { size: 8, color: '#4a5a60' },
+    );
 
     // Result statement
     heading('Result');
     const boxTop = doc.y;
-    doc.font('bold').fontSize(12).fillColor(INK).text(budget.statement, MARGIN + 8, boxTop + 8, { width: CONTENT_WIDTH - 16 });
-    doc.font('regular').fontSize(8.5).text(
-      `Combined standard uncertainty u_c = ${significant(budget.standardUncertainty, 3)} ${budget.unit} (relative ${percent(100 * budget.relativeStandardUncertainty, 3)}); ` +
-        `effective degrees of freedom ν_eff = ${formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)}; ` +
-        `coverage factor k = ${budget.coverageFactor.toFixed(2)} for a coverage probability of ${(100 * budget.coverageProbability).toFixed(2)} %; ` +
-        `expanded uncertainty U = ${significant(budget.expandedUncertainty, 3)} ${budget.unit} (relative ${percent(100 * budget.relativeExpandedUncertainty, 2)}).`,
-      MARGIN + 8,
-      doc.y + 3,
-      { width: CONTENT_WIDTH - 16 },
-    );
-    doc.rect(MARGIN, boxTop, CONTENT_WIDTH, doc.y - boxTop + 8).lineWidth(1).strokeColor('#a85a24').stroke();
+    doc
+      .font('bold')
+      .fontSize(12)
+      .fillColor(INK)
+      .text(budget.statement, MARGIN + 8, boxTop + 8, { width: CONTENT_WIDTH - 16 });
+    doc
+      .font('regular')
+      .fontSize(8.5)
+      .text(
+        `Combined standard uncertainty u_c = ${significant(budget.standardUncertainty, 3)} ${budget.unit} (relative ${percent(100 * budget.relativeStandardUncertainty, 3)}); ` +
+          `effective degrees of freedom ν_eff = ${formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)}; ` +
+          `coverage factor k = ${budget.coverageFactor.toFixed(2)} for a coverage probability of ${(100 * budget.coverageProbability).toFixed(2)} %; ` +
+          `expanded uncertainty U = ${significant(budget.expandedUncertainty, 3)} ${budget.unit} (relative ${percent(100 * budget.relativeExpandedUncertainty, 2)}).`,
+        MARGIN + 8,
+        doc.y + 3,
+        { width: CONTENT_WIDTH - 16 },
+      );
+    doc
+      .rect(MARGIN, boxTop, CONTENT_WIDTH, doc.y - boxTop + 8)
+      .lineWidth(1)
+      .strokeColor('#a85a24')
+      .stroke();
     doc.y += 14;
     for (const warning of snapshot.warnings) paragraph(`Warning: ${warning}`, { size: 8.5, color: '#8a5a00' });
 
@@ -125,10 +154,20 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
 
     if (version.readings) {
       heading('Actual readings');
-      paragraph(`Recorded at the bench by ${version.readings.recordedBy}, ${utc(version.readings.recordedAt)}. The budget above is computed on these masses.`, { size: 8.5 });
+      paragraph(
+        `Recorded at the bench by ${version.readings.recordedBy}, ${utc(version.readings.recordedAt)}. The budget above is computed on these masses.`,
+        { size: 8.5 },
+      );
       for (const reading of version.readings.readings) {
-        const parts = [reading.tareG !== null ? `tare ${reading.tareG} g` : '', reading.grossG !== null ? `gross ${reading.grossG} g` : ''].filter(Boolean).join(', ');
-        paragraph(`Step ${reading.stepIndex + 1}: planned ${reading.plannedG} g, weighed ${reading.actualG} g${parts ? ` (${parts})` : ''}.`);
+        const parts = [
+          reading.tareG !== null ? `tare ${reading.tareG} g` : '',
+          reading.grossG !== null ? `gross ${reading.grossG} g` : '',
+        ]
+          .filter(Boolean)
+          .join(', ');
+        paragraph(
+          `Step ${reading.stepIndex + 1}: planned ${reading.plannedG} g, weighed ${reading.actualG} g${parts ? ` (${parts})` : ''}.`,
+        );
       }
       if (version.readings.deviations) paragraph(`Deviations: ${version.readings.deviations}`);
     }
@@ -163,11 +202,29 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     const budgetRows: { cells: string[]; strong?: boolean }[] = [];
     for (const group of budget.byStep) {
       for (const row of budget.rows.filter((r) => r.stepIndices.join('+') === group.key)) {
-        budgetRows.push({ cells: [row.label, significant(row.sensitivityCoefficient, 4), significant(row.contribution, 3), percent(row.indexPercent)] });
+        budgetRows.push({
+          cells: [
+            row.label,
+            significant(row.sensitivityCoefficient, 4),
+            significant(row.contribution, 3),
+            percent(row.indexPercent),
+          ],
+        });
       }
-      budgetRows.push({ cells: [`Subtotal, ${stepGroupLabel(group.key, steps)}`, '', significant(group.contribution, 3), percent(group.indexPercent)], strong: true });
+      budgetRows.push({
+        cells: [
+          `Subtotal, ${stepGroupLabel(group.key, steps)}`,
+          '',
+          significant(group.contribution, 3),
+          percent(group.indexPercent),
+        ],
+        strong: true,
+      });
     }
-    budgetRows.push({ cells: ['Combined standard uncertainty u_c', '', significant(budget.standardUncertainty, 3), '100.0 %'], strong: true });
+    budgetRows.push({
+      cells: ['Combined standard uncertainty u_c', '', significant(budget.standardUncertainty, 3), '100.0 %'],
+      strong: true,
+    });
     drawTable(doc, {
       x: MARGIN,
       bottom: BOTTOM,
@@ -181,7 +238,11 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     });
 
     heading('Contribution to the variance by step');
-    drawContributionBars(doc, { x: MARGIN, width: CONTENT_WIDTH, groups: budget.byStep.map((g) => ({ label: stepGroupLabel(g.key, steps), indexPercent: g.indexPercent })) });
+    drawContributionBars(doc, {
+      x: MARGIN,
+      width: CONTENT_WIDTH,
+      groups: budget.byStep.map((g) => ({ label: stepGroupLabel(g.key, steps), indexPercent: g.indexPercent })),
+    });
 
     // Monte Carlo
     heading('Monte Carlo (JCGM 101)', 200);
@@ -211,21 +272,33 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     heading('Review and signatures');
     if (version.reviews.length === 0) paragraph('Not yet submitted for review.');
     for (const review of version.reviews) {
-      const verb = review.action === 'approved' ? 'Approved and signed (password confirmed)' : review.action === 'returned' ? 'Returned with comments' : 'Submitted for review';
+      const verb =
+        review.action === 'approved'
+          ? 'Approved and signed (password confirmed)'
+          : review.action === 'returned'
+            ? 'Returned with comments'
+            : 'Submitted for review';
       paragraph(`${verb} by ${review.actor}, ${utc(review.at)}${review.comment ? ` — “${review.comment}”` : ''}`);
       doc.moveDown(0.15);
     }
 
     heading('Integrity');
-    paragraph('SHA-256 of the stored snapshot (canonical JSON of plan, equipment revisions, engine version, seed and results):', { size: 8.5 });
+    paragraph(
+      'SHA-256 of the stored snapshot (canonical JSON of plan, equipment revisions, engine version, seed and results):',
+      { size: 8.5 },
+    );
     paragraph(version.snapshotSha256 ?? '—', { font: 'mono', size: 8.5 });
     if (version.recordSha256 && version.approvedAs) {
-      paragraph(`SHA-256 signed at approval (the snapshot hash with the title, analyte “${version.approvedAs.analyte}”, preparation name “${version.approvedAs.preparationName}” and laboratory name shown here):`, { size: 8.5 });
+      paragraph(
+        `SHA-256 signed at approval (the snapshot hash with the title, analyte “${version.approvedAs.analyte}”, preparation name “${version.approvedAs.preparationName}” and laboratory name shown here):`,
+        { size: 8.5 },
+      );
       paragraph(version.recordSha256, { font: 'mono', size: 8.5 });
     }
 
     heading('Hazards and cautions');
-    for (const item of items.filter((i) => i.hazardNotes)) paragraph(`${item.code}: ${item.hazardNotes}`, { size: 8.5 });
+    for (const item of items.filter((i) => i.hazardNotes))
+      paragraph(`${item.code}: ${item.hazardNotes}`, { size: 8.5 });
     for (const caution of RECORD_CAUTIONS) paragraph(caution, { size: 8.5 });
 
     // Running header, footer, page numbers and the draft watermark on every page.
@@ -234,14 +307,34 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
       doc.switchToPage(i);
       // Header and footer sit in the margins; without this pdfkit would open a new page for the footer.
       doc.page.margins.bottom = 0;
-      doc.font('bold').fontSize(8).fillColor('#a85a24').text('Dilutrace · preparation record', MARGIN, MARGIN - 14, { width: CONTENT_WIDTH / 2, lineBreak: false });
-      doc.font('regular').fillColor('#4a5a60').text(input.labName, MARGIN + CONTENT_WIDTH / 2, MARGIN - 14, { width: CONTENT_WIDTH / 2, align: 'right', lineBreak: false });
+      doc
+        .font('bold')
+        .fontSize(8)
+        .fillColor('#a85a24')
+        .text('Dilutrace · preparation record', MARGIN, MARGIN - 14, { width: CONTENT_WIDTH / 2, lineBreak: false });
+      doc
+        .font('regular')
+        .fillColor('#4a5a60')
+        .text(input.labName, MARGIN + CONTENT_WIDTH / 2, MARGIN - 14, {
+          width: CONTENT_WIDTH / 2,
+          align: 'right',
+          lineBreak: false,
+        });
       const footer = `${input.preparation.title} · version ${version.number} · ${approved ? 'approved' : 'not approved'} · page ${i - range.start + 1} of ${range.count}`;
       doc.text(footer, MARGIN, PAGE.height - MARGIN + 10, { width: CONTENT_WIDTH, align: 'center', lineBreak: false });
       if (!approved) {
         doc.save();
         doc.rotate(-35, { origin: [PAGE.width / 2, PAGE.height / 2] });
-        doc.font('bold').fontSize(44).fillColor('#a3322b').fillOpacity(0.13).text('DRAFT — not approved', 0, PAGE.height / 2 - 30, { width: PAGE.width, align: 'center', lineBreak: false });
+        doc
+          .font('bold')
+          .fontSize(44)
+          .fillColor('#a3322b')
+          .fillOpacity(0.13)
+          .text('DRAFT — not approved', 0, PAGE.height / 2 - 30, {
+            width: PAGE.width,
+            align: 'center',
+            lineBreak: false,
+          });
         doc.restore();
       }
     }

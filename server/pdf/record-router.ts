@@ -12,21 +12,37 @@ import { renderRecordPdf } from './record-pdf';
 const versionParams = z.object({ labId: idParam, preparationId: idParam, number: idParam });
 
 /** GET …/versions/:number/record.pdf — the signed record (or a watermarked draft) for any lab member. */
-export function recordRouter(deps: { preparations: PreparationsService; labs: LabsService; authorize: Authorize; clock: Clock }) {
+export function recordRouter(deps: {
+  preparations: PreparationsService;
+  labs: LabsService;
+  authorize: Authorize;
+  clock: Clock;
+}) {
   const router = Router({ mergeParams: true });
-  router.get('/preparations/:preparationId/versions/:number/record.pdf', deps.authorize.lab('member'), validate({ params: versionParams }), async (req: Request, res) => {
-    const { params } = valid(req, { params: versionParams });
-    const labId = (req.lab as LabContext).id;
-    const preparation = await deps.preparations.detail(labId, params.preparationId);
-    const version = await deps.preparations.version(labId, params.preparationId, params.number);
-    if (!version.snapshot) throw validationError('This version has no computed budget yet, so there is no record to print.');
-    // An approved version prints what it was signed under, not what later versions renamed.
-    const frozen = version.approvedAs;
-    const labName = frozen?.labName ?? (await deps.labs.name(labId));
-    const shown = frozen ? { ...preparation, title: frozen.title } : preparation;
-    const pdf = await renderRecordPdf({ labName, preparation: shown, version, generatedAt: deps.clock.now().toISOString() });
-    const name = `dilutrace-${params.preparationId}-v${params.number}${version.status === 'approved' ? '' : '-draft'}.pdf`;
-    res.set('X-Content-Type-Options', 'nosniff').attachment(name).type('application/pdf').send(pdf);
-  });
+  router.get(
+    '/preparations/:preparationId/versions/:number/record.pdf',
+    deps.authorize.lab('member'),
+    validate({ params: versionParams }),
+    async (req: Request, res) => {
+      const { params } = valid(req, { params: versionParams });
+      const labId = (req.lab as LabContext).id;
+      const preparation = await deps.preparations.detail(labId, params.preparationId);
+      const version = await deps.preparations.version(labId, params.preparationId, params.number);
+      if (!version.snapshot)
+        throw validationError('This version has no computed budget yet, so there is no record to print.');
+      // An approved version prints what it was signed under, not what later versions renamed.
+      const frozen = version.approvedAs;
+      const labName = frozen?.labName ?? (await deps.labs.name(labId));
+      const shown = frozen ? { ...preparation, title: frozen.title } : preparation;
+      const pdf = await renderRecordPdf({
+        labName,
+        preparation: shown,
+        version,
+        generatedAt: deps.clock.now().toISOString(),
+      });
+      const name = `dilutrace-${params.preparationId}-v${params.number}${version.status === 'approved' ? '' : '-draft'}.pdf`;
+      res.set('X-Content-Type-Options', 'nosniff').attachment(name).type('application/pdf').send(pdf);
+    },
+  );
   return router;
 }

@@ -1,6 +1,13 @@
 import type { UsedItem } from '../../shared/contracts/snapshot';
 
-type Equipment = { itemId?: string; libraryId?: string; nominalMl?: number; certifiedValue?: number; certifiedUnit?: string; name?: string };
+type Equipment = {
+  itemId?: string;
+  libraryId?: string;
+  nominalMl?: number;
+  certifiedValue?: number;
+  certifiedUnit?: string;
+  name?: string;
+};
 type Step = Record<string, unknown> & { kind: string };
 
 /** “BAL-05 (revision 1, certificate WCS-26-0412)” from the items a snapshot used. */

@@ -15,9 +15,17 @@ export function policyRepository(db: Db) {
         .where('p.lab_id', labId)
         .select('p.policy_json', 'p.updated_at', 'u.name as updated_by_name')
         .first(),
-    async save(row: { labId: number; policyJson: string; updatedAt: string; updatedBy: number }, trx: Db = db): Promise<void> {
+    async save(
+      row: { labId: number; policyJson: string; updatedAt: string; updatedBy: number },
+      trx: Db = db,
+    ): Promise<void> {
       await trx('lab_policies')
-        .insert({ lab_id: row.labId, policy_json: row.policyJson, updated_at: row.updatedAt, updated_by: row.updatedBy })
+        .insert({
+          lab_id: row.labId,
+          policy_json: row.policyJson,
+          updated_at: row.updatedAt,
+          updated_by: row.updatedBy,
+        })
         .onConflict('lab_id')
         .merge();
     },

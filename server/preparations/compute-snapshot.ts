@@ -10,11 +10,31 @@ export const SERVER_TRIALS = 200_000;
  * Runs the engine on a resolved plan: GUM budget, Monte Carlo with the given seed, and the JCGM 101:2008 §8
  * validation of one against the other. Throws the engine's PlanError for a plan it cannot compute.
  */
-export function computeSnapshot(input: { plan: Record<string, unknown>; items: UsedItem[]; seed: number; computedAt: string; policy: LabPolicy; trials?: number }): Snapshot {
+export function computeSnapshot(input: {
+  plan: Record<string, unknown>;
+  items: UsedItem[];
+  seed: number;
+  computedAt: string;
+  policy: LabPolicy;
+  trials?: number;
+}): Snapshot {
   const plan = parsePlan(withPolicy(input.plan, input.policy));
   const budget = evaluatePlan(plan);
   const monteCarlo = runMonteCarlo(plan, { seed: input.seed, trials: input.trials ?? SERVER_TRIALS });
   const validation = validateAgainstGum(budget, monteCarlo);
-  const warnings = input.policy.minimumWeightRule ? budget.warnings : budget.warnings.filter((w) => !/minimum weight|USP/i.test(w));
-  return { engineVersion: ENGINE_VERSION, computedAt: input.computedAt, seed: input.seed, trials: monteCarlo.trials, plan, items: input.items, budget, monteCarlo, validation, warnings };
+  const warnings = input.policy.minimumWeightRule
+    ? budget.warnings
+    : budget.warnings.filter((w) => !/minimum weight|USP/i.test(w));
+  return {
+    engineVersion: ENGINE_VERSION,
+    computedAt: input.computedAt,
+    seed: input.seed,
+    trials: monteCarlo.trials,
+    plan,
+    items: input.items,
+    budget,
+    monteCarlo,
+    validation,
+    warnings,
+  };
 }

@@ -30,7 +30,11 @@ const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'obj
  * - A retired item, or an overdue/expired one without a recorded override reason, is a PlanError at
  *   that step, so a draft can still be kept and shown with the problem.
  */
-export function resolvePlan(plan: Record<string, unknown>, library: Map<string, EquipmentItem>, overrides: Override[]): ResolvedPlan {
+export function resolvePlan(
+  plan: Record<string, unknown>,
+  library: Map<string, EquipmentItem>,
+  overrides: Override[],
+): ResolvedPlan {
   const steps = Array.isArray(plan.steps) ? plan.steps : [];
   const used = new Map<string, UsedItem>();
   const reasons = new Map(overrides.map((o) => [o.libraryId, o.reason]));
@@ -49,15 +53,31 @@ export function resolvePlan(plan: Record<string, unknown>, library: Map<string, 
         continue;
       }
       const item = library.get(libraryId);
-      if (!item) throw new AppError('validation', 'foreign_equipment', `Step ${index + 1}: that ${slot} is not in this lab's library.`, [{ path: path.join('.'), message: 'Not in this lab’s library.' }]);
+      if (!item)
+        throw new AppError(
+          'validation',
+          'foreign_equipment',
+          `Step ${index + 1}: that ${slot} is not in this lab's library.`,
+          [{ path: path.join('.'), message: 'Not in this lab’s library.' }],
+        );
       if (!kinds.includes(item.kind)) {
-        problems.push(new PlanError(path, `Step ${index + 1}: ${item.code} is not a ${kinds.join(' or ').replace(/-/g, ' ')}.`));
+        problems.push(
+          new PlanError(path, `Step ${index + 1}: ${item.code} is not a ${kinds.join(' or ').replace(/-/g, ' ')}.`),
+        );
         continue;
       }
       const reason = reasons.get(libraryId) ?? null;
-      if (item.status === 'retired') problems.push(new PlanError(path, `Step ${index + 1}: ${item.code} is retired and cannot be used in a new plan.`));
+      if (item.status === 'retired')
+        problems.push(
+          new PlanError(path, `Step ${index + 1}: ${item.code} is retired and cannot be used in a new plan.`),
+        );
       else if ((item.calibration === 'overdue' || item.expiry === 'expired') && !reason) {
-        problems.push(new PlanError(path, `Step ${index + 1}: ${item.code}: ${item.flags.join('; ')}. Record a reason to use it anyway.`));
+        problems.push(
+          new PlanError(
+            path,
+            `Step ${index + 1}: ${item.code}: ${item.flags.join('; ')}. Record a reason to use it anyway.`,
+          ),
+        );
       }
       out[slot] = toEngineEquipment(item);
       const data = item.current.data as { certificateReference?: string; hazardNotes?: string };

@@ -56,15 +56,42 @@ export const EDITABLE_STATUSES: PreparationStatus[] = ['draft', 'returned'];
 
 export type VersionWrite = Pick<
   VersionRow,
-  'plan_json' | 'overrides_json' | 'seed' | 'problem_json' | 'snapshot_json' | 'snapshot_sha256' | 'result_statement' | 'value' | 'unit' | 'relative_expanded_uncertainty' | 'updated_at'
+  | 'plan_json'
+  | 'overrides_json'
+  | 'seed'
+  | 'problem_json'
+  | 'snapshot_json'
+  | 'snapshot_sha256'
+  | 'result_statement'
+  | 'value'
+  | 'unit'
+  | 'relative_expanded_uncertainty'
+  | 'updated_at'
 >;
 
 export function preparationsRepository(db: Db) {
-  const versions = (trx: Db = db) => trx('preparation_versions as v').join('users as u', 'u.id', 'v.created_by').select('v.*', 'u.name as created_by_name');
+  const versions = (trx: Db = db) =>
+    trx('preparation_versions as v')
+      .join('users as u', 'u.id', 'v.created_by')
+      .select('v.*', 'u.name as created_by_name');
 
   return {
-    list(labId: number, filter: { status?: PreparationStatus; analyst?: number; material?: string; from?: string; to?: string; q?: string }): Promise<(PreparationRow & { latest_version_id: number })[]> {
-      const latest = db('preparation_versions').select('preparation_id').max({ latest_number: 'number' }).groupBy('preparation_id').as('l');
+    list(
+      labId: number,
+      filter: {
+        status?: PreparationStatus;
+        analyst?: number;
+        material?: string;
+        from?: string;
+        to?: string;
+        q?: string;
+      },
+    ): Promise<(PreparationRow & { latest_version_id: number })[]> {
+      const latest = db('preparation_versions')
+        .select('preparation_id')
+        .max({ latest_number: 'number' })
+        .groupBy('preparation_id')
+        .as('l');
       const query = db('preparations as p')
         .join('users as u', 'u.id', 'p.created_by')
         .join(latest, 'l.preparation_id', 'p.id')
@@ -82,35 +109,87 @@ export function preparationsRepository(db: Db) {
       return query;
     },
     find: (labId: number, id: number, trx: Db = db): Promise<PreparationRow | undefined> =>
-      trx('preparations as p').join('users as u', 'u.id', 'p.created_by').where({ 'p.id': id, 'p.lab_id': labId }).select('p.*', 'u.name as created_by_name').first(),
-    versionsOf: (preparationId: number, trx: Db = db): Promise<VersionRow[]> => versions(trx).where('v.preparation_id', preparationId).orderBy('v.number', 'desc'),
-    versionsByIds: (ids: number[]): Promise<VersionRow[]> => (ids.length ? versions().whereIn('v.id', ids) : Promise.resolve([])),
-    version: (preparationId: number, number: number, trx: Db = db): Promise<VersionRow | undefined> => versions(trx).where({ 'v.preparation_id': preparationId, 'v.number': number }).first(),
-    async insertPreparation(row: { labId: number; title: string; analyte: string; materialCode: string | null; createdBy: number; at: string }, trx: Db): Promise<number> {
+      trx('preparations as p')
+        .join('users as u', 'u.id', 'p.created_by')
+        .where({ 'p.id': id, 'p.lab_id': labId })
+        .select('p.*', 'u.name as created_by_name')
+        .first(),
+    versionsOf: (preparationId: number, trx: Db = db): Promise<VersionRow[]> =>
+      versions(trx).where('v.preparation_id', preparationId).orderBy('v.number', 'desc'),
+    versionsByIds: (ids: number[]): Promise<VersionRow[]> =>
+      ids.length ? versions().whereIn('v.id', ids) : Promise.resolve([]),
+    version: (preparationId: number, number: number, trx: Db = db): Promise<VersionRow | undefined> =>
+      versions(trx).where({ 'v.preparation_id': preparationId, 'v.number': number }).first(),
+    async insertPreparation(
+      row: {
+        labId: number;
+        title: string;
+        analyte: string;
+        materialCode: string | null;
+        createdBy: number;
+        at: string;
+      },
+      trx: Db,
+    ): Promise<number> {
       const [inserted] = await trx('preparations')
-        .insert({ lab_id: row.labId, title: row.title, analyte: row.analyte, material_code: row.materialCode, created_by: row.createdBy, created_at: row.at, updated_at: row.at })
+        .insert({
+          lab_id: row.labId,
+          title: row.title,
+          analyte: row.analyte,
+          material_code: row.materialCode,
+          created_by: row.createdBy,
+          created_at: row.at,
+          updated_at: row.at,
+        })
         .returning('id');
       return insertedId(inserted);
     },
-    touchPreparation: (id: number, row: { title: string; analyte: string; materialCode: string | null; at: string }, trx: Db) =>
-      trx('preparations').where({ id }).update({ title: row.title, analyte: row.analyte, material_code: row.materialCode, updated_at: row.at }),
-    async insertVersion(preparationId: number, number: number, row: VersionWrite & { created_by: number; created_at: string }, trx: Db): Promise<number> {
-      const [inserted] = await trx('preparation_versions').insert({ preparation_id: preparationId, number, status: 'draft', ...row }).returning('id');
+    touchPreparation: (
+      id: number,
+      row: { title: string; analyte: string; materialCode: string | null; at: string },
+      trx: Db,
+    ) =>
+      trx('preparations')
+        .where({ id })
+        .update({ title: row.title, analyte: row.analyte, material_code: row.materialCode, updated_at: row.at }),
+    async insertVersion(
+      preparationId: number,
+      number: number,
+      row: VersionWrite & { created_by: number; created_at: string },
+      trx: Db,
+    ): Promise<number> {
+      const [inserted] = await trx('preparation_versions')
+        .insert({ preparation_id: preparationId, number, status: 'draft', ...row })
+        .returning('id');
       return insertedId(inserted);
     },
     /** Only a draft (or a returned version) changes in place; the WHERE makes that hold even if two requests race. */
-    updateDraft: (versionId: number, row: VersionWrite, trx: Db) => trx('preparation_versions').where({ id: versionId }).whereIn('status', EDITABLE_STATUSES).update(row),
+    updateDraft: (versionId: number, row: VersionWrite, trx: Db) =>
+      trx('preparation_versions').where({ id: versionId }).whereIn('status', EDITABLE_STATUSES).update(row),
     /** Stores the actual readings and their recomputed result; only before the version is submitted. */
     recordReadings: (versionId: number, row: VersionWrite & { readings_json: string; status: 'prepared' }, trx: Db) =>
-      trx('preparation_versions').where({ id: versionId }).whereIn('status', [...EDITABLE_STATUSES, 'prepared']).update(row),
+      trx('preparation_versions')
+        .where({ id: versionId })
+        .whereIn('status', [...EDITABLE_STATUSES, 'prepared'])
+        .update(row),
     /** Moves a version between statuses; returns 0 when it was not in `from` any more. */
-    setStatus: (versionId: number, from: PreparationStatus, to: PreparationStatus, trx: Db) => trx('preparation_versions').where({ id: versionId, status: from }).update({ status: to }),
+    setStatus: (versionId: number, from: PreparationStatus, to: PreparationStatus, trx: Db) =>
+      trx('preparation_versions').where({ id: versionId, status: from }).update({ status: to }),
     /** Approves a submitted version and freezes what it shows, in one update; 0 when it was not submitted any more. */
     approve: (versionId: number, frozen: ApprovedAsColumns & { record_sha256: string }, trx: Db) =>
-      trx('preparation_versions').where({ id: versionId, status: 'submitted' }).update({ status: 'approved', ...frozen }),
+      trx('preparation_versions')
+        .where({ id: versionId, status: 'submitted' })
+        .update({ status: 'approved', ...frozen }),
     reviewsOf: (versionId: number, trx: Db = db): Promise<ReviewRow[]> =>
-      trx('version_reviews as r').join('users as u', 'u.id', 'r.actor_user_id').where('r.version_id', versionId).orderBy('r.id').select('r.*', 'u.name as actor_name'),
-    insertReview: (row: Omit<ReviewRow, 'id' | 'actor_name' | 'record_sha256'> & { record_sha256?: string | null }, trx: Db) => trx('version_reviews').insert(row),
+      trx('version_reviews as r')
+        .join('users as u', 'u.id', 'r.actor_user_id')
+        .where('r.version_id', versionId)
+        .orderBy('r.id')
+        .select('r.*', 'u.name as actor_name'),
+    insertReview: (
+      row: Omit<ReviewRow, 'id' | 'actor_name' | 'record_sha256'> & { record_sha256?: string | null },
+      trx: Db,
+    ) => trx('version_reviews').insert(row),
   };
 }
 export type PreparationsRepository = ReturnType<typeof preparationsRepository>;

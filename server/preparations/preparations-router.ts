@@ -1,7 +1,14 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
-import { computeRequestSchema, preparationListQuerySchema, readingsRequestSchema, preparationWriteSchema, routeFinderRequestSchema, titleSchema } from '../../shared/contracts/preparations';
+import {
+  computeRequestSchema,
+  preparationListQuerySchema,
+  readingsRequestSchema,
+  preparationWriteSchema,
+  routeFinderRequestSchema,
+  titleSchema,
+} from '../../shared/contracts/preparations';
 import type { Authorize, LabContext, SessionUser } from '../auth/authorize';
 import { clientSignal } from '../lib/client-signal';
 import { valid, validate } from '../lib/validate';
@@ -13,7 +20,11 @@ const versionParams = z.object({ labId: idParam, preparationId: idParam, number:
 const duplicateSchema = z.object({ title: titleSchema.optional() });
 
 /** Preparations of a lab: every member reads; analysts plan, save, version and duplicate. */
-export function preparationsRouter(deps: { preparations: PreparationsService; routes: ReturnType<typeof routeFinderService>; authorize: Authorize }) {
+export function preparationsRouter(deps: {
+  preparations: PreparationsService;
+  routes: ReturnType<typeof routeFinderService>;
+  authorize: Authorize;
+}) {
   const { preparations, routes, authorize } = deps;
   const router = Router({ mergeParams: true });
   const read = authorize.lab('member');
@@ -36,40 +47,90 @@ export function preparationsRouter(deps: { preparations: PreparationsService; ro
     res.json(await preparations.detail(lab(req), params.preparationId));
   });
 
-  router.get('/preparations/:preparationId/versions/:number', read, validate({ params: versionParams }), async (req, res) => {
-    const { params } = valid(req, { params: versionParams });
-    res.json(await preparations.version(lab(req), params.preparationId, params.number));
-  });
+  router.get(
+    '/preparations/:preparationId/versions/:number',
+    read,
+    validate({ params: versionParams }),
+    async (req, res) => {
+      const { params } = valid(req, { params: versionParams });
+      res.json(await preparations.version(lab(req), params.preparationId, params.number));
+    },
+  );
 
-  router.put('/preparations/:preparationId/versions/:number', plan, validate({ params: versionParams, body: preparationWriteSchema }), async (req, res) => {
-    const { params, body } = valid(req, { params: versionParams, body: preparationWriteSchema });
-    res.json(await preparations.saveDraft(lab(req), actor(req), params.preparationId, params.number, body, clientSignal(res)));
-  });
+  router.put(
+    '/preparations/:preparationId/versions/:number',
+    plan,
+    validate({ params: versionParams, body: preparationWriteSchema }),
+    async (req, res) => {
+      const { params, body } = valid(req, { params: versionParams, body: preparationWriteSchema });
+      res.json(
+        await preparations.saveDraft(
+          lab(req),
+          actor(req),
+          params.preparationId,
+          params.number,
+          body,
+          clientSignal(res),
+        ),
+      );
+    },
+  );
 
-  router.post('/preparations/:preparationId/versions/:number/readings', plan, validate({ params: versionParams, body: readingsRequestSchema }), async (req, res) => {
-    const { params, body } = valid(req, { params: versionParams, body: readingsRequestSchema });
-    res.json(await preparations.recordReadings(lab(req), actor(req), params.preparationId, params.number, body, clientSignal(res)));
-  });
+  router.post(
+    '/preparations/:preparationId/versions/:number/readings',
+    plan,
+    validate({ params: versionParams, body: readingsRequestSchema }),
+    async (req, res) => {
+      const { params, body } = valid(req, { params: versionParams, body: readingsRequestSchema });
+      res.json(
+        await preparations.recordReadings(
+          lab(req),
+          actor(req),
+          params.preparationId,
+          params.number,
+          body,
+          clientSignal(res),
+        ),
+      );
+    },
+  );
 
   router.post('/preparations/:preparationId/versions', plan, validate({ params: prepParams }), async (req, res) => {
     const { params } = valid(req, { params: prepParams });
     res.status(201).json(await preparations.newVersion(lab(req), actor(req), params.preparationId, clientSignal(res)));
   });
 
-  router.post('/preparations/:preparationId/duplicate', plan, validate({ params: prepParams, body: duplicateSchema }), async (req, res) => {
-    const { params, body } = valid(req, { params: prepParams, body: duplicateSchema });
-    res.status(201).json(await preparations.duplicate(lab(req), actor(req), params.preparationId, body.title, clientSignal(res)));
-  });
+  router.post(
+    '/preparations/:preparationId/duplicate',
+    plan,
+    validate({ params: prepParams, body: duplicateSchema }),
+    async (req, res) => {
+      const { params, body } = valid(req, { params: prepParams, body: duplicateSchema });
+      res
+        .status(201)
+        .json(await preparations.duplicate(lab(req), actor(req), params.preparationId, body.title, clientSignal(res)));
+    },
+  );
 
-  router.post('/compute', authorize.lab('computeBudgets'), validate({ body: computeRequestSchema }), async (req, res) => {
-    const { body } = valid(req, { body: computeRequestSchema });
-    res.json(await preparations.computeOnly(lab(req), body, clientSignal(res)));
-  });
+  router.post(
+    '/compute',
+    authorize.lab('computeBudgets'),
+    validate({ body: computeRequestSchema }),
+    async (req, res) => {
+      const { body } = valid(req, { body: computeRequestSchema });
+      res.json(await preparations.computeOnly(lab(req), body, clientSignal(res)));
+    },
+  );
 
-  router.post('/route-finder', authorize.lab('findRoutes'), validate({ body: routeFinderRequestSchema }), async (req, res) => {
-    const { body } = valid(req, { body: routeFinderRequestSchema });
-    res.json(await routes.find(lab(req), body, clientSignal(res)));
-  });
+  router.post(
+    '/route-finder',
+    authorize.lab('findRoutes'),
+    validate({ body: routeFinderRequestSchema }),
+    async (req, res) => {
+      const { body } = valid(req, { body: routeFinderRequestSchema });
+      res.json(await routes.find(lab(req), body, clientSignal(res)));
+    },
+  );
 
   return router;
 }

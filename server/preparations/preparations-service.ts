@@ -1,6 +1,16 @@
 import { randomInt } from 'node:crypto';
 import type { EquipmentItem } from '../../shared/contracts/library';
-import type { Override, PlanProblem, ReadingsRequest, RecordedReadings, PreparationDetail, PreparationSummary, PreparationWrite, VersionDetail, VersionSummary } from '../../shared/contracts/preparations';
+import type {
+  Override,
+  PlanProblem,
+  ReadingsRequest,
+  RecordedReadings,
+  PreparationDetail,
+  PreparationSummary,
+  PreparationWrite,
+  VersionDetail,
+  VersionSummary,
+} from '../../shared/contracts/preparations';
 import { parsePlan, PlanError } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
@@ -11,7 +21,14 @@ import type { PolicyService } from '../policy/policy-service';
 import type { Computer } from '../compute/compute-pool';
 import { resolvePlan } from './plan-resolver';
 import { readStoredSnapshot, storedSnapshotJson } from './stored-snapshot';
-import { EDITABLE_STATUSES, type PreparationRow, type PreparationsRepository, type ReviewRow, type VersionRow, type VersionWrite } from './preparations-repository';
+import {
+  EDITABLE_STATUSES,
+  type PreparationRow,
+  type PreparationsRepository,
+  type ReviewRow,
+  type VersionRow,
+  type VersionWrite,
+} from './preparations-repository';
 import type { Review } from '../../shared/contracts/reviews';
 import { approvedAsOf } from '../reviews/approved-record';
 import type { Transact } from '../db/transaction';
@@ -31,7 +48,15 @@ function toSummary(row: VersionRow): VersionSummary {
   };
 }
 
-const toReview = (row: ReviewRow): Review => ({ id: row.id, action: row.action, actor: row.actor_name, at: row.at, comment: row.comment, snapshotSha256: row.snapshot_sha256, recordSha256: row.record_sha256 ?? null });
+const toReview = (row: ReviewRow): Review => ({
+  id: row.id,
+  action: row.action,
+  actor: row.actor_name,
+  at: row.at,
+  comment: row.comment,
+  snapshotSha256: row.snapshot_sha256,
+  recordSha256: row.record_sha256 ?? null,
+});
 
 export function toVersionDetail(row: VersionRow, reviews: ReviewRow[]): VersionDetail {
   return {
@@ -74,9 +99,18 @@ const MASS_FIELDS: Record<string, RecordedReadings['readings'][number]['field']>
   dissolveInSolvent: 'solventMassG',
 };
 
-const analyteOf = (plan: Record<string, unknown>) => String((plan.analyte as { formula?: unknown } | undefined)?.formula ?? '').slice(0, 40);
+const analyteOf = (plan: Record<string, unknown>) =>
+  String((plan.analyte as { formula?: unknown } | undefined)?.formula ?? '').slice(0, 40);
 
-export function preparationsService(deps: { transact: Transact; preparations: PreparationsRepository; items: LibraryService; policy: PolicyService; audit: AuditRepository; computer: Computer; now: () => Date }) {
+export function preparationsService(deps: {
+  transact: Transact;
+  preparations: PreparationsRepository;
+  items: LibraryService;
+  policy: PolicyService;
+  audit: AuditRepository;
+  computer: Computer;
+  now: () => Date;
+}) {
   const { transact, preparations, items, policy, audit, computer, now } = deps;
 
   async function libraryOf(labId: number): Promise<Map<string, EquipmentItem>> {
@@ -94,19 +128,31 @@ export function preparationsService(deps: { transact: Transact; preparations: Pr
       parsePlan(plan);
     } catch (error) {
       if (!(error instanceof PlanError)) throw error;
-      throw new AppError('validation', 'plan_invalid', error.message, [{ path: ['plan', ...error.path].join('.'), message: error.message }]);
+      throw new AppError('validation', 'plan_invalid', error.message, [
+        { path: ['plan', ...error.path].join('.'), message: error.message },
+      ]);
     }
   }
 
   /** Resolves against the library and computes; a plan the engine refuses is kept with its problem. */
-  async function compute(labId: number, plan: Record<string, unknown>, overrides: Override[], seed: number, signal?: AbortSignal): Promise<VersionWrite & { materialCode: string | null }> {
+  async function compute(
+    labId: number,
+    plan: Record<string, unknown>,
+    overrides: Override[],
+    seed: number,
+    signal?: AbortSignal,
+  ): Promise<VersionWrite & { materialCode: string | null }> {
     assertWellFormed(plan);
     const at = now().toISOString();
     const library = await libraryOf(labId);
     const base = { plan_json: JSON.stringify(plan), overrides_json: JSON.stringify(overrides), seed, updated_at: at };
     try {
       const resolved = resolvePlan(plan, library, overrides);
-      const snapshot = await computer.snapshot(labId, { plan: resolved.plan, items: resolved.items, seed, computedAt: at, policy: await policy.read(labId) }, signal);
+      const snapshot = await computer.snapshot(
+        labId,
+        { plan: resolved.plan, items: resolved.items, seed, computedAt: at, policy: await policy.read(labId) },
+        signal,
+      );
       const { budget } = snapshot;
       const snapshotJson = storedSnapshotJson(snapshot);
       const material = resolved.items.find((i) => i.kind.endsWith('-material'));
@@ -148,23 +194,40 @@ export function preparationsService(deps: { transact: Transact; preparations: Pr
     const prep = await preparations.find(labId, id);
     if (!prep) throw notFound('The preparation');
     const versions = await preparations.versionsOf(id);
-    return { ...preparationSummary(prep, versions[0]), versions: versions.map(toSummary), current: toVersionDetail(versions[0], await preparations.reviewsOf(versions[0].id)) };
+    return {
+      ...preparationSummary(prep, versions[0]),
+      versions: versions.map(toSummary),
+      current: toVersionDetail(versions[0], await preparations.reviewsOf(versions[0].id)),
+    };
   }
 
   return {
     detail,
 
     /** Computes a plan against the lab's library without saving anything (for integrations and load tests). */
-    async computeOnly(labId: number, input: { plan: Record<string, unknown>; overrides: Override[]; seed: number; trials: number }, signal?: AbortSignal) {
+    async computeOnly(
+      labId: number,
+      input: { plan: Record<string, unknown>; overrides: Override[]; seed: number; trials: number },
+      signal?: AbortSignal,
+    ) {
       assertWellFormed(input.plan);
       const resolved = resolvePlan(input.plan, await libraryOf(labId), input.overrides);
-      const job = { plan: resolved.plan, items: resolved.items, seed: input.seed, computedAt: now().toISOString(), policy: await policy.read(labId), trials: input.trials };
+      const job = {
+        plan: resolved.plan,
+        items: resolved.items,
+        seed: input.seed,
+        computedAt: now().toISOString(),
+        policy: await policy.read(labId),
+        trials: input.trials,
+      };
       return computer.snapshot(labId, job, signal);
     },
 
     async list(labId: number, filter: Parameters<PreparationsRepository['list']>[1]): Promise<PreparationSummary[]> {
       const rows = await preparations.list(labId, filter);
-      const latest = new Map((await preparations.versionsByIds(rows.map((r) => r.latest_version_id))).map((v) => [v.id, v]));
+      const latest = new Map(
+        (await preparations.versionsByIds(rows.map((r) => r.latest_version_id))).map((v) => [v.id, v]),
+      );
       return rows.map((row) => preparationSummary(row, latest.get(row.latest_version_id) as VersionRow));
     },
 
@@ -180,19 +243,41 @@ export function preparationsService(deps: { transact: Transact; preparations: Pr
     async snapshotDownload(labId: number, id: number, number: number) {
       const row = await versionRow(labId, id, number);
       const snapshot: unknown = row.snapshot_json === null ? null : JSON.parse(row.snapshot_json);
-      return { snapshot, snapshotSha256: row.snapshot_sha256, approvedAs: approvedAsOf(row), recordSha256: row.record_sha256 ?? null, reviews: (await preparations.reviewsOf(row.id)).map(toReview) };
+      return {
+        snapshot,
+        snapshotSha256: row.snapshot_sha256,
+        approvedAs: approvedAsOf(row),
+        recordSha256: row.record_sha256 ?? null,
+        reviews: (await preparations.reviewsOf(row.id)).map(toReview),
+      };
     },
 
-    async create(labId: number, actor: SessionUser, input: PreparationWrite & { overrides: Override[] }, signal?: AbortSignal): Promise<PreparationDetail> {
+    async create(
+      labId: number,
+      actor: SessionUser,
+      input: PreparationWrite & { overrides: Override[] },
+      signal?: AbortSignal,
+    ): Promise<PreparationDetail> {
       const seed = input.seed ?? randomInt(0, 2 ** 32);
       const computed = await compute(labId, input.plan, input.overrides, seed, signal);
       const { materialCode, ...write } = computed;
       const at = now().toISOString();
       const id = await transact(async (trx) => {
-        const preparationId = await preparations.insertPreparation({ labId, title: input.title, analyte: analyteOf(input.plan), materialCode, createdBy: actor.id, at }, trx);
+        const preparationId = await preparations.insertPreparation(
+          { labId, title: input.title, analyte: analyteOf(input.plan), materialCode, createdBy: actor.id, at },
+          trx,
+        );
         await preparations.insertVersion(preparationId, 1, { ...write, created_by: actor.id, created_at: at }, trx);
         await audit.record(
-          { labId, actorUserId: actor.id, action: 'preparation.created', entityType: 'preparation', entityId: preparationId, summary: `${actor.name} created “${input.title}”`, after: { statement: write.result_statement } },
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'preparation.created',
+            entityType: 'preparation',
+            entityId: preparationId,
+            summary: `${actor.name} created “${input.title}”`,
+            after: { statement: write.result_statement },
+          },
           trx,
         );
         return preparationId;
@@ -201,19 +286,34 @@ export function preparationsService(deps: { transact: Transact; preparations: Pr
     },
 
     /** Saves (and recomputes) the draft version; only its author may, and only while it is a draft. */
-    async saveDraft(labId: number, actor: SessionUser, id: number, number: number, input: PreparationWrite & { overrides: Override[] }, signal?: AbortSignal): Promise<PreparationDetail> {
+    async saveDraft(
+      labId: number,
+      actor: SessionUser,
+      id: number,
+      number: number,
+      input: PreparationWrite & { overrides: Override[] },
+      signal?: AbortSignal,
+    ): Promise<PreparationDetail> {
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const current = await preparations.version(id, number);
       if (!current) throw notFound(`Version ${number}`);
-      if (!EDITABLE_STATUSES.includes(current.status)) throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
-      if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can change its draft. Duplicate it to make your own variant.');
+      if (!EDITABLE_STATUSES.includes(current.status))
+        throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
+      if (prep.created_by !== actor.id)
+        throw forbidden(
+          'Only the analyst who owns this preparation can change its draft. Duplicate it to make your own variant.',
+        );
       const computed = await compute(labId, input.plan, input.overrides, input.seed ?? Number(current.seed), signal);
       const { materialCode, ...write } = computed;
       await transact(async (trx) => {
         const changed = await preparations.updateDraft(current.id, write, trx);
         if (changed === 0) throw conflict('not_draft', `Version ${number} is no longer a draft.`);
-        await preparations.touchPreparation(id, { title: input.title, analyte: analyteOf(input.plan), materialCode, at: write.updated_at }, trx);
+        await preparations.touchPreparation(
+          id,
+          { title: input.title, analyte: analyteOf(input.plan), materialCode, at: write.updated_at },
+          trx,
+        );
         await audit.record(
           {
             labId,
@@ -236,15 +336,49 @@ export function preparationsService(deps: { transact: Transact; preparations: Pr
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const [latest] = await preparations.versionsOf(id);
-      if (EDITABLE_STATUSES.includes(latest.status)) throw conflict('draft_exists', `Version ${latest.number} can still be edited: change that one.`);
-      if (latest.status === 'prepared') throw conflict('draft_exists', `Version ${latest.number} has been prepared: correct its readings or submit it for review.`);
-      if (latest.status === 'submitted') throw conflict('under_review', `Version ${latest.number} is waiting for review; a new version can start once it is approved or returned.`);
-      const computed = await compute(labId, JSON.parse(latest.plan_json), JSON.parse(latest.overrides_json), Number(latest.seed), signal);
+      if (EDITABLE_STATUSES.includes(latest.status))
+        throw conflict('draft_exists', `Version ${latest.number} can still be edited: change that one.`);
+      if (latest.status === 'prepared')
+        throw conflict(
+          'draft_exists',
+          `Version ${latest.number} has been prepared: correct its readings or submit it for review.`,
+        );
+      if (latest.status === 'submitted')
+        throw conflict(
+          'under_review',
+          `Version ${latest.number} is waiting for review; a new version can start once it is approved or returned.`,
+        );
+      const computed = await compute(
+        labId,
+        JSON.parse(latest.plan_json),
+        JSON.parse(latest.overrides_json),
+        Number(latest.seed),
+        signal,
+      );
       const { materialCode: _material, ...write } = computed;
       await transact(async (trx) => {
-        await preparations.insertVersion(id, latest.number + 1, { ...write, created_by: actor.id, created_at: write.updated_at }, trx);
-        await preparations.touchPreparation(id, { title: prep.title, analyte: prep.analyte, materialCode: prep.material_code, at: write.updated_at }, trx);
-        await audit.record({ labId, actorUserId: actor.id, action: 'preparation.versioned', entityType: 'preparation', entityId: id, summary: `${actor.name} started version ${latest.number + 1} of “${prep.title}”` }, trx);
+        await preparations.insertVersion(
+          id,
+          latest.number + 1,
+          { ...write, created_by: actor.id, created_at: write.updated_at },
+          trx,
+        );
+        await preparations.touchPreparation(
+          id,
+          { title: prep.title, analyte: prep.analyte, materialCode: prep.material_code, at: write.updated_at },
+          trx,
+        );
+        await audit.record(
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'preparation.versioned',
+            entityType: 'preparation',
+            entityId: id,
+            summary: `${actor.name} started version ${latest.number + 1} of “${prep.title}”`,
+          },
+          trx,
+        );
       });
       return detail(labId, id);
     },
@@ -254,13 +388,22 @@ export function preparationsService(deps: { transact: Transact; preparations: Pr
      * masses are replaced by them, the budget is recomputed on the actual values, and the version
      * becomes "prepared". Readings can be corrected until the version is submitted.
      */
-    async recordReadings(labId: number, actor: SessionUser, id: number, number: number, input: ReadingsRequest & { deviations: string }, signal?: AbortSignal): Promise<PreparationDetail> {
+    async recordReadings(
+      labId: number,
+      actor: SessionUser,
+      id: number,
+      number: number,
+      input: ReadingsRequest & { deviations: string },
+      signal?: AbortSignal,
+    ): Promise<PreparationDetail> {
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const current = await preparations.version(id, number);
       if (!current) throw notFound(`Version ${number}`);
-      if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation records its readings.');
-      if (![...EDITABLE_STATUSES, 'prepared'].includes(current.status)) throw conflict('not_draft', `Version ${number} is ${current.status}; its readings can no longer change.`);
+      if (prep.created_by !== actor.id)
+        throw forbidden('Only the analyst who owns this preparation records its readings.');
+      if (![...EDITABLE_STATUSES, 'prepared'].includes(current.status))
+        throw conflict('not_draft', `Version ${number} is ${current.status}; its readings can no longer change.`);
       const previous = parse<RecordedReadings>(current.readings_json);
       const plan = JSON.parse(current.plan_json) as { steps?: Record<string, unknown>[] };
       const steps = plan.steps ?? [];
@@ -270,30 +413,72 @@ export function preparationsService(deps: { transact: Transact; preparations: Pr
         const step = steps[reading.stepIndex];
         const field = step ? MASS_FIELDS[String(step.kind)] : undefined;
         if (!step || !field) {
-          issues.push({ path: `readings.${index}.stepIndex`, message: `Step ${reading.stepIndex + 1} is not a weighing step.` });
+          issues.push({
+            path: `readings.${index}.stepIndex`,
+            message: `Step ${reading.stepIndex + 1} is not a weighing step.`,
+          });
           return;
         }
-        if (reading.tareG !== undefined && reading.grossG !== undefined && Math.abs(reading.grossG - reading.tareG - reading.actualMassG) > 1e-9 * Math.max(1, reading.grossG)) {
-          issues.push({ path: `readings.${index}.actualMassG`, message: `Gross − tare is ${(reading.grossG - reading.tareG).toPrecision(6)} g, not ${reading.actualMassG} g.` });
+        if (
+          reading.tareG !== undefined &&
+          reading.grossG !== undefined &&
+          Math.abs(reading.grossG - reading.tareG - reading.actualMassG) > 1e-9 * Math.max(1, reading.grossG)
+        ) {
+          issues.push({
+            path: `readings.${index}.actualMassG`,
+            message: `Gross − tare is ${(reading.grossG - reading.tareG).toPrecision(6)} g, not ${reading.actualMassG} g.`,
+          });
           return;
         }
         // The planned value: the first reading's planned value if readings are being corrected.
-        const plannedG = previous?.readings.find((r) => r.stepIndex === reading.stepIndex)?.plannedG ?? Number(step[field]);
-        recorded.push({ stepIndex: reading.stepIndex, field, plannedG, actualG: reading.actualMassG, tareG: reading.tareG ?? null, grossG: reading.grossG ?? null });
+        const plannedG =
+          previous?.readings.find((r) => r.stepIndex === reading.stepIndex)?.plannedG ?? Number(step[field]);
+        recorded.push({
+          stepIndex: reading.stepIndex,
+          field,
+          plannedG,
+          actualG: reading.actualMassG,
+          tareG: reading.tareG ?? null,
+          grossG: reading.grossG ?? null,
+        });
         step[field] = reading.actualMassG;
       });
       if (issues.length > 0) throw validationError(issues[0].message, issues);
-      const computed = await compute(labId, plan as Record<string, unknown>, JSON.parse(current.overrides_json), Number(current.seed), signal);
+      const computed = await compute(
+        labId,
+        plan as Record<string, unknown>,
+        JSON.parse(current.overrides_json),
+        Number(current.seed),
+        signal,
+      );
       if (computed.problem_json) {
         const problem = JSON.parse(computed.problem_json) as PlanProblem;
-        throw new AppError('validation', 'plan_invalid', `With these readings the budget cannot be computed: ${problem.message}`, [{ path: ['plan', ...problem.path].join('.'), message: problem.message }]);
+        throw new AppError(
+          'validation',
+          'plan_invalid',
+          `With these readings the budget cannot be computed: ${problem.message}`,
+          [{ path: ['plan', ...problem.path].join('.'), message: problem.message }],
+        );
       }
       const { materialCode, ...write } = computed;
-      const readings: RecordedReadings = { recordedAt: write.updated_at, recordedBy: actor.name, deviations: input.deviations, readings: recorded };
+      const readings: RecordedReadings = {
+        recordedAt: write.updated_at,
+        recordedBy: actor.name,
+        deviations: input.deviations,
+        readings: recorded,
+      };
       await transact(async (trx) => {
-        const changed = await preparations.recordReadings(current.id, { ...write, readings_json: JSON.stringify(readings), status: 'prepared' }, trx);
+        const changed = await preparations.recordReadings(
+          current.id,
+          { ...write, readings_json: JSON.stringify(readings), status: 'prepared' },
+          trx,
+        );
         if (changed === 0) throw conflict('not_draft', `Version ${number} changed meanwhile; reload it.`);
-        await preparations.touchPreparation(id, { title: prep.title, analyte: prep.analyte, materialCode, at: write.updated_at }, trx);
+        await preparations.touchPreparation(
+          id,
+          { title: prep.title, analyte: prep.analyte, materialCode, at: write.updated_at },
+          trx,
+        );
         await audit.record(
           {
             labId,
@@ -312,16 +497,27 @@ export function preparationsService(deps: { transact: Transact; preparations: Pr
     },
 
     /** A new preparation with a copy of this one's plan, for comparing variants. */
-    async duplicate(labId: number, actor: SessionUser, id: number, title?: string, signal?: AbortSignal): Promise<PreparationDetail> {
+    async duplicate(
+      labId: number,
+      actor: SessionUser,
+      id: number,
+      title?: string,
+      signal?: AbortSignal,
+    ): Promise<PreparationDetail> {
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const [latest] = await preparations.versionsOf(id);
-      return this.create(labId, actor, {
-        title: title ?? `${prep.title} (variant)`.slice(0, 200),
-        plan: JSON.parse(latest.plan_json),
-        overrides: JSON.parse(latest.overrides_json),
-        seed: Number(latest.seed),
-      }, signal);
+      return this.create(
+        labId,
+        actor,
+        {
+          title: title ?? `${prep.title} (variant)`.slice(0, 200),
+          plan: JSON.parse(latest.plan_json),
+          overrides: JSON.parse(latest.overrides_json),
+          seed: Number(latest.seed),
+        },
+        signal,
+      );
     },
   };
 }

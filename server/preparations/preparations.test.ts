@@ -28,7 +28,9 @@ const url = (path: string) => `/api/labs/${labId}${path}`;
 
 describe('saving a preparation computes and stores its snapshot', () => {
   it('stores value, budget, Monte Carlo, the revisions used, engine version, seed and a SHA-256 of the snapshot', async () => {
-    const res = await analyst.post(url('/preparations'), { title: 'Pb 100 mg/L intermediate', plan: leadPlanWith(), seed: 20261202 }).expect(201);
+    const res = await analyst
+      .post(url('/preparations'), { title: 'Pb 100 mg/L intermediate', plan: leadPlanWith(), seed: 20261202 })
+      .expect(201);
     const version = res.body.current;
     expect(version.status).toBe('draft');
     expect(version.problem).toBeNull();
@@ -42,7 +44,13 @@ describe('saving a preparation computes and stores its snapshot', () => {
     expect(snapshot.engineVersion).toMatch(/^\d+\.\d+\.\d+$/);
     expect(snapshot.seed).toBe(20261202);
     expect(snapshot.trials).toBeGreaterThanOrEqual(100_000);
-    expect(snapshot.items.map((i: { code: string }) => i.code).sort()).toEqual(['BAL-05', 'GP-10-A', 'RM-PBN-01', 'VF-100-A', 'VF-100-B']);
+    expect(snapshot.items.map((i: { code: string }) => i.code).sort()).toEqual([
+      'BAL-05',
+      'GP-10-A',
+      'RM-PBN-01',
+      'VF-100-A',
+      'VF-100-B',
+    ]);
     expect(snapshot.items.find((i: { code: string }) => i.code === 'RM-PBN-01').hazardNotes).toMatch(/toxic/i);
     const stored = await t.db('preparation_versions').where({ id: version.id }).first();
     expect(version.snapshotSha256).toBe(createHash('sha256').update(stored.snapshot_json).digest('hex'));
@@ -61,10 +69,31 @@ describe('saving a preparation computes and stores its snapshot', () => {
     const at = new Date().toISOString();
     const [other] = await t.db('labs').insert({ name: 'Other lab', slug: 'other', created_at: at }).returning('id');
     const otherLab = typeof other === 'object' ? other.id : other;
-    const [owner] = await t.db('users').insert({ email: 'o@other.example', name: 'O', password_hash: await hashPassword('x-password-1'), active: true, created_at: at }).returning('id');
-    const [item] = await t.db('equipment_items').insert({ lab_id: otherLab, kind: 'flask', code: 'FOREIGN-1', status: 'active', created_at: at, created_by: typeof owner === 'object' ? owner.id : owner }).returning('id');
+    const [owner] = await t
+      .db('users')
+      .insert({
+        email: 'o@other.example',
+        name: 'O',
+        password_hash: await hashPassword('x-password-1'),
+        active: true,
+        created_at: at,
+      })
+      .returning('id');
+    const [item] = await t
+      .db('equipment_items')
+      .insert({
+        lab_id: otherLab,
+        kind: 'flask',
+        code: 'FOREIGN-1',
+        status: 'active',
+        created_at: at,
+        created_by: typeof owner === 'object' ? owner.id : owner,
+      })
+      .returning('id');
     const plan = leadPlanWith();
-    (plan.steps[1] as { flask: { libraryId: string } }).flask.libraryId = String(typeof item === 'object' ? item.id : item);
+    (plan.steps[1] as { flask: { libraryId: string } }).flask.libraryId = String(
+      typeof item === 'object' ? item.id : item,
+    );
     const res = await analyst.post(url('/preparations'), { title: 'Sneaky', plan }).expect(400);
     expect(res.body.error.code).toBe('foreign_equipment');
     expect(res.body.error.details[0].path).toBe('steps.1.flask');
@@ -88,22 +117,36 @@ describe('saving a preparation computes and stores its snapshot', () => {
     const items = (await analyst.get(url('/equipment?status=all')).expect(200)).body as EquipmentItem[];
     library = new Map(items.map((item) => [item.code, item]));
     expect(library.get('BAL-04')!.calibration).toBe('overdue');
-    const blocked = await analyst.post(url('/preparations'), { title: 'On the old balance', plan: leadPlanWith({ balance: 'BAL-04' }) }).expect(201);
+    const blocked = await analyst
+      .post(url('/preparations'), { title: 'On the old balance', plan: leadPlanWith({ balance: 'BAL-04' }) })
+      .expect(201);
     expect(blocked.body.current.problem.message).toMatch(/BAL-04.*overdue.*reason/);
     const libraryId = String(library.get('BAL-04')!.id);
     const allowed = await analyst
-      .post(url('/preparations'), { title: 'On the old balance', plan: leadPlanWith({ balance: 'BAL-04' }), overrides: [{ libraryId, reason: 'BAL-05 out for service; BAL-04 checked with 10 g weight today' }] })
+      .post(url('/preparations'), {
+        title: 'On the old balance',
+        plan: leadPlanWith({ balance: 'BAL-04' }),
+        overrides: [{ libraryId, reason: 'BAL-05 out for service; BAL-04 checked with 10 g weight today' }],
+      })
       .expect(201);
     expect(allowed.body.current.problem).toBeNull();
-    expect(allowed.body.current.snapshot.items.find((i: { code: string }) => i.code === 'BAL-04').override).toMatch(/out for service/);
+    expect(allowed.body.current.snapshot.items.find((i: { code: string }) => i.code === 'BAL-04').override).toMatch(
+      /out for service/,
+    );
   });
 
   it('keeps what a stored budget read when the library item is revised later', async () => {
-    const res = await analyst.post(url('/preparations'), { title: 'Pinned revisions', plan: leadPlanWith() }).expect(201);
+    const res = await analyst
+      .post(url('/preparations'), { title: 'Pinned revisions', plan: leadPlanWith() })
+      .expect(201);
     const before = await t.db('preparation_versions').where({ id: res.body.current.id }).first();
     const qa = await signIn(t.app, demo('qa'));
     const flask = library.get('VF-100-A')!;
-    await qa.agent.put(url(`/equipment/${flask.id}`)).set('x-csrf-token', qa.token).send({ data: { ...flask.current.data, toleranceMl: 0.2 }, reason: 'Recalibrated' }).expect(200);
+    await qa.agent
+      .put(url(`/equipment/${flask.id}`))
+      .set('x-csrf-token', qa.token)
+      .send({ data: { ...flask.current.data, toleranceMl: 0.2 }, reason: 'Recalibrated' })
+      .expect(200);
     const after = await t.db('preparation_versions').where({ id: res.body.current.id }).first();
     expect(after).toEqual(before);
     const read = (await analyst.get(url(`/preparations/${res.body.id}`)).expect(200)).body;
@@ -127,7 +170,8 @@ describe('malformed plans and the compute-only route', () => {
   });
 
   it('computes without saving, with the trials asked for', async () => {
-    const res = (await analyst.post(url('/compute'), { plan: leadPlanWith(), seed: 5, trials: 20_000 }).expect(200)).body;
+    const res = (await analyst.post(url('/compute'), { plan: leadPlanWith(), seed: 5, trials: 20_000 }).expect(200))
+      .body;
     expect(res.monteCarlo.trials).toBe(20_000);
     expect(res.monteCarlo.seed).toBe(5);
     expect(res.budget.unit).toBe('mg/L');
@@ -138,16 +182,26 @@ describe('malformed plans and the compute-only route', () => {
 
 describe('drafts, versions, variants and roles', () => {
   it('autosaves the draft in place, refuses another analyst, and lists with filters', async () => {
-    const created = (await analyst.post(url('/preparations'), { title: 'Pb working', plan: leadPlanWith() }).expect(201)).body;
+    const created = (
+      await analyst.post(url('/preparations'), { title: 'Pb working', plan: leadPlanWith() }).expect(201)
+    ).body;
     const saved = (
-      await analyst.agent.put(url(`/preparations/${created.id}/versions/1`)).set('x-csrf-token', analyst.token).send({ title: 'Pb working standard', plan: leadPlanWith({ aliquotFlask: 'VF-100-A' }) }).expect(200)
+      await analyst.agent
+        .put(url(`/preparations/${created.id}/versions/1`))
+        .set('x-csrf-token', analyst.token)
+        .send({ title: 'Pb working standard', plan: leadPlanWith({ aliquotFlask: 'VF-100-A' }) })
+        .expect(200)
     ).body;
     expect(saved.title).toBe('Pb working standard');
     expect(saved.versions).toHaveLength(1);
     expect(saved.current.seed).toBe(created.current.seed);
 
     const other = await signIn(t.app, demo('analyst2'));
-    await other.agent.put(url(`/preparations/${created.id}/versions/1`)).set('x-csrf-token', other.token).send({ title: 'Mine now', plan: leadPlanWith() }).expect(403);
+    await other.agent
+      .put(url(`/preparations/${created.id}/versions/1`))
+      .set('x-csrf-token', other.token)
+      .send({ title: 'Mine now', plan: leadPlanWith() })
+      .expect(403);
     const variant = (await other.post(url(`/preparations/${created.id}/duplicate`), {}).expect(201)).body;
     expect(variant.title).toBe('Pb working standard (variant)');
     expect(variant.createdBy).toBe('Lucía Ferreira-Blom');
@@ -170,14 +224,23 @@ describe('drafts, versions, variants and roles', () => {
 
   it('finds routes to a target over the lab library', async () => {
     const res = (
-      await analyst.post(url('/route-finder'), { target: { value: 10, unit: 'µg/L' }, analyte: 'Se', materialLibraryId: String(library.get('RM-SE-1000')!.id), maximumDilutions: 3 }).expect(200)
+      await analyst
+        .post(url('/route-finder'), {
+          target: { value: 10, unit: 'µg/L' },
+          analyte: 'Se',
+          materialLibraryId: String(library.get('RM-SE-1000')!.id),
+          maximumDilutions: 3,
+        })
+        .expect(200)
     ).body;
     expect(res.routes.length).toBeGreaterThan(1);
     const best = res.routes[0];
     // 1000 mg/L to 10 µg/L is a factor of 10⁵: at least three dilutions with this glassware.
     expect(best.value).toBeGreaterThan(10 * 0.995);
     expect(best.value).toBeLessThan(10 * 1.005);
-    const spreads = res.routes.map((route: { relativeExpandedUncertainty: number }) => route.relativeExpandedUncertainty);
+    const spreads = res.routes.map(
+      (route: { relativeExpandedUncertainty: number }) => route.relativeExpandedUncertainty,
+    );
     expect(spreads).toEqual([...spreads].sort((left, right) => left - right));
     expect(res.skipped).toEqual([]);
   });

@@ -1,29 +1,51 @@
 import { policySettings, toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem } from '../../shared/contracts/library';
 import type { Computer } from '../compute/compute-pool';
-import { type RouteRequest, type Balance, type CertifiedSolution, type GlassPipette, type PistonPipette, type RouteResult, type SolidMaterial, type VolumetricFlask } from '../../shared/uncertainty';
+import {
+  type RouteRequest,
+  type Balance,
+  type CertifiedSolution,
+  type GlassPipette,
+  type PistonPipette,
+  type RouteResult,
+  type SolidMaterial,
+  type VolumetricFlask,
+} from '../../shared/uncertainty';
 import { notFound, validationError } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
 import type { PolicyService } from '../policy/policy-service';
 
 /** Items a new plan may use without an override: active, calibrated, not expired. */
-const usable = (item: EquipmentItem) => item.status === 'active' && item.calibration !== 'overdue' && item.expiry !== 'expired';
+const usable = (item: EquipmentItem) =>
+  item.status === 'active' && item.calibration !== 'overdue' && item.expiry !== 'expired';
 
 /** Runs the engine's route finder over the lab's current library and policy, in the compute pool. */
 export function routeFinderService(deps: { items: LibraryService; policy: PolicyService; computer: Computer }) {
   return {
     async find(
       labId: number,
-      input: { target: RouteRequest['target']; analyte: string; materialLibraryId: string; maximumDilutions: number; limit: number },
+      input: {
+        target: RouteRequest['target'];
+        analyte: string;
+        materialLibraryId: string;
+        maximumDilutions: number;
+        limit: number;
+      },
       signal?: AbortSignal,
     ): Promise<RouteResult & { skipped: string[] }> {
       const library = await deps.items.list(labId, { status: 'active' });
       const material = library.find((item) => String(item.id) === input.materialLibraryId);
       if (!material || !material.kind.endsWith('-material')) throw notFound('That reference material');
-      if (!usable(material)) throw validationError(`${material.code} cannot be used for a new plan: ${material.flags.join('; ')}.`, [{ path: 'materialLibraryId', message: material.flags.join('; ') }]);
-      const skipped = library.filter((item) => !usable(item) && !item.kind.endsWith('-material')).map((item) => `${item.code}: ${item.flags.join('; ')}`);
+      if (!usable(material))
+        throw validationError(`${material.code} cannot be used for a new plan: ${material.flags.join('; ')}.`, [
+          { path: 'materialLibraryId', message: material.flags.join('; ') },
+        ]);
+      const skipped = library
+        .filter((item) => !usable(item) && !item.kind.endsWith('-material'))
+        .map((item) => `${item.code}: ${item.flags.join('; ')}`);
       const ok = library.filter(usable);
-      const of = <T>(kinds: string[]) => ok.filter((item) => kinds.includes(item.kind)).map((item) => toEngineEquipment(item) as T);
+      const of = <T>(kinds: string[]) =>
+        ok.filter((item) => kinds.includes(item.kind)).map((item) => toEngineEquipment(item) as T);
       const policy = await deps.policy.read(labId);
       const request: RouteRequest = {
         target: input.target,

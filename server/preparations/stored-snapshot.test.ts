@@ -6,7 +6,12 @@ import { canonicalJson } from '../lib/canonical-json';
 import { leadPlan, libraryByCode } from '../test-support/demo-plans';
 import { buildTestApp, demo, DEMO_PASSWORD, signIn, type Client, type TestApp } from '../test-support/test-app';
 
-const legacy = JSON.parse(readFileSync(new URL('../../tests/fixtures/snapshots/lead-standard-stored-before-typing.json', import.meta.url), 'utf8')) as {
+const legacy = JSON.parse(
+  readFileSync(
+    new URL('../../tests/fixtures/snapshots/lead-standard-stored-before-typing.json', import.meta.url),
+    'utf8',
+  ),
+) as {
   snapshotSha256: string;
   snapshotJson: string;
 };
@@ -22,7 +27,15 @@ beforeEach(async () => {
   labId = (await t.db('labs').first()).id;
   analyst = await signIn(t.app, demo('analyst'));
   const library = await libraryByCode(analyst, labId);
-  preparationId = (await analyst.post(`/api/labs/${labId}/preparations`, { title: 'Pb 100 mg/L intermediate', plan: leadPlan(library), seed: 20261203 }).expect(201)).body.id;
+  preparationId = (
+    await analyst
+      .post(`/api/labs/${labId}/preparations`, {
+        title: 'Pb 100 mg/L intermediate',
+        plan: leadPlan(library),
+        seed: 20261203,
+      })
+      .expect(201)
+  ).body.id;
 });
 afterEach(async () => {
   await t.close();
@@ -47,7 +60,10 @@ describe('a snapshot stored now', () => {
 describe('a snapshot stored before snapshots were typed (tests/fixtures/snapshots)', () => {
   beforeEach(async () => {
     // The row as the earlier code left it: its snapshot text and hash, byte for byte.
-    await t.db('preparation_versions').where({ preparation_id: preparationId, number: 1 }).update({ snapshot_json: legacy.snapshotJson, snapshot_sha256: legacy.snapshotSha256 });
+    await t
+      .db('preparation_versions')
+      .where({ preparation_id: preparationId, number: 1 })
+      .update({ snapshot_json: legacy.snapshotJson, snapshot_sha256: legacy.snapshotSha256 });
   });
 
   it('reads through the API, its null ν_eff sent as "Infinity" and parsed by the client schema as ∞', async () => {
@@ -56,7 +72,9 @@ describe('a snapshot stored before snapshots were typed (tests/fixtures/snapshot
     const parsed = versionDetailSchema.parse(version);
     expect(parsed.snapshot?.budget.effectiveDegreesOfFreedom).toBe(Infinity);
     expect(parsed.snapshotSha256).toBe(legacy.snapshotSha256);
-    const detail = preparationDetailSchema.parse((await analyst.get(`/api/labs/${labId}/preparations/${preparationId}`).expect(200)).body);
+    const detail = preparationDetailSchema.parse(
+      (await analyst.get(`/api/labs/${labId}/preparations/${preparationId}`).expect(200)).body,
+    );
     expect(detail.current.snapshot?.budget.rows.length).toBeGreaterThan(5);
   });
 

@@ -17,6 +17,7 @@ export function storedSnapshotJson(snapshot: Snapshot): string {
  */
 export function readStoredSnapshot(json: string): Snapshot {
   const parsed = snapshotSchema.safeParse(JSON.parse(json));
-  if (!parsed.success) throw new Error(`A stored snapshot does not have the snapshot format:\n${z.prettifyError(parsed.error)}`);
+  if (!parsed.success)
+    throw new Error(`A stored snapshot does not have the snapshot format:\n${z.prettifyError(parsed.error)}`);
   return parsed.data;
 }

@@ -27,7 +27,12 @@ export const toApprovedAsColumns = (a: ApprovedAs): ApprovedAsColumns => ({
 /** The frozen fields, or null for a version approved before they were stored. */
 export function approvedAsOf(row: ApprovedAsColumns): ApprovedAs | null {
   if (row.approved_title == null) return null;
-  return { title: row.approved_title, analyte: row.approved_analyte ?? '', preparationName: row.approved_preparation_name ?? '', labName: row.approved_lab_name ?? '' };
+  return {
+    title: row.approved_title,
+    analyte: row.approved_analyte ?? '',
+    preparationName: row.approved_preparation_name ?? '',
+    labName: row.approved_lab_name ?? '',
+  };
 }
 
 /**

@@ -12,41 +12,72 @@ const versionParams = z.object({ labId: idParam, preparationId: idParam, number:
 const searchQuery = z.object({ q: z.string().trim().max(200).optional() });
 
 /** Submit (analyst), approve or return (QA), the review queue, approved records and hash verification. */
-export function reviewRouter(deps: { reviews: ReviewService; preparations: PreparationsService; authorize: Authorize; limits: AttemptLimits }) {
+export function reviewRouter(deps: {
+  reviews: ReviewService;
+  preparations: PreparationsService;
+  authorize: Authorize;
+  limits: AttemptLimits;
+}) {
   const { reviews, preparations, authorize } = deps;
   const router = Router({ mergeParams: true });
   const lab = (req: Request) => (req.lab as LabContext).id;
   const actor = (req: Request) => req.user as SessionUser;
   const base = '/preparations/:preparationId/versions/:number';
 
-  router.post(`${base}/submit`, authorize.lab('planPreparations'), validate({ params: versionParams, body: submitRequestSchema }), async (req, res) => {
-    const { params, body } = valid(req, { params: versionParams, body: submitRequestSchema });
-    await reviews.submit(lab(req), actor(req), params.preparationId, params.number, body.comment);
-    res.json(await preparations.detail(lab(req), params.preparationId));
-  });
+  router.post(
+    `${base}/submit`,
+    authorize.lab('planPreparations'),
+    validate({ params: versionParams, body: submitRequestSchema }),
+    async (req, res) => {
+      const { params, body } = valid(req, { params: versionParams, body: submitRequestSchema });
+      await reviews.submit(lab(req), actor(req), params.preparationId, params.number, body.comment);
+      res.json(await preparations.detail(lab(req), params.preparationId));
+    },
+  );
 
   const signature = deps.limits.guard('approval', (req) => req.user?.email);
-  router.post(`${base}/approve`, authorize.lab('reviewRecords'), validate({ params: versionParams, body: approveRequestSchema }), signature, async (req, res) => {
-    const { params, body } = valid(req, { params: versionParams, body: approveRequestSchema });
-    await reviews.decide(lab(req), actor(req), params.preparationId, params.number, { kind: 'approved', ...body });
-    res.json(await preparations.detail(lab(req), params.preparationId));
-  });
+  router.post(
+    `${base}/approve`,
+    authorize.lab('reviewRecords'),
+    validate({ params: versionParams, body: approveRequestSchema }),
+    signature,
+    async (req, res) => {
+      const { params, body } = valid(req, { params: versionParams, body: approveRequestSchema });
+      await reviews.decide(lab(req), actor(req), params.preparationId, params.number, { kind: 'approved', ...body });
+      res.json(await preparations.detail(lab(req), params.preparationId));
+    },
+  );
 
-  router.post(`${base}/return`, authorize.lab('reviewRecords'), validate({ params: versionParams, body: returnRequestSchema }), async (req, res) => {
-    const { params, body } = valid(req, { params: versionParams, body: returnRequestSchema });
-    await reviews.decide(lab(req), actor(req), params.preparationId, params.number, { kind: 'returned', comment: body.comment });
-    res.json(await preparations.detail(lab(req), params.preparationId));
-  });
+  router.post(
+    `${base}/return`,
+    authorize.lab('reviewRecords'),
+    validate({ params: versionParams, body: returnRequestSchema }),
+    async (req, res) => {
+      const { params, body } = valid(req, { params: versionParams, body: returnRequestSchema });
+      await reviews.decide(lab(req), actor(req), params.preparationId, params.number, {
+        kind: 'returned',
+        comment: body.comment,
+      });
+      res.json(await preparations.detail(lab(req), params.preparationId));
+    },
+  );
 
   router.get(`${base}/verify`, authorize.lab('member'), validate({ params: versionParams }), async (req, res) => {
     const { params } = valid(req, { params: versionParams });
     res.json(await reviews.verify(lab(req), params.preparationId, params.number));
   });
 
-  router.get(`${base}/snapshot.json`, authorize.lab('member'), validate({ params: versionParams }), async (req, res) => {
-    const { params } = valid(req, { params: versionParams });
-    res.attachment(`dilutrace-preparation-${params.preparationId}-v${params.number}-snapshot.json`).json(await preparations.snapshotDownload(lab(req), params.preparationId, params.number));
-  });
+  router.get(
+    `${base}/snapshot.json`,
+    authorize.lab('member'),
+    validate({ params: versionParams }),
+    async (req, res) => {
+      const { params } = valid(req, { params: versionParams });
+      res
+        .attachment(`dilutrace-preparation-${params.preparationId}-v${params.number}-snapshot.json`)
+        .json(await preparations.snapshotDownload(lab(req), params.preparationId, params.number));
+    },
+  );
 
   router.get('/review-queue', authorize.lab('reviewRecords'), async (req, res) => {
     res.json(await reviews.queue(lab(req)));

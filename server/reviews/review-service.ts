@@ -54,27 +54,74 @@ export function reviewService(deps: {
     }
   }
 
-  const lastSubmission = async (version: VersionRow) => [...(await preparations.reviewsOf(version.id))].reverse().find((r) => r.action === 'submitted');
+  const lastSubmission = async (version: VersionRow) =>
+    [...(await preparations.reviewsOf(version.id))].reverse().find((r) => r.action === 'submitted');
 
   return {
-    async submit(labId: number, actor: SessionUser, preparationId: number, number: number, comment: string): Promise<void> {
+    async submit(
+      labId: number,
+      actor: SessionUser,
+      preparationId: number,
+      number: number,
+      comment: string,
+    ): Promise<void> {
       const { prep, version } = await load(labId, preparationId, number);
       if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can submit it.');
-      if (!['draft', 'prepared', 'returned'].includes(version.status)) throw conflict('not_draft', `Version ${number} is ${version.status}; only a draft, prepared or returned version can be submitted.`);
-      if (!version.snapshot_json) throw validationError('This version has no computed budget yet: fix the problem shown in the plan, then submit.');
+      if (!['draft', 'prepared', 'returned'].includes(version.status))
+        throw conflict(
+          'not_draft',
+          `Version ${number} is ${version.status}; only a draft, prepared or returned version can be submitted.`,
+        );
+      if (!version.snapshot_json)
+        throw validationError(
+          'This version has no computed budget yet: fix the problem shown in the plan, then submit.',
+        );
       const at = now().toISOString();
       await transact(async (trx) => {
-        if ((await preparations.setStatus(version.id, version.status, 'submitted', trx)) === 0) throw conflict('not_draft', 'The version changed meanwhile; reload it.');
-        await preparations.insertReview({ version_id: version.id, action: 'submitted', actor_user_id: actor.id, at, comment, snapshot_sha256: version.snapshot_sha256 }, trx);
-        await audit.record({ labId, actorUserId: actor.id, action: 'preparation.submitted', entityType: 'preparation', entityId: preparationId, summary: `${actor.name} submitted version ${number} of “${prep.title}”`, before: { status: version.status }, after: { status: 'submitted' } }, trx);
+        if ((await preparations.setStatus(version.id, version.status, 'submitted', trx)) === 0)
+          throw conflict('not_draft', 'The version changed meanwhile; reload it.');
+        await preparations.insertReview(
+          {
+            version_id: version.id,
+            action: 'submitted',
+            actor_user_id: actor.id,
+            at,
+            comment,
+            snapshot_sha256: version.snapshot_sha256,
+          },
+          trx,
+        );
+        await audit.record(
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'preparation.submitted',
+            entityType: 'preparation',
+            entityId: preparationId,
+            summary: `${actor.name} submitted version ${number} of “${prep.title}”`,
+            before: { status: version.status },
+            after: { status: 'submitted' },
+          },
+          trx,
+        );
       });
-      const reviewers = (await labs.members(labId)).filter((m) => m.role === 'qa' && m.active && m.user_id !== actor.id);
+      const reviewers = (await labs.members(labId)).filter(
+        (m) => m.role === 'qa' && m.active && m.user_id !== actor.id,
+      );
       for (const reviewer of reviewers) {
         await notify(() =>
           mailer.send({
             to: reviewer.email,
             labId,
-            ...submittedMessage({ reviewerName: reviewer.name, analyst: actor.name, title: prep.title, version: number, statement: version.result_statement, comment, link: deps.publicUrl(`/records/${preparationId}/v/${number}`) }),
+            ...submittedMessage({
+              reviewerName: reviewer.name,
+              analyst: actor.name,
+              title: prep.title,
+              version: number,
+              statement: version.result_statement,
+              comment,
+              link: deps.publicUrl(`/records/${preparationId}/v/${number}`),
+            }),
           }),
         );
       }
@@ -88,32 +135,71 @@ export function reviewService(deps: {
       decision: { kind: 'approved'; password: string; statement: string } | { kind: 'returned'; comment: string },
     ): Promise<void> {
       const { prep, version } = await load(labId, preparationId, number);
-      if (version.status !== 'submitted') throw conflict('not_submitted', `Version ${number} is ${version.status}; only a submitted version can be reviewed.`);
+      if (version.status !== 'submitted')
+        throw conflict(
+          'not_submitted',
+          `Version ${number} is ${version.status}; only a submitted version can be reviewed.`,
+        );
       const submission = await lastSubmission(version);
-      if (submission?.actor_user_id === actor.id || prep.created_by === actor.id) throw forbidden('You submitted this version; another member of QA must review it.');
+      if (submission?.actor_user_id === actor.id || prep.created_by === actor.id)
+        throw forbidden('You submitted this version; another member of QA must review it.');
       if (decision.kind === 'approved') {
         const account = await users.findById(actor.id);
         if (!account || !(await verifyPassword(decision.password, account.password_hash))) {
-          await audit.record({ labId, actorUserId: actor.id, action: 'preparation.approval_refused', entityType: 'preparation', entityId: preparationId, summary: `Approval of “${prep.title}” v${number} refused: password not confirmed` });
-          throw validationError('The password is not right; the approval was not signed.', [{ path: 'password', message: 'This is not your password.' }]);
+          await audit.record({
+            labId,
+            actorUserId: actor.id,
+            action: 'preparation.approval_refused',
+            entityType: 'preparation',
+            entityId: preparationId,
+            summary: `Approval of “${prep.title}” v${number} refused: password not confirmed`,
+          });
+          throw validationError('The password is not right; the approval was not signed.', [
+            { path: 'password', message: 'This is not your password.' },
+          ]);
         }
-        if (!version.snapshot_json || sha256Hex(version.snapshot_json) !== version.snapshot_sha256) throw conflict('snapshot_mismatch', 'The stored snapshot does not match its hash; it cannot be approved. Tell your administrator.');
+        if (!version.snapshot_json || sha256Hex(version.snapshot_json) !== version.snapshot_sha256)
+          throw conflict(
+            'snapshot_mismatch',
+            'The stored snapshot does not match its hash; it cannot be approved. Tell your administrator.',
+          );
       }
       const at = now().toISOString();
       const comment = decision.kind === 'approved' ? decision.statement : decision.comment;
       // What the record shows is frozen with the signature and covered by the hash signed.
       const approvedAs: ApprovedAs | null =
         decision.kind === 'approved'
-          ? { title: prep.title, analyte: prep.analyte, preparationName: planTitle(version.plan_json) ?? prep.title, labName: (await labs.findById(labId))?.name ?? '' }
+          ? {
+              title: prep.title,
+              analyte: prep.analyte,
+              preparationName: planTitle(version.plan_json) ?? prep.title,
+              labName: (await labs.findById(labId))?.name ?? '',
+            }
           : null;
-      const recordSha256 = approvedAs && version.snapshot_sha256 ? approvedRecordSha256(version.snapshot_sha256, approvedAs) : null;
+      const recordSha256 =
+        approvedAs && version.snapshot_sha256 ? approvedRecordSha256(version.snapshot_sha256, approvedAs) : null;
       await transact(async (trx) => {
         const changed =
           approvedAs && recordSha256
-            ? await preparations.approve(version.id, { ...toApprovedAsColumns(approvedAs), record_sha256: recordSha256 }, trx)
+            ? await preparations.approve(
+                version.id,
+                { ...toApprovedAsColumns(approvedAs), record_sha256: recordSha256 },
+                trx,
+              )
             : await preparations.setStatus(version.id, 'submitted', decision.kind, trx);
         if (changed === 0) throw conflict('not_submitted', 'The version changed meanwhile; reload it.');
-        await preparations.insertReview({ version_id: version.id, action: decision.kind, actor_user_id: actor.id, at, comment, snapshot_sha256: version.snapshot_sha256, record_sha256: recordSha256 }, trx);
+        await preparations.insertReview(
+          {
+            version_id: version.id,
+            action: decision.kind,
+            actor_user_id: actor.id,
+            at,
+            comment,
+            snapshot_sha256: version.snapshot_sha256,
+            record_sha256: recordSha256,
+          },
+          trx,
+        );
         await audit.record(
           {
             labId,
@@ -123,7 +209,11 @@ export function reviewService(deps: {
             entityId: preparationId,
             summary: `${actor.name} ${decision.kind} version ${number} of “${prep.title}”: ${comment}`,
             before: { status: 'submitted' },
-            after: { status: decision.kind, snapshotSha256: version.snapshot_sha256, ...(recordSha256 ? { recordSha256, approvedAs } : {}) },
+            after: {
+              status: decision.kind,
+              snapshotSha256: version.snapshot_sha256,
+              ...(recordSha256 ? { recordSha256, approvedAs } : {}),
+            },
           },
           trx,
         );
@@ -134,7 +224,15 @@ export function reviewService(deps: {
           mailer.send({
             to: analyst.email,
             labId,
-            ...decisionMessage({ analystName: analyst.name, reviewer: actor.name, title: prep.title, version: number, decision: decision.kind, comment, link: deps.publicUrl(`/records/${preparationId}/v/${number}`) }),
+            ...decisionMessage({
+              analystName: analyst.name,
+              reviewer: actor.name,
+              title: prep.title,
+              version: number,
+              decision: decision.kind,
+              comment,
+              link: deps.publicUrl(`/records/${preparationId}/v/${number}`),
+            }),
           }),
         );
       }
@@ -183,13 +281,22 @@ export function reviewService(deps: {
       const computedSha256 = sha256Hex(version.snapshot_json);
       const approval = (await preparations.reviewsOf(version.id)).find((r) => r.action === 'approved');
       const approvedSha256 = approval?.snapshot_sha256 ?? null;
-      const snapshotIntact = computedSha256 === version.snapshot_sha256 && (approvedSha256 === null || approvedSha256 === computedSha256);
+      const snapshotIntact =
+        computedSha256 === version.snapshot_sha256 && (approvedSha256 === null || approvedSha256 === computedSha256);
       const approvedAs = approvedAsOf(version);
       const record =
         approvedAs || version.record_sha256 || approval?.record_sha256
-          ? { computedSha256: approvedAs ? approvedRecordSha256(computedSha256, approvedAs) : null, storedSha256: version.record_sha256, approvedSha256: approval?.record_sha256 ?? null }
+          ? {
+              computedSha256: approvedAs ? approvedRecordSha256(computedSha256, approvedAs) : null,
+              storedSha256: version.record_sha256,
+              approvedSha256: approval?.record_sha256 ?? null,
+            }
           : null;
-      const recordIntact = record === null || (record.computedSha256 !== null && record.computedSha256 === record.storedSha256 && record.computedSha256 === record.approvedSha256);
+      const recordIntact =
+        record === null ||
+        (record.computedSha256 !== null &&
+          record.computedSha256 === record.storedSha256 &&
+          record.computedSha256 === record.approvedSha256);
       const intact = snapshotIntact && recordIntact;
       return {
         computedSha256,

@@ -38,7 +38,17 @@ export function reviewsRepository(db: Db) {
         .join('version_reviews as r', (j) => j.on('r.version_id', 'v.id').andOnVal('r.action', '=', 'approved'))
         .join('users as u', 'u.id', 'r.actor_user_id')
         .where({ 'p.lab_id': labId, 'v.status': 'approved' })
-        .select('p.id as preparation_id', { title }, { analyte }, 'v.number', 'a.name as analyst', 'u.name as approved_by', 'r.at as approved_at', 'v.result_statement', 'v.snapshot_sha256')
+        .select(
+          'p.id as preparation_id',
+          { title },
+          { analyte },
+          'v.number',
+          'a.name as analyst',
+          'u.name as approved_by',
+          'r.at as approved_at',
+          'v.result_statement',
+          'v.snapshot_sha256',
+        )
         .orderBy('r.at', 'desc')
         .limit(500);
       // lower() … like lower(?) and whereILike are case-blind on SQLite and PostgreSQL alike.

@@ -9,7 +9,10 @@ import { isPostgres, type Db } from '../db/connection';
 export async function appendAuditEventsForTest(db: Db, events: ChainedEvent[]): Promise<void> {
   await db.transaction(async (trx) => {
     if (isPostgres(trx)) await trx.raw('select pg_advisory_xact_lock(hashtext(?))', ['dilutrace audit chain']);
-    const last: { event_hash: string } | undefined = await trx('audit_events').select('event_hash').orderBy('id', 'desc').first();
+    const last: { event_hash: string } | undefined = await trx('audit_events')
+      .select('event_hash')
+      .orderBy('id', 'desc')
+      .first();
     let previousHash = last?.event_hash ?? GENESIS_HASH;
     const rows = events.map((event) => {
       const eventHash = auditEventHash(event, previousHash);

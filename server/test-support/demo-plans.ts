@@ -9,7 +9,10 @@ export async function libraryByCode(client: Client, labId: number): Promise<Map<
 }
 
 /** Lead standard from the demo lead nitrate: 0.1599 g to 100 mL, then 10 mL to 100 mL (invented demo plan). */
-export function leadPlan(library: Map<string, EquipmentItem>, choice: { balance?: string; aliquotFlask?: string } = {}) {
+export function leadPlan(
+  library: Map<string, EquipmentItem>,
+  choice: { balance?: string; aliquotFlask?: string } = {},
+) {
   const use = (code: string) => toEngineEquipment(library.get(code)!);
   return {
     formatVersion: 1,
@@ -26,10 +29,21 @@ export function leadPlan(library: Map<string, EquipmentItem>, choice: { balance?
 }
 
 /** A demo lead standard planned by the analyst, submitted, and approved by QA; returns the preparation id. */
-export async function approvedLeadStandard(analyst: Client, qa: Client, labId: number, password: string): Promise<number> {
+export async function approvedLeadStandard(
+  analyst: Client,
+  qa: Client,
+  labId: number,
+  password: string,
+): Promise<number> {
   const library = await libraryByCode(analyst, labId);
-  const id = (await analyst.post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) }).expect(201)).body.id as number;
+  const id = (
+    await analyst
+      .post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) })
+      .expect(201)
+  ).body.id as number;
   await analyst.post(`/api/labs/${labId}/preparations/${id}/versions/1/submit`, {}).expect(200);
-  await qa.post(`/api/labs/${labId}/preparations/${id}/versions/1/approve`, { password, statement: 'Approved for use.' }).expect(200);
+  await qa
+    .post(`/api/labs/${labId}/preparations/${id}/versions/1/approve`, { password, statement: 'Approved for use.' })
+    .expect(200);
   return id;
 }

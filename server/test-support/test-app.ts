@@ -39,14 +39,27 @@ export const postgresUrl = process.env.DATABASE_URL;
  * file, or with DATABASE_URL set a new schema of its own on that PostgreSQL (dropped on close).
  */
 export async function buildTestApp(
-  options: { file?: string; schema?: string; seed?: boolean; clock?: ReturnType<typeof testClock>; config?: Partial<AppConfig>; wrapMailer?: (mailer: Mailer) => Mailer; computer?: Computer } = {},
+  options: {
+    file?: string;
+    schema?: string;
+    seed?: boolean;
+    clock?: ReturnType<typeof testClock>;
+    config?: Partial<AppConfig>;
+    wrapMailer?: (mailer: Mailer) => Mailer;
+    computer?: Computer;
+  } = {},
 ): Promise<TestApp> {
   const dir = options.file ? null : mkdtempSync(join(tmpdir(), 'dilutrace-test-'));
   const file = options.file ?? join(dir as string, 'test.sqlite');
   const schema = postgresUrl ? (options.schema ?? `test_${randomBytes(8).toString('hex')}`) : undefined;
   const clock = options.clock ?? testClock();
   const db = postgresUrl ? await openDatabase(postgresUrl, { schema }) : await openDatabase(file);
-  if (options.seed !== false) await seedDemoLab(db, { password: DEMO_PASSWORD, now: clock.now(), certificateDir: join(file, '..', 'certificates') });
+  if (options.seed !== false)
+    await seedDemoLab(db, {
+      password: DEMO_PASSWORD,
+      now: clock.now(),
+      certificateDir: join(file, '..', 'certificates'),
+    });
   const capture: CaptureServer = await startCaptureServer(db, () => clock.now());
   const mailer: Mailer = createSmtpMailer(`smtp://127.0.0.1:${capture.port}`, 'Dilutrace <no-reply@dilutrace.test>');
   const { app, close: closeApp } = createApp({
@@ -54,7 +67,15 @@ export async function buildTestApp(
     mailer: options.wrapMailer ? options.wrapMailer(mailer) : mailer,
     clock,
     computer: options.computer,
-    config: { certificateDir: join(file, '..', 'certificates'), sessionSecret: SESSION_SECRET, publicUrl: 'http://dilutrace.test', production: false, trustProxy: false, log: () => undefined, ...options.config },
+    config: {
+      certificateDir: join(file, '..', 'certificates'),
+      sessionSecret: SESSION_SECRET,
+      publicUrl: 'http://dilutrace.test',
+      production: false,
+      trustProxy: false,
+      log: () => undefined,
+      ...options.config,
+    },
   });
   const stop = async () => {
     await closeApp();
@@ -125,7 +146,11 @@ export const demo = (local: 'admin' | 'qa' | 'analyst' | 'analyst2' | 'auditor')
  * The token in the newest captured mail to `to` whose link path starts with `prefix`. Waits up to
  * two seconds for it: a reset link is mailed after the request has been answered.
  */
-export async function tokenFromOutbox(db: Db, to: string, prefix: '/invitation/' | '/reset-password/'): Promise<string> {
+export async function tokenFromOutbox(
+  db: Db,
+  to: string,
+  prefix: '/invitation/' | '/reset-password/',
+): Promise<string> {
   for (let waited = 0; ; waited += 20) {
     const rows: { to_address: string; text_body: string }[] = await db('outbox').orderBy('id', 'desc');
     const mail = rows.find((row) => row.to_address.includes(to) && row.text_body.includes(prefix));

@@ -27,7 +27,10 @@ export const auditQuerySchema = z
     limit: z.coerce.number().int().min(1).max(500).default(100),
     offset: z.coerce.number().int().min(0).default(0),
   })
-  .refine((q) => !q.from || !q.to || q.from <= q.to, { message: 'The start date is after the end date.', path: ['from'] });
+  .refine((q) => !q.from || !q.to || q.from <= q.to, {
+    message: 'The start date is after the end date.',
+    path: ['from'],
+  });
 export type AuditQuery = z.infer<typeof auditQuerySchema>;
 
 export const auditPageSchema = z.object({ events: z.array(auditEventSchema), total: z.number().int() });

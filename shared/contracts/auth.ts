@@ -57,4 +57,6 @@ export const passwordResetRequestSchema = z.object({ email: emailSchema });
 
 export const passwordResetCompleteSchema = z.object({ password: newPasswordSchema });
 
-export const tokenParamsSchema = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'This link is not valid.') });
+export const tokenParamsSchema = z.object({
+  token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'This link is not valid.'),
+});

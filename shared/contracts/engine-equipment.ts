@@ -1,12 +1,29 @@
-import type { Balance, CertifiedSolution, GlassPipette, PistonPipette, PlanInput, SolidMaterial, VolumetricFlask } from '../uncertainty';
-import type { BalanceData, EquipmentItem, GlasswareData, LabPolicy, PistonPipetteData, SolidMaterialData, SolutionMaterialData } from './library';
+import type {
+  Balance,
+  CertifiedSolution,
+  GlassPipette,
+  PistonPipette,
+  PlanInput,
+  SolidMaterial,
+  VolumetricFlask,
+} from '../uncertainty';
+import type {
+  BalanceData,
+  EquipmentItem,
+  GlasswareData,
+  LabPolicy,
+  PistonPipetteData,
+  SolidMaterialData,
+  SolutionMaterialData,
+} from './library';
 
 /**
  * Turns a library item's current revision into the engine's inline equipment, keeping the library
  * id and revision id so a stored plan says exactly which revision it used. Client (live budget) and
  * server (stored budget) both use this, so they compute from the same numbers.
  */
-export type EngineEquipment = Balance | VolumetricFlask | GlassPipette | PistonPipette | SolidMaterial | CertifiedSolution;
+export type EngineEquipment =
+  Balance | VolumetricFlask | GlassPipette | PistonPipette | SolidMaterial | CertifiedSolution;
 
 export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'code' | 'current'>): EngineEquipment {
   const refs = { itemId: item.code, libraryId: String(item.id), revisionId: String(item.current.id) };
@@ -22,7 +39,10 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         readabilityG: d.readabilityG,
         repeatabilityG: d.repeatabilityG,
         linearityG: d.linearityG,
-        sensitivity: { relativeExpandedUncertainty: d.sensitivityRelativeExpanded, coverageFactor: d.sensitivityCoverageFactor },
+        sensitivity: {
+          relativeExpandedUncertainty: d.sensitivityRelativeExpanded,
+          coverageFactor: d.sensitivityCoverageFactor,
+        },
       };
     }
     case 'flask':
@@ -47,7 +67,11 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         ...refs,
         description: d.description || undefined,
         volumeRangeUl: { minimumUl: d.minVolumeUl, maximumUl: d.maxVolumeUl },
-        errorSpecifications: d.points.map((p) => ({ volumeUl: p.volumeUl, systematicError: { absoluteUl: p.systematicErrorUl }, randomError: { absoluteUl: p.randomErrorUl } })),
+        errorSpecifications: d.points.map((p) => ({
+          volumeUl: p.volumeUl,
+          systematicError: { absoluteUl: p.systematicErrorUl },
+          randomError: { absoluteUl: p.randomErrorUl },
+        })),
         systematicErrorDistribution: 'rectangular',
         calibrationTemperatureC: 20,
       };
@@ -62,7 +86,10 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         formula: d.formula,
         purity: {
           massFraction: d.purity,
-          uncertainty: u.shape === 'normal' ? { shape: 'normal', expandedUncertainty: u.expandedUncertainty, coverageFactor: u.coverageFactor } : { shape: 'rectangular', halfWidth: u.halfWidth },
+          uncertainty:
+            u.shape === 'normal'
+              ? { shape: 'normal', expandedUncertainty: u.expandedUncertainty, coverageFactor: u.coverageFactor }
+              : { shape: 'rectangular', halfWidth: u.halfWidth },
         },
       };
     }
@@ -83,9 +110,12 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
 }
 
 /** The plan settings a lab's policy sets; the plan keeps its own output unit and lab temperature. */
-export function policySettings(policy: LabPolicy): Pick<PlanInput['settings'], 'coverage' | 'defaultGlasswareDistribution' | 'temperatureHalfRangeC'> {
+export function policySettings(
+  policy: LabPolicy,
+): Pick<PlanInput['settings'], 'coverage' | 'defaultGlasswareDistribution' | 'temperatureHalfRangeC'> {
   return {
-    coverage: policy.coverage.mode === 'probability' ? { probability: policy.coverage.probability } : { k: policy.coverage.k },
+    coverage:
+      policy.coverage.mode === 'probability' ? { probability: policy.coverage.probability } : { k: policy.coverage.k },
     defaultGlasswareDistribution: policy.glasswareDistribution,
     temperatureHalfRangeC: policy.temperatureHalfRangeC,
   };

@@ -74,19 +74,35 @@ const round = (value: number) => Number(value.toPrecision(6));
 export const GLASSWARE_TEMPLATES: GlasswareTemplate[] = [
   ...ISO_1042_CLASS_A.flatMap(([nominalMl, toleranceMl, provenance]): GlasswareTemplate[] => [
     { kind: 'flask', standard: 'ISO 1042', glassClass: 'A', nominalMl, toleranceMl, provenance },
-    { kind: 'flask', standard: 'ISO 1042', glassClass: 'B', nominalMl, toleranceMl: round(toleranceMl * CLASS_B_FACTOR), provenance: 'memory' },
+    {
+      kind: 'flask',
+      standard: 'ISO 1042',
+      glassClass: 'B',
+      nominalMl,
+      toleranceMl: round(toleranceMl * CLASS_B_FACTOR),
+      provenance: 'memory',
+    },
   ]),
   ...ISO_648_CLASS_A.flatMap(([nominalMl, toleranceMl]): GlasswareTemplate[] => [
     { kind: 'glass-pipette', standard: 'ISO 648', glassClass: 'A', nominalMl, toleranceMl, provenance: 'memory' },
-    { kind: 'glass-pipette', standard: 'ISO 648', glassClass: 'B', nominalMl, toleranceMl: round(toleranceMl * CLASS_B_FACTOR), provenance: 'memory' },
+    {
+      kind: 'glass-pipette',
+      standard: 'ISO 648',
+      glassClass: 'B',
+      nominalMl,
+      toleranceMl: round(toleranceMl * CLASS_B_FACTOR),
+      provenance: 'memory',
+    },
   ]),
 ];
 
-export const PISTON_TEMPLATES: PistonTemplate[] = ISO_8655_2.map(([nominalUl, systematicErrorUl, randomErrorUl, provenance]) => ({
-  kind: 'piston-pipette',
-  standard: 'ISO 8655-2',
-  nominalUl,
-  systematicErrorUl,
-  randomErrorUl,
-  provenance,
-}));
+export const PISTON_TEMPLATES: PistonTemplate[] = ISO_8655_2.map(
+  ([nominalUl, systematicErrorUl, randomErrorUl, provenance]) => ({
+    kind: 'piston-pipette',
+    standard: 'ISO 8655-2',
+    nominalUl,
+    systematicErrorUl,
+    randomErrorUl,
+    provenance,
+  }),
+);

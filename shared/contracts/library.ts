@@ -6,8 +6,17 @@ import { MAXIMUM_COVERAGE_FACTOR } from '../uncertainty/coverage-factor';
  * unit in its name. These schemas validate the API, the forms and each row of a CSV import.
  */
 
-export const EQUIPMENT_KINDS = ['balance', 'flask', 'glass-pipette', 'piston-pipette', 'solid-material', 'solution-material'] as const;
-export const equipmentKindSchema = z.enum(EQUIPMENT_KINDS, { message: `Choose a kind: ${EQUIPMENT_KINDS.join(', ')}.` });
+export const EQUIPMENT_KINDS = [
+  'balance',
+  'flask',
+  'glass-pipette',
+  'piston-pipette',
+  'solid-material',
+  'solution-material',
+] as const;
+export const equipmentKindSchema = z.enum(EQUIPMENT_KINDS, {
+  message: `Choose a kind: ${EQUIPMENT_KINDS.join(', ')}.`,
+});
 export type EquipmentKind = z.infer<typeof equipmentKindSchema>;
 
 export const KIND_LABELS: Record<EquipmentKind, string> = {
@@ -21,8 +30,10 @@ export const KIND_LABELS: Record<EquipmentKind, string> = {
 
 const finite = (what: string) =>
   z.number({ message: `Enter ${what} as a number.` }).refine(Number.isFinite, `Enter ${what} as a finite number.`);
-const positive = (what: string) => finite(what).refine((v) => v > 0, `${what[0].toUpperCase()}${what.slice(1)} must be greater than zero.`);
-const nonNegative = (what: string) => finite(what).refine((v) => v >= 0, `${what[0].toUpperCase()}${what.slice(1)} cannot be negative.`);
+const positive = (what: string) =>
+  finite(what).refine((v) => v > 0, `${what[0].toUpperCase()}${what.slice(1)} must be greater than zero.`);
+const nonNegative = (what: string) =>
+  finite(what).refine((v) => v >= 0, `${what[0].toUpperCase()}${what.slice(1)} cannot be negative.`);
 const isoDate = (what: string) => z.iso.date({ message: `Enter ${what} as a date (YYYY-MM-DD).` });
 const optionalText = (max: number) => z.string().trim().max(max, `Use at most ${max} characters.`).default('');
 
@@ -31,7 +42,10 @@ export const itemCodeSchema = z
   .trim()
   .min(1, 'Enter the ID or asset tag.')
   .max(40, 'Use at most 40 characters.')
-  .regex(/^[A-Za-z0-9][A-Za-z0-9 ._/-]*$/, 'Use letters, digits, spaces and . _ / - only, starting with a letter or digit.');
+  .regex(
+    /^[A-Za-z0-9][A-Za-z0-9 ._/-]*$/,
+    'Use letters, digits, spaces and . _ / - only, starting with a letter or digit.',
+  );
 
 const common = {
   code: itemCodeSchema,
@@ -46,9 +60,14 @@ const calibrationDates = {
 
 const datesInOrder = (value: { calibratedOn: string | null; calibrationDueOn: string | null }) =>
   !value.calibratedOn || !value.calibrationDueOn || value.calibrationDueOn >= value.calibratedOn;
-const DATES_ORDER_MESSAGE = { message: 'The due date must not be before the calibration date.', path: ['calibrationDueOn'] };
+const DATES_ORDER_MESSAGE = {
+  message: 'The due date must not be before the calibration date.',
+  path: ['calibrationDueOn'],
+};
 
-export const toleranceDistributionSchema = z.enum(['triangular', 'rectangular'], { message: 'Choose triangular or rectangular.' });
+export const toleranceDistributionSchema = z.enum(['triangular', 'rectangular'], {
+  message: 'Choose triangular or rectangular.',
+});
 export type ToleranceDistribution = z.infer<typeof toleranceDistributionSchema>;
 
 export const balanceDataSchema = z
@@ -63,11 +82,16 @@ export const balanceDataSchema = z
     sensitivityCoverageFactor: positive('the coverage factor k'),
     ...calibrationDates,
   })
-  .refine((v) => v.readabilityG < v.capacityG, { message: 'The readability must be smaller than the capacity.', path: ['readabilityG'] })
+  .refine((v) => v.readabilityG < v.capacityG, {
+    message: 'The readability must be smaller than the capacity.',
+    path: ['readabilityG'],
+  })
   .refine(datesInOrder, DATES_ORDER_MESSAGE);
 export type BalanceData = z.infer<typeof balanceDataSchema>;
 
-export const glasswareClassSchema = z.enum(['A', 'B', 'own'], { message: 'Choose class A, class B or own calibration.' });
+export const glasswareClassSchema = z.enum(['A', 'B', 'own'], {
+  message: 'Choose class A, class B or own calibration.',
+});
 
 const glasswareShape = {
   ...common,
@@ -77,14 +101,22 @@ const glasswareShape = {
   /** null: use the lab policy's default distribution for glassware tolerances. */
   toleranceDistribution: toleranceDistributionSchema.nullable().default(null),
   fillRepeatabilityMl: nonNegative('the fill repeatability'),
-  calibrationTemperatureC: finite('the calibration temperature').refine((v) => v >= 0 && v <= 40, 'Give a calibration temperature between 0 and 40 °C.').default(20),
+  calibrationTemperatureC: finite('the calibration temperature')
+    .refine((v) => v >= 0 && v <= 40, 'Give a calibration temperature between 0 and 40 °C.')
+    .default(20),
   ...calibrationDates,
 };
 const toleranceBelowNominal = (v: { toleranceMl: number; nominalMl: number }) => v.toleranceMl < v.nominalMl;
 const TOLERANCE_MESSAGE = { message: 'The tolerance must be smaller than the nominal volume.', path: ['toleranceMl'] };
 
-export const flaskDataSchema = z.object(glasswareShape).refine(toleranceBelowNominal, TOLERANCE_MESSAGE).refine(datesInOrder, DATES_ORDER_MESSAGE);
-export const glassPipetteDataSchema = z.object(glasswareShape).refine(toleranceBelowNominal, TOLERANCE_MESSAGE).refine(datesInOrder, DATES_ORDER_MESSAGE);
+export const flaskDataSchema = z
+  .object(glasswareShape)
+  .refine(toleranceBelowNominal, TOLERANCE_MESSAGE)
+  .refine(datesInOrder, DATES_ORDER_MESSAGE);
+export const glassPipetteDataSchema = z
+  .object(glasswareShape)
+  .refine(toleranceBelowNominal, TOLERANCE_MESSAGE)
+  .refine(datesInOrder, DATES_ORDER_MESSAGE);
 export type GlasswareData = z.infer<typeof flaskDataSchema>;
 
 /** One calibration point of a piston pipette: errors at a set volume (ISO 8655-2:2002 MPEs or the lab's own results). */
@@ -104,8 +136,14 @@ export const pistonPipetteDataSchema = z
     points: z.array(pistonPointSchema).min(1, 'Give the errors at one volume at least.').max(10),
     ...calibrationDates,
   })
-  .refine((v) => v.minVolumeUl <= v.maxVolumeUl, { message: 'The smallest volume must not exceed the nominal volume.', path: ['minVolumeUl'] })
-  .refine((v) => v.adjustable || v.minVolumeUl === v.maxVolumeUl, { message: 'A fixed-volume pipette has one volume: make both equal.', path: ['minVolumeUl'] })
+  .refine((v) => v.minVolumeUl <= v.maxVolumeUl, {
+    message: 'The smallest volume must not exceed the nominal volume.',
+    path: ['minVolumeUl'],
+  })
+  .refine((v) => v.adjustable || v.minVolumeUl === v.maxVolumeUl, {
+    message: 'A fixed-volume pipette has one volume: make both equal.',
+    path: ['minVolumeUl'],
+  })
   .refine((v) => v.points.every((p) => p.volumeUl >= v.minVolumeUl && p.volumeUl <= v.maxVolumeUl), {
     message: 'Every calibration volume must lie within the pipette’s range.',
     path: ['points'],
@@ -123,7 +161,11 @@ const materialCommon = {
 };
 
 export const purityUncertaintySchema = z.discriminatedUnion('shape', [
-  z.object({ shape: z.literal('normal'), expandedUncertainty: nonNegative('the expanded uncertainty'), coverageFactor: positive('the coverage factor k') }),
+  z.object({
+    shape: z.literal('normal'),
+    expandedUncertainty: nonNegative('the expanded uncertainty'),
+    coverageFactor: positive('the coverage factor k'),
+  }),
   z.object({ shape: z.literal('rectangular'), halfWidth: nonNegative('the half-width') }),
 ]);
 
@@ -133,13 +175,22 @@ export const solidMaterialDataSchema = z
     formula: z.string().trim().min(1, 'Enter the chemical formula, e.g. Pb(NO3)2.').max(80),
     /** Element or ion reported, e.g. 'Pb'; the stoichiometric factor comes from the formulas. */
     analyte: z.string().trim().min(1, 'Enter the analyte, e.g. Pb.').max(40),
-    purity: finite('the purity').refine((v) => v > 0 && v <= 1, 'Give the purity as a mass fraction between 0 and 1, e.g. 0.9998.'),
+    purity: finite('the purity').refine(
+      (v) => v > 0 && v <= 1,
+      'Give the purity as a mass fraction between 0 and 1, e.g. 0.9998.',
+    ),
     purityUncertainty: purityUncertaintySchema,
   })
-  .refine((v) => (v.purityUncertainty.shape === 'normal' ? v.purityUncertainty.expandedUncertainty : v.purityUncertainty.halfWidth) < v.purity, {
-    message: 'The purity’s uncertainty must be smaller than the purity.',
-    path: ['purityUncertainty'],
-  });
+  .refine(
+    (v) =>
+      (v.purityUncertainty.shape === 'normal'
+        ? v.purityUncertainty.expandedUncertainty
+        : v.purityUncertainty.halfWidth) < v.purity,
+    {
+      message: 'The purity’s uncertainty must be smaller than the purity.',
+      path: ['purityUncertainty'],
+    },
+  );
 export type SolidMaterialData = z.infer<typeof solidMaterialDataSchema>;
 
 export const certifiedUnitSchema = z.enum(['mg/L', 'mg/kg'], { message: 'Choose mg/L or mg/kg.' });
@@ -157,8 +208,14 @@ export const solutionMaterialDataSchema = z
     densityUncertaintyGPerMl: nonNegative('the density uncertainty').nullable().default(null),
     openedOn: isoDate('the date opened').nullable().default(null),
   })
-  .refine((v) => v.expandedUncertainty < v.certifiedValue, { message: 'The uncertainty must be smaller than the certified value.', path: ['expandedUncertainty'] })
-  .refine((v) => v.densityUncertaintyGPerMl === null || v.densityGPerMl !== null, { message: 'Give the density with its uncertainty.', path: ['densityGPerMl'] });
+  .refine((v) => v.expandedUncertainty < v.certifiedValue, {
+    message: 'The uncertainty must be smaller than the certified value.',
+    path: ['expandedUncertainty'],
+  })
+  .refine((v) => v.densityUncertaintyGPerMl === null || v.densityGPerMl !== null, {
+    message: 'Give the density with its uncertainty.',
+    path: ['densityGPerMl'],
+  });
 export type SolutionMaterialData = z.infer<typeof solutionMaterialDataSchema>;
 
 export const equipmentDataSchemas = {
@@ -179,7 +236,11 @@ export type EquipmentData = {
   'solution-material': SolutionMaterialData;
 };
 
-export const reasonSchema = z.string().trim().min(3, 'Say why, in a few words.').max(500, 'Use at most 500 characters.');
+export const reasonSchema = z
+  .string()
+  .trim()
+  .min(3, 'Say why, in a few words.')
+  .max(500, 'Use at most 500 characters.');
 
 export const equipmentCreateSchema = z.object({
   kind: equipmentKindSchema,
@@ -247,16 +308,31 @@ export const equipmentListQuerySchema = z.object({
 
 export const labPolicySchema = z.object({
   coverage: z.discriminatedUnion('mode', [
-    z.object({ mode: z.literal('probability'), probability: z.union([z.literal(0.9545), z.literal(0.95)], { message: 'Choose 95.45 % or 95 %.' }) }),
-    z.object({ mode: z.literal('fixed-k'), k: positive('the coverage factor k').refine((v) => v <= MAXIMUM_COVERAGE_FACTOR, `Give k at most ${MAXIMUM_COVERAGE_FACTOR}.`) }),
+    z.object({
+      mode: z.literal('probability'),
+      probability: z.union([z.literal(0.9545), z.literal(0.95)], { message: 'Choose 95.45 % or 95 %.' }),
+    }),
+    z.object({
+      mode: z.literal('fixed-k'),
+      k: positive('the coverage factor k').refine(
+        (v) => v <= MAXIMUM_COVERAGE_FACTOR,
+        `Give k at most ${MAXIMUM_COVERAGE_FACTOR}.`,
+      ),
+    }),
   ]),
   glasswareDistribution: toleranceDistributionSchema,
-  temperatureHalfRangeC: positive('the temperature half-range').refine((v) => v <= 20, 'Give a half-range of at most 20 °C.'),
+  temperatureHalfRangeC: positive('the temperature half-range').refine(
+    (v) => v <= 20,
+    'Give a half-range of at most 20 °C.',
+  ),
   minimumWeightRule: z.boolean(),
 });
 export type LabPolicy = z.infer<typeof labPolicySchema>;
 
-export const labPolicyResponseSchema = labPolicySchema.extend({ updatedAt: z.string().nullable(), updatedBy: z.string().nullable() });
+export const labPolicyResponseSchema = labPolicySchema.extend({
+  updatedAt: z.string().nullable(),
+  updatedBy: z.string().nullable(),
+});
 
 /** The policy of a lab that has not set one (common practice for a lab kept at 20 ± 4 °C). */
 export const DEFAULT_LAB_POLICY: LabPolicy = {

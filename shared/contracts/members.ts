@@ -64,7 +64,9 @@ export type InvitationAccept = z.infer<typeof invitationAcceptSchema>;
 /** A lab admin changes a member's roles in their lab; accounts are switched off only by the operator. */
 export const memberUpdateSchema = z.object({
   active: z
-    .undefined({ error: 'A lab administrator changes roles only. To take someone out of this lab, remove them from it.' })
+    .undefined({
+      error: 'A lab administrator changes roles only. To take someone out of this lab, remove them from it.',
+    })
     .optional(),
   roles: z.array(roleSchema, { error: 'Choose at least one role.' }).min(1, 'Give the member at least one role.'),
 });

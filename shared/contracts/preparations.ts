@@ -16,7 +16,11 @@ export const PREPARATION_STATUSES = ['draft', 'prepared', 'submitted', 'approved
 export const preparationStatusSchema = z.enum(PREPARATION_STATUSES);
 export type PreparationStatus = z.infer<typeof preparationStatusSchema>;
 
-export const titleSchema = z.string().trim().min(1, 'Give the preparation a title.').max(200, 'Use at most 200 characters.');
+export const titleSchema = z
+  .string()
+  .trim()
+  .min(1, 'Give the preparation a title.')
+  .max(200, 'Use at most 200 characters.');
 
 /** Using an overdue or expired item needs a recorded reason. */
 export const overrideSchema = z.object({
@@ -48,7 +52,10 @@ export const preparationListQuerySchema = z.object({
 /** A mass actually weighed at the bench for one step (the planned value stays in the record). */
 export const readingSchema = z.object({
   stepIndex: z.number().int().min(0),
-  actualMassG: z.number().positive('The mass weighed must be greater than zero.').refine(Number.isFinite, 'Enter the mass as a number.'),
+  actualMassG: z
+    .number()
+    .positive('The mass weighed must be greater than zero.')
+    .refine(Number.isFinite, 'Enter the mass as a number.'),
   tareG: z.number().nonnegative().optional(),
   grossG: z.number().positive().optional(),
 });
@@ -141,7 +148,11 @@ export const routeFinderRequestSchema = z.object({
     value: z.number().positive('The target must be greater than zero.'),
     unit: z.enum(concentrationUnitNames, { message: `Choose a unit: ${concentrationUnitNames.join(', ')}.` }),
   }),
-  analyte: z.string().trim().min(1, 'Enter the analyte, e.g. Pb.').max(MAXIMUM_FORMULA_LENGTH, `Write the analyte in at most ${MAXIMUM_FORMULA_LENGTH} characters.`),
+  analyte: z
+    .string()
+    .trim()
+    .min(1, 'Enter the analyte, e.g. Pb.')
+    .max(MAXIMUM_FORMULA_LENGTH, `Write the analyte in at most ${MAXIMUM_FORMULA_LENGTH} characters.`),
   materialLibraryId: z.string().min(1, 'Choose the reference material.'),
   maximumDilutions: z.number().int().min(0).max(3).default(3),
   limit: z.number().int().min(1).max(50).default(10),
@@ -152,5 +163,10 @@ export const computeRequestSchema = z.object({
   plan: z.record(z.string(), z.unknown()),
   overrides: z.array(overrideSchema).max(50).default([]),
   seed: seedSchema.default(1),
-  trials: z.number().int().min(1000, 'Use at least 1000 trials.').max(MAXIMUM_MONTE_CARLO_TRIALS, 'Use at most 10⁶ trials.').default(100_000),
+  trials: z
+    .number()
+    .int()
+    .min(1000, 'Use at least 1000 trials.')
+    .max(MAXIMUM_MONTE_CARLO_TRIALS, 'Use at most 10⁶ trials.')
+    .default(100_000),
 });

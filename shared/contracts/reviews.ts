@@ -15,12 +15,21 @@ export const reviewSchema = z.object({
 export type Review = z.infer<typeof reviewSchema>;
 
 /** What an approved version showed when it was signed (frozen with the signature). */
-export const approvedAsSchema = z.object({ title: z.string(), analyte: z.string(), preparationName: z.string(), labName: z.string() });
+export const approvedAsSchema = z.object({
+  title: z.string(),
+  analyte: z.string(),
+  preparationName: z.string(),
+  labName: z.string(),
+});
 export type ApprovedAsView = z.infer<typeof approvedAsSchema>;
 
 export const submitRequestSchema = z.object({ comment: z.string().trim().max(2000).default('') });
 export const returnRequestSchema = z.object({
-  comment: z.string().trim().min(3, 'Tell the analyst what to change, in a few words.').max(4000, 'Use at most 4000 characters.'),
+  comment: z
+    .string()
+    .trim()
+    .min(3, 'Tell the analyst what to change, in a few words.')
+    .max(4000, 'Use at most 4000 characters.'),
 });
 /** Approval is signed: the reviewer re-enters their password and states what they approve. */
 export const approveRequestSchema = z.object({
@@ -60,7 +69,11 @@ export const snapshotVerificationSchema = z.object({
   approvedSha256: z.string().nullable(),
   /** The record hash over the frozen fields (null for versions approved before they were frozen). */
   record: z
-    .object({ computedSha256: z.string().nullable(), storedSha256: z.string().nullable(), approvedSha256: z.string().nullable() })
+    .object({
+      computedSha256: z.string().nullable(),
+      storedSha256: z.string().nullable(),
+      approvedSha256: z.string().nullable(),
+    })
     .nullable()
     .default(null),
   intact: z.boolean(),

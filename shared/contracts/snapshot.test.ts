@@ -2,13 +2,24 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { describe, expect, expectTypeOf, it } from 'vitest';
 import type { z } from 'zod';
-import { evaluatePlan, parsePlan, runMonteCarlo, validateAgainstGum, type BudgetResult, type GumValidation, type MonteCarloResult, type PlanInput } from '../uncertainty';
+import {
+  evaluatePlan,
+  parsePlan,
+  runMonteCarlo,
+  validateAgainstGum,
+  type BudgetResult,
+  type GumValidation,
+  type MonteCarloResult,
+  type PlanInput,
+} from '../uncertainty';
 import { degreesOfFreedomSchema, storedNumberSchema } from './json-number';
 import { budgetSchema, monteCarloSchema, snapshotSchema, validationSchema, type Snapshot } from './snapshot';
 
 const fixtures = new URL('../../tests/fixtures/', import.meta.url);
 const readJson = <T>(relative: string): T => JSON.parse(readFileSync(new URL(relative, fixtures), 'utf8')) as T;
-const stored = readJson<{ snapshotSha256: string; snapshotJson: string }>('snapshots/lead-standard-stored-before-typing.json');
+const stored = readJson<{ snapshotSha256: string; snapshotJson: string }>(
+  'snapshots/lead-standard-stored-before-typing.json',
+);
 const leadPlan = readJson<PlanInput>('plans/lead-standard-from-nitrate.json');
 
 /** A snapshot as the server computes one (no library items: the plan file carries its equipment inline). */
@@ -16,17 +27,35 @@ function computed(input: PlanInput, seed = 11): Snapshot {
   const plan = parsePlan(input);
   const budget = evaluatePlan(plan);
   const monteCarlo = runMonteCarlo(plan, { seed, trials: 2000 });
-  return { engineVersion: budget.engineVersion, computedAt: '2026-12-03T10:00:00.000Z', seed, trials: 2000, plan, items: [], budget, monteCarlo, validation: validateAgainstGum(budget, monteCarlo), warnings: budget.warnings };
+  return {
+    engineVersion: budget.engineVersion,
+    computedAt: '2026-12-03T10:00:00.000Z',
+    seed,
+    trials: 2000,
+    plan,
+    items: [],
+    budget,
+    monteCarlo,
+    validation: validateAgainstGum(budget, monteCarlo),
+    warnings: budget.warnings,
+  };
 }
 
 /** The lead plan with a dominant Type A source of 8 degrees of freedom, so that ν_eff ≈ 8.7 (Welch–Satterthwaite). */
 function leadPlanWithTypeASource(): PlanInput {
   const plan = structuredClone(leadPlan) as PlanInput & { steps: Record<string, unknown>[] };
-  plan.steps[0].extraSources = [{ name: 'Drift between weighings', effect: 'relative', distribution: { shape: 'normal', standardUncertainty: 0.0285, degreesOfFreedom: 8 } }];
+  plan.steps[0].extraSources = [
+    {
+      name: 'Drift between weighings',
+      effect: 'relative',
+      distribution: { shape: 'normal', standardUncertainty: 0.0285, degreesOfFreedom: 8 },
+    },
+  ];
   return plan;
 }
 
-const throughJson = (snapshot: Snapshot): Snapshot => snapshotSchema.decode(JSON.parse(JSON.stringify(snapshotSchema.encode(snapshot))));
+const throughJson = (snapshot: Snapshot): Snapshot =>
+  snapshotSchema.decode(JSON.parse(JSON.stringify(snapshotSchema.encode(snapshot))));
 
 describe('the stored snapshot schemas', () => {
   it('describe exactly the engine’s result types', () => {
@@ -91,10 +120,18 @@ describe('a snapshot stored before snapshots were typed (tests/fixtures/snapshot
     const snapshot = snapshotSchema.parse(JSON.parse(stored.snapshotJson));
     expect(snapshot.budget.effectiveDegreesOfFreedom).toBe(Infinity);
     expect(snapshot.budget.rows.length).toBeGreaterThan(5);
-    expect(snapshot.budget.rows.filter((row) => row.degreesOfFreedom === Infinity).length).toBe(snapshot.budget.rows.length);
+    expect(snapshot.budget.rows.filter((row) => row.degreesOfFreedom === Infinity).length).toBe(
+      snapshot.budget.rows.length,
+    );
     expect(snapshot.budget.statement).toMatch(/^c\(Pb\) = \(\d+\.\d+ ± \d+\.\d+\) mg\/L, k = 2\.00/);
     expect(snapshot.monteCarlo.trials).toBe(200_000);
-    expect(snapshot.items.map((item) => item.code).sort()).toEqual(['BAL-05', 'GP-10-A', 'RM-PBN-01', 'VF-100-A', 'VF-100-B']);
+    expect(snapshot.items.map((item) => item.code).sort()).toEqual([
+      'BAL-05',
+      'GP-10-A',
+      'RM-PBN-01',
+      'VF-100-A',
+      'VF-100-B',
+    ]);
   });
 
   it('keeps every field it was stored with when decoded and encoded again; only the spelling of ∞ changes', () => {
@@ -107,4 +144,8 @@ describe('a snapshot stored before snapshots were typed (tests/fixtures/snapshot
 
 /** JSON with object keys sorted at every depth, as the server stores snapshots (server/lib/canonical-json.ts). */
 const sortedKeysJson = (value: unknown): string =>
-  JSON.stringify(value, (_key, v: unknown) => (v && typeof v === 'object' && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) : v));
+  JSON.stringify(value, (_key, v: unknown) =>
+    v && typeof v === 'object' && !Array.isArray(v)
+      ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)))
+      : v,
+  );

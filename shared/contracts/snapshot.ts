@@ -46,7 +46,13 @@ const budgetRowSchema = z.object({
 
 const budgetGroupSchema = z.object({ key: z.string(), label: z.string(), contribution: number, indexPercent: number });
 
-const roundedResultSchema = z.object({ value: number, uncertainty: number, decimals: z.number().int(), valueText: z.string(), uncertaintyText: z.string() });
+const roundedResultSchema = z.object({
+  value: number,
+  uncertainty: number,
+  decimals: z.number().int(),
+  valueText: z.string(),
+  uncertaintyText: z.string(),
+});
 
 /** The GUM budget (engine: BudgetResult). */
 export const budgetSchema = z.object({
@@ -64,7 +70,9 @@ export const budgetSchema = z.object({
   rows: z.array(budgetRowSchema),
   byStep: z.array(budgetGroupSchema),
   byCategory: z.array(budgetGroupSchema),
-  checkpoints: z.array(z.object({ stepIndex, label: z.string(), value: number, unit: z.string(), standardUncertainty: number })),
+  checkpoints: z.array(
+    z.object({ stepIndex, label: z.string(), value: number, unit: z.string(), standardUncertainty: number }),
+  ),
   rounded: roundedResultSchema,
   statement: z.string(),
   warnings: z.array(z.string()),
@@ -85,7 +93,14 @@ export const monteCarloSchema = z.object({
   symmetricInterval: intervalSchema,
   shortestInterval: intervalSchema,
   histogram: z.object({ lowerEdge: number, binWidth: number, counts: z.array(z.number().int()) }),
-  adaptive: z.object({ converged: z.boolean(), batches: z.number().int(), batchSize: z.number().int(), numericalTolerance: number }).optional(),
+  adaptive: z
+    .object({
+      converged: z.boolean(),
+      batches: z.number().int(),
+      batchSize: z.number().int(),
+      numericalTolerance: number,
+    })
+    .optional(),
 });
 
 /** The JCGM 101 §8 comparison of the GUM interval with the Monte Carlo one (engine: GumValidation). */

@@ -39,7 +39,10 @@ Tl [204.382,204.385]; Pb [206.14,207.94]; Bi 208.98040(1); Th 232.0377(4); Pa 23
  */
 export function parseAtomicWeightTable(text: string): AtomicWeightTable {
   const table: Record<string, AtomicWeight> = {};
-  for (const entry of text.split(';').map((part) => part.trim()).filter(Boolean)) {
+  for (const entry of text
+    .split(';')
+    .map((part) => part.trim())
+    .filter(Boolean)) {
     const interval = /^([A-Z][a-z]?)\s+\[([\d.]+),\s*([\d.]+)\]$/.exec(entry);
     const bracketed = /^([A-Z][a-z]?)\s+(\d+)\.(\d+)\((\d+)\)$/.exec(entry);
     if (interval) {
@@ -63,10 +66,17 @@ export function parseAtomicWeightTable(text: string): AtomicWeightTable {
 export const standardAtomicWeights: AtomicWeightTable = parseAtomicWeightTable(ciaaw2021);
 
 /** The atomic weight of an element; @throws PlanError for a symbol the table does not hold. */
-export function atomicWeightOf(symbol: string, path: PlanPathSegment[], table: AtomicWeightTable = standardAtomicWeights): AtomicWeight {
+export function atomicWeightOf(
+  symbol: string,
+  path: PlanPathSegment[],
+  table: AtomicWeightTable = standardAtomicWeights,
+): AtomicWeight {
   const weight = table[symbol];
   if (weight === undefined) {
-    throw new PlanError(path, `"${symbol}" is not an element with a standard atomic weight; check the spelling and capitals (e.g. Pb, Cl, Se).`);
+    throw new PlanError(
+      path,
+      `"${symbol}" is not an element with a standard atomic weight; check the spelling and capitals (e.g. Pb, Cl, Se).`,
+    );
   }
   return weight;
 }

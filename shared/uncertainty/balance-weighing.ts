@@ -23,7 +23,10 @@ export function weighByDifference(
   const { builder, stepIndex, path } = context;
   const name = itemLabel('Balance', balance.itemId);
   if (containerMassG + netMassG > balance.capacityG) {
-    throw new PlanError([...path, massField], `${name} holds at most ${balance.capacityG} g; container ${containerMassG} g plus ${netMassG} g is more.`);
+    throw new PlanError(
+      [...path, massField],
+      `${name} holds at most ${balance.capacityG} g; container ${containerMassG} g plus ${netMassG} g is more.`,
+    );
   }
   const minimum = minimumWeightG(balance.repeatabilityG, balance.readabilityG);
   if (netMassG < minimum) {
@@ -33,8 +36,18 @@ export function weighByDifference(
   }
   const readingErrors = (reading: 'gross' | 'tare') => {
     const parts: [string, SourceCategory, Distribution, number][] = [
-      ['repeatability', 'balanceRepeatability', { shape: 'normal', standardUncertainty: balance.repeatabilityG }, balance.repeatabilityG],
-      ['readability', 'balanceReadability', { shape: 'rectangular', halfWidth: balance.readabilityG / 2 }, balance.readabilityG],
+      [
+        'repeatability',
+        'balanceRepeatability',
+        { shape: 'normal', standardUncertainty: balance.repeatabilityG },
+        balance.repeatabilityG,
+      ],
+      [
+        'readability',
+        'balanceReadability',
+        { shape: 'rectangular', halfWidth: balance.readabilityG / 2 },
+        balance.readabilityG,
+      ],
       ['linearity', 'balanceLinearity', { shape: 'rectangular', halfWidth: balance.linearityG }, balance.linearityG],
     ];
     return parts
@@ -65,7 +78,11 @@ export function weighByDifference(
       category: 'balanceSensitivity',
       estimate: 0,
       unit: '1',
-      distribution: { shape: 'normal', expandedUncertainty: sensitivity.relativeExpandedUncertainty, coverageFactor: sensitivity.coverageFactor },
+      distribution: {
+        shape: 'normal',
+        expandedUncertainty: sensitivity.relativeExpandedUncertainty,
+        coverageFactor: sensitivity.coverageFactor,
+      },
       sharing: 'item',
       itemId: balance.itemId,
       stepIndex,

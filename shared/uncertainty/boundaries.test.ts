@@ -21,7 +21,9 @@ describe('shared/uncertainty boundaries', () => {
     const offenders: string[] = [];
     for (const file of sourceFiles(folder)) {
       const text = readFileSync(file, 'utf8');
-      for (const match of text.matchAll(/(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)|require\(\s*['"]([^'"]+)['"]\s*\)/g)) {
+      for (const match of text.matchAll(
+        /(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)|require\(\s*['"]([^'"]+)['"]\s*\)/g,
+      )) {
         const specifier = match[1] ?? match[2] ?? match[3];
         const allowed = specifier.startsWith('.') || specifier === 'zod';
         if (!allowed || forbidden.test(specifier)) offenders.push(`${file}: ${specifier}`);

@@ -4,7 +4,9 @@ import { parseAtomicWeightTable, standardAtomicWeights } from './atomic-weights'
 import { molarMass, parseFormula } from './chemical-formula';
 import { PlanError } from './plan-error';
 
-const handbook = JSON.parse(readFileSync(new URL('../../tests/fixtures/engine/handbook-molar-masses.json', import.meta.url), 'utf8')) as {
+const handbook = JSON.parse(
+  readFileSync(new URL('../../tests/fixtures/engine/handbook-molar-masses.json', import.meta.url), 'utf8'),
+) as {
   cases: { formula: string; molarMassGPerMol: number; printedDecimals: number; note?: string }[];
 };
 

@@ -14,14 +14,24 @@ export type Composition = ReadonlyMap<string, number>;
  * @throws PlanError for an unknown element, unbalanced parentheses, or a formula beyond those caps
  * @example parseFormula('CuSO4·5H2O') // Map { Cu → 1, S → 1, O → 9, H → 10 }
  */
-export function parseFormula(formula: string, path: PlanPathSegment[] = ['formula'], table: AtomicWeightTable = standardAtomicWeights): Composition {
+export function parseFormula(
+  formula: string,
+  path: PlanPathSegment[] = ['formula'],
+  table: AtomicWeightTable = standardAtomicWeights,
+): Composition {
   const text = formula.replace(/\s+/g, '');
   if (text.length === 0) throw new PlanError(path, 'The formula is empty.');
   if (text.length > MAXIMUM_FORMULA_LENGTH) {
-    throw new PlanError(path, `A formula can have at most ${MAXIMUM_FORMULA_LENGTH} characters; this one has ${text.length}.`);
+    throw new PlanError(
+      path,
+      `A formula can have at most ${MAXIMUM_FORMULA_LENGTH} characters; this one has ${text.length}.`,
+    );
   }
   if (nestingDepth(text) > MAXIMUM_FORMULA_NESTING) {
-    throw new PlanError(path, `"${text}" nests brackets more than ${MAXIMUM_FORMULA_NESTING} deep; a formula can nest them at most ${MAXIMUM_FORMULA_NESTING} levels.`);
+    throw new PlanError(
+      path,
+      `"${text}" nests brackets more than ${MAXIMUM_FORMULA_NESTING} deep; a formula can nest them at most ${MAXIMUM_FORMULA_NESTING} levels.`,
+    );
   }
   const total = new Map<string, number>();
   for (const part of text.split(/[·•.*]/)) {
@@ -30,7 +40,8 @@ export function parseFormula(formula: string, path: PlanPathSegment[] = ['formul
     const multiplier = leading ? Number(leading[1]) : 1;
     const body = leading ? leading[2] : part;
     const { composition, end } = parseGroup(body, 0, formula, path, table);
-    if (end !== body.length) throw new PlanError(path, `"${formula}" has a closing parenthesis without an opening one.`);
+    if (end !== body.length)
+      throw new PlanError(path, `"${formula}" has a closing parenthesis without an opening one.`);
     for (const [symbol, count] of composition) total.set(symbol, (total.get(symbol) ?? 0) + count * multiplier);
   }
   return total;
@@ -47,7 +58,13 @@ function nestingDepth(text: string): number {
   return deepest;
 }
 
-function parseGroup(text: string, start: number, formula: string, path: PlanPathSegment[], table: AtomicWeightTable): { composition: Map<string, number>; end: number } {
+function parseGroup(
+  text: string,
+  start: number,
+  formula: string,
+  path: PlanPathSegment[],
+  table: AtomicWeightTable,
+): { composition: Map<string, number>; end: number } {
   const composition = new Map<string, number>();
   let position = start;
   const readCount = () => {
@@ -61,15 +78,21 @@ function parseGroup(text: string, start: number, formula: string, path: PlanPath
     if (character === '(' || character === '[') {
       const inner = parseGroup(text, position + 1, formula, path, table);
       const closing = text[inner.end];
-      if (closing !== (character === '(' ? ')' : ']')) throw new PlanError(path, `"${formula}" has an unclosed "${character}".`);
+      if (closing !== (character === '(' ? ')' : ']'))
+        throw new PlanError(path, `"${formula}" has an unclosed "${character}".`);
       position = inner.end + 1;
       const count = readCount();
-      for (const [symbol, atoms] of inner.composition) composition.set(symbol, (composition.get(symbol) ?? 0) + atoms * count);
+      for (const [symbol, atoms] of inner.composition)
+        composition.set(symbol, (composition.get(symbol) ?? 0) + atoms * count);
     } else if (character === ')' || character === ']') {
       return { composition, end: position };
     } else {
       const match = /^[A-Z][a-z]?/.exec(text.slice(position));
-      if (!match) throw new PlanError(path, `"${formula}" cannot be read at "${text.slice(position)}"; write element symbols with a capital first letter.`);
+      if (!match)
+        throw new PlanError(
+          path,
+          `"${formula}" cannot be read at "${text.slice(position)}"; write element symbols with a capital first letter.`,
+        );
       atomicWeightOf(match[0], path, table);
       position += match[0].length;
       const count = readCount();
@@ -93,14 +116,18 @@ export interface MolarMass {
  * @throws PlanError for an unknown element
  * @example molarMass('NaCl').valueGPerMol // 58.44127
  */
-export function molarMass(formula: string, table: AtomicWeightTable = standardAtomicWeights, path: PlanPathSegment[] = ['formula']): MolarMass {
+export function molarMass(
+  formula: string,
+  table: AtomicWeightTable = standardAtomicWeights,
+  path: PlanPathSegment[] = ['formula'],
+): MolarMass {
   const composition = parseFormula(formula, path, table);
   let value = 0;
   let variance = 0;
   for (const [symbol, count] of composition) {
     const weight = atomicWeightOf(symbol, path, table);
     value += count * weight.value;
-    variance += (count * weight.halfWidth / Math.sqrt(3)) ** 2;
+    variance += ((count * weight.halfWidth) / Math.sqrt(3)) ** 2;
   }
   return { valueGPerMol: value, standardUncertaintyGPerMol: Math.sqrt(variance), composition };
 }

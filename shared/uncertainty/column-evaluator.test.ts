@@ -20,7 +20,16 @@ function modelOf(nodes: TapeNode[], sourceCount: number, outputNode = nodes.leng
     sharing: 'use',
     stepIndices: [0],
   };
-  return { modelFormat: 'dilutrace-model/1', sources: Array.from({ length: sourceCount }, () => source), nodes, outputNode, outputUnit: '1', measurand: 'Y', checkpoints: [], warnings: [] };
+  return {
+    modelFormat: 'dilutrace-model/1',
+    sources: Array.from({ length: sourceCount }, () => source),
+    nodes,
+    outputNode,
+    outputUnit: '1',
+    measurand: 'Y',
+    checkpoints: [],
+    warnings: [],
+  };
 }
 
 /** The definition: the tape evaluated node by node for one trial, in plain IEEE double arithmetic. */
@@ -31,7 +40,14 @@ function evaluateNodeByNode(nodes: TapeNode[], outputNode: number, sourceValues:
     else if (node.operation === 'constant') values[index] = node.value;
     else {
       const [left, right] = [values[node.left], values[node.right]];
-      values[index] = node.operation === 'add' ? left + right : node.operation === 'subtract' ? left - right : node.operation === 'multiply' ? left * right : left / right;
+      values[index] =
+        node.operation === 'add'
+          ? left + right
+          : node.operation === 'subtract'
+            ? left - right
+            : node.operation === 'multiply'
+              ? left * right
+              : left / right;
     }
   });
   return values[outputNode];
@@ -60,27 +76,42 @@ describe('ColumnEvaluator (compiled chains) against the tape evaluated node by n
     for (let model = 0; model < 200; model += 1) {
       const sourceCount = 1 + Math.floor(random.nextUniform() * 5);
       const nodes = randomTape(random, sourceCount, 1 + Math.floor(random.nextUniform() * 14));
-      const outputNode = random.nextUniform() < 0.9 ? nodes.length - 1 : Math.floor(random.nextUniform() * nodes.length);
+      const outputNode =
+        random.nextUniform() < 0.9 ? nodes.length - 1 : Math.floor(random.nextUniform() * nodes.length);
       const chunkSize = 7;
       const evaluator = new ColumnEvaluator(modelOf(nodes, sourceCount, outputNode), chunkSize);
       const trials = Array.from({ length: chunkSize }, (_, trial) =>
-        Array.from({ length: sourceCount }, () => (trial === 0 ? 0 : trial === 1 ? -0 : (random.nextUniform() - 0.5) * 10 ** Math.floor(random.nextUniform() * 6))),
+        Array.from({ length: sourceCount }, () =>
+          trial === 0
+            ? 0
+            : trial === 1
+              ? -0
+              : (random.nextUniform() - 0.5) * 10 ** Math.floor(random.nextUniform() * 6),
+        ),
       );
-      trials.forEach((values, trial) => values.forEach((value, source) => (evaluator.sourceColumns[source][trial] = value)));
+      trials.forEach((values, trial) =>
+        values.forEach((value, source) => (evaluator.sourceColumns[source][trial] = value)),
+      );
       const count = 1 + Math.floor(random.nextUniform() * chunkSize);
       const target = new Float64Array(count + 3);
       evaluator.evaluate(count, target, 3);
       const returned = evaluator.evaluate(count);
       for (let trial = 0; trial < count; trial += 1) {
         const expected = evaluateNodeByNode(nodes, outputNode, trials[trial]);
-        expect(Object.is(target[3 + trial], expected), `model ${model}, trial ${trial}: ${target[3 + trial]} vs ${expected}`).toBe(true);
+        expect(
+          Object.is(target[3 + trial], expected),
+          `model ${model}, trial ${trial}: ${target[3 + trial]} vs ${expected}`,
+        ).toBe(true);
         expect(Object.is(returned[trial], expected)).toBe(true);
       }
     }
   });
 
   it('copies an output that is a source or a constant, −0 included', () => {
-    const nodes: TapeNode[] = [{ operation: 'source', sourceIndex: 0 }, { operation: 'constant', value: -0 }];
+    const nodes: TapeNode[] = [
+      { operation: 'source', sourceIndex: 0 },
+      { operation: 'constant', value: -0 },
+    ];
     const fromSource = new ColumnEvaluator(modelOf(nodes, 1, 0), 4);
     fromSource.sourceColumns[0].set([-0, 1, 2, 3]);
     expect(Array.from(fromSource.evaluate(4))).toEqual([-0, 1, 2, 3]);

@@ -56,7 +56,8 @@ export class ColumnEvaluator {
       if (node.operation === 'source' || node.operation === 'constant') return;
       const left = constants[node.left];
       const right = constants[node.right];
-      if (left !== undefined && right !== undefined) constants[index] = combine(operationCode[node.operation], left, right);
+      if (left !== undefined && right !== undefined)
+        constants[index] = combine(operationCode[node.operation], left, right);
     });
     const isComputed = (index: number) => isOperation(index) && constants[index] === undefined;
 
@@ -66,7 +67,8 @@ export class ColumnEvaluator {
     needed[outputNode] = true;
     for (let index = outputNode; index >= 0; index -= 1) {
       const node = nodes[index];
-      if (!needed[index] || !isComputed(index) || node.operation === 'source' || node.operation === 'constant') continue;
+      if (!needed[index] || !isComputed(index) || node.operation === 'source' || node.operation === 'constant')
+        continue;
       needed[node.left] = needed[node.right] = true;
       uses[node.left] += 1;
       uses[node.right] += 1;
@@ -81,7 +83,8 @@ export class ColumnEvaluator {
     };
     for (let index = 0; index <= outputNode; index += 1) {
       const node = nodes[index];
-      if (!needed[index] || !isComputed(index) || node.operation === 'source' || node.operation === 'constant') continue;
+      if (!needed[index] || !isComputed(index) || node.operation === 'source' || node.operation === 'constant')
+        continue;
       const code = operationCode[node.operation];
       const reversed = code === subtract ? subtractFrom : code === divide ? divideInto : code;
       if (canContinue(node.left, code)) {
@@ -125,7 +128,13 @@ export class ColumnEvaluator {
     }
     // An output that is a source or a constant: one pass that copies it (x + 0 would turn −0 into +0).
     if (this.program.length === 0) {
-      this.program.push({ operations: [], operands: [columnOf(outputNode)], out: new Float64Array(chunkSize), operandSigns: [], runningSigns: [] });
+      this.program.push({
+        operations: [],
+        operands: [columnOf(outputNode)],
+        out: new Float64Array(chunkSize),
+        operandSigns: [],
+        runningSigns: [],
+      });
     }
   }
 
@@ -144,9 +153,28 @@ export class ColumnEvaluator {
       if (length === 0) copy(out, start, x[0], count);
       else if (length === 1) single(operations[0], out, start, x[0], x[1], count);
       else if (length === 2) pair(operations[0], operations[1], out, start, x[0], x[1], x[2], count);
-      else if (operations[0] === multiply) product(out, start, x[0], x[1], x[2], x[3], length === 4 ? x[4] : undefined, count);
-      else if (length === 3) signedSumOfThree(out, start, x[0], sign[0], x[1], keep[1], sign[1], x[2], keep[2], sign[2], x[3], count);
-      else signedSumOfFour(out, start, x[0], sign[0], x[1], keep[1], sign[1], x[2], keep[2], sign[2], x[3], keep[3], sign[3], x[4], count);
+      else if (operations[0] === multiply)
+        product(out, start, x[0], x[1], x[2], x[3], length === 4 ? x[4] : undefined, count);
+      else if (length === 3)
+        signedSumOfThree(out, start, x[0], sign[0], x[1], keep[1], sign[1], x[2], keep[2], sign[2], x[3], count);
+      else
+        signedSumOfFour(
+          out,
+          start,
+          x[0],
+          sign[0],
+          x[1],
+          keep[1],
+          sign[1],
+          x[2],
+          keep[2],
+          sign[2],
+          x[3],
+          keep[3],
+          sign[3],
+          x[4],
+          count,
+        );
     }
     return target ?? program[last].out;
   }
@@ -179,7 +207,14 @@ function copy(out: Float64Array, start: number, x0: Float64Array, count: number)
 }
 
 /** out[start + i] = x₀[i] ∘ x₁[i] for i < count. */
-function single(operation: number, out: Float64Array, start: number, x0: Float64Array, x1: Float64Array, count: number): void {
+function single(
+  operation: number,
+  out: Float64Array,
+  start: number,
+  x0: Float64Array,
+  x1: Float64Array,
+  count: number,
+): void {
   switch (operation) {
     case add:
       for (let i = 0; i < count; i += 1) out[start + i] = x0[i] + x1[i];
@@ -196,13 +231,22 @@ function single(operation: number, out: Float64Array, start: number, x0: Float64
 }
 
 /** out[start + i] = (x₀[i] ∘₁ x₁[i]) ∘₂ x₂[i] for i < count: one loop per pair of operations, none dispatched per trial. */
-function pair(first: number, second: number, out: Float64Array, start: number, x0: Float64Array, x1: Float64Array, x2: Float64Array, count: number): void {
+function pair(
+  first: number,
+  second: number,
+  out: Float64Array,
+  start: number,
+  x0: Float64Array,
+  x1: Float64Array,
+  x2: Float64Array,
+  count: number,
+): void {
   switch (6 * first + second) {
     case 6 * add + add:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] + x1[i]) + x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] + x1[i] + x2[i];
       return;
     case 6 * add + subtract:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] + x1[i]) - x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] + x1[i] - x2[i];
       return;
     case 6 * add + multiply:
       for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] + x1[i]) * x2[i];
@@ -217,10 +261,10 @@ function pair(first: number, second: number, out: Float64Array, start: number, x
       for (let i = 0; i < count; i += 1) out[start + i] = x2[i] / (x0[i] + x1[i]);
       return;
     case 6 * subtract + add:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] - x1[i]) + x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] - x1[i] + x2[i];
       return;
     case 6 * subtract + subtract:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] - x1[i]) - x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] - x1[i] - x2[i];
       return;
     case 6 * subtract + multiply:
       for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] - x1[i]) * x2[i];
@@ -235,37 +279,37 @@ function pair(first: number, second: number, out: Float64Array, start: number, x
       for (let i = 0; i < count; i += 1) out[start + i] = x2[i] / (x0[i] - x1[i]);
       return;
     case 6 * multiply + add:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] * x1[i]) + x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] * x1[i] + x2[i];
       return;
     case 6 * multiply + subtract:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] * x1[i]) - x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] * x1[i] - x2[i];
       return;
     case 6 * multiply + multiply:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] * x1[i]) * x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] * x1[i] * x2[i];
       return;
     case 6 * multiply + divide:
       for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] * x1[i]) / x2[i];
       return;
     case 6 * multiply + subtractFrom:
-      for (let i = 0; i < count; i += 1) out[start + i] = x2[i] - (x0[i] * x1[i]);
+      for (let i = 0; i < count; i += 1) out[start + i] = x2[i] - x0[i] * x1[i];
       return;
     case 6 * multiply + divideInto:
       for (let i = 0; i < count; i += 1) out[start + i] = x2[i] / (x0[i] * x1[i]);
       return;
     case 6 * divide + add:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] / x1[i]) + x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] / x1[i] + x2[i];
       return;
     case 6 * divide + subtract:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] / x1[i]) - x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] / x1[i] - x2[i];
       return;
     case 6 * divide + multiply:
       for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] / x1[i]) * x2[i];
       return;
     case 6 * divide + divide:
-      for (let i = 0; i < count; i += 1) out[start + i] = (x0[i] / x1[i]) / x2[i];
+      for (let i = 0; i < count; i += 1) out[start + i] = x0[i] / x1[i] / x2[i];
       return;
     case 6 * divide + subtractFrom:
-      for (let i = 0; i < count; i += 1) out[start + i] = x2[i] - (x0[i] / x1[i]);
+      for (let i = 0; i < count; i += 1) out[start + i] = x2[i] - x0[i] / x1[i];
       return;
     default:
       for (let i = 0; i < count; i += 1) out[start + i] = x2[i] / (x0[i] / x1[i]);
@@ -287,7 +331,8 @@ function signedSumOfThree(
   x3: Float64Array,
   count: number,
 ): void {
-  for (let i = 0; i < count; i += 1) out[start + i] = keep3 * (keep2 * (x0[i] + sign1 * x1[i]) + sign2 * x2[i]) + sign3 * x3[i];
+  for (let i = 0; i < count; i += 1)
+    out[start + i] = keep3 * (keep2 * (x0[i] + sign1 * x1[i]) + sign2 * x2[i]) + sign3 * x3[i];
 }
 
 /** As signedSumOfThree with a fourth operation ρ₄(…) + σ₄x₄. */
@@ -309,7 +354,8 @@ function signedSumOfFour(
   count: number,
 ): void {
   for (let i = 0; i < count; i += 1) {
-    out[start + i] = keep4 * (keep3 * (keep2 * (x0[i] + sign1 * x1[i]) + sign2 * x2[i]) + sign3 * x3[i]) + sign4 * x4[i];
+    out[start + i] =
+      keep4 * (keep3 * (keep2 * (x0[i] + sign1 * x1[i]) + sign2 * x2[i]) + sign3 * x3[i]) + sign4 * x4[i];
   }
 }
 

@@ -37,7 +37,12 @@ export function molarMassNode(
  * Number of analyte units (element atoms or ions) per formula unit of the compound: the stated
  * count, or the common ratio of element counts (Pb(NO3)2 holds 2 NO3); @throws PlanError when no whole ratio exists.
  */
-export function analyteCountIn(compound: Composition, analyte: Composition, statedCount: number | undefined, path: PlanPathSegment[]): number {
+export function analyteCountIn(
+  compound: Composition,
+  analyte: Composition,
+  statedCount: number | undefined,
+  path: PlanPathSegment[],
+): number {
   if (statedCount !== undefined) return statedCount;
   const ratios = [...analyte].map(([symbol, count]) => (compound.get(symbol) ?? 0) / count);
   const [first] = ratios;

@@ -27,7 +27,8 @@ export function normalCumulative(z: number): number {
  */
 export function studentTCumulative(t: number, degreesOfFreedom: number): number {
   if (degreesOfFreedom === Infinity) return normalCumulative(t);
-  const tail = 0.5 * regularizedIncompleteBeta(degreesOfFreedom / (degreesOfFreedom + t * t), degreesOfFreedom / 2, 0.5);
+  const tail =
+    0.5 * regularizedIncompleteBeta(degreesOfFreedom / (degreesOfFreedom + t * t), degreesOfFreedom / 2, 0.5);
   return t >= 0 ? 1 - tail : tail;
 }
 

@@ -83,7 +83,14 @@ function countCells(values: Float64Array, smallest: number, cellsPerUnit: number
  * Dijkstra's three-way partition by cell (as in countCells): afterwards values[0, front) lie in cells ≤ lowCell,
  * values[back, M) in cells ≥ highCell, and the rest between them.
  */
-function partitionByCell(values: Float64Array, smallest: number, cellsPerUnit: number, lastCell: number, lowCell: number, highCell: number) {
+function partitionByCell(
+  values: Float64Array,
+  smallest: number,
+  cellsPerUnit: number,
+  lastCell: number,
+  lowCell: number,
+  highCell: number,
+) {
   let front = 0;
   let next = 0;
   let back = values.length;
@@ -154,7 +161,10 @@ export function histogram(sorted: Float64Array, bins: number): Histogram {
 }
 
 /** Mean and standard deviation (divisor M − 1, JCGM 101:2008 7.6) with a shifted two-pass sum for stability. */
-export function meanAndStandardDeviation(values: Float64Array, count = values.length): { mean: number; standardDeviation: number } {
+export function meanAndStandardDeviation(
+  values: Float64Array,
+  count = values.length,
+): { mean: number; standardDeviation: number } {
   let sum = 0;
   for (let index = 0; index < count; index += 1) sum += values[index];
   const mean = sum / count;

@@ -8,16 +8,25 @@ describe('standard uncertainty of each distribution', () => {
   // JCGM 100:2008 4.3.7: rectangular of half-width a has u = a/√3; checked against jstat's uniform variance.
   it('rectangular: a/√3', () => {
     expect(standardUncertainty({ shape: 'rectangular', halfWidth: 0.1 })).toBeCloseTo(0.1 / Math.sqrt(3), 15);
-    expect(standardUncertainty({ shape: 'rectangular', halfWidth: 1 })).toBeCloseTo(Math.sqrt(jStat.uniform.variance(-1, 1)), 14);
+    expect(standardUncertainty({ shape: 'rectangular', halfWidth: 1 })).toBeCloseTo(
+      Math.sqrt(jStat.uniform.variance(-1, 1)),
+      14,
+    );
   });
   // JCGM 100:2008 4.3.9: symmetric triangular of half-width a has u = a/√6; jstat triangular(a, b, c) as reference.
   it('triangular: a/√6', () => {
-    expect(standardUncertainty({ shape: 'triangular', halfWidth: 0.1 })).toBeCloseTo(0.04082482904638630, 15);
-    expect(standardUncertainty({ shape: 'triangular', halfWidth: 1 })).toBeCloseTo(Math.sqrt(jStat.triangular.variance(-1, 1, 0)), 14);
+    expect(standardUncertainty({ shape: 'triangular', halfWidth: 0.1 })).toBeCloseTo(0.0408248290463863, 15);
+    expect(standardUncertainty({ shape: 'triangular', halfWidth: 1 })).toBeCloseTo(
+      Math.sqrt(jStat.triangular.variance(-1, 1, 0)),
+      14,
+    );
   });
   // JCGM 101:2008 6.4.6: arcsine (U-shaped) of half-width a has u = a/√2; jstat arcsine(a, b) as reference.
   it('arcsine: a/√2', () => {
-    expect(standardUncertainty({ shape: 'arcsine', halfWidth: 1 })).toBeCloseTo(Math.sqrt(jStat.arcsine.variance(-1, 1)), 14);
+    expect(standardUncertainty({ shape: 'arcsine', halfWidth: 1 })).toBeCloseTo(
+      Math.sqrt(jStat.arcsine.variance(-1, 1)),
+      14,
+    );
   });
   // JCGM 100:2008 4.3.3: an expanded uncertainty U with coverage factor k gives u = U/k.
   it('normal from U and k', () => {
@@ -32,7 +41,9 @@ describe('standard uncertainty of each distribution', () => {
     expect(degreesOfFreedom({ shape: 'rectangular', halfWidth: 1 })).toBe(Infinity);
   });
   it('rejects a non-positive coverage factor with a path', () => {
-    expect(() => checkDistribution({ shape: 'normal', expandedUncertainty: 1, coverageFactor: 0 }, ['steps', 0])).toThrow(PlanError);
+    expect(() =>
+      checkDistribution({ shape: 'normal', expandedUncertainty: 1, coverageFactor: 0 }, ['steps', 0]),
+    ).toThrow(PlanError);
     try {
       checkDistribution({ shape: 'normal', expandedUncertainty: 1, coverageFactor: -1 }, ['steps', 0]);
     } catch (error) {

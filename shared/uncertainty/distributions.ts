@@ -18,7 +18,13 @@ export type Distribution =
   | { shape: 'studentT'; standardDeviation: number; observations: number; meanOfReadings: boolean };
 
 /** Every distribution shape, as `Distribution['shape']` lists them. */
-export const DISTRIBUTION_SHAPES = ['normal', 'rectangular', 'triangular', 'arcsine', 'studentT'] as const satisfies readonly Distribution['shape'][];
+export const DISTRIBUTION_SHAPES = [
+  'normal',
+  'rectangular',
+  'triangular',
+  'arcsine',
+  'studentT',
+] as const satisfies readonly Distribution['shape'][];
 
 /**
  * Standard uncertainty of a distribution.
@@ -53,7 +59,8 @@ export function standardUncertainty(distribution: Distribution): number {
  */
 export function degreesOfFreedom(distribution: Distribution): number {
   if (distribution.shape === 'studentT') return distribution.observations - 1;
-  if (distribution.shape === 'normal' && distribution.degreesOfFreedom !== undefined) return distribution.degreesOfFreedom;
+  if (distribution.shape === 'normal' && distribution.degreesOfFreedom !== undefined)
+    return distribution.degreesOfFreedom;
   return Infinity;
 }
 
@@ -70,7 +77,10 @@ export function evaluationType(distribution: Distribution): 'A' | 'B' {
 export function checkDistribution(distribution: Distribution, path: PlanPathSegment[]): void {
   const width = (name: string, value: number) => {
     if (!Number.isFinite(value) || value < 0) {
-      throw new PlanError([...path, name], `The ${name} of a ${distribution.shape} distribution must be zero or positive (got ${value}).`);
+      throw new PlanError(
+        [...path, name],
+        `The ${name} of a ${distribution.shape} distribution must be zero or positive (got ${value}).`,
+      );
     }
   };
   switch (distribution.shape) {
@@ -79,11 +89,17 @@ export function checkDistribution(distribution: Distribution, path: PlanPathSegm
       else {
         width('expandedUncertainty', distribution.expandedUncertainty);
         if (!(distribution.coverageFactor > 0)) {
-          throw new PlanError([...path, 'coverageFactor'], `The coverage factor k must be greater than zero (got ${distribution.coverageFactor}).`);
+          throw new PlanError(
+            [...path, 'coverageFactor'],
+            `The coverage factor k must be greater than zero (got ${distribution.coverageFactor}).`,
+          );
         }
       }
       if (distribution.degreesOfFreedom !== undefined && !(distribution.degreesOfFreedom >= 1)) {
-        throw new PlanError([...path, 'degreesOfFreedom'], `Degrees of freedom must be at least 1 (got ${distribution.degreesOfFreedom}).`);
+        throw new PlanError(
+          [...path, 'degreesOfFreedom'],
+          `Degrees of freedom must be at least 1 (got ${distribution.degreesOfFreedom}).`,
+        );
       }
       return;
     case 'rectangular':
@@ -94,7 +110,10 @@ export function checkDistribution(distribution: Distribution, path: PlanPathSegm
     case 'studentT':
       width('standardDeviation', distribution.standardDeviation);
       if (!Number.isInteger(distribution.observations) || distribution.observations < 2) {
-        throw new PlanError([...path, 'observations'], `A Type A evaluation needs at least 2 observations (got ${distribution.observations}).`);
+        throw new PlanError(
+          [...path, 'observations'],
+          `A Type A evaluation needs at least 2 observations (got ${distribution.observations}).`,
+        );
       }
   }
 }

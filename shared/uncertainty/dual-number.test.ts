@@ -27,14 +27,20 @@ describe('dual numbers', () => {
         fc.double({ min: 60, max: 100, noNaN: true }),
         fc.double({ min: 0.5, max: 50, noNaN: true }),
         (a, b, c, d) => {
-          const [da, db, dc, dd] = [DualNumber.source('a', a), DualNumber.source('b', b), DualNumber.source('c', c), DualNumber.source('d', d)];
+          const [da, db, dc, dd] = [
+            DualNumber.source('a', a),
+            DualNumber.source('b', b),
+            DualNumber.source('c', c),
+            DualNumber.source('d', d),
+          ];
           const y = da.multiply(db).divide(dc.subtract(dd)).add(da.divide(db));
           const inputs = { a, b, c, d };
           for (const name of ['a', 'b', 'c', 'd'] as const) {
             const h = 1e-6 * Math.abs(inputs[name]);
             const plus = { ...inputs, [name]: inputs[name] + h };
             const minus = { ...inputs, [name]: inputs[name] - h };
-            const central = (formula(plus.a, plus.b, plus.c, plus.d) - formula(minus.a, minus.b, minus.c, minus.d)) / (2 * h);
+            const central =
+              (formula(plus.a, plus.b, plus.c, plus.d) - formula(minus.a, minus.b, minus.c, minus.d)) / (2 * h);
             expect(Math.abs(y.sensitivity(name) - central)).toBeLessThanOrEqual(1e-6 * Math.max(1, Math.abs(central)));
           }
         },

@@ -9,7 +9,10 @@ const nonNegative = (what: string) => z.number().finite().nonnegative(`${what} m
 export const formulaSchema = z
   .string()
   .min(1, 'The formula is empty.')
-  .max(MAXIMUM_FORMULA_LENGTH, { error: (issue) => `A formula can have at most ${MAXIMUM_FORMULA_LENGTH} characters; this one has ${String(issue.input).length}.` });
+  .max(MAXIMUM_FORMULA_LENGTH, {
+    error: (issue) =>
+      `A formula can have at most ${MAXIMUM_FORMULA_LENGTH} characters; this one has ${String(issue.input).length}.`,
+  });
 
 /** Fields every equipment item carries: a stable id for the physical item, and optional library references. */
 const itemFields = {
@@ -34,7 +37,10 @@ export const balanceSchema = z
     linearityG: nonNegative('The linearity'),
     /** Relative expanded uncertainty of the sensitivity (calibration) with its k, shared by every weighing on this balance. */
     sensitivity: z
-      .object({ relativeExpandedUncertainty: nonNegative('The relative sensitivity uncertainty'), coverageFactor: positive('The coverage factor k') })
+      .object({
+        relativeExpandedUncertainty: nonNegative('The relative sensitivity uncertainty'),
+        coverageFactor: positive('The coverage factor k'),
+      })
       .strict()
       .optional(),
   })
@@ -66,14 +72,24 @@ export const pistonPipetteSchema = z
     kind: z.literal('pistonPipette'),
     ...itemFields,
     /** Selectable volumes; minimumUl = maximumUl for a fixed-volume pipette. */
-    volumeRangeUl: z.object({ minimumUl: positive('The smallest volume'), maximumUl: positive('The largest volume') }).strict(),
+    volumeRangeUl: z
+      .object({ minimumUl: positive('The smallest volume'), maximumUl: positive('The largest volume') })
+      .strict(),
     /**
      * ISO 8655-2:2002 maximum permissible errors at given volumes: systematic (± about the set volume)
      * and random (a standard deviation), each in µL or % of that volume. Between listed volumes the
      * errors in µL are interpolated linearly; beyond them the nearest entry's µL value applies.
      */
     errorSpecifications: z
-      .array(z.object({ volumeUl: positive('The volume'), systematicError: errorAmountSchema, randomError: errorAmountSchema }).strict())
+      .array(
+        z
+          .object({
+            volumeUl: positive('The volume'),
+            systematicError: errorAmountSchema,
+            randomError: errorAmountSchema,
+          })
+          .strict(),
+      )
       .min(1, 'Give the maximum permissible errors for at least one volume.'),
     systematicErrorDistribution: z.enum(['rectangular', 'triangular']).default('rectangular'),
     calibrationTemperatureC: z.number().default(20),
@@ -88,7 +104,10 @@ export const solidMaterialSchema = z
     formula: formulaSchema,
     purity: z
       .object({
-        massFraction: z.number().gt(0, 'Purity must be greater than 0.').lte(1, 'Purity is a mass fraction and cannot exceed 1 (100 %).'),
+        massFraction: z
+          .number()
+          .gt(0, 'Purity must be greater than 0.')
+          .lte(1, 'Purity is a mass fraction and cannot exceed 1 (100 %).'),
         uncertainty: distributionSchema,
       })
       .strict(),
@@ -107,7 +126,8 @@ export const certifiedSolutionSchema = z
     certifiedValue: z.number().finite().positive('The certified value must be greater than zero.'),
     /** A mass concentration (g/L, mg/L, µg/L, ng/L) or mass fraction (g/kg, mg/kg, µg/kg) unit. */
     certifiedUnit: z.enum(['g/L', 'mg/L', 'µg/L', 'ng/L', 'g/kg', 'mg/kg', 'µg/kg'], {
-      error: 'A certified value is a mass concentration (g/L, mg/L, µg/L, ng/L) or a mass fraction (g/kg, mg/kg, µg/kg).',
+      error:
+        'A certified value is a mass concentration (g/L, mg/L, µg/L, ng/L) or a mass fraction (g/kg, mg/kg, µg/kg).',
     }),
     /** Certificate uncertainty, in certifiedUnit (usually normal with U and k). */
     uncertainty: distributionSchema,

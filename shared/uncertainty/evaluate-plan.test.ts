@@ -10,7 +10,9 @@ import type { PlanInput } from './plan-schema';
 const fixtures = new URL('../../tests/fixtures/', import.meta.url);
 const readJson = <T>(relative: string): T => JSON.parse(readFileSync(new URL(relative, fixtures), 'utf8')) as T;
 const examplePlans = readdirSync(new URL('plans/', fixtures)).filter((name) => name.endsWith('.json'));
-const a1 = readJson<{ plan: PlanInput; guide: Record<string, number>; exact: Record<string, number> }>('engine/eurachem-cg4-a1.json');
+const a1 = readJson<{ plan: PlanInput; guide: Record<string, number>; exact: Record<string, number> }>(
+  'engine/eurachem-cg4-a1.json',
+);
 const leadPlan = readJson<PlanInput>('plans/lead-standard-from-nitrate.json');
 const seleniumPlan = readJson<PlanInput>('plans/selenium-working-standard.json');
 
@@ -40,7 +42,10 @@ describe('EURACHEM/CITAC CG4 3rd ed. Appendix A, Example A1 as a plan document',
     // The Cd → Cd stoichiometric factor is exactly 1 and its atomic weight has no effect (analytic).
     expect(result.rows.find((row) => row.sourceId === 'atomic-weight:Cd')?.sensitivityCoefficient).toBe(0);
     const volumeRows = result.rows.filter((row) => row.stepIndices[0] === 1);
-    const volumeVariance = volumeRows.reduce((sum, row) => sum + (row.contribution / row.sensitivityCoefficient) ** 2, 0);
+    const volumeVariance = volumeRows.reduce(
+      (sum, row) => sum + (row.contribution / row.sensitivityCoefficient) ** 2,
+      0,
+    );
     expect(Math.sqrt(volumeVariance)).toBeCloseTo(a1.exact.volumeStandardUncertaintyMl, 5);
   });
 });
@@ -73,14 +78,23 @@ describe('example plans', () => {
       minus[index] -= h;
       const central = (evaluateAt(model, plus) - evaluateAt(model, minus)) / (2 * h);
       const analytic = output.sensitivity(source.id);
-      expect(Math.abs(analytic - central)).toBeLessThanOrEqual(1e-6 * Math.abs(central) + (8 * Number.EPSILON * Math.abs(output.value)) / h);
+      expect(Math.abs(analytic - central)).toBeLessThanOrEqual(
+        1e-6 * Math.abs(central) + (8 * Number.EPSILON * Math.abs(output.value)) / h,
+      );
     });
   });
 
   it('the demo glassware carries the ISO 1042:1998 / ISO 648:2008 class A tolerances', () => {
-    const iso = readJson<{ flaskClassAToleranceMl: Record<string, number>; pipetteClassAToleranceMl: Record<string, number> }>('engine/iso-glassware-tolerances.json');
-    const plan = leadPlan as unknown as { steps: Record<string, { kind: string; nominalMl: number; toleranceMl: number; toleranceClass: string }>[] };
-    const classA = plan.steps.flatMap((step) => [step.flask, step.pipette]).filter((item) => item !== undefined && item.toleranceClass === 'A');
+    const iso = readJson<{
+      flaskClassAToleranceMl: Record<string, number>;
+      pipetteClassAToleranceMl: Record<string, number>;
+    }>('engine/iso-glassware-tolerances.json');
+    const plan = leadPlan as unknown as {
+      steps: Record<string, { kind: string; nominalMl: number; toleranceMl: number; toleranceClass: string }>[];
+    };
+    const classA = plan.steps
+      .flatMap((step) => [step.flask, step.pipette])
+      .filter((item) => item !== undefined && item.toleranceClass === 'A');
     expect(classA.length).toBeGreaterThan(0);
     for (const item of classA) {
       const table = item.kind === 'volumetricFlask' ? iso.flaskClassAToleranceMl : iso.pipetteClassAToleranceMl;

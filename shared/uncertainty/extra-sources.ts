@@ -6,7 +6,12 @@ import type { StepContext } from './step-context';
 type ExtraSource = z.infer<typeof extraSourceSchema>;
 
 /** Adds the step's 'absolute' extra sources to its own quantity: q + Σ δᵢ (δᵢ in `unit`, estimate 0). */
-export function addAbsoluteExtraSources(context: StepContext, quantity: NodeReference, extras: ExtraSource[], unit: string): NodeReference {
+export function addAbsoluteExtraSources(
+  context: StepContext,
+  quantity: NodeReference,
+  extras: ExtraSource[],
+  unit: string,
+): NodeReference {
   return extras.reduce((total, extra, index) => {
     if (extra.effect !== 'absolute') return total;
     return context.builder.add(total, extraSourceNode(context, extra, index, unit));
@@ -14,7 +19,11 @@ export function addAbsoluteExtraSources(context: StepContext, quantity: NodeRefe
 }
 
 /** Applies the step's 'relative' extra sources to its result: y·Π(1 + δᵢ) (δᵢ dimensionless, estimate 0). */
-export function applyRelativeExtraSources(context: StepContext, result: NodeReference, extras: ExtraSource[]): NodeReference {
+export function applyRelativeExtraSources(
+  context: StepContext,
+  result: NodeReference,
+  extras: ExtraSource[],
+): NodeReference {
   return extras.reduce((total, extra, index) => {
     if (extra.effect !== 'relative') return total;
     const factor = context.builder.add(context.builder.constant(1), extraSourceNode(context, extra, index, '1'));

@@ -3,8 +3,24 @@ import { ModelBuilder } from './model-builder';
 import { propagate } from './gum-budget';
 import type { Distribution } from './distributions';
 
-function source(builder: ModelBuilder, id: string, estimate: number, distribution: Distribution, sharing: 'item' | 'use' = 'use') {
-  return builder.source({ id, label: id, category: 'userDefined', estimate, unit: '1', distribution, sharing, stepIndex: 0, path: [] });
+function source(
+  builder: ModelBuilder,
+  id: string,
+  estimate: number,
+  distribution: Distribution,
+  sharing: 'item' | 'use' = 'use',
+) {
+  return builder.source({
+    id,
+    label: id,
+    category: 'userDefined',
+    estimate,
+    unit: '1',
+    distribution,
+    sharing,
+    stepIndex: 0,
+    path: [],
+  });
 }
 
 /**
@@ -58,8 +74,8 @@ describe('GUM propagation', () => {
     const total = result.rows.reduce((sum, row) => sum + row.indexPercent, 0);
     expect(total).toBeCloseTo(100, 10);
     const massRow = result.rows.find((row) => row.sourceId === 'mass');
-    expect(massRow?.sensitivityCoefficient).toBeCloseTo(1000 * 0.9999 / 100, 12); // ∂c/∂m = 1000·P/V
-    expect(massRow?.contribution).toBeCloseTo((1000 * 0.9999 / 100) * 0.05, 12);
+    expect(massRow?.sensitivityCoefficient).toBeCloseTo((1000 * 0.9999) / 100, 12); // ∂c/∂m = 1000·P/V
+    expect(massRow?.contribution).toBeCloseTo(((1000 * 0.9999) / 100) * 0.05, 12);
   });
 
   it('x − x has zero uncertainty', () => {

@@ -72,7 +72,10 @@ export function propagate(model: CompiledModel, coverage: CoverageSetting): Budg
   const variance = contributions.reduce((total, entry) => total + entry.contribution ** 2, 0);
   const standardUncertainty = Math.sqrt(variance);
   const degreesDenominator = contributions.reduce(
-    (total, entry) => (entry.source.degreesOfFreedom === Infinity ? total : total + entry.contribution ** 4 / entry.source.degreesOfFreedom),
+    (total, entry) =>
+      entry.source.degreesOfFreedom === Infinity
+        ? total
+        : total + entry.contribution ** 4 / entry.source.degreesOfFreedom,
     0,
   );
   const effectiveDegreesOfFreedom = degreesDenominator === 0 ? Infinity : variance ** 2 / degreesDenominator;
@@ -115,7 +118,9 @@ export function propagate(model: CompiledModel, coverage: CoverageSetting): Budg
   };
 
   const stepLabel = (row: BudgetRow) =>
-    row.stepIndices.length === 1 ? `step ${row.stepIndices[0] + 1}` : `shared by steps ${row.stepIndices.map((index) => index + 1).join(', ')}`;
+    row.stepIndices.length === 1
+      ? `step ${row.stepIndices[0] + 1}`
+      : `shared by steps ${row.stepIndices.map((index) => index + 1).join(', ')}`;
 
   return {
     engineVersion: ENGINE_VERSION,
@@ -131,15 +136,32 @@ export function propagate(model: CompiledModel, coverage: CoverageSetting): Budg
     relativeExpandedUncertainty: expandedUncertainty / Math.abs(value),
     rows,
     byStep: group((row) => row.stepIndices.join('+'), stepLabel),
-    byCategory: group((row) => row.category, (row) => row.category),
+    byCategory: group(
+      (row) => row.category,
+      (row) => row.category,
+    ),
     checkpoints: model.checkpoints.map((checkpoint) => {
       const dual = duals[checkpoint.node];
       let checkpointVariance = 0;
-      for (const source of model.sources) checkpointVariance += (dual.sensitivity(source.id) * source.standardUncertainty) ** 2;
-      return { stepIndex: checkpoint.stepIndex, label: checkpoint.label, value: dual.value, unit: checkpoint.unit, standardUncertainty: Math.sqrt(checkpointVariance) };
+      for (const source of model.sources)
+        checkpointVariance += (dual.sensitivity(source.id) * source.standardUncertainty) ** 2;
+      return {
+        stepIndex: checkpoint.stepIndex,
+        label: checkpoint.label,
+        value: dual.value,
+        unit: checkpoint.unit,
+        standardUncertainty: Math.sqrt(checkpointVariance),
+      };
     }),
     rounded: roundToUncertainty(value, expandedUncertainty),
-    statement: formatResultStatement({ measurand: model.measurand, value, expandedUncertainty, unit: model.outputUnit, coverageFactor, coverageProbability }),
+    statement: formatResultStatement({
+      measurand: model.measurand,
+      value,
+      expandedUncertainty,
+      unit: model.outputUnit,
+      coverageFactor,
+      coverageProbability,
+    }),
     warnings: model.warnings,
   };
 }

@@ -8,7 +8,15 @@ export {
   MAXIMUM_FORMULA_NESTING,
   MAXIMUM_MONTE_CARLO_TRIALS,
 } from './plan-limits';
-export { planSchema, stepSchema, settingsSchema, coverageSchema, type Plan, type PlanInput, type PlanStep } from './plan-schema';
+export {
+  planSchema,
+  stepSchema,
+  settingsSchema,
+  coverageSchema,
+  type Plan,
+  type PlanInput,
+  type PlanStep,
+} from './plan-schema';
 export { distributionSchema, extraSourceSchema } from './distribution-schema';
 export {
   balanceSchema,
@@ -31,18 +39,51 @@ export { propagate, type BudgetResult, type BudgetRow, type BudgetGroup } from '
 export type { CompiledModel, SourceDefinition, SourceCategory, TapeNode, Checkpoint } from './model-types';
 export { standardUncertainty, degreesOfFreedom, type Distribution } from './distributions';
 export { DualNumber } from './dual-number';
-export { MAXIMUM_COVERAGE_FACTOR, coverageFactor, studentTQuantile, studentTCumulative, normalCumulative, twoSigmaProbability } from './coverage-factor';
+export {
+  MAXIMUM_COVERAGE_FACTOR,
+  coverageFactor,
+  studentTQuantile,
+  studentTCumulative,
+  normalCumulative,
+  twoSigmaProbability,
+} from './coverage-factor';
 export type { CoverageSetting } from './coverage-setting';
 export { formatDegreesOfFreedom } from './effective-degrees';
 export { roundToUncertainty, formatResultStatement, type RoundedResult } from './result-rounding';
 export { parseFormula, molarMass, type Composition, type MolarMass } from './chemical-formula';
-export { standardAtomicWeights, atomicWeightSource, parseAtomicWeightTable, type AtomicWeight, type AtomicWeightTable } from './atomic-weights';
+export {
+  standardAtomicWeights,
+  atomicWeightSource,
+  parseAtomicWeightTable,
+  type AtomicWeight,
+  type AtomicWeightTable,
+} from './atomic-weights';
 export { waterDensityKgPerM3 } from './water-density';
 export { minimumWeightG } from './minimum-weight';
-export { concentrationUnits, concentrationUnitNames, unitOf, type ConcentrationUnit, type UnitDimension } from './units';
-export { runMonteCarlo, startMonteCarlo, type MonteCarloOptions, type MonteCarloResult, type MonteCarloRun, type MonteCarloProgress } from './monte-carlo';
+export {
+  concentrationUnits,
+  concentrationUnitNames,
+  unitOf,
+  type ConcentrationUnit,
+  type UnitDimension,
+} from './units';
+export {
+  runMonteCarlo,
+  startMonteCarlo,
+  type MonteCarloOptions,
+  type MonteCarloResult,
+  type MonteCarloRun,
+  type MonteCarloProgress,
+} from './monte-carlo';
 export { validateAgainstGum, type GumValidation } from './validation';
 export { numericalTolerance, type Interval, type Histogram } from './coverage-interval';
 export { RandomGenerator } from './random-generator';
-export { findRoutes, routeRequestSchema, ROUTE_SEARCH_BUDGET, type RouteRequest, type Route, type RouteResult } from './route-finder';
+export {
+  findRoutes,
+  routeRequestSchema,
+  ROUTE_SEARCH_BUDGET,
+  type RouteRequest,
+  type Route,
+  type RouteResult,
+} from './route-finder';
 export { planJsonSchema } from './plan-json-schema';

@@ -1,4 +1,10 @@
-import { checkDistribution, degreesOfFreedom, evaluationType, standardUncertainty, type Distribution } from './distributions';
+import {
+  checkDistribution,
+  degreesOfFreedom,
+  evaluationType,
+  standardUncertainty,
+  type Distribution,
+} from './distributions';
 import type { Checkpoint, CompiledModel, SourceCategory, SourceDefinition, TapeNode } from './model-types';
 import { PlanError, type PlanPathSegment } from './plan-error';
 
@@ -36,8 +42,14 @@ export class ModelBuilder {
     if (existing !== undefined) {
       const node = this.nodes[existing];
       const definition = this.sources[node.operation === 'source' ? node.sourceIndex : -1];
-      if (definition.estimate !== request.estimate || JSON.stringify(definition.distribution) !== JSON.stringify(request.distribution)) {
-        throw new PlanError(request.path, `${request.label}: the same item appears twice with different data; give each physical item one description.`);
+      if (
+        definition.estimate !== request.estimate ||
+        JSON.stringify(definition.distribution) !== JSON.stringify(request.distribution)
+      ) {
+        throw new PlanError(
+          request.path,
+          `${request.label}: the same item appears twice with different data; give each physical item one description.`,
+        );
       }
       if (!definition.stepIndices.includes(request.stepIndex)) definition.stepIndices.push(request.stepIndex);
       return existing;
@@ -119,7 +131,11 @@ export class ModelBuilder {
     };
   }
 
-  private binary(operation: 'add' | 'subtract' | 'multiply' | 'divide', left: NodeReference, right: NodeReference): NodeReference {
+  private binary(
+    operation: 'add' | 'subtract' | 'multiply' | 'divide',
+    left: NodeReference,
+    right: NodeReference,
+  ): NodeReference {
     const leftValue = this.constantValue(left);
     const rightValue = this.constantValue(right);
     if (leftValue !== undefined && rightValue !== undefined) {
@@ -139,7 +155,11 @@ export class ModelBuilder {
 }
 
 /** The four operations of the tape on plain numbers. */
-export function applyOperation(operation: 'add' | 'subtract' | 'multiply' | 'divide', left: number, right: number): number {
+export function applyOperation(
+  operation: 'add' | 'subtract' | 'multiply' | 'divide',
+  left: number,
+  right: number,
+): number {
   switch (operation) {
     case 'add':
       return left + right;

@@ -15,16 +15,36 @@ const readJson = <T>(relative: string): T => JSON.parse(readFileSync(new URL(rel
 function sumModel(distributions: Distribution[]) {
   const builder = new ModelBuilder();
   const terms = distributions.map((distribution, index) =>
-    builder.source({ id: `x${index + 1}`, label: `X${index + 1}`, category: 'userDefined', estimate: 0, unit: '1', distribution, sharing: 'use', stepIndex: 0, path: [] }),
+    builder.source({
+      id: `x${index + 1}`,
+      label: `X${index + 1}`,
+      category: 'userDefined',
+      estimate: 0,
+      unit: '1',
+      distribution,
+      sharing: 'use',
+      stepIndex: 0,
+      path: [],
+    }),
   );
   return builder.build(builder.sum(terms), '1', 'Y');
 }
 
-const rectangularWithStandardDeviation = (sigma: number): Distribution => ({ shape: 'rectangular', halfWidth: sigma * Math.sqrt(3) });
+const rectangularWithStandardDeviation = (sigma: number): Distribution => ({
+  shape: 'rectangular',
+  halfWidth: sigma * Math.sqrt(3),
+});
 
 describe('Monte Carlo against JCGM 101:2008', () => {
   const additive = readJson<{
-    cases: { name: string; inputs: ('normal' | 'rectangular')[]; standardDeviations: number[]; gumStandardUncertainty: number; gumHalfWidth: number; monteCarloHalfWidth: number }[];
+    cases: {
+      name: string;
+      inputs: ('normal' | 'rectangular')[];
+      standardDeviations: number[];
+      gumStandardUncertainty: number;
+      gumHalfWidth: number;
+      monteCarloHalfWidth: number;
+    }[];
   }>('engine/jcgm-101-additive-model.json');
 
   // Tolerance: half a unit of the printed last digit plus 4 Monte Carlo standard errors of a 97.5 % quantile
@@ -32,23 +52,36 @@ describe('Monte Carlo against JCGM 101:2008', () => {
   it('reads the three §9.2 cases (so the checks below are not vacuous)', () => {
     expect(additive.cases).toHaveLength(3);
   });
-  it.each(additive.cases)('§9.2 additive model: $name', ({ inputs, standardDeviations, gumStandardUncertainty, gumHalfWidth, monteCarloHalfWidth }) => {
-    const distributions = inputs.map((shape, index): Distribution =>
-      shape === 'normal' ? { shape: 'normal', standardUncertainty: standardDeviations[index] } : rectangularWithStandardDeviation(standardDeviations[index]),
-    );
-    const model = sumModel(distributions);
-    const gum = propagate(model, { probability: 0.95 });
-    const printed = (value: number) => 0.5 * 10 ** -((String(value).split('.')[1] ?? '').length);
-    expect(Math.abs(gum.standardUncertainty - gumStandardUncertainty)).toBeLessThanOrEqual(printed(gumStandardUncertainty) + 1e-12);
-    expect(Math.abs(gum.expandedUncertainty - gumHalfWidth)).toBeLessThanOrEqual(printed(gumHalfWidth) + 1e-12);
-    const monteCarlo = runMonteCarlo(model, { trials: 1_000_000, seed: 101, coverageProbability: 0.95 });
-    const halfWidth = (monteCarlo.symmetricInterval.high - monteCarlo.symmetricInterval.low) / 2;
-    expect(Math.abs(halfWidth - monteCarloHalfWidth)).toBeLessThanOrEqual(printed(monteCarloHalfWidth) + 0.005 * gum.standardUncertainty * 4);
-  });
+  it.each(additive.cases)(
+    '§9.2 additive model: $name',
+    ({ inputs, standardDeviations, gumStandardUncertainty, gumHalfWidth, monteCarloHalfWidth }) => {
+      const distributions = inputs.map((shape, index): Distribution =>
+        shape === 'normal'
+          ? { shape: 'normal', standardUncertainty: standardDeviations[index] }
+          : rectangularWithStandardDeviation(standardDeviations[index]),
+      );
+      const model = sumModel(distributions);
+      const gum = propagate(model, { probability: 0.95 });
+      const printed = (value: number) => 0.5 * 10 ** -(String(value).split('.')[1] ?? '').length;
+      expect(Math.abs(gum.standardUncertainty - gumStandardUncertainty)).toBeLessThanOrEqual(
+        printed(gumStandardUncertainty) + 1e-12,
+      );
+      expect(Math.abs(gum.expandedUncertainty - gumHalfWidth)).toBeLessThanOrEqual(printed(gumHalfWidth) + 1e-12);
+      const monteCarlo = runMonteCarlo(model, { trials: 1_000_000, seed: 101, coverageProbability: 0.95 });
+      const halfWidth = (monteCarlo.symmetricInterval.high - monteCarlo.symmetricInterval.low) / 2;
+      expect(Math.abs(halfWidth - monteCarloHalfWidth)).toBeLessThanOrEqual(
+        printed(monteCarloHalfWidth) + 0.005 * gum.standardUncertainty * 4,
+      );
+    },
+  );
 
   // Analytic: one rectangular input of half-width a has the 95 % interval ±0.95·a.
   it('a single rectangular input gives ±0.95·a', () => {
-    const result = runMonteCarlo(sumModel([{ shape: 'rectangular', halfWidth: 2 }]), { trials: 1_000_000, seed: 3, coverageProbability: 0.95 });
+    const result = runMonteCarlo(sumModel([{ shape: 'rectangular', halfWidth: 2 }]), {
+      trials: 1_000_000,
+      seed: 3,
+      coverageProbability: 0.95,
+    });
     // Quantile standard error for a uniform: √(p(1 − p)/M)·2a ≈ 6e-4; tolerance 4 of them.
     expect(result.symmetricInterval.high).toBeCloseTo(1.9, 2);
     expect(Math.abs(result.symmetricInterval.low + 1.9)).toBeLessThanOrEqual(0.0025);
@@ -59,11 +92,17 @@ describe('Monte Carlo against JCGM 101:2008', () => {
   // interval is ±2a(1 − √0.05).
   it('the sum of two equal rectangulars is triangular', () => {
     const a = 1;
-    const result = runMonteCarlo(sumModel([{ shape: 'rectangular', halfWidth: a }, { shape: 'rectangular', halfWidth: a }]), {
-      trials: 1_000_000,
-      seed: 4,
-      coverageProbability: 0.95,
-    });
+    const result = runMonteCarlo(
+      sumModel([
+        { shape: 'rectangular', halfWidth: a },
+        { shape: 'rectangular', halfWidth: a },
+      ]),
+      {
+        trials: 1_000_000,
+        seed: 4,
+        coverageProbability: 0.95,
+      },
+    );
     const expected = 2 * a * (1 - Math.sqrt(0.05));
     expect(Math.abs(result.symmetricInterval.high - expected)).toBeLessThanOrEqual(0.004);
     expect(Math.abs(result.symmetricInterval.low + expected)).toBeLessThanOrEqual(0.004);
@@ -72,7 +111,17 @@ describe('Monte Carlo against JCGM 101:2008', () => {
 
   it('x − x has zero spread', () => {
     const builder = new ModelBuilder();
-    const x = builder.source({ id: 'x', label: 'x', category: 'userDefined', estimate: 5, unit: '1', distribution: { shape: 'normal', standardUncertainty: 1 }, sharing: 'use', stepIndex: 0, path: [] });
+    const x = builder.source({
+      id: 'x',
+      label: 'x',
+      category: 'userDefined',
+      estimate: 5,
+      unit: '1',
+      distribution: { shape: 'normal', standardUncertainty: 1 },
+      sharing: 'use',
+      stepIndex: 0,
+      path: [],
+    });
     const result = runMonteCarlo(builder.build(builder.subtract(x, x), '1', 'x − x'), { trials: 1000, seed: 1 });
     expect(result.standardDeviation).toBe(0);
   });
@@ -107,12 +156,19 @@ describe('Monte Carlo on plans', () => {
     const gum = evaluatePlan(a1);
     const trials = 200_000;
     const monteCarlo = runMonteCarlo(a1, { trials, seed: 2012 });
-    expect(Math.abs(monteCarlo.standardDeviation - gum.standardUncertainty)).toBeLessThanOrEqual(4 * gum.standardUncertainty * Math.sqrt(2 / trials));
-    expect(Math.abs(monteCarlo.mean - gum.value)).toBeLessThanOrEqual((4 * gum.standardUncertainty) / Math.sqrt(trials));
+    expect(Math.abs(monteCarlo.standardDeviation - gum.standardUncertainty)).toBeLessThanOrEqual(
+      4 * gum.standardUncertainty * Math.sqrt(2 / trials),
+    );
+    expect(Math.abs(monteCarlo.mean - gum.value)).toBeLessThanOrEqual(
+      (4 * gum.standardUncertainty) / Math.sqrt(trials),
+    );
   });
 
   it('validation (JCGM 101:2008 §8) passes for an all-normal linear model and reports both end differences', () => {
-    const model = sumModel([{ shape: 'normal', standardUncertainty: 1 }, { shape: 'normal', standardUncertainty: 2 }]);
+    const model = sumModel([
+      { shape: 'normal', standardUncertainty: 1 },
+      { shape: 'normal', standardUncertainty: 2 },
+    ]);
     const gum = propagate(model, { probability: 0.95 });
     const monteCarlo = runMonteCarlo(model, { trials: 1_000_000, seed: 9, coverageProbability: 0.95 });
     const validation = validateAgainstGum(gum, monteCarlo, 1);
@@ -137,7 +193,9 @@ describe('Monte Carlo on plans', () => {
     expect(result.adaptive?.converged).toBe(true);
     expect(result.adaptive?.batchSize).toBe(10_000);
     expect(result.trials % 10_000).toBe(0);
-    expect(Math.abs(result.standardDeviation - gum.standardUncertainty)).toBeLessThanOrEqual(result.adaptive?.numericalTolerance ?? 0);
+    expect(Math.abs(result.standardDeviation - gum.standardUncertainty)).toBeLessThanOrEqual(
+      result.adaptive?.numericalTolerance ?? 0,
+    );
   });
 
   it('returns its seed and trial count and a histogram of every trial', () => {
@@ -175,7 +233,9 @@ describe('coverage intervals from partly ordered outputs', () => {
     const cases = [
       Float64Array.from({ length: 20_000 }, () => Math.floor(random.nextUniform() * 5)),
       new Float64Array(1000).fill(2.5),
-      Float64Array.from({ length: 30_001 }, (_, index) => (index % 1000 === 0 ? 1e6 * (random.nextUniform() - 0.5) : random.nextUniform())),
+      Float64Array.from({ length: 30_001 }, (_, index) =>
+        index % 1000 === 0 ? 1e6 * (random.nextUniform() - 0.5) : random.nextUniform(),
+      ),
     ];
     for (const values of cases) {
       const sorted = values.slice().sort();
@@ -184,7 +244,9 @@ describe('coverage intervals from partly ordered outputs', () => {
         orderTails(ordered, p);
         const tail = values.length - coveredCount(values.length, p);
         expect(Array.from(ordered.subarray(0, tail))).toEqual(Array.from(sorted.subarray(0, tail)));
-        expect(Array.from(ordered.subarray(values.length - tail))).toEqual(Array.from(sorted.subarray(values.length - tail)));
+        expect(Array.from(ordered.subarray(values.length - tail))).toEqual(
+          Array.from(sorted.subarray(values.length - tail)),
+        );
         expect(ordered.slice().sort()).toEqual(sorted);
       }
     }

@@ -90,7 +90,8 @@ export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options
     coverageProbability ??= coverageProbabilityOf(plan.settings.coverage);
   }
   const probability = coverageProbability ?? twoSigmaProbability;
-  if (!(probability > 0 && probability < 1)) throw new PlanError(['coverageProbability'], 'The coverage probability must lie between 0 and 1.');
+  if (!(probability > 0 && probability < 1))
+    throw new PlanError(['coverageProbability'], 'The coverage probability must lie between 0 and 1.');
   if (!Number.isInteger(options.seed) || options.seed < 0 || options.seed > 0xffffffff) {
     throw new PlanError(['seed'], 'The seed must be a whole number from 0 to 4294967295.');
   }
@@ -103,7 +104,14 @@ export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options
   const { sources } = model;
   const runChunk = (target: Float64Array, offset: number, count: number) => {
     for (let index = 0; index < sources.length; index += 1) {
-      fillSamples(evaluator.sourceColumns[index], count, sources[index].estimate, sources[index].distribution, random, words);
+      fillSamples(
+        evaluator.sourceColumns[index],
+        count,
+        sources[index].estimate,
+        sources[index].distribution,
+        random,
+        words,
+      );
     }
     evaluator.evaluate(count, target, offset);
   };
@@ -158,7 +166,10 @@ export function startMonteCarlo(input: CompiledModel | PlanInput | Plan, options
 
 function assertTrialsWithinCap(trials: number, path: string[]): void {
   if (trials > MAXIMUM_MONTE_CARLO_TRIALS) {
-    throw new PlanError(path, `A Monte Carlo run can have at most ${groupedDigits(MAXIMUM_MONTE_CARLO_TRIALS)} trials; ${groupedDigits(trials)} were asked for.`);
+    throw new PlanError(
+      path,
+      `A Monte Carlo run can have at most ${groupedDigits(MAXIMUM_MONTE_CARLO_TRIALS)} trials; ${groupedDigits(trials)} were asked for.`,
+    );
   }
 }
 
@@ -224,11 +235,20 @@ function startAdaptive(
         if (done === batchEnd) {
           const converged = finishBatch();
           if (converged || done + batchSize > maximumTrials) {
-            summary = summarise(outputs.slice(0, done), { converged, batches: batchStatistics.length, batchSize, numericalTolerance: tolerance });
+            summary = summarise(outputs.slice(0, done), {
+              converged,
+              batches: batchStatistics.length,
+              batchSize,
+              numericalTolerance: tolerance,
+            });
           }
         }
       }
-      return { trialsDone: done, trialsPlanned: (batchStatistics.length + (summary ? 0 : 1)) * batchSize, finished: summary !== undefined };
+      return {
+        trialsDone: done,
+        trialsPlanned: (batchStatistics.length + (summary ? 0 : 1)) * batchSize,
+        finished: summary !== undefined,
+      };
     },
     result() {
       if (summary === undefined) throw new Error('The Monte Carlo run has not finished.');
@@ -250,7 +270,8 @@ export function runMonteCarlo(
   const step = Math.max(options.chunkSize ?? defaultChunkSize, 65_536);
   for (;;) {
     const progress = run.advance(step);
-    if (options.onProgress?.(progress) === false && !progress.finished) throw new Error('The Monte Carlo run was cancelled.');
+    if (options.onProgress?.(progress) === false && !progress.finished)
+      throw new Error('The Monte Carlo run was cancelled.');
     if (progress.finished) return run.result();
   }
 }

@@ -42,7 +42,14 @@ const density = new Float64Array(layerCount);
  * (index and word, so length ≥ 2·count) and finished after the loop by standardNormalFrom, in index order: the
  * extra words those draw come after the chunk's `count` words, exactly as if the words had been made in bulk first.
  */
-export function fillNormal(target: Float64Array, count: number, estimate: number, u: number, random: RandomGenerator, scratch: Int32Array): void {
+export function fillNormal(
+  target: Float64Array,
+  count: number,
+  estimate: number,
+  u: number,
+  random: RandomGenerator,
+  scratch: Int32Array,
+): void {
   const state = random.state;
   let s0 = state[0];
   let s1 = state[1];
@@ -99,7 +106,8 @@ export function standardNormalFrom(firstBits: number, random: RandomGenerator): 
       } while (test + test < tail * tail);
       return word > 0 ? tailStart + tail : -tailStart - tail;
     }
-    if (density[layer] + random.nextUniform() * (density[layer - 1] - density[layer]) < Math.exp(-0.5 * x * x)) return x;
+    if (density[layer] + random.nextUniform() * (density[layer - 1] - density[layer]) < Math.exp(-0.5 * x * x))
+      return x;
     bits = random.nextUint32();
   }
 }

@@ -65,8 +65,11 @@ function describeIssue(issue: Issue, path: PlanPathSegment[]): string {
   // A cap on the plan's own lists ("A plan can have at most 20 steps; …") names what it counts.
   if (issue.code === 'too_big' && path.length <= 1) return issue.message;
   // A cap on a step's list says what it counts itself; the step is enough, not the field's name.
-  if (issue.code === 'too_big' && issue.origin === 'array') return `${describePath(path.slice(0, -1))}: ${issue.message}`;
-  if (issue.code === 'unrecognized_keys') return `${where} has fields the plan format does not know: ${issue.keys.join(', ')}.`;
-  if (issue.code === 'invalid_union') return `${where} is not one of the accepted forms; check its "kind" or "shape" and fields.`;
+  if (issue.code === 'too_big' && issue.origin === 'array')
+    return `${describePath(path.slice(0, -1))}: ${issue.message}`;
+  if (issue.code === 'unrecognized_keys')
+    return `${where} has fields the plan format does not know: ${issue.keys.join(', ')}.`;
+  if (issue.code === 'invalid_union')
+    return `${where} is not one of the accepted forms; check its "kind" or "shape" and fields.`;
   return `${where}: ${issue.message}`;
 }

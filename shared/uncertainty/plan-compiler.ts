@@ -22,7 +22,13 @@ type ChainState =
    * A solution: mass concentration (mg/L), mass fraction (mg/kg) or molality (mol/kg);
    * `densityGPerMl` converts between the first two; `containedMl` is the flask's volume, when known.
    */
-  | { kind: 'solution'; basis: 'massConcentration' | 'massFraction' | 'molality'; value: NodeReference; densityGPerMl: NodeReference; containedMl?: number };
+  | {
+      kind: 'solution';
+      basis: 'massConcentration' | 'massFraction' | 'molality';
+      value: NodeReference;
+      densityGPerMl: NodeReference;
+      containedMl?: number;
+    };
 
 const basisUnit = { massConcentration: 'mg/L', massFraction: 'mg/kg', molality: 'mol/kg' } as const;
 
@@ -53,20 +59,36 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
 
   let state = { kind: 'nothing' } as ChainState;
   plan.steps.forEach((step, stepIndex) => {
-    const context: StepContext = { builder, settings: plan.settings, atomicWeights, stepIndex, path: ['steps', stepIndex] };
+    const context: StepContext = {
+      builder,
+      settings: plan.settings,
+      atomicWeights,
+      stepIndex,
+      path: ['steps', stepIndex],
+    };
     state = applyStep(context, step, state, { analyte, analyteMolarMassNode, solutionDensity });
     if (state.kind === 'solution') {
-      builder.checkpoint({ stepIndex, label: `after step ${stepIndex + 1}`, node: state.value, unit: basisUnit[state.basis] });
+      builder.checkpoint({
+        stepIndex,
+        label: `after step ${stepIndex + 1}`,
+        node: state.value,
+        unit: basisUnit[state.basis],
+      });
     }
   });
 
   const finalState = state;
   if (finalState.kind !== 'solution') {
-    throw new PlanError(['steps', plan.steps.length - 1], 'The plan ends without a solution; finish with a make-up step (to volume, to mass, or in solvent).');
+    throw new PlanError(
+      ['steps', plan.steps.length - 1],
+      'The plan ends without a solution; finish with a make-up step (to volume, to mass, or in solvent).',
+    );
   }
   const output = unitOf(plan.settings.outputUnit, ['settings', 'outputUnit']);
   const outputNode = convertToUnit(builder, finalState, output, () => analyteMolarMassNode(plan.steps.length - 1));
-  const symbol = { massConcentration: 'c', amountConcentration: 'c', massFraction: 'w', molality: 'b' }[output.dimension];
+  const symbol = { massConcentration: 'c', amountConcentration: 'c', massFraction: 'w', molality: 'b' }[
+    output.dimension
+  ];
   return builder.build(outputNode, output.name, `${symbol}(${analyteSymbol})`);
 }
 
@@ -79,7 +101,8 @@ interface SharedNodes {
 function applyStep(context: StepContext, step: PlanStep, state: ChainState, shared: SharedNodes): ChainState {
   const { builder, path } = context;
   const requireState = (kind: ChainState['kind'], what: string) => {
-    if (state.kind !== kind) throw new PlanError([...path, 'kind'], `Step ${context.stepIndex + 1} (${step.kind}) ${what}.`);
+    if (state.kind !== kind)
+      throw new PlanError([...path, 'kind'], `Step ${context.stepIndex + 1} (${step.kind}) ${what}.`);
   };
   switch (step.kind) {
     case 'weighSolid': {
@@ -88,7 +111,11 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
       mass = addAbsoluteExtraSources(context, mass, step.extraSources, 'g');
       if (step.airBuoyancy !== undefined) {
         const density = step.material.densityKgPerM3;
-        if (density === undefined) throw new PlanError([...path, 'material', 'densityKgPerM3'], 'The air-buoyancy correction needs the density of the material.');
+        if (density === undefined)
+          throw new PlanError(
+            [...path, 'material', 'densityKgPerM3'],
+            'The air-buoyancy correction needs the density of the material.',
+          );
         const { airDensityKgPerM3: air, weightDensityKgPerM3: weights } = step.airBuoyancy;
         mass = builder.scale(mass, (1 - air / weights) / (1 - air / density));
       }
@@ -112,7 +139,11 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         molarMassNode(builder, compound, context.atomicWeights, context.stepIndex, formulaPath),
       );
       const amountMg = builder.multiply(builder.multiply(builder.scale(mass, 1000), purity), factor);
-      return { kind: 'portion', amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources), fromSolid: true };
+      return {
+        kind: 'portion',
+        amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
+        fromSolid: true,
+      };
     }
     case 'startFromCertifiedSolution': {
       requireState('nothing', 'must be the first step: a plan starts from one weighed solid or one certified solution');
@@ -153,12 +184,25 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
                 path: [...path, 'material', 'densityStandardUncertaintyGPerMl'],
               }),
             );
-      return { kind: 'solution', basis: unit.dimension === 'massFraction' ? 'massFraction' : 'massConcentration', value, densityGPerMl: density };
+      return {
+        kind: 'solution',
+        basis: unit.dimension === 'massFraction' ? 'massFraction' : 'massConcentration',
+        value,
+        densityGPerMl: density,
+      };
     }
     case 'makeUpToVolume': {
-      requireState('portion', 'makes up a weighed solid or an aliquot to volume; put a weighing or an aliquot before it');
+      requireState(
+        'portion',
+        'makes up a weighed solid or an aliquot to volume; put a weighing or an aliquot before it',
+      );
       if (state.kind !== 'portion') throw new Error('unreachable');
-      const volume = addAbsoluteExtraSources(context, glasswareVolume(context, step.flask, 'flask'), step.extraSources, 'mL');
+      const volume = addAbsoluteExtraSources(
+        context,
+        glasswareVolume(context, step.flask, 'flask'),
+        step.extraSources,
+        'mL',
+      );
       const concentration = builder.scale(builder.divide(state.amountMg, volume), 1000);
       return {
         kind: 'solution',
@@ -171,44 +215,105 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
     case 'pipetteAliquot': {
       requireState('solution', 'takes an aliquot of a solution; put a make-up step or a certified solution before it');
       if (state.kind !== 'solution') throw new Error('unreachable');
-      if (state.basis === 'molality') throw new PlanError([...path, 'kind'], 'An aliquot by volume of a molality solution cannot be converted to an amount; weigh it instead.');
+      if (state.basis === 'molality')
+        throw new PlanError(
+          [...path, 'kind'],
+          'An aliquot by volume of a molality solution cannot be converted to an amount; weigh it instead.',
+        );
       if (state.containedMl !== undefined && step.volumeMl >= state.containedMl) {
-        throw new PlanError([...path, 'volumeMl'], `The aliquot (${step.volumeMl} mL) is not smaller than the solution it is taken from (${state.containedMl} mL).`);
+        throw new PlanError(
+          [...path, 'volumeMl'],
+          `The aliquot (${step.volumeMl} mL) is not smaller than the solution it is taken from (${state.containedMl} mL).`,
+        );
       }
       const pipette = step.pipette;
       if (pipette.kind === 'glassPipette' && Math.abs(step.volumeMl - pipette.nominalMl) > 1e-9 * pipette.nominalMl) {
-        throw new PlanError([...path, 'volumeMl'], `A one-mark pipette delivers its nominal volume (${pipette.nominalMl} mL), not ${step.volumeMl} mL.`);
+        throw new PlanError(
+          [...path, 'volumeMl'],
+          `A one-mark pipette delivers its nominal volume (${pipette.nominalMl} mL), not ${step.volumeMl} mL.`,
+        );
       }
-      let volume = pipette.kind === 'glassPipette' ? glasswareVolume(context, pipette, 'pipette') : pistonVolume(context, pipette, step.volumeMl);
+      let volume =
+        pipette.kind === 'glassPipette'
+          ? glasswareVolume(context, pipette, 'pipette')
+          : pistonVolume(context, pipette, step.volumeMl);
       volume = addAbsoluteExtraSources(context, volume, step.extraSources, 'mL');
-      const massConcentration = state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, state.densityGPerMl);
+      const massConcentration =
+        state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, state.densityGPerMl);
       const amountMg = builder.scale(builder.multiply(massConcentration, volume), 1e-3);
-      return { kind: 'portion', amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources), fromSolid: false };
+      return {
+        kind: 'portion',
+        amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
+        fromSolid: false,
+      };
     }
     case 'weighAliquot': {
       requireState('solution', 'weighs an aliquot of a solution; put a make-up step or a certified solution before it');
       if (state.kind !== 'solution') throw new Error('unreachable');
-      if (state.basis === 'molality') throw new PlanError([...path, 'kind'], 'Diluting a molality solution is not supported; prepare the molality directly.');
-      const mass = addAbsoluteExtraSources(context, weighByDifference(context, step.balance, step.netMassG, step.containerMassG, 'netMassG'), step.extraSources, 'g');
-      const massFraction = state.basis === 'massFraction' ? state.value : builder.divide(state.value, state.densityGPerMl);
+      if (state.basis === 'molality')
+        throw new PlanError(
+          [...path, 'kind'],
+          'Diluting a molality solution is not supported; prepare the molality directly.',
+        );
+      const mass = addAbsoluteExtraSources(
+        context,
+        weighByDifference(context, step.balance, step.netMassG, step.containerMassG, 'netMassG'),
+        step.extraSources,
+        'g',
+      );
+      const massFraction =
+        state.basis === 'massFraction' ? state.value : builder.divide(state.value, state.densityGPerMl);
       const amountMg = builder.scale(builder.multiply(massFraction, mass), 1e-3);
-      return { kind: 'portion', amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources), fromSolid: false };
+      return {
+        kind: 'portion',
+        amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
+        fromSolid: false,
+      };
     }
     case 'makeUpToMass': {
-      requireState('portion', 'makes up a weighed solid or an aliquot to a final mass; put a weighing or an aliquot before it');
+      requireState(
+        'portion',
+        'makes up a weighed solid or an aliquot to a final mass; put a weighing or an aliquot before it',
+      );
       if (state.kind !== 'portion') throw new Error('unreachable');
-      const mass = addAbsoluteExtraSources(context, weighByDifference(context, step.balance, step.finalMassG, step.containerMassG, 'finalMassG'), step.extraSources, 'g');
+      const mass = addAbsoluteExtraSources(
+        context,
+        weighByDifference(context, step.balance, step.finalMassG, step.containerMassG, 'finalMassG'),
+        step.extraSources,
+        'g',
+      );
       const massFraction = builder.scale(builder.divide(state.amountMg, mass), 1000);
-      return { kind: 'solution', basis: 'massFraction', value: applyRelativeExtraSources(context, massFraction, step.extraSources), densityGPerMl: shared.solutionDensity };
+      return {
+        kind: 'solution',
+        basis: 'massFraction',
+        value: applyRelativeExtraSources(context, massFraction, step.extraSources),
+        densityGPerMl: shared.solutionDensity,
+      };
     }
     case 'dissolveInSolvent': {
       requireState('portion', 'dissolves a weighed solid in a weighed mass of solvent; put the weighing before it');
       if (state.kind !== 'portion' || !state.fromSolid) {
-        throw new PlanError([...path, 'kind'], 'A molality is prepared by dissolving the weighed solid itself; an aliquot of a solution already contains solvent.');
+        throw new PlanError(
+          [...path, 'kind'],
+          'A molality is prepared by dissolving the weighed solid itself; an aliquot of a solution already contains solvent.',
+        );
       }
-      const solvent = addAbsoluteExtraSources(context, weighByDifference(context, step.balance, step.solventMassG, step.containerMassG, 'solventMassG'), step.extraSources, 'g');
-      const molality = builder.divide(state.amountMg, builder.multiply(shared.analyteMolarMassNode(context.stepIndex), solvent));
-      return { kind: 'solution', basis: 'molality', value: applyRelativeExtraSources(context, molality, step.extraSources), densityGPerMl: shared.solutionDensity };
+      const solvent = addAbsoluteExtraSources(
+        context,
+        weighByDifference(context, step.balance, step.solventMassG, step.containerMassG, 'solventMassG'),
+        step.extraSources,
+        'g',
+      );
+      const molality = builder.divide(
+        state.amountMg,
+        builder.multiply(shared.analyteMolarMassNode(context.stepIndex), solvent),
+      );
+      return {
+        kind: 'solution',
+        basis: 'molality',
+        value: applyRelativeExtraSources(context, molality, step.extraSources),
+        densityGPerMl: shared.solutionDensity,
+      };
     }
   }
 }
@@ -240,13 +345,17 @@ function convertToUnit(
   analyteMolarMass: () => NodeReference,
 ): NodeReference {
   const mismatch = () =>
-    new PlanError(['settings', 'outputUnit'], `The plan prepares a ${describeBasis(state.basis)}; it cannot be stated in ${unit.name}.`);
+    new PlanError(
+      ['settings', 'outputUnit'],
+      `The plan prepares a ${describeBasis(state.basis)}; it cannot be stated in ${unit.name}.`,
+    );
   if (state.basis === 'molality') {
     if (unit.dimension !== 'molality') throw mismatch();
     return builder.scale(state.value, 1 / unit.factorToBase);
   }
   if (unit.dimension === 'molality') throw mismatch();
-  const massConcentration = () => (state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, state.densityGPerMl));
+  const massConcentration = () =>
+    state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, state.densityGPerMl);
   switch (unit.dimension) {
     case 'massConcentration':
       return builder.scale(massConcentration(), 1 / unit.factorToBase);
@@ -254,12 +363,17 @@ function convertToUnit(
       // c[mol/L] = c[mg/L] / (1000 mg/g · M[g/mol])
       return builder.scale(builder.divide(massConcentration(), analyteMolarMass()), 1e-3 / unit.factorToBase);
     case 'massFraction': {
-      const massFraction = state.basis === 'massFraction' ? state.value : builder.divide(state.value, state.densityGPerMl);
+      const massFraction =
+        state.basis === 'massFraction' ? state.value : builder.divide(state.value, state.densityGPerMl);
       return builder.scale(massFraction, 1 / unit.factorToBase);
     }
   }
 }
 
 function describeBasis(basis: 'massConcentration' | 'massFraction' | 'molality'): string {
-  return { massConcentration: 'mass concentration', massFraction: 'mass fraction', molality: 'molality (mol/kg of solvent)' }[basis];
+  return {
+    massConcentration: 'mass concentration',
+    massFraction: 'mass fraction',
+    molality: 'molality (mol/kg of solvent)',
+  }[basis];
 }

@@ -14,7 +14,8 @@ describe('generated plan JSON Schema', () => {
 });
 
 describe('budget CLI', () => {
-  const run = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/budget.ts', ...args], { cwd: root, encoding: 'utf8' });
+  const run = (...args: string[]) =>
+    spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/budget.ts', ...args], { cwd: root, encoding: 'utf8' });
 
   it('prints the budget, Monte Carlo summary and validation as JSON', () => {
     const result = run('tests/fixtures/engine/eurachem-cg4-a1.json', '--trials', '20000', '--seed', '3');
@@ -37,10 +38,19 @@ describe('budget CLI', () => {
     // The printed validation follows from the printed numbers (JCGM 101:2008 §8): d_low = |y − U − y_low|,
     // d_high = |y + U − y_high|, passed when both are within δ. JSON carries the same doubles, so 9 decimals.
     const { validation, monteCarlo } = output;
-    expect(validation.lowEndDifference).toBeCloseTo(Math.abs(output.value - output.expandedUncertainty - monteCarlo.symmetricInterval.low), 9);
-    expect(validation.highEndDifference).toBeCloseTo(Math.abs(output.value + output.expandedUncertainty - monteCarlo.symmetricInterval.high), 9);
+    expect(validation.lowEndDifference).toBeCloseTo(
+      Math.abs(output.value - output.expandedUncertainty - monteCarlo.symmetricInterval.low),
+      9,
+    );
+    expect(validation.highEndDifference).toBeCloseTo(
+      Math.abs(output.value + output.expandedUncertainty - monteCarlo.symmetricInterval.high),
+      9,
+    );
     expect(validation.numericalTolerance).toBeGreaterThan(0);
-    expect(validation.passed).toBe(validation.lowEndDifference <= validation.numericalTolerance && validation.highEndDifference <= validation.numericalTolerance);
+    expect(validation.passed).toBe(
+      validation.lowEndDifference <= validation.numericalTolerance &&
+        validation.highEndDifference <= validation.numericalTolerance,
+    );
     expect(output.contributions.length).toBeGreaterThan(5);
   });
 

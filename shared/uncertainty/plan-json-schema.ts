@@ -7,6 +7,7 @@ export function planJsonSchema(): Record<string, unknown> {
     ...z.toJSONSchema(planSchema, { io: 'input', target: 'draft-2020-12' }),
     $id: 'https://dilutrace.example/schemas/plan.schema.json',
     title: 'Dilutrace plan document',
-    description: 'A solution preparation: analyte, settings and steps with inline equipment data. See docs/plan-format.md.',
+    description:
+      'A solution preparation: analyte, settings and steps with inline equipment data. See docs/plan-format.md.',
   };
 }

@@ -18,7 +18,8 @@ const nonNegative = (what: string) => z.number().finite().nonnegative(`${what} m
 const extraSources = z
   .array(extraSourceSchema)
   .max(MAXIMUM_EXTRA_SOURCES_PER_STEP, {
-    error: (issue) => `A step can have at most ${MAXIMUM_EXTRA_SOURCES_PER_STEP} extra sources; it has ${(issue.input as unknown[]).length}.`,
+    error: (issue) =>
+      `A step can have at most ${MAXIMUM_EXTRA_SOURCES_PER_STEP} extra sources; it has ${(issue.input as unknown[]).length}.`,
   })
   .default([]);
 
@@ -33,16 +34,23 @@ const weighSolidStep = z
     containerMassG: nonNegative('The container mass').default(0),
     /** Air-buoyancy correction m = W·(1 − ρ_air/ρ_weights)/(1 − ρ_air/ρ_material); needs material.densityKgPerM3. */
     airBuoyancy: z
-      .object({ airDensityKgPerM3: positive('The air density').default(1.2), weightDensityKgPerM3: positive('The density of the weights').default(8000) })
+      .object({
+        airDensityKgPerM3: positive('The air density').default(1.2),
+        weightDensityKgPerM3: positive('The density of the weights').default(8000),
+      })
       .strict()
       .optional(),
     extraSources,
   })
   .strict();
 
-const startFromCertifiedSolutionStep = z.object({ kind: z.literal('startFromCertifiedSolution'), material: certifiedSolutionSchema, extraSources }).strict();
+const startFromCertifiedSolutionStep = z
+  .object({ kind: z.literal('startFromCertifiedSolution'), material: certifiedSolutionSchema, extraSources })
+  .strict();
 
-const makeUpToVolumeStep = z.object({ kind: z.literal('makeUpToVolume'), flask: volumetricFlaskSchema, extraSources }).strict();
+const makeUpToVolumeStep = z
+  .object({ kind: z.literal('makeUpToVolume'), flask: volumetricFlaskSchema, extraSources })
+  .strict();
 
 const pipetteAliquotStep = z
   .object({
@@ -96,7 +104,13 @@ export const stepSchema = z.discriminatedUnion('kind', [
 ]);
 
 export const coverageSchema = z.union([
-  z.object({ probability: z.union([z.literal(0.9545), z.literal(0.95)], { error: 'The coverage probability is 0.9545 (k = 2 for a normal distribution) or 0.95.' }) }).strict(),
+  z
+    .object({
+      probability: z.union([z.literal(0.9545), z.literal(0.95)], {
+        error: 'The coverage probability is 0.9545 (k = 2 for a normal distribution) or 0.95.',
+      }),
+    })
+    .strict(),
   z
     .object({
       k: z
@@ -118,9 +132,17 @@ export const settingsSchema = z
     solutionExpansionPerC: nonNegative('The expansion coefficient').default(2.1e-4),
     coverage: coverageSchema.default({ probability: 0.9545 }),
     defaultGlasswareDistribution: z.enum(['triangular', 'rectangular']).default('triangular'),
-    outputUnit: z.enum(concentrationUnitNames, { error: `Unknown unit. Use one of: ${concentrationUnitNames.join(', ')}.` }),
+    outputUnit: z.enum(concentrationUnitNames, {
+      error: `Unknown unit. Use one of: ${concentrationUnitNames.join(', ')}.`,
+    }),
     /** Density of the prepared solutions; water at labTemperatureC when left out. */
-    solutionDensity: z.object({ densityGPerMl: positive('The density'), standardUncertaintyGPerMl: nonNegative('The density uncertainty') }).strict().optional(),
+    solutionDensity: z
+      .object({
+        densityGPerMl: positive('The density'),
+        standardUncertaintyGPerMl: nonNegative('The density uncertainty'),
+      })
+      .strict()
+      .optional(),
   })
   .strict();
 
@@ -135,7 +157,10 @@ export const planSchema = z
     steps: z
       .array(stepSchema)
       .min(1, 'A plan needs at least one step.')
-      .max(MAXIMUM_PLAN_STEPS, { error: (issue) => `A plan can have at most ${MAXIMUM_PLAN_STEPS} steps; this one has ${(issue.input as unknown[]).length}.` }),
+      .max(MAXIMUM_PLAN_STEPS, {
+        error: (issue) =>
+          `A plan can have at most ${MAXIMUM_PLAN_STEPS} steps; this one has ${(issue.input as unknown[]).length}.`,
+      }),
   })
   .strict();
 

@@ -37,7 +37,12 @@ describe('xoshiro128** generator', () => {
     const words: [number, number, number, number] = [0xdeadbeef, 0x80000001, 0x7fffffff, 0xffffffff];
     const generator = RandomGenerator.fromState(words);
     const ours = Array.from({ length: 200 }, () => generator.nextUint32());
-    expect(ours).toEqual(referenceXoshiro(words.map((word) => BigInt(word >>> 0)), 200));
+    expect(ours).toEqual(
+      referenceXoshiro(
+        words.map((word) => BigInt(word >>> 0)),
+        200,
+      ),
+    );
   });
 
   it('is deterministic for a seed and differs between seeds', () => {
@@ -65,7 +70,11 @@ describe('samplers reproduce the moments of their distributions', () => {
     ['triangular', { shape: 'triangular', halfWidth: 1 }, Math.sqrt(jStat.triangular.variance(-1, 1, 0))],
     ['arcsine', { shape: 'arcsine', halfWidth: 1 }, Math.sqrt(jStat.arcsine.variance(-1, 1))],
     // JCGM 101:2008 §6.4.9 (from memory): scaled t with ν = n − 1 = 5 and scale s/√n has variance (s²/n)·ν/(ν − 2).
-    ['Student t (ν = 5)', { shape: 'studentT', standardDeviation: 1, observations: 6, meanOfReadings: true }, Math.sqrt((1 / 6) * (5 / 3))],
+    [
+      'Student t (ν = 5)',
+      { shape: 'studentT', standardDeviation: 1, observations: 6, meanOfReadings: true },
+      Math.sqrt((1 / 6) * (5 / 3)),
+    ],
   ];
   it.each(cases)('%s', (_name, distribution, sigma) => {
     const { mean, standardDeviation } = sample(distribution);
@@ -79,7 +88,9 @@ describe('samplers reproduce the moments of their distributions', () => {
     for (const z of [-2, -1, 0, 1, 2.5, 3.5]) {
       const expected = jStat.normal.cdf(z, 0, 1);
       const observed = values.filter((value) => value <= z).length / count;
-      expect(Math.abs(observed - expected)).toBeLessThanOrEqual(5 * Math.sqrt((expected * (1 - expected)) / count) + 1e-6);
+      expect(Math.abs(observed - expected)).toBeLessThanOrEqual(
+        5 * Math.sqrt((expected * (1 - expected)) / count) + 1e-6,
+      );
     }
   });
 });
@@ -100,11 +111,13 @@ describe('samplers draw the stream as defined: per source, all its words in bulk
     } else if (distribution.shape === 'rectangular') {
       random.fillInt32(words, count);
       const width = 2 * a * 2 ** -32;
-      for (let index = 0; index < count; index += 1) values[index] = 10 - a + (2 ** 31 + 0.5) * width + width * words[index];
+      for (let index = 0; index < count; index += 1)
+        values[index] = 10 - a + (2 ** 31 + 0.5) * width + width * words[index];
     } else {
       random.fillInt32(words, 2 * count);
       const scale = a * 2 ** -32;
-      for (let index = 0; index < count; index += 1) values[index] = 10 - a + (2 ** 32 + 1) * scale + scale * (words[2 * index] + words[2 * index + 1]);
+      for (let index = 0; index < count; index += 1)
+        values[index] = 10 - a + (2 ** 32 + 1) * scale + scale * (words[2 * index] + words[2 * index + 1]);
     }
     return values;
   };

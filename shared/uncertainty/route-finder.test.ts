@@ -7,11 +7,16 @@ import { findRoutes, type RouteRequest } from './route-finder';
 
 const fixtures = new URL('../../tests/fixtures/plans/', import.meta.url);
 const readJson = <T>(relative: string): T => JSON.parse(readFileSync(new URL(relative, fixtures), 'utf8')) as T;
-type Library = { balances: { itemId: string; capacityG: number; readabilityG: number; repeatabilityG: number }[]; flasks: { itemId: string; nominalMl: number }[]; pipettes: { itemId: string; kind: string; nominalMl?: number }[] };
+type Library = {
+  balances: { itemId: string; capacityG: number; readabilityG: number; repeatabilityG: number }[];
+  flasks: { itemId: string; nominalMl: number }[];
+  pipettes: { itemId: string; kind: string; nominalMl?: number }[];
+};
 const library = readJson<Library>('library/demo-equipment-library.json');
 const selenium = readJson<{ steps: { material: RouteRequest['material'] }[] }>('selenium-working-standard.json');
 const lead = readJson<{ steps: { material: RouteRequest['material'] }[] }>('lead-standard-from-nitrate.json');
-const pick = <T extends { itemId: string }>(items: T[], ids: string[]) => ids.map((id) => items.find((item) => item.itemId === id) as T);
+const pick = <T extends { itemId: string }>(items: T[], ids: string[]) =>
+  ids.map((id) => items.find((item) => item.itemId === id) as T);
 
 const twoDigits = (value: number) => Number(value.toPrecision(2));
 
@@ -38,10 +43,27 @@ describe('route finder', () => {
     // (10 mL into 100 mL, then 10 mL into the other 100 mL); a 10 mL aliquot cannot come from the 10 mL flask.
     const exhaustive: PlanInput[] = [];
     const start = { kind: 'startFromCertifiedSolution' as const, material: certified };
-    const flask = (id: string) => ({ kind: 'makeUpToVolume' as const, flask: smallFlasks.find((item) => item.itemId === id) as RouteRequest['flasks'][number] });
-    const aliquot = (id: string, volumeMl: number) => ({ kind: 'pipetteAliquot' as const, pipette: smallPipettes.find((item) => item.itemId === id) as NonNullable<RouteRequest['pipettes']>[number], volumeMl });
-    const plan = (steps: PlanInput['steps']): PlanInput => ({ formatVersion: 1, analyte: { formula: 'Se' }, settings: { outputUnit: 'mg/L' }, steps });
-    for (const [pipette, volume] of [['GP-1-A', 1], ['PP-07', 1]] as const) for (const target of ['F-100-A', 'F-100-B']) exhaustive.push(plan([start, aliquot(pipette, volume), flask(target)]));
+    const flask = (id: string) => ({
+      kind: 'makeUpToVolume' as const,
+      flask: smallFlasks.find((item) => item.itemId === id) as RouteRequest['flasks'][number],
+    });
+    const aliquot = (id: string, volumeMl: number) => ({
+      kind: 'pipetteAliquot' as const,
+      pipette: smallPipettes.find((item) => item.itemId === id) as NonNullable<RouteRequest['pipettes']>[number],
+      volumeMl,
+    });
+    const plan = (steps: PlanInput['steps']): PlanInput => ({
+      formatVersion: 1,
+      analyte: { formula: 'Se' },
+      settings: { outputUnit: 'mg/L' },
+      steps,
+    });
+    for (const [pipette, volume] of [
+      ['GP-1-A', 1],
+      ['PP-07', 1],
+    ] as const)
+      for (const target of ['F-100-A', 'F-100-B'])
+        exhaustive.push(plan([start, aliquot(pipette, volume), flask(target)]));
     exhaustive.push(plan([start, aliquot('GP-10-A', 10), flask('F-100-A'), aliquot('GP-10-A', 10), flask('F-100-B')]));
     const best = Math.min(...exhaustive.map((entry) => evaluatePlan(entry).relativeExpandedUncertainty));
     expect(twoDigits(result.routes[0].relativeExpandedUncertainty)).toBe(twoDigits(best));
@@ -57,7 +79,11 @@ describe('route finder', () => {
     expect(routes.length).toBeGreaterThan(1);
     for (const route of routes) {
       expect(Math.abs(route.value / 10 - 1)).toBeLessThanOrEqual(0.005);
-      const steps = route.plan.steps as { kind: string; flask?: { itemId: string; nominalMl: number }; volumeMl?: number }[];
+      const steps = route.plan.steps as {
+        kind: string;
+        flask?: { itemId: string; nominalMl: number };
+        volumeMl?: number;
+      }[];
       const flasks = steps.filter((step) => step.flask).map((step) => step.flask?.itemId);
       expect(new Set(flasks).size).toBe(flasks.length);
       expect(flasks.length).toBeGreaterThan(0);
@@ -81,8 +107,13 @@ describe('route finder', () => {
     });
     expect(result.routes.length).toBe(10);
     for (const route of result.routes) {
-      const weighing = route.plan.steps[0] as { balance: { capacityG: number; readabilityG: number; repeatabilityG: number }; netMassG: number };
-      expect(weighing.netMassG).toBeGreaterThanOrEqual(minimumWeightG(weighing.balance.repeatabilityG, weighing.balance.readabilityG) * (1 - 1e-3));
+      const weighing = route.plan.steps[0] as {
+        balance: { capacityG: number; readabilityG: number; repeatabilityG: number };
+        netMassG: number;
+      };
+      expect(weighing.netMassG).toBeGreaterThanOrEqual(
+        minimumWeightG(weighing.balance.repeatabilityG, weighing.balance.readabilityG) * (1 - 1e-3),
+      );
       expect(weighing.netMassG).toBeLessThanOrEqual(weighing.balance.capacityG);
       expect(Math.abs(route.value / 10 - 1)).toBeLessThan(0.01); // mass rounded to the balance's readability
     }
@@ -96,7 +127,9 @@ describe('route finder', () => {
   // route reaches: nothing tightens the search bound, so before the search had a budget it enumerated every
   // sequence of up to three dilutions (its cost grows with the cube of the library) on the request thread.
   const many = <T extends { itemId: string }>(items: T[], copies: number) =>
-    Array.from({ length: copies }, (_, copy) => items.map((item) => ({ ...item, itemId: `${item.itemId}-${copy}` }))).flat();
+    Array.from({ length: copies }, (_, copy) =>
+      items.map((item) => ({ ...item, itemId: `${item.itemId}-${copy}` })),
+    ).flat();
   const unreachable: RouteRequest = {
     ...small,
     target: { value: 0.0123457, unit: 'mg/L' },

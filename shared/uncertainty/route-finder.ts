@@ -34,7 +34,12 @@ export const ROUTE_SEARCH_BUDGET = 2_000_000;
 /** What the route finder is asked: target, material, the equipment on hand, and search limits. */
 export const routeRequestSchema = z
   .object({
-    target: z.object({ value: z.number().positive('The target concentration must be greater than zero.'), unit: z.enum(concentrationUnitNames) }).strict(),
+    target: z
+      .object({
+        value: z.number().positive('The target concentration must be greater than zero.'),
+        unit: z.enum(concentrationUnitNames),
+      })
+      .strict(),
     /** The element or ion stated, as a formula ("Pb"). */
     analyte: z.object({ formula: formulaSchema }).strict(),
     material: z.discriminatedUnion('kind', [solidMaterialSchema, certifiedSolutionSchema]),
@@ -113,18 +118,26 @@ export function findRoutes(input: RouteRequest): RouteResult {
   const request = parseWithSchema(routeRequestSchema, input);
   const unit = unitOf(request.target.unit, ['target', 'unit']);
   if (unit.dimension === 'massFraction' || unit.dimension === 'molality') {
-    throw new PlanError(['target', 'unit'], 'The route finder plans volumetric routes; give the target as a mass or amount concentration (e.g. mg/L or µmol/L).');
+    throw new PlanError(
+      ['target', 'unit'],
+      'The route finder plans volumetric routes; give the target as a mass or amount concentration (e.g. mg/L or µmol/L).',
+    );
   }
   const analyteMolarMass = molarMass(request.analyte.formula, undefined, ['analyte', 'formula']).valueGPerMol;
   const targetMgPerL =
-    unit.dimension === 'massConcentration' ? request.target.value * unit.factorToBase : request.target.value * unit.factorToBase * analyteMolarMass * 1000;
+    unit.dimension === 'massConcentration'
+      ? request.target.value * unit.factorToBase
+      : request.target.value * unit.factorToBase * analyteMolarMass * 1000;
   const settings = settingsSchema.parse({ ...request.settings, outputUnit: request.target.unit });
   const { maximumDilutions, limit, relativeTargetTolerance: tolerance } = request;
   const keep = Math.max(4 * limit, 20);
   const temperatureVariance = (settings.solutionExpansionPerC * settings.temperatureHalfRangeC) ** 2 / 3;
-  const toleranceFactor = (shape: 'triangular' | 'rectangular' | undefined) => ((shape ?? settings.defaultGlasswareDistribution) === 'triangular' ? 6 : 3);
+  const toleranceFactor = (shape: 'triangular' | 'rectangular' | undefined) =>
+    (shape ?? settings.defaultGlasswareDistribution) === 'triangular' ? 6 : 3;
   const flaskVariance = (flask: VolumetricFlask) =>
-    (flask.toleranceMl ** 2 / toleranceFactor(flask.toleranceDistribution) + flask.fillRepeatabilityMl ** 2) / flask.nominalMl ** 2 + temperatureVariance;
+    (flask.toleranceMl ** 2 / toleranceFactor(flask.toleranceDistribution) + flask.fillRepeatabilityMl ** 2) /
+      flask.nominalMl ** 2 +
+    temperatureVariance;
 
   let searchSteps = 0;
   /** Counts one partial route (or dilution stage) looked at; false once the budget is spent. */
@@ -138,7 +151,9 @@ export function findRoutes(input: RouteRequest): RouteResult {
     for (const volumeMl of pipetteVolumesMl(pipette)) {
       const pipetteVariance =
         pipette.kind === 'glassPipette'
-          ? (pipette.toleranceMl ** 2 / toleranceFactor(pipette.toleranceDistribution) + pipette.fillRepeatabilityMl ** 2) / volumeMl ** 2
+          ? (pipette.toleranceMl ** 2 / toleranceFactor(pipette.toleranceDistribution) +
+              pipette.fillRepeatabilityMl ** 2) /
+            volumeMl ** 2
           : pistonVariance(pipette, volumeMl);
       request.flasks.forEach((flask, flaskIndex) => {
         if (volumeMl >= flask.nominalMl || !withinBudget()) return;
@@ -174,14 +189,19 @@ export function findRoutes(input: RouteRequest): RouteResult {
     const analyte = molarMass(request.analyte.formula, undefined, ['analyte', 'formula']);
     const count = analyteCountIn(compound.composition, analyte.composition, material.analyteCount, ['material']);
     const factor = (count * analyte.valueGPerMol) / compound.valueGPerMol;
-    const compositionVariance = (standardUncertainty(material.purity.uncertainty) / purity) ** 2 + (compound.standardUncertaintyGPerMol / compound.valueGPerMol) ** 2;
+    const compositionVariance =
+      (standardUncertainty(material.purity.uncertainty) / purity) ** 2 +
+      (compound.standardUncertaintyGPerMol / compound.valueGPerMol) ** 2;
     const starts = request.balances.flatMap((balance, balanceIndex) =>
       request.flasks.map((flask, flaskIndex) => ({ balance, balanceIndex, flask, flaskIndex })),
     );
     starts.forEach((start, startIndex) => {
       const sensitivity = start.balance.sensitivity;
-      const sensitivityVariance = sensitivity === undefined ? 0 : (sensitivity.relativeExpandedUncertainty / sensitivity.coverageFactor) ** 2;
-      const readingVariance = 2 * (start.balance.repeatabilityG ** 2 + start.balance.readabilityG ** 2 / 12 + start.balance.linearityG ** 2 / 3);
+      const sensitivityVariance =
+        sensitivity === undefined ? 0 : (sensitivity.relativeExpandedUncertainty / sensitivity.coverageFactor) ** 2;
+      const readingVariance =
+        2 *
+        (start.balance.repeatabilityG ** 2 + start.balance.readabilityG ** 2 / 12 + start.balance.linearityG ** 2 / 3);
       const base = flaskVariance(start.flask) + compositionVariance + sensitivityVariance;
       const minimumG = minimumWeightG(start.balance.repeatabilityG, start.balance.readabilityG);
       const maximumG = Math.min(start.balance.capacityG, request.maximumMaterialG ?? Infinity);
@@ -191,11 +211,22 @@ export function findRoutes(input: RouteRequest): RouteResult {
       const visit = (chosen: Stage[], dilution: number, variance: number, previousMl: number) => {
         const massG = massPerFactor * dilution;
         if (massG > maximumG) return;
-        if (massG >= minimumG) offer({ approximateVariance: variance + readingVariance / massG ** 2, startIndex, stages: [...chosen], massG });
+        if (massG >= minimumG)
+          offer({
+            approximateVariance: variance + readingVariance / massG ** 2,
+            startIndex,
+            stages: [...chosen],
+            massG,
+          });
         if (chosen.length === maximumDilutions) return;
         for (const stage of stages) {
           if (variance + stage.relativeVariance >= bound() || !withinBudget()) break;
-          if (used.has(stage.flaskIndex) || stage.volumeMl >= previousMl || massPerFactor * dilution * stage.factor > maximumG) continue;
+          if (
+            used.has(stage.flaskIndex) ||
+            stage.volumeMl >= previousMl ||
+            massPerFactor * dilution * stage.factor > maximumG
+          )
+            continue;
           used.add(stage.flaskIndex);
           chosen.push(stage);
           visit(chosen, dilution * stage.factor, variance + stage.relativeVariance, stage.flaskMl);
@@ -205,30 +236,41 @@ export function findRoutes(input: RouteRequest): RouteResult {
       };
       visit([], 1, base, start.flask.nominalMl);
     });
-    return rankCandidates(kept, request, settings.outputUnit, limit, { feasibleCandidates, searchSteps }, (candidate) => {
-      const start = starts[candidate.startIndex];
-      const massG = roundMass(candidate.massG ?? 0, start.balance.readabilityG);
-      return {
-        steps: [
-          { kind: 'weighSolid', material, balance: start.balance, netMassG: massG },
-          { kind: 'makeUpToVolume', flask: start.flask },
-        ],
-        materialUsed: { massG },
-        firstLabel: `${massG} g on ${start.balance.itemId} → ${start.flask.itemId} (${start.flask.nominalMl} mL)`,
-        startVolumeMl: start.flask.nominalMl,
-        signature: JSON.stringify([start.balanceIndex, flaskSpecification(start.flask)]),
-      };
-    });
+    return rankCandidates(
+      kept,
+      request,
+      settings.outputUnit,
+      limit,
+      { feasibleCandidates, searchSteps },
+      (candidate) => {
+        const start = starts[candidate.startIndex];
+        const massG = roundMass(candidate.massG ?? 0, start.balance.readabilityG);
+        return {
+          steps: [
+            { kind: 'weighSolid', material, balance: start.balance, netMassG: massG },
+            { kind: 'makeUpToVolume', flask: start.flask },
+          ],
+          materialUsed: { massG },
+          firstLabel: `${massG} g on ${start.balance.itemId} → ${start.flask.itemId} (${start.flask.nominalMl} mL)`,
+          startVolumeMl: start.flask.nominalMl,
+          signature: JSON.stringify([start.balanceIndex, flaskSpecification(start.flask)]),
+        };
+      },
+    );
   }
 
   const certifiedUnit = unitOf(material.certifiedUnit, ['material', 'certifiedUnit']);
   const densityGPerMl = material.densityGPerMl ?? waterDensityKgPerM3(settings.labTemperatureC) / 1000;
-  const startMgPerL = material.certifiedValue * certifiedUnit.factorToBase * (certifiedUnit.dimension === 'massFraction' ? densityGPerMl : 1);
+  const startMgPerL =
+    material.certifiedValue *
+    certifiedUnit.factorToBase *
+    (certifiedUnit.dimension === 'massFraction' ? densityGPerMl : 1);
   const certificateVariance = (standardUncertainty(material.uncertainty) / material.certifiedValue) ** 2;
   const wantedDilution = startMgPerL / targetMgPerL;
   const used = new Set<number>();
   const visit = (chosen: Stage[], dilution: number, variance: number, previousMl: number) => {
-    if (Math.abs(dilution / wantedDilution - 1) <= tolerance) offer({ approximateVariance: variance, startIndex: 0, stages: [...chosen] });
+    if (Math.abs(dilution / wantedDilution - 1) <= tolerance)
+      offer({ approximateVariance: variance, startIndex: 0, stages: [...chosen] });
     if (chosen.length === maximumDilutions || dilution > wantedDilution * (1 + tolerance)) return;
     for (const stage of stages) {
       if (variance + stage.relativeVariance >= bound() || !withinBudget()) break;
@@ -241,13 +283,20 @@ export function findRoutes(input: RouteRequest): RouteResult {
     }
   };
   visit([], 1, certificateVariance, Infinity);
-  return rankCandidates(kept, request, settings.outputUnit, limit, { feasibleCandidates, searchSteps }, (candidate) => ({
-    steps: [{ kind: 'startFromCertifiedSolution', material }],
-    materialUsed: { volumeMl: candidate.stages[0]?.volumeMl ?? 0 },
-    firstLabel: `${material.name} (${material.itemId})`,
-    startVolumeMl: 0,
-    signature: '',
-  }));
+  return rankCandidates(
+    kept,
+    request,
+    settings.outputUnit,
+    limit,
+    { feasibleCandidates, searchSteps },
+    (candidate) => ({
+      steps: [{ kind: 'startFromCertifiedSolution', material }],
+      materialUsed: { volumeMl: candidate.stages[0]?.volumeMl ?? 0 },
+      firstLabel: `${material.name} (${material.itemId})`,
+      startVolumeMl: 0,
+      signature: '',
+    }),
+  );
 }
 
 function rankCandidates(
@@ -256,14 +305,24 @@ function rankCandidates(
   outputUnit: ConcentrationUnit,
   limit: number,
   search: { feasibleCandidates: number; searchSteps: number },
-  startOf: (candidate: Candidate) => { steps: PlanInput['steps']; materialUsed: Route['materialUsed']; firstLabel: string; startVolumeMl: number; signature: string },
+  startOf: (candidate: Candidate) => {
+    steps: PlanInput['steps'];
+    materialUsed: Route['materialUsed'];
+    firstLabel: string;
+    startVolumeMl: number;
+    signature: string;
+  },
 ): RouteResult {
   // Items with identical specifications (two 1000 mL class A flasks) give the same route twice: keep one.
   const seen = new Set<string>();
   const distinct = candidates.filter((candidate) => {
     const signature = JSON.stringify([
       startOf(candidate).signature,
-      candidate.stages.map((stage) => [stage.pipetteIndex, stage.volumeMl, flaskSpecification(request.flasks[stage.flaskIndex])]),
+      candidate.stages.map((stage) => [
+        stage.pipetteIndex,
+        stage.volumeMl,
+        flaskSpecification(request.flasks[stage.flaskIndex]),
+      ]),
     ]);
     if (seen.has(signature)) return false;
     seen.add(signature);
@@ -299,7 +358,8 @@ function rankCandidates(
       warnings: budget.warnings,
     };
   });
-  const material = (route: Route) => ('massG' in route.materialUsed ? route.materialUsed.massG : route.materialUsed.volumeMl);
+  const material = (route: Route) =>
+    'massG' in route.materialUsed ? route.materialUsed.massG : route.materialUsed.volumeMl;
   routes.sort(
     (left, right) =>
       twoDigits(left.relativeExpandedUncertainty) - twoDigits(right.relativeExpandedUncertainty) ||
@@ -333,7 +393,8 @@ function pipetteVolumesMl(pipette: GlassPipette | PistonPipette): number[] {
   if (pipette.kind === 'glassPipette') return [pipette.nominalMl];
   const { minimumUl, maximumUl } = pipette.volumeRangeUl;
   const volumes = new Set<number>([maximumUl]);
-  for (const entry of pipette.errorSpecifications) if (entry.volumeUl >= minimumUl && entry.volumeUl <= maximumUl) volumes.add(entry.volumeUl);
+  for (const entry of pipette.errorSpecifications)
+    if (entry.volumeUl >= minimumUl && entry.volumeUl <= maximumUl) volumes.add(entry.volumeUl);
   return [...volumes].map((volumeUl) => volumeUl / 1000);
 }
 

@@ -25,7 +25,10 @@ export function fillSamples(
 ): void {
   switch (distribution.shape) {
     case 'normal': {
-      const u = 'standardUncertainty' in distribution ? distribution.standardUncertainty : distribution.expandedUncertainty / distribution.coverageFactor;
+      const u =
+        'standardUncertainty' in distribution
+          ? distribution.standardUncertainty
+          : distribution.expandedUncertainty / distribution.coverageFactor;
       fillNormal(target, count, estimate, u, random, words);
       return;
     }
@@ -45,12 +48,15 @@ export function fillSamples(
     case 'arcsine': {
       const a = distribution.halfWidth;
       random.fillInt32(words, count);
-      for (let index = 0; index < count; index += 1) target[index] = estimate + a * Math.sin(twoPi * (words[index] + signOffset + 0.5) * wordToUniform);
+      for (let index = 0; index < count; index += 1)
+        target[index] = estimate + a * Math.sin(twoPi * (words[index] + signOffset + 0.5) * wordToUniform);
       return;
     }
     case 'studentT': {
       const nu = distribution.observations - 1;
-      const scale = distribution.meanOfReadings ? distribution.standardDeviation / Math.sqrt(distribution.observations) : distribution.standardDeviation;
+      const scale = distribution.meanOfReadings
+        ? distribution.standardDeviation / Math.sqrt(distribution.observations)
+        : distribution.standardDeviation;
       for (let index = 0; index < count; index += 1) {
         let u: number;
         let w: number;

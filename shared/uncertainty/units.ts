@@ -29,7 +29,10 @@ export const concentrationUnitNames = Object.keys(concentrationUnits) as [Concen
  * Looks a unit up; the Greek μ (U+03BC) is read as the micro sign µ (U+00B5). Anything else unknown is an error.
  * @throws PlanError
  */
-export function unitOf(text: string, path: PlanPathSegment[]): (typeof concentrationUnits)[ConcentrationUnit] & { name: ConcentrationUnit } {
+export function unitOf(
+  text: string,
+  path: PlanPathSegment[],
+): (typeof concentrationUnits)[ConcentrationUnit] & { name: ConcentrationUnit } {
   const name = text.replace(/\u03bc/g, '\u00b5');
   if (name in concentrationUnits) {
     const unit = name as ConcentrationUnit;

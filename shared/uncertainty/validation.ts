@@ -18,7 +18,11 @@ export interface GumValidation {
  * y ± U_p and the Monte Carlo probabilistically symmetric interval [y_low, y_high] for the same p,
  * d_low = |y − U_p − y_low|, d_high = |y + U_p − y_high|; validated when both ≤ δ.
  */
-export function validateAgainstGum(budget: BudgetResult, monteCarlo: MonteCarloResult, significantDigits = 2): GumValidation {
+export function validateAgainstGum(
+  budget: BudgetResult,
+  monteCarlo: MonteCarloResult,
+  significantDigits = 2,
+): GumValidation {
   const tolerance = numericalTolerance(budget.standardUncertainty, significantDigits);
   const lowEndDifference = Math.abs(budget.value - budget.expandedUncertainty - monteCarlo.symmetricInterval.low);
   const highEndDifference = Math.abs(budget.value + budget.expandedUncertainty - monteCarlo.symmetricInterval.high);

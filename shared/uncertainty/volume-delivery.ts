@@ -28,7 +28,11 @@ function temperatureEffect(context: StepContext, volumeMl: number, label: string
  * δ_tolerance (triangular or rectangular over ± the class tolerance, ISO 1042:1998 / ISO 648:2008) belongs to the item
  * and is shared by every use; δ_fill (normal, fill repeatability) and δ_T are per use.
  */
-export function glasswareVolume(context: StepContext, item: VolumetricFlask | GlassPipette, field: 'flask' | 'pipette'): NodeReference {
+export function glasswareVolume(
+  context: StepContext,
+  item: VolumetricFlask | GlassPipette,
+  field: 'flask' | 'pipette',
+): NodeReference {
   const { builder, stepIndex, path } = context;
   const name = itemLabel(item.kind === 'volumetricFlask' ? 'Flask' : 'Pipette', item.itemId, `${item.nominalMl} mL`);
   const terms: NodeReference[] = [builder.constant(item.nominalMl)];
@@ -79,8 +83,14 @@ export function pistonErrorsUl(pipette: PistonPipette, volumeUl: number): { syst
   const entries = pipette.errorSpecifications
     .map((entry) => ({
       volumeUl: entry.volumeUl,
-      systematicUl: 'absoluteUl' in entry.systematicError ? entry.systematicError.absoluteUl : (entry.systematicError.percent / 100) * entry.volumeUl,
-      randomUl: 'absoluteUl' in entry.randomError ? entry.randomError.absoluteUl : (entry.randomError.percent / 100) * entry.volumeUl,
+      systematicUl:
+        'absoluteUl' in entry.systematicError
+          ? entry.systematicError.absoluteUl
+          : (entry.systematicError.percent / 100) * entry.volumeUl,
+      randomUl:
+        'absoluteUl' in entry.randomError
+          ? entry.randomError.absoluteUl
+          : (entry.randomError.percent / 100) * entry.volumeUl,
     }))
     .sort((left, right) => left.volumeUl - right.volumeUl);
   const first = entries[0];
@@ -109,7 +119,10 @@ export function pistonVolume(context: StepContext, pipette: PistonPipette, volum
   const volumeUl = volumeMl * 1000;
   const { minimumUl, maximumUl } = pipette.volumeRangeUl;
   if (volumeUl < minimumUl * (1 - 1e-9) || volumeUl > maximumUl * (1 + 1e-9)) {
-    throw new PlanError([...path, 'volumeMl'], `Piston pipette ${pipette.itemId} sets ${minimumUl}–${maximumUl} µL; ${volumeUl} µL is outside its range.`);
+    throw new PlanError(
+      [...path, 'volumeMl'],
+      `Piston pipette ${pipette.itemId} sets ${minimumUl}–${maximumUl} µL; ${volumeUl} µL is outside its range.`,
+    );
   }
   const name = itemLabel('Piston pipette', pipette.itemId, `${volumeUl} µL`);
   const errors = pistonErrorsUl(pipette, volumeUl);

@@ -5,7 +5,9 @@ import { PlanError } from './plan-error';
 import { unitOf } from './units';
 import { waterDensityKgPerM3 } from './water-density';
 
-const tanaka = JSON.parse(readFileSync(new URL('../../tests/fixtures/engine/tanaka-2001-water-density.json', import.meta.url), 'utf8')) as {
+const tanaka = JSON.parse(
+  readFileSync(new URL('../../tests/fixtures/engine/tanaka-2001-water-density.json', import.meta.url), 'utf8'),
+) as {
   cases: { temperatureC: number; densityKgPerM3: number }[];
 };
 

@@ -7,9 +7,15 @@ import { PlanError, type PlanPathSegment } from './plan-error';
  * @throws PlanError outside 0–40 °C
  * @example waterDensityKgPerM3(20) // 998.2067
  */
-export function waterDensityKgPerM3(temperatureC: number, path: PlanPathSegment[] = ['settings', 'labTemperatureC']): number {
+export function waterDensityKgPerM3(
+  temperatureC: number,
+  path: PlanPathSegment[] = ['settings', 'labTemperatureC'],
+): number {
   if (!(temperatureC >= 0 && temperatureC <= 40)) {
-    throw new PlanError(path, `The water-density formula of Tanaka et al. (2001) holds from 0 °C to 40 °C; got ${temperatureC} °C.`);
+    throw new PlanError(
+      path,
+      `The water-density formula of Tanaka et al. (2001) holds from 0 °C to 40 °C; got ${temperatureC} °C.`,
+    );
   }
   const a1 = -3.983035;
   const a2 = 301.797;

@@ -5,7 +5,16 @@ const labels = (roles: Parameters<typeof navigationFor>[0]) => navigationFor(rol
 
 describe('navigationFor', () => {
   it('gives an administrator the member page, the delivery log, the approved records and the audit trail', () => {
-    expect(labels(['admin'])).toEqual(['Dashboard', 'Preparations', 'Library', 'Lab policy', 'Approved records', 'Audit trail', 'Members', 'Delivery log']);
+    expect(labels(['admin'])).toEqual([
+      'Dashboard',
+      'Preparations',
+      'Library',
+      'Lab policy',
+      'Approved records',
+      'Audit trail',
+      'Members',
+      'Delivery log',
+    ]);
   });
 
   it('gives the accounts and the captured mail to the instance operator alone, whatever their lab roles', () => {
@@ -16,9 +25,32 @@ describe('navigationFor', () => {
   });
 
   it('gives analysts, QA and auditors the preparations, the library and the lab policy (read-only unless QA)', () => {
-    expect(labels(['analyst'])).toEqual(['Dashboard', 'Preparations', 'Route finder', 'Library', 'Lab policy', 'Approved records']);
-    expect(labels(['qa'])).toEqual(['Dashboard', 'Preparations', 'Route finder', 'Library', 'Lab policy', 'Review queue', 'Approved records', 'Audit trail']);
-    expect(labels(['auditor'])).toEqual(['Dashboard', 'Preparations', 'Library', 'Lab policy', 'Approved records', 'Audit trail']);
+    expect(labels(['analyst'])).toEqual([
+      'Dashboard',
+      'Preparations',
+      'Route finder',
+      'Library',
+      'Lab policy',
+      'Approved records',
+    ]);
+    expect(labels(['qa'])).toEqual([
+      'Dashboard',
+      'Preparations',
+      'Route finder',
+      'Library',
+      'Lab policy',
+      'Review queue',
+      'Approved records',
+      'Audit trail',
+    ]);
+    expect(labels(['auditor'])).toEqual([
+      'Dashboard',
+      'Preparations',
+      'Library',
+      'Lab policy',
+      'Approved records',
+      'Audit trail',
+    ]);
   });
 
   it('gives the review queue to QA alone, and the audit trail to auditors, QA and administrators', () => {
@@ -29,7 +61,16 @@ describe('navigationFor', () => {
 
   it('takes the union of several roles without repeating an entry', () => {
     expect(labels(['analyst', 'admin', 'qa'])).toEqual([
-      'Dashboard', 'Preparations', 'Route finder', 'Library', 'Lab policy', 'Review queue', 'Approved records', 'Audit trail', 'Members', 'Delivery log',
+      'Dashboard',
+      'Preparations',
+      'Route finder',
+      'Library',
+      'Lab policy',
+      'Review queue',
+      'Approved records',
+      'Audit trail',
+      'Members',
+      'Delivery log',
     ]);
   });
 

@@ -30,7 +30,10 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.app.libraryNew.path, lazy: () => import('./routes/app/library-new').then(convert) },
             { path: paths.app.libraryImport.path, lazy: () => import('./routes/app/library-import').then(convert) },
             { path: paths.app.libraryItem.path, lazy: () => import('./routes/app/library-item').then(convert) },
-            { path: paths.app.libraryItemEdit.path, lazy: () => import('./routes/app/library-item-edit').then(convert) },
+            {
+              path: paths.app.libraryItemEdit.path,
+              lazy: () => import('./routes/app/library-item-edit').then(convert),
+            },
             { path: paths.app.policy.path, lazy: () => import('./routes/app/policy').then(convert) },
             { path: paths.app.members.path, lazy: () => import('./routes/app/members').then(convert) },
             { path: paths.app.deliveryLog.path, lazy: () => import('./routes/app/delivery-log').then(convert) },
@@ -38,7 +41,10 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.app.capturedMail.path, lazy: () => import('./routes/app/captured-mail').then(convert) },
             { path: paths.app.preparations.path, lazy: () => import('./routes/app/preparations').then(convert) },
             { path: paths.app.preparationNew.path, lazy: () => import('./routes/app/preparations-new').then(convert) },
-            { path: paths.app.preparation.path, lazy: () => import('./routes/app/preparations-workspace').then(convert) },
+            {
+              path: paths.app.preparation.path,
+              lazy: () => import('./routes/app/preparations-workspace').then(convert),
+            },
             { path: paths.app.compare.path, lazy: () => import('./routes/app/compare').then(convert) },
             { path: paths.app.routeFinder.path, lazy: () => import('./routes/app/route-finder').then(convert) },
             { path: paths.app.benchSheet.path, lazy: () => import('./routes/app/bench-sheet').then(convert) },

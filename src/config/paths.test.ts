@@ -17,7 +17,9 @@ describe('paths', () => {
 describe('library paths', () => {
   it('keeps the kind tab and status filter in the address', () => {
     expect(paths.app.library.href()).toBe('/library');
-    expect(paths.app.library.href({ kind: 'glass-pipette', status: 'retired' })).toBe('/library?kind=glass-pipette&status=retired');
+    expect(paths.app.library.href({ kind: 'glass-pipette', status: 'retired' })).toBe(
+      '/library?kind=glass-pipette&status=retired',
+    );
     expect(paths.app.libraryNew.href('flask')).toBe('/library/new?kind=flask');
     expect(paths.app.libraryItem.href(12)).toBe('/library/12');
     expect(paths.app.libraryItem.href(12, 1)).toBe('/library/12?revision=1');
@@ -27,7 +29,9 @@ describe('library paths', () => {
 
 describe('preparation paths', () => {
   it('keeps list filters, the original of a variant and the compared ids in the address', () => {
-    expect(paths.app.preparations.href({ status: 'draft', analyst: 4, material: undefined })).toBe('/preparations?status=draft&analyst=4');
+    expect(paths.app.preparations.href({ status: 'draft', analyst: 4, material: undefined })).toBe(
+      '/preparations?status=draft&analyst=4',
+    );
     expect(paths.app.preparation.href(7)).toBe('/preparations/7');
     expect(paths.app.preparation.href(8, 7)).toBe('/preparations/8?variantOf=7');
     expect(paths.app.benchSheet.href(7)).toBe('/preparations/7/bench-sheet');
@@ -41,7 +45,9 @@ describe('record, review and audit paths', () => {
     expect(paths.app.records.href()).toBe('/records');
     expect(paths.app.records.href('Pb nitrate')).toBe('/records?q=Pb+nitrate');
     expect(paths.app.reviewQueue.href()).toBe('/review');
-    expect(paths.app.audit.href({ action: 'preparation.approved', actor: undefined, offset: 50 })).toBe('/audit?action=preparation.approved&offset=50');
+    expect(paths.app.audit.href({ action: 'preparation.approved', actor: undefined, offset: 50 })).toBe(
+      '/audit?action=preparation.approved&offset=50',
+    );
   });
 });
 
@@ -51,7 +57,15 @@ describe('safeRedirectPath', () => {
   });
 
   it('refuses other origins and falls back to the dashboard', () => {
-    for (const candidate of ['//evil.example/x', '/\\evil.example', 'https://evil.example', 'members', '', null, undefined]) {
+    for (const candidate of [
+      '//evil.example/x',
+      '/\\evil.example',
+      'https://evil.example',
+      'members',
+      '',
+      null,
+      undefined,
+    ]) {
       expect(safeRedirectPath(candidate)).toBe('/');
     }
   });

@@ -97,7 +97,8 @@ export const paths = {
     capturedMail: {
       path: '/captured-mail',
       /** `messageId` opens one captured message beside the list. */
-      href: (messageId?: number) => (messageId === undefined ? '/captured-mail' : `/captured-mail?message=${messageId}`),
+      href: (messageId?: number) =>
+        messageId === undefined ? '/captured-mail' : `/captured-mail?message=${messageId}`,
     },
     preparations: {
       path: '/preparations',

@@ -12,7 +12,12 @@ function stubFetch(answer: (call: Call, index: number) => Response) {
     'fetch',
     vi.fn(async (url: string, init: RequestInit) => {
       const headers = new Headers(init.headers);
-      const call = { method: init.method ?? 'GET', url, csrf: headers.get('X-CSRF-Token'), body: (init.body as string) ?? null };
+      const call = {
+        method: init.method ?? 'GET',
+        url,
+        csrf: headers.get('X-CSRF-Token'),
+        body: (init.body as string) ?? null,
+      };
       calls.push(call);
       expect(init.credentials).toBe('same-origin');
       return answer(call, calls.length - 1);
@@ -21,7 +26,8 @@ function stubFetch(answer: (call: Call, index: number) => Response) {
   return calls;
 }
 
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+const json = (status: number, body: unknown) =>
+  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 const okSchema = z.object({ ok: z.boolean() });
 
 describe('api client', () => {
@@ -35,7 +41,9 @@ describe('api client', () => {
   });
 
   it('fetches a CSRF token before the first state-changing request and reuses it', async () => {
-    const calls = stubFetch((call) => (call.url === '/api/auth/csrf' ? json(200, { csrfToken: 'first' }) : json(200, { ok: true })));
+    const calls = stubFetch((call) =>
+      call.url === '/api/auth/csrf' ? json(200, { csrfToken: 'first' }) : json(200, { ok: true }),
+    );
     await api.post('/api/a', { x: 1 }, okSchema);
     await api.patch('/api/b', { y: 2 }, okSchema);
     expect(calls.map((call) => [call.method, call.url, call.csrf])).toEqual([
@@ -85,7 +93,10 @@ describe('api client', () => {
   it('does not retry a 403 for any other reason', async () => {
     rememberCsrfToken('token');
     const calls = stubFetch(() => json(403, { error: { code: 'forbidden', message: 'Administrators only.' } }));
-    await expect(api.post('/api/labs/1/invitations', {}, okSchema)).rejects.toMatchObject({ status: 403, code: 'forbidden' });
+    await expect(api.post('/api/labs/1/invitations', {}, okSchema)).rejects.toMatchObject({
+      status: 403,
+      code: 'forbidden',
+    });
     expect(calls).toHaveLength(1);
   });
 
@@ -94,7 +105,11 @@ describe('api client', () => {
     stubFetch(() => json(429, { error: { code: 'rate_limited', message: 'Too many attempts; wait a minute.' } }));
     const failure = api.post('/api/auth/login', {}, okSchema);
     await expect(failure).rejects.toBeInstanceOf(ApiError);
-    await expect(failure).rejects.toMatchObject({ status: 429, code: 'rate_limited', message: 'Too many attempts; wait a minute.' });
+    await expect(failure).rejects.toMatchObject({
+      status: 429,
+      code: 'rate_limited',
+      message: 'Too many attempts; wait a minute.',
+    });
   });
 
   it('reports an answer that does not match the contract instead of passing it on', async () => {
@@ -103,7 +118,10 @@ describe('api client', () => {
   });
 
   it('turns a network failure into an ApiError with status 0', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('fetch failed'))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Promise.reject(new TypeError('fetch failed'))),
+    );
     await expect(api.get('/api/thing', okSchema)).rejects.toMatchObject({ status: 0, code: 'network_unreachable' });
   });
 });

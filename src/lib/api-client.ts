@@ -28,7 +28,11 @@ async function send(method: 'GET' | StateChangingMethod, path: string, body: unk
       credentials: 'same-origin',
     });
   } catch {
-    throw new ApiError(0, CLIENT_ERROR_CODES.network, 'The Dilutrace server cannot be reached. Check the connection and try again.');
+    throw new ApiError(
+      0,
+      CLIENT_ERROR_CODES.network,
+      'The Dilutrace server cannot be reached. Check the connection and try again.',
+    );
   }
 }
 
@@ -59,7 +63,8 @@ async function freshCsrfToken(): Promise<string> {
   const response = await send('GET', CSRF_PATH, undefined, null);
   const result = await readResult(response, csrfSchema);
   csrfToken = result?.csrfToken ?? null;
-  if (!csrfToken) throw new ApiError(response.status, CLIENT_ERROR_CODES.unexpectedResponse, 'The server gave no CSRF token.');
+  if (!csrfToken)
+    throw new ApiError(response.status, CLIENT_ERROR_CODES.unexpectedResponse, 'The server gave no CSRF token.');
   return csrfToken;
 }
 

@@ -16,7 +16,9 @@ describe('apiErrorFromResponse', () => {
   });
 
   it('passes the server message through unchanged for wrong credentials', () => {
-    const body = JSON.stringify({ error: { code: 'invalid_credentials', message: 'That e-mail and password do not match.' } });
+    const body = JSON.stringify({
+      error: { code: 'invalid_credentials', message: 'That e-mail and password do not match.' },
+    });
     const error = apiErrorFromResponse(401, body);
     expect(error.code).toBe('invalid_credentials');
     expect(error.message).toBe('That e-mail and password do not match.');

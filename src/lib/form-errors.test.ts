@@ -7,7 +7,9 @@ type Values = { email: string; password: string };
 describe('applyApiError', () => {
   it('puts field issues on their fields and shows no banner when all found a home', () => {
     const setError = vi.fn();
-    const error = new ApiError(400, 'validation_failed', 'Check the form.', [{ path: 'email', message: 'Not an e-mail.' }]);
+    const error = new ApiError(400, 'validation_failed', 'Check the form.', [
+      { path: 'email', message: 'Not an e-mail.' },
+    ]);
     expect(applyApiError<Values>(error, setError, ['email', 'password'])).toBeNull();
     expect(setError).toHaveBeenCalledWith('email', { type: 'server', message: 'Not an e-mail.' });
   });
@@ -15,12 +17,16 @@ describe('applyApiError', () => {
   it('shows the server message for errors without field issues', () => {
     const setError = vi.fn();
     const error = new ApiError(401, 'invalid_credentials', 'That e-mail and password do not match.');
-    expect(applyApiError<Values>(error, setError, ['email', 'password'])).toBe('That e-mail and password do not match.');
+    expect(applyApiError<Values>(error, setError, ['email', 'password'])).toBe(
+      'That e-mail and password do not match.',
+    );
     expect(setError).not.toHaveBeenCalled();
   });
 
   it('adds issues for fields the form lacks to the banner', () => {
-    const error = new ApiError(400, 'validation_failed', 'Check the form.', [{ path: 'labId', message: 'Unknown lab.' }]);
+    const error = new ApiError(400, 'validation_failed', 'Check the form.', [
+      { path: 'labId', message: 'Unknown lab.' },
+    ]);
     expect(applyApiError<Values>(error, vi.fn(), ['email'])).toBe('Check the form. Unknown lab.');
   });
 

@@ -13,7 +13,10 @@ type Stage = 'draft' | 'prepared' | 'submitted' | 'approved';
 type Person = 'analyst' | 'qa' | 'auditor';
 
 // Vitest runs from the repository root (under happy-dom, import.meta.url is not a file URL).
-const raw = JSON.parse(readFileSync(resolve('tests/fixtures/records/lead-check-standard.json'), 'utf8')) as Record<string, unknown> & {
+const raw = JSON.parse(readFileSync(resolve('tests/fixtures/records/lead-check-standard.json'), 'utf8')) as Record<
+  string,
+  unknown
+> & {
   me: Record<Person, unknown>;
 };
 
@@ -37,18 +40,34 @@ export function stubServer(answer: (request: SentRequest) => Answer | undefined)
     'fetch',
     vi.fn(async (url: string, init: RequestInit = {}) => {
       const headers = (init.headers ?? {}) as Record<string, string>;
-      const request = { method: init.method ?? 'GET', url, body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined, csrf: headers['X-CSRF-Token'] ?? null };
+      const request = {
+        method: init.method ?? 'GET',
+        url,
+        body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined,
+        csrf: headers['X-CSRF-Token'] ?? null,
+      };
       sent.push(request);
-      const reply = answer(request) ?? { status: 404, body: { error: { code: 'not_found', message: `No answer for ${request.method} ${url} in this test.` } } };
-      return new Response(JSON.stringify(reply.body), { status: reply.status, headers: { 'Content-Type': 'application/json' } });
+      const reply = answer(request) ?? {
+        status: 404,
+        body: { error: { code: 'not_found', message: `No answer for ${request.method} ${url} in this test.` } },
+      };
+      return new Response(JSON.stringify(reply.body), {
+        status: reply.status,
+        headers: { 'Content-Type': 'application/json' },
+      });
     }),
   );
   return sent;
 }
 
 /** Renders `element` at `path` under `pattern` with a fresh query cache that `seed` may fill first. */
-export function renderAt(element: ReactElement, { pattern = '*', path = '/', seed }: { pattern?: string; path?: string; seed?: (client: QueryClient) => void } = {}) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } } });
+export function renderAt(
+  element: ReactElement,
+  { pattern = '*', path = '/', seed }: { pattern?: string; path?: string; seed?: (client: QueryClient) => void } = {},
+) {
+  const client = new QueryClient({
+    defaultOptions: { queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } },
+  });
   seed?.(client);
   const view = render(
     <QueryClientProvider client={client}>

@@ -114,7 +114,9 @@ describe('the tolerance library, kept by QA', () => {
     await changes.waitFor();
     await expect(changes.innerText()).resolves.toMatch(/Fill repeatability s:.*0\.012 mL.*0\.01 mL/s);
 
-    await page.getByLabel('Upload a certificate to revision 2').setInputFiles({ name: 'vf-50-qa-certificate.pdf', mimeType: 'application/pdf', buffer: minimalPdf() });
+    await page
+      .getByLabel('Upload a certificate to revision 2')
+      .setInputFiles({ name: 'vf-50-qa-certificate.pdf', mimeType: 'application/pdf', buffer: minimalPdf() });
     await page.getByRole('button', { name: 'Upload', exact: true }).click();
     const download = page.getByRole('link', { name: 'vf-50-qa-certificate.pdf' });
     await download.waitFor();
@@ -143,7 +145,9 @@ describe('the tolerance library, kept by QA', () => {
     await screenshot(page, 'library-solid-materials');
     await page.getByRole('link', { name: 'RM-PBN-01' }).click();
     await page.getByRole('heading', { name: 'Caution: hazardous material' }).waitFor();
-    await page.getByText("Follow the safety data sheet, your lab's chemical hygiene plan and local regulations.").waitFor();
+    await page
+      .getByText("Follow the safety data sheet, your lab's chemical hygiene plan and local regulations.")
+      .waitFor();
     await screenshot(page, 'library-item-material');
     expect(problems).toEqual([]);
   });
@@ -222,10 +226,15 @@ describe('the tolerance library, kept by QA', () => {
       'VF-QA-CSV-1,Imported flask,100,A,0.10,0.02',
       'VF-QA-CSV-2,Broken tolerance,100,A,zero point one,0.02',
     ].join('\n');
-    await page.getByLabel('CSV file', { exact: true }).setInputFiles({ name: 'flasks.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await page
+      .getByLabel('CSV file', { exact: true })
+      .setInputFiles({ name: 'flasks.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
     await page.getByRole('button', { name: 'Check the file' }).click();
     await page.getByRole('heading', { name: 'Check of flasks.csv' }).waitFor();
-    const rows = await page.locator('section', { has: page.getByRole('heading', { name: 'Check of flasks.csv' }) }).locator('tbody tr').allInnerTexts();
+    const rows = await page
+      .locator('section', { has: page.getByRole('heading', { name: 'Check of flasks.csv' }) })
+      .locator('tbody tr')
+      .allInnerTexts();
     expect(rows).toHaveLength(2);
     expect(rows[0]).toMatch(/^2\s+VF-QA-CSV-1\s+New item/);
     expect(rows[1]).toMatch(/^3\s+VF-QA-CSV-2\s+Error/);
@@ -235,7 +244,9 @@ describe('the tolerance library, kept by QA', () => {
 
     // The corrected file passes its check; only then can it be imported, both rows in one go.
     const corrected = csv.replace('zero point one', '0.10');
-    await page.getByLabel('CSV file', { exact: true }).setInputFiles({ name: 'flasks-corrected.csv', mimeType: 'text/csv', buffer: Buffer.from(corrected) });
+    await page
+      .getByLabel('CSV file', { exact: true })
+      .setInputFiles({ name: 'flasks-corrected.csv', mimeType: 'text/csv', buffer: Buffer.from(corrected) });
     await page.getByRole('button', { name: 'Check the file' }).click();
     await page.getByRole('heading', { name: 'Check of flasks-corrected.csv' }).waitFor();
     await page.getByRole('button', { name: 'Import 2 rows' }).click();

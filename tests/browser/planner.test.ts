@@ -78,10 +78,14 @@ describe('the analyst plans a lead standard', () => {
     await chooseItem(steps().nth(3).getByLabel('Volumetric flask'), 'VF-100-B');
 
     // 0.1599 g · 0.9998 · 207.04/331.2 (the CIAAW 2021 interval midpoint for Pb) / 0.1 L / 10 ≈ 99.98 mg/L.
-    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(99\.98 ± 0\.\d\d\) mg\/L, k = 2\.00, coverage probability ≈ 95\.45 %$/);
+    await expect(statement().innerText()).resolves.toMatch(
+      /^c\(Pb\) = \(99\.98 ± 0\.\d\d\) mg\/L, k = 2\.00, coverage probability ≈ 95\.45 %$/,
+    );
     await expect(steps().nth(1).innerText()).resolves.toMatch(/after step 2\s+999\.8 mg\/L/i);
     const table = page.getByRole('table', { name: /Uncertainty budget of c\(Pb\)/ });
-    await expect(table.getByRole('rowheader', { name: /^Step 3 · Pipette an aliquot \(GP-10-A\)$/ }).count()).resolves.toBe(1);
+    await expect(
+      table.getByRole('rowheader', { name: /^Step 3 · Pipette an aliquot \(GP-10-A\)$/ }).count(),
+    ).resolves.toBe(1);
     await expect(table.getByText('Atomic weight of Pb').count()).resolves.toBe(1);
 
     await saveState().filter({ hasText: /Saved/ }).waitFor({ timeout: 15_000 });
@@ -116,14 +120,20 @@ describe('the analyst plans a lead standard', () => {
     await page.getByLabel('Title').pressSequentially(' (lot PBN-24117)', { delay: 15 });
     const latencies = await page.evaluate(() => (window as unknown as { latencies: number[] }).latencies);
     const worst = Math.max(...latencies);
-    console.log(`Input latency during the Monte Carlo run: ${latencies.length} keys, median ${latencies.sort((a, b) => a - b)[latencies.length >> 1].toFixed(1)} ms, worst ${worst.toFixed(1)} ms`);
+    console.log(
+      `Input latency during the Monte Carlo run: ${latencies.length} keys, median ${latencies.sort((a, b) => a - b)[latencies.length >> 1].toFixed(1)} ms, worst ${worst.toFixed(1)} ms`,
+    );
     expect(worst).toBeLessThan(200);
 
     const verdict = page.getByTestId('validation-verdict');
     await verdict.waitFor({ timeout: 60_000 });
-    await expect(verdict.innerText()).resolves.toMatch(/^The GUM interval (is confirmed by Monte Carlo within δ = |is not confirmed)/);
+    await expect(verdict.innerText()).resolves.toMatch(
+      /^The GUM interval (is confirmed by Monte Carlo within δ = |is not confirmed)/,
+    );
     await page.getByText('1,000,000 trials', { exact: false }).first().waitFor();
-    await saveState().filter({ hasText: /Saved at/ }).waitFor({ timeout: 15_000 });
+    await saveState()
+      .filter({ hasText: /Saved at/ })
+      .waitFor({ timeout: 15_000 });
     await page.getByRole('heading', { name: 'Monte Carlo check' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'planner-monte-carlo');
   });
@@ -155,14 +165,20 @@ describe('the analyst plans a lead standard', () => {
     await addStep('Make up to volume');
     await chooseItem(steps().nth(5).getByLabel('Volumetric flask'), 'VF-100-B');
     await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(9\.998 ± 0\.0\d+\) mg\/L/);
-    await saveState().filter({ hasText: /Saved at/ }).waitFor({ timeout: 15_000 });
+    await saveState()
+      .filter({ hasText: /Saved at/ })
+      .waitFor({ timeout: 15_000 });
 
     await page.getByRole('link', { name: 'Compare with the original' }).click();
     await page.getByRole('heading', { level: 1, name: 'Compare preparations' }).waitFor();
     const answer = page.getByTestId('dilution-answer');
-    await expect(answer.innerText()).resolves.toMatch(/uses 1 more dilution step than “Pb 100 mg\/L working standard \(lot PBN-24117\)” \(2 against 1\); relative U \d\.\d+ % against \d\.\d+ %: the extra step (raises|lowers|does not change) the total uncertainty\./);
+    await expect(answer.innerText()).resolves.toMatch(
+      /uses 1 more dilution step than “Pb 100 mg\/L working standard \(lot PBN-24117\)” \(2 against 1\); relative U \d\.\d+ % against \d\.\d+ %: the extra step (raises|lowers|does not change) the total uncertainty\./,
+    );
     const table = page.getByRole('table', { name: 'The preparations compared' });
-    await expect(table.getByRole('row', { name: /^Material consumed/ }).innerText()).resolves.toMatch(/0\.1599 g of RM-PBN-01\s+0\.1599 g of RM-PBN-01/);
+    await expect(table.getByRole('row', { name: /^Material consumed/ }).innerText()).resolves.toMatch(
+      /0\.1599 g of RM-PBN-01\s+0\.1599 g of RM-PBN-01/,
+    );
     // Waste: the original throws away 90 mL of stock; the variant 75 mL of stock and 240 mL of the intermediate.
     await expect(table.getByRole('row', { name: /^Waste/ }).innerText()).resolves.toMatch(/90 mL\s+315 mL/);
     await screenshot(page, 'planner-compare');
@@ -183,7 +199,9 @@ describe('the analyst plans a lead standard', () => {
     const rows = table.locator('tbody tr');
     expect(await rows.count()).toBeGreaterThan(1);
     // Ranked by relative expanded uncertainty, smallest first.
-    const shares = await rows.evaluateAll((each) => each.map((row) => Number.parseFloat(row.children[1].textContent ?? '')));
+    const shares = await rows.evaluateAll((each) =>
+      each.map((row) => Number.parseFloat(row.children[1].textContent ?? '')),
+    );
     expect([...shares].sort((a, b) => a - b)).toEqual(shares);
     await screenshot(page, 'route-finder');
 
@@ -225,10 +243,18 @@ describe('the analyst plans a lead standard', () => {
     await page.getByRole('link', { name: 'Bench sheet' }).click();
     const sheet = page.getByRole('article');
     await sheet.getByText('Bench sheet', { exact: true }).waitFor();
-    await expect(sheet.innerText()).resolves.toContain('Weigh 0.15990 g of Lead(II) nitrate, certified reference material (RM-PBN-01) by difference on BAL-05.');
-    await expect(sheet.innerText()).resolves.toContain('Pipette 10 mL with GP-10-A (one mark, class A) from the solution of step 2.');
-    await expect(sheet.getByText('Follow the safety data sheet, your lab’s chemical hygiene plan and local regulations.').count()).resolves.toBe(1);
-    await expect(sheet.getByRole('table', { name: 'Readings for step 1' }).getByRole('columnheader').allInnerTexts()).resolves.toEqual(['Tare (g)', 'Gross (g)', 'Net (g)', 'Time', 'Initials']);
+    await expect(sheet.innerText()).resolves.toContain(
+      'Weigh 0.15990 g of Lead(II) nitrate, certified reference material (RM-PBN-01) by difference on BAL-05.',
+    );
+    await expect(sheet.innerText()).resolves.toContain(
+      'Pipette 10 mL with GP-10-A (one mark, class A) from the solution of step 2.',
+    );
+    await expect(
+      sheet.getByText('Follow the safety data sheet, your lab’s chemical hygiene plan and local regulations.').count(),
+    ).resolves.toBe(1);
+    await expect(
+      sheet.getByRole('table', { name: 'Readings for step 1' }).getByRole('columnheader').allInnerTexts(),
+    ).resolves.toEqual(['Tare (g)', 'Gross (g)', 'Net (g)', 'Time', 'Initials']);
     await page.emulateMedia({ media: 'print' });
     await expect(page.getByRole('navigation', { name: 'Main' }).isVisible()).resolves.toBe(false);
     await screenshot(page, 'bench-sheet-print');

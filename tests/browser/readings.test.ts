@@ -42,8 +42,13 @@ const valueOf = (statement: string) => Number(/= \(([\d.]+) ±/.exec(statement)?
 
 /** The demo lead plan (server/test-support/demo-plans.ts): 0.1599 g of lead nitrate to 100 mL, then 10 mL to 100 mL. */
 async function createLeadPreparation(): Promise<{ id: number; statement: string }> {
-  const me = (await (await page.request.get(`${server.baseUrl}/api/auth/me`)).json()) as { activeLabId: number; csrfToken: string };
-  const items = (await (await page.request.get(`${server.baseUrl}/api/labs/${me.activeLabId}/equipment?status=all`)).json()) as EquipmentItem[];
+  const me = (await (await page.request.get(`${server.baseUrl}/api/auth/me`)).json()) as {
+    activeLabId: number;
+    csrfToken: string;
+  };
+  const items = (await (
+    await page.request.get(`${server.baseUrl}/api/labs/${me.activeLabId}/equipment?status=all`)
+  ).json()) as EquipmentItem[];
   const use = (code: string) => {
     const item = items.find((each) => each.code === code);
     if (!item) throw new Error(`The demo library has no ${code}`);
@@ -61,7 +66,10 @@ async function createLeadPreparation(): Promise<{ id: number; statement: string 
       { kind: 'makeUpToVolume', flask: use('VF-100-B') },
     ],
   };
-  const response = await page.request.post(`${server.baseUrl}/api/labs/${me.activeLabId}/preparations`, { headers: { 'X-CSRF-Token': me.csrfToken }, data: { title: TITLE, plan, seed: 4242 } });
+  const response = await page.request.post(`${server.baseUrl}/api/labs/${me.activeLabId}/preparations`, {
+    headers: { 'X-CSRF-Token': me.csrfToken },
+    data: { title: TITLE, plan, seed: 4242 },
+  });
   expect(response.status()).toBe(201);
   const detail = (await response.json()) as { id: number; current: { resultStatement: string | null } };
   return { id: detail.id, statement: detail.current.resultStatement ?? '' };
@@ -80,7 +88,11 @@ describe('the analyst records what was weighed at the bench', () => {
     await page.getByRole('heading', { level: 2, name: 'Record the readings' }).waitFor();
     // Only the weighing step takes a reading; the flasks and the pipette do not.
     await expect(form().getByRole('row').count()).resolves.toBe(2);
-    await expect(form().getByRole('row', { name: /Step 1/ }).innerText()).resolves.toMatch(/On BAL-05: Lead\(II\) nitrate.*\s+0\.15990/);
+    await expect(
+      form()
+        .getByRole('row', { name: /Step 1/ })
+        .innerText(),
+    ).resolves.toMatch(/On BAL-05: Lead\(II\) nitrate.*\s+0\.15990/);
 
     await form().getByLabel('Step 1 tare (g)').fill(TARE);
     await form().getByLabel('Step 1 gross (g)').fill(GROSS);
@@ -93,7 +105,9 @@ describe('the analyst records what was weighed at the bench', () => {
     const net = form().getByLabel('Step 1 net weighed (g)');
     await expect.poll(() => net.getAttribute('aria-invalid')).toBe('true');
     const errorId = (await net.getAttribute('aria-describedby'))?.split(' ')[0] ?? '';
-    await expect(page.locator(`[id="${errorId}"]`).innerText()).resolves.toMatch(/^Gross − tare is 0\.160200 g, not 0\.17 g\.$/);
+    await expect(page.locator(`[id="${errorId}"]`).innerText()).resolves.toMatch(
+      /^Gross − tare is 0\.160200 g, not 0\.17 g\.$/,
+    );
     await expect.poll(() => net.evaluate((element) => element === document.activeElement)).toBe(true);
     await screenshot(page, 'readings-error');
 
@@ -111,7 +125,9 @@ describe('the analyst records what was weighed at the bench', () => {
     await form().getByRole('button', { name: 'Record the readings' }).click();
     const confirmation = page.getByRole('status').filter({ hasText: 'Readings recorded: version 1 is prepared' });
     await confirmation.waitFor();
-    await expect.poll(() => confirmation.evaluate((element) => element.parentElement === document.activeElement)).toBe(true);
+    await expect
+      .poll(() => confirmation.evaluate((element) => element.parentElement === document.activeElement))
+      .toBe(true);
     const recomputed = valueOf(await confirmation.innerText());
     // c ∝ m: 0.16020 / 0.15990 of the planned value, to the 0.01 mg/L the statement shows.
     expect(Math.abs(recomputed - (created.plannedValue ?? 0) * (0.1602 / 0.1599))).toBeLessThanOrEqual(0.0051);
@@ -126,7 +142,9 @@ describe('the analyst records what was weighed at the bench', () => {
     await screenshot(page, 'readings-recorded');
     // The form is for the screen only.
     await page.emulateMedia({ media: 'print' });
-    await expect(page.getByRole('heading', { level: 2, name: 'Correct the readings' }).isVisible()).resolves.toBe(false);
+    await expect(page.getByRole('heading', { level: 2, name: 'Correct the readings' }).isVisible()).resolves.toBe(
+      false,
+    );
     await page.emulateMedia({ media: 'screen' });
     expect(problems.filter((problem) => !/^400 from .*\/readings$/.test(problem))).toEqual([]);
   });
@@ -139,13 +157,23 @@ describe('the analyst records what was weighed at the bench', () => {
     expect(valueOf(statement)).toBeGreaterThan(created.plannedValue ?? Infinity);
 
     const table = page.getByRole('table', { name: 'Masses weighed beside the planned masses' });
-    await expect(table.getByRole('columnheader').allInnerTexts()).resolves.toEqual(['Step', 'Planned (g)', 'Weighed (g)', 'Difference (mg)', 'Difference (%)', 'Tare (g)', 'Gross (g)']);
+    await expect(table.getByRole('columnheader').allInnerTexts()).resolves.toEqual([
+      'Step',
+      'Planned (g)',
+      'Weighed (g)',
+      'Difference (mg)',
+      'Difference (%)',
+      'Tare (g)',
+      'Gross (g)',
+    ]);
     const cells = await table.locator('tbody tr').first().locator('td').allInnerTexts();
     // +0.30 mg on BAL-05 (0.01 mg readability); 0.30 / 159.90 = +0.19 %.
     expect(cells.slice(1)).toEqual(['0.15990', '0.16020', '+0.30', '+0.19', TARE, GROSS]);
     expect(cells[0]).toMatch(/^Step 1 · Weighing the solid \(BAL-05\)\s+net mass$/);
     await expect(page.getByTestId('deviations').innerText()).resolves.toBe(`Deviations from the plan: ${DEVIATION}`);
-    await expect(page.getByRole('region', { name: 'Planned and actual' }).innerText()).resolves.toContain(`Readings recorded by ${ANALYST.name}`);
+    await expect(page.getByRole('region', { name: 'Planned and actual' }).innerText()).resolves.toContain(
+      `Readings recorded by ${ANALYST.name}`,
+    );
     await page.getByRole('heading', { name: 'Planned and actual' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'readings-record');
   });
@@ -154,9 +182,15 @@ describe('the analyst records what was weighed at the bench', () => {
     await page.goto(`${server.baseUrl}/preparations/${created.id}`);
     await page.getByText('Version 1 has been prepared').waitFor();
     await expect(page.getByRole('button', { name: 'Start a new version' }).count()).resolves.toBe(0);
-    await expect(page.getByRole('link', { name: 'Correct the readings on the bench sheet' }).getAttribute('href')).resolves.toBe(`/preparations/${created.id}/bench-sheet`);
-    await expect(page.getByRole('link', { name: 'Submit it for review from the record page' }).getAttribute('href')).resolves.toBe(`/records/${created.id}/v/1`);
-    await expect(page.getByRole('table', { name: 'Masses weighed beside the planned masses' }).count()).resolves.toBe(1);
+    await expect(
+      page.getByRole('link', { name: 'Correct the readings on the bench sheet' }).getAttribute('href'),
+    ).resolves.toBe(`/preparations/${created.id}/bench-sheet`);
+    await expect(
+      page.getByRole('link', { name: 'Submit it for review from the record page' }).getAttribute('href'),
+    ).resolves.toBe(`/records/${created.id}/v/1`);
+    await expect(page.getByRole('table', { name: 'Masses weighed beside the planned masses' }).count()).resolves.toBe(
+      1,
+    );
     await screenshot(page, 'readings-workspace');
     await page.getByRole('heading', { name: 'Planned and actual' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'readings-workspace-table');

@@ -73,9 +73,18 @@ function leadPlan(library: Map<string, EquipmentItem>, aliquotFlask: string) {
 }
 
 /** Creates a computed preparation through the API, with the signed-in page's session and CSRF token. */
-async function createPreparation(page: Page, title: string, aliquotFlask: string): Promise<{ id: number; statement: string }> {
-  const me = (await (await page.request.get(`${server.baseUrl}/api/auth/me`)).json()) as { activeLabId: number; csrfToken: string };
-  const items = (await (await page.request.get(`${server.baseUrl}/api/labs/${me.activeLabId}/equipment?status=all`)).json()) as EquipmentItem[];
+async function createPreparation(
+  page: Page,
+  title: string,
+  aliquotFlask: string,
+): Promise<{ id: number; statement: string }> {
+  const me = (await (await page.request.get(`${server.baseUrl}/api/auth/me`)).json()) as {
+    activeLabId: number;
+    csrfToken: string;
+  };
+  const items = (await (
+    await page.request.get(`${server.baseUrl}/api/labs/${me.activeLabId}/equipment?status=all`)
+  ).json()) as EquipmentItem[];
   const library = new Map(items.map((item) => [item.code, item]));
   const response = await page.request.post(`${server.baseUrl}/api/labs/${me.activeLabId}/preparations`, {
     headers: { 'X-CSRF-Token': me.csrfToken },
@@ -114,7 +123,9 @@ describe('review and approval of a preparation record', () => {
     await expect(statusBadge(page).innerText()).resolves.toBe('Draft');
     await expect(page.getByTestId('record-result-statement').innerText()).resolves.toBe(approved.statement);
     // The lead nitrate carries QA's hazard notes; the record repeats them with the standing advice.
-    await expect(page.getByRole('complementary', { name: /Caution/ }).innerText()).resolves.toContain("Follow the safety data sheet, your lab's chemical hygiene plan and local regulations.");
+    await expect(page.getByRole('complementary', { name: /Caution/ }).innerText()).resolves.toContain(
+      "Follow the safety data sheet, your lab's chemical hygiene plan and local regulations.",
+    );
     await expect(page.getByRole('link', { name: 'Download draft PDF' }).count()).resolves.toBe(1);
     const stepRows = page.getByRole('table', { name: /by step/ }).locator('tbody tr');
     await expect(stepRows.count()).resolves.toBe(4);
@@ -126,7 +137,9 @@ describe('review and approval of a preparation record', () => {
     await dialog.getByLabel('Note to the reviewer (optional)').fill('Lot PBN-24117, first use of the new bench.');
     await dialog.getByRole('button', { name: 'Submit for review' }).click();
     await statusBadge(page).filter({ hasText: 'Waiting for review' }).waitFor();
-    await expect(page.getByRole('region', { name: 'Review trail' }).innerText()).resolves.toContain('Lot PBN-24117, first use of the new bench.');
+    await expect(page.getByRole('region', { name: 'Review trail' }).innerText()).resolves.toContain(
+      'Lot PBN-24117, first use of the new bench.',
+    );
     await expect(page.getByRole('button', { name: 'Submit for review' }).count()).resolves.toBe(0);
 
     await openRecord(page, returned.id);
@@ -149,7 +162,10 @@ describe('review and approval of a preparation record', () => {
     await expect(rows.nth(0).innerText()).resolves.toContain('Dev Okonjo');
     await screenshot(page, 'review-queue');
 
-    await rows.nth(0).getByRole('link', { name: new RegExp(APPROVED_TITLE) }).click();
+    await rows
+      .nth(0)
+      .getByRole('link', { name: new RegExp(APPROVED_TITLE) })
+      .click();
     await page.getByRole('heading', { level: 1, name: APPROVED_TITLE }).waitFor();
     await page.getByRole('button', { name: 'Approve and sign' }).click();
     const dialog = page.getByRole('dialog', { name: /Approve and sign version 1/ });
@@ -195,8 +211,12 @@ describe('review and approval of a preparation record', () => {
     const analyst = await openPage();
     await signIn(analyst.page, 'analyst');
     await openRecord(analyst.page, created.returnedId ?? 0);
-    await expect(analyst.page.getByRole('status').filter({ hasText: 'Returned by Imogen Tasker' }).innerText()).resolves.toContain(RETURN_COMMENT);
-    await expect(analyst.page.getByRole('region', { name: 'Review trail' }).innerText()).resolves.toContain(`Returned with comments by Imogen Tasker`);
+    await expect(
+      analyst.page.getByRole('status').filter({ hasText: 'Returned by Imogen Tasker' }).innerText(),
+    ).resolves.toContain(RETURN_COMMENT);
+    await expect(analyst.page.getByRole('region', { name: 'Review trail' }).innerText()).resolves.toContain(
+      `Returned with comments by Imogen Tasker`,
+    );
     // Returned and still computed: the analyst may submit it again.
     await expect(analyst.page.getByRole('button', { name: 'Submit for review' }).count()).resolves.toBe(1);
     await screenshot(analyst.page, 'record-returned-analyst');
@@ -221,16 +241,24 @@ describe('review and approval of a preparation record', () => {
     await rows.nth(0).getByRole('link', { name: APPROVED_TITLE, exact: true }).click();
     await page.getByRole('heading', { level: 1, name: APPROVED_TITLE }).waitFor();
     await page.getByRole('button', { name: 'Verify' }).click();
-    await page.getByRole('status').filter({ hasText: 'The stored snapshot is exactly the one that was approved.' }).waitFor();
+    await page
+      .getByRole('status')
+      .filter({ hasText: 'The stored snapshot is exactly the one that was approved.' })
+      .waitFor();
     for (const name of ['Submit for review', 'Approve and sign', 'Return with comments', 'Start a new version']) {
       await expect(page.getByRole('button', { name }).count()).resolves.toBe(0);
     }
     // The record's own audit history, for the auditor.
-    await expect(page.getByRole('region', { name: 'Audit history of this preparation' }).innerText()).resolves.toContain('preparation.approved');
+    await expect(
+      page.getByRole('region', { name: 'Audit history of this preparation' }).innerText(),
+    ).resolves.toContain('preparation.approved');
     await screenshot(page, 'record-approved-auditor');
     await page.screenshot({ path: join(SCREENSHOT_DIR, 'record-approved-auditor-full.png'), fullPage: true });
 
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download signed PDF' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Download signed PDF' }).click(),
+    ]);
     expect(download.suggestedFilename()).toBe(`dilutrace-${created.approvedId}-v1.pdf`);
     const file = join(work, 'record.pdf');
     await download.saveAs(file);
@@ -258,7 +286,9 @@ describe('review and approval of a preparation record', () => {
     expect(actions).toEqual(['preparation.approved']);
     await table.getByRole('button', { name: /Show change/ }).click();
     await expect(table.innerText()).resolves.toContain('"status": "approved"');
-    await expect(page.getByRole('link', { name: 'Export CSV' }).getAttribute('href')).resolves.toMatch(/\/audit-events\.csv\?action=preparation\.approved$/);
+    await expect(page.getByRole('link', { name: 'Export CSV' }).getAttribute('href')).resolves.toMatch(
+      /\/audit-events\.csv\?action=preparation\.approved$/,
+    );
     await screenshot(page, 'audit-trail-approved');
 
     // A start date after the end date is refused on its field by the shared schema.
@@ -279,8 +309,13 @@ describe('review and approval of a preparation record', () => {
 
     await openRecord(page, created.approvedId ?? 0);
     const versions = page.getByRole('navigation', { name: 'Versions' });
-    await expect(versions.getByRole('link').allInnerTexts()).resolves.toEqual(['Version 2 · draft', 'Version 1 · approved']);
-    await expect(versions.getByRole('link', { name: 'Version 1 · approved' }).getAttribute('aria-current')).resolves.toBe('page');
+    await expect(versions.getByRole('link').allInnerTexts()).resolves.toEqual([
+      'Version 2 · draft',
+      'Version 1 · approved',
+    ]);
+    await expect(
+      versions.getByRole('link', { name: 'Version 1 · approved' }).getAttribute('aria-current'),
+    ).resolves.toBe('page');
     await expect(statusBadge(page).innerText()).resolves.toBe('Approved');
     // Only the latest version may start another.
     await expect(page.getByRole('button', { name: 'Start a new version' }).count()).resolves.toBe(0);

@@ -103,7 +103,8 @@ describe('signing in', () => {
     await page.goto(`${server.baseUrl}/sign-in`);
     await page.getByRole('heading', { level: 1, name: 'Sign in' }).waitFor();
     const focusedText = () => page.evaluate(() => document.activeElement?.textContent ?? '');
-    const focusedLabel = () => page.evaluate(() => (document.activeElement as HTMLInputElement | null)?.labels?.[0]?.textContent ?? '');
+    const focusedLabel = () =>
+      page.evaluate(() => (document.activeElement as HTMLInputElement | null)?.labels?.[0]?.textContent ?? '');
     await page.keyboard.press('Tab');
     await expect(focusedText()).resolves.toBe('Skip to content');
     await page.keyboard.press('Tab');
@@ -291,7 +292,12 @@ describe('resetting a forgotten password', () => {
     await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
     // Only the instance operator reads the reset mail (the demo admin account is the operator).
     await page.goto(`${server.baseUrl}/captured-mail`);
-    await page.getByRole('list', { name: 'Captured mail' }).getByRole('link').filter({ hasText: `qa@${DEMO_DOMAIN}` }).first().click();
+    await page
+      .getByRole('list', { name: 'Captured mail' })
+      .getByRole('link')
+      .filter({ hasText: `qa@${DEMO_DOMAIN}` })
+      .first()
+      .click();
     const resetLink = page.getByRole('article').getByRole('link', { name: /\/reset-password\// });
     await resetLink.waitFor();
     const href = (await resetLink.getAttribute('href')) ?? '';
@@ -338,7 +344,10 @@ describe('the instance operator', () => {
     await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
     await page.goto(`${server.baseUrl}/accounts`);
     await analystRow.getByRole('button', { name: /^Enable/ }).click();
-    await page.getByRole('dialog', { name: /^Enable / }).getByRole('button', { name: 'Enable' }).click();
+    await page
+      .getByRole('dialog', { name: /^Enable / })
+      .getByRole('button', { name: 'Enable' })
+      .click();
     await analystRow.getByText('Active').waitFor();
     await signOut(page);
 

@@ -15,7 +15,12 @@ export function freePort(): Promise<number> {
 }
 
 /** Waits until a server process answers GET /api/health; fails early if the process exits. */
-export async function waitForHealth(baseUrl: string, child: ChildProcess, output: () => string, timeoutMs: number): Promise<void> {
+export async function waitForHealth(
+  baseUrl: string,
+  child: ChildProcess,
+  output: () => string,
+  timeoutMs: number,
+): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     if (child.exitCode !== null) throw new Error(`The server exited with code ${child.exitCode}:\n${output()}`);

@@ -15,16 +15,20 @@ function sourceFiles(dir: string): string[] {
 
 function imports(file: string): string[] {
   const text = readFileSync(file, 'utf8');
-  return [...text.matchAll(/(?:import|export)[^'"]*?from\s+['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)].map((m) => m[1] ?? m[2]);
+  return [...text.matchAll(/(?:import|export)[^'"]*?from\s+['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)].map(
+    (m) => m[1] ?? m[2],
+  );
 }
 
 /** Production files only: tests may read fixtures from disk. */
 function violations(dir: string, forbidden: (specifier: string) => boolean): string[] {
-  return sourceFiles(join(root, dir)).filter((file) => !/\.test\.tsx?$/.test(file)).flatMap((file) =>
-    imports(file)
-      .filter(forbidden)
-      .map((specifier) => `${relative(root, file)} imports ${specifier}`),
-  );
+  return sourceFiles(join(root, dir))
+    .filter((file) => !/\.test\.tsx?$/.test(file))
+    .flatMap((file) =>
+      imports(file)
+        .filter(forbidden)
+        .map((specifier) => `${relative(root, file)} imports ${specifier}`),
+    );
 }
 
 describe('layer boundaries', () => {
@@ -38,7 +42,10 @@ describe('layer boundaries', () => {
 
   it('shared code imports neither side, nor Node, the DOM or a framework', () => {
     expect(
-      violations('shared', (s) => /(^|\/)(server|src)(\/|$)/.test(s) || /^(node:|fs$|path$|react|express|knex|react-router)/.test(s)),
+      violations(
+        'shared',
+        (s) => /(^|\/)(server|src)(\/|$)/.test(s) || /^(node:|fs$|path$|react|express|knex|react-router)/.test(s),
+      ),
     ).toEqual([]);
   });
 });

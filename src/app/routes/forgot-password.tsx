@@ -5,7 +5,10 @@ import { ForgotPasswordForm } from '../../features/auth/components/forgot-passwo
 
 export function Component() {
   return (
-    <AuthLayout title="Reset your password" description="We send a link that lets you choose a new password. It works once and expires.">
+    <AuthLayout
+      title="Reset your password"
+      description="We send a link that lets you choose a new password. It works once and expires."
+    >
       <title>Reset password · Dilutrace</title>
       <ForgotPasswordForm />
       <p className="mt-6">

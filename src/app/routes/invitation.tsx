@@ -34,7 +34,11 @@ export function Component() {
         <dt className="text-muted">E-mail</dt>
         <dd className="font-semibold break-all">{preview.email}</dd>
       </dl>
-      <InvitationAcceptForm token={token} preview={preview} onAccepted={() => navigate(paths.app.dashboard.href(), { replace: true })} />
+      <InvitationAcceptForm
+        token={token}
+        preview={preview}
+        onAccepted={() => navigate(paths.app.dashboard.href(), { replace: true })}
+      />
     </AuthLayout>
   );
 }
@@ -46,11 +50,13 @@ export function ErrorBoundary() {
     <AuthLayout title="This invitation cannot be used">
       <title>Invitation · Dilutrace</title>
       <Alert tone="danger">
-        {isApiError(error) && error.status < 500 ? error.message : 'The invitation could not be loaded. Try the link again in a moment.'}
+        {isApiError(error) && error.status < 500
+          ? error.message
+          : 'The invitation could not be loaded. Try the link again in a moment.'}
       </Alert>
       <p className="mt-6">
-        Ask your lab administrator for a new invitation, or <Link to={paths.auth.signIn.href()}>sign in</Link> if you have
-        already joined.
+        Ask your lab administrator for a new invitation, or <Link to={paths.auth.signIn.href()}>sign in</Link> if you
+        have already joined.
       </p>
     </AuthLayout>
   );

@@ -4,7 +4,10 @@ import { paths } from '../../config/paths';
 
 export function Component() {
   return (
-    <AuthLayout title="Page not found" description="No page lives at this address. The link may be mistyped or out of date.">
+    <AuthLayout
+      title="Page not found"
+      description="No page lives at this address. The link may be mistyped or out of date."
+    >
       <title>Not found · Dilutrace</title>
       <p>
         <Link to={paths.app.dashboard.href()}>Go to the dashboard</Link>

@@ -2,10 +2,21 @@ import type { ReactNode } from 'react';
 import { NameMark } from '../ui/name-mark';
 
 /** The signed-out pages: the name mark, one h1 and a single card. */
-export function AuthLayout({ title, description, children }: { title: string; description?: ReactNode; children: ReactNode }) {
+export function AuthLayout({
+  title,
+  description,
+  children,
+}: {
+  title: string;
+  description?: ReactNode;
+  children: ReactNode;
+}) {
   return (
     <div className="flex min-h-screen flex-col items-center px-4 py-12">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:rounded focus:bg-surface focus:px-3 focus:py-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:rounded focus:bg-surface focus:px-3 focus:py-2"
+      >
         Skip to content
       </a>
       <header className="mb-8 text-ink">

@@ -12,7 +12,9 @@ export type BadgeTone = keyof typeof TONE_CLASSES;
 
 export function Badge({ tone = 'neutral', children }: { tone?: BadgeTone; children: ReactNode }) {
   return (
-    <span className={`inline-flex items-center rounded-full border px-2.5 py-0.5 text-sm font-semibold ${TONE_CLASSES[tone]}`}>
+    <span
+      className={`inline-flex items-center rounded-full border px-2.5 py-0.5 text-sm font-semibold ${TONE_CLASSES[tone]}`}
+    >
       {children}
     </span>
   );

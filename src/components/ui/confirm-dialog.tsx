@@ -17,7 +17,16 @@ type ConfirmDialogProps = {
  * A modal question on the native `<dialog>`: focus moves into it, Escape cancels,
  * and focus returns to the opener when it closes.
  */
-export function ConfirmDialog({ open, title, children, confirmLabel, tone = 'primary', pending, onConfirm, onCancel }: ConfirmDialogProps) {
+export function ConfirmDialog({
+  open,
+  title,
+  children,
+  confirmLabel,
+  tone = 'primary',
+  pending,
+  onConfirm,
+  onCancel,
+}: ConfirmDialogProps) {
   const titleId = useId();
 
   return (

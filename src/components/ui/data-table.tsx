@@ -50,7 +50,12 @@ export function DataTable<TFeatures extends TableFeatures, TData extends RowData
               {headerGroup.headers.map((header) => {
                 const sorted = sortDirection?.(header);
                 return (
-                  <th key={header.id} scope="col" aria-sort={sorted ? SORT_WORDS[sorted] : undefined} className={withClasses('px-3 py-2 font-semibold', headerClassName?.(header))}>
+                  <th
+                    key={header.id}
+                    scope="col"
+                    aria-sort={sorted ? SORT_WORDS[sorted] : undefined}
+                    className={withClasses('px-3 py-2 font-semibold', headerClassName?.(header))}
+                  >
                     {renderHeader ? renderHeader(header) : <table.FlexRender header={header} />}
                   </th>
                 );

@@ -5,7 +5,11 @@
  */
 export function NameMark({ className = '' }: { className?: string }) {
   return (
-    <span role="img" aria-label="Dilutrace" className={`inline-flex items-baseline font-bold tracking-tight ${className}`}>
+    <span
+      role="img"
+      aria-label="Dilutrace"
+      className={`inline-flex items-baseline font-bold tracking-tight ${className}`}
+    >
       <span aria-hidden="true">Di</span>
       <svg aria-hidden="true" viewBox="0 0 56 76" className="mx-[0.01em] h-[0.76em] w-[0.56em]">
         <path d="M22 0h12v42c12 3 19 11 19 20 0 9-4 14-11 14H14C7 76 3 71 3 62c0-9 7-17 19-20z" fill="currentColor" />

@@ -1,7 +1,15 @@
 import type { ReactNode } from 'react';
 
 /** The page's one h1, with an optional line under it and actions on the right. */
-export function PageHeader({ title, description, actions }: { title: string; description?: ReactNode; actions?: ReactNode }) {
+export function PageHeader({
+  title,
+  description,
+  actions,
+}: {
+  title: string;
+  description?: ReactNode;
+  actions?: ReactNode;
+}) {
   return (
     <header className="mb-8 flex flex-wrap items-end justify-between gap-4 border-b border-line pb-4">
       <div>

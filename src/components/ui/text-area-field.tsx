@@ -1,7 +1,12 @@
 import { useId, type Ref, type TextareaHTMLAttributes } from 'react';
 import { describedBy, FieldMessages } from './field-message';
 
-type TextAreaFieldProps = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; hint?: string; error?: string; ref?: Ref<HTMLTextAreaElement> };
+type TextAreaFieldProps = TextareaHTMLAttributes<HTMLTextAreaElement> & {
+  label: string;
+  hint?: string;
+  error?: string;
+  ref?: Ref<HTMLTextAreaElement>;
+};
 
 /** A labelled multi-line box whose hint and error are announced with it. */
 export function TextAreaField({ label, hint, error, id, className = '', ref, ...textAreaProps }: TextAreaFieldProps) {

@@ -43,11 +43,13 @@ export function watchForPageProblems(page: Page): string[] {
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
   page.on('console', (message) => {
     // Failed loads are judged by status below; any other console error (a CSP refusal, a React warning) counts.
-    if (message.type() === 'error' && !message.text().startsWith('Failed to load resource')) problems.push(`console: ${message.text()}`);
+    if (message.type() === 'error' && !message.text().startsWith('Failed to load resource'))
+      problems.push(`console: ${message.text()}`);
   });
   page.on('response', (response) => {
     // 401 is the expected answer to "who is signed in?" on signed-out pages and to a wrong password.
-    if (response.status() >= 400 && response.status() !== 401) problems.push(`${response.status()} from ${response.url()}`);
+    if (response.status() >= 400 && response.status() !== 401)
+      problems.push(`${response.status()} from ${response.url()}`);
   });
   page.on('request', (request) => {
     const url = new URL(request.url());

@@ -11,7 +11,8 @@ export type RunningServer = { baseUrl: string; output: () => string; stop: () =>
  * file seeded with the demo lab, serving the client that `vite build` left in dist/client.
  */
 export async function startDilutraceServer(demoPassword: string): Promise<RunningServer> {
-  if (!existsSync('dist/client/index.html')) throw new Error('dist/client is missing: run `vite build` before the browser tests.');
+  if (!existsSync('dist/client/index.html'))
+    throw new Error('dist/client is missing: run `vite build` before the browser tests.');
   const dataDir = mkdtempSync(join(tmpdir(), 'dilutrace-e2e-'));
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;

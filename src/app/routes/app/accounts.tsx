@@ -20,7 +20,8 @@ export function Component() {
         <title>Accounts · Dilutrace</title>
         <h1 className="mb-6 text-3xl font-bold">Accounts</h1>
         <Alert tone="info" title="Not permitted">
-          Only the instance operator disables or enables accounts. Lab administrators remove people from their own lab under Members.
+          Only the instance operator disables or enables accounts. Lab administrators remove people from their own lab
+          under Members.
         </Alert>
       </>
     );

@@ -17,7 +17,9 @@ export const clientLoader =
   async ({ request }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
     if (me?.activeLabId && can(activeRoles(me), 'readAuditTrail')) {
-      await queryClient.fetchQuery(auditEventsQueryOptions(me.activeLabId, auditQueryFromSearch(new URL(request.url).searchParams)));
+      await queryClient.fetchQuery(
+        auditEventsQueryOptions(me.activeLabId, auditQueryFromSearch(new URL(request.url).searchParams)),
+      );
     }
     return null;
   };
@@ -29,7 +31,10 @@ export function Component() {
     return (
       <>
         <title>Audit trail · Dilutrace</title>
-        <NotPermitted title="Audit trail" neededRole={`${ROLE_LABELS.auditor}, ${ROLE_LABELS.qa} or ${ROLE_LABELS.admin}`} />
+        <NotPermitted
+          title="Audit trail"
+          neededRole={`${ROLE_LABELS.auditor}, ${ROLE_LABELS.qa} or ${ROLE_LABELS.admin}`}
+        />
       </>
     );
   }
@@ -49,12 +54,21 @@ function AuditTrailPage({ labId }: { labId: number }) {
         title="Audit trail"
         description="Every action in the lab: who did it, when (in UTC), and what it changed. Events are never edited or removed."
         actions={
-          <a href={auditCsvUrl(labId, query)} download className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold whitespace-nowrap text-ink no-underline hover:bg-paper">
+          <a
+            href={auditCsvUrl(labId, query)}
+            download
+            className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold whitespace-nowrap text-ink no-underline hover:bg-paper"
+          >
             Export CSV
           </a>
         }
       />
-      <AuditFilters key={filterKey} query={query} onApply={(next) => navigate(paths.app.audit.href(auditSearchOf(next)))} onClear={() => navigate(paths.app.audit.href())} />
+      <AuditFilters
+        key={filterKey}
+        query={query}
+        onApply={(next) => navigate(paths.app.audit.href(auditSearchOf(next)))}
+        onClear={() => navigate(paths.app.audit.href())}
+      />
       <AuditTable events={page.events} caption="Audit events, newest first" />
       <AuditPager
         offset={query.offset}

@@ -45,10 +45,27 @@ export function Component() {
       </Alert>
     );
   }
-  return <BenchSheetPage labId={membership.id} preparationId={id} userId={me.user.id} planner={can(membership.roles, 'planPreparations')} />;
+  return (
+    <BenchSheetPage
+      labId={membership.id}
+      preparationId={id}
+      userId={me.user.id}
+      planner={can(membership.roles, 'planPreparations')}
+    />
+  );
 }
 
-function BenchSheetPage({ labId, preparationId, userId, planner }: { labId: number; preparationId: number; userId: number; planner: boolean }) {
+function BenchSheetPage({
+  labId,
+  preparationId,
+  userId,
+  planner,
+}: {
+  labId: number;
+  preparationId: number;
+  userId: number;
+  planner: boolean;
+}) {
   const queryClient = useQueryClient();
   const detail = usePreparation(labId, preparationId);
   const library = useLabEquipment(labId);
@@ -59,7 +76,11 @@ function BenchSheetPage({ labId, preparationId, userId, planner }: { labId: numb
       <title>{`Bench sheet · ${detail.title} · Dilutrace`}</title>
       <p className="mb-3 flex flex-wrap justify-between gap-4 print:hidden">
         <Link to={paths.app.preparation.href(detail.id)}>← Back to the workspace</Link>
-        {recordsReadings ? <a href="#record-readings-heading">{version.readings ? 'Correct the readings' : 'Record the readings'} after preparing ↓</a> : null}
+        {recordsReadings ? (
+          <a href="#record-readings-heading">
+            {version.readings ? 'Correct the readings' : 'Record the readings'} after preparing ↓
+          </a>
+        ) : null}
       </p>
       <BenchSheet detail={detail} library={library} />
       {recordsReadings ? (

@@ -51,7 +51,9 @@ function CapturedMailPage() {
           <CapturedMessageView message={openMessage} />
         ) : (
           <p className="rounded-lg border border-dashed border-line-strong p-6 text-muted">
-            {messages.length > 0 ? 'Choose a message to read it.' : 'Invitations and password-reset mails will appear here.'}
+            {messages.length > 0
+              ? 'Choose a message to read it.'
+              : 'Invitations and password-reset mails will appear here.'}
           </p>
         )}
       </div>

@@ -10,7 +10,10 @@ import { activeMembership } from '../../../lib/authorization';
 
 /** The ids in `?ids=1,2,3`: whole positive numbers, each once, at most four. */
 function idsFrom(search: URLSearchParams): number[] {
-  const ids = (search.get('ids') ?? '').split(',').map(Number).filter((id) => Number.isInteger(id) && id > 0);
+  const ids = (search.get('ids') ?? '')
+    .split(',')
+    .map(Number)
+    .filter((id) => Number.isInteger(id) && id > 0);
   return [...new Set(ids)].slice(0, 4);
 }
 
@@ -20,7 +23,12 @@ export const clientLoader =
     const me = await queryClient.ensureQueryData(meQueryOptions());
     const ids = idsFrom(new URL(request.url).searchParams);
     // Fresh copies: a variant may have been saved a moment ago.
-    if (me?.activeLabId) await Promise.all(ids.map((id) => queryClient.fetchQuery({ ...preparationQueryOptions(me.activeLabId as number, id), staleTime: 0 })));
+    if (me?.activeLabId)
+      await Promise.all(
+        ids.map((id) =>
+          queryClient.fetchQuery({ ...preparationQueryOptions(me.activeLabId as number, id), staleTime: 0 }),
+        ),
+      );
     return null;
   };
 
@@ -32,10 +40,14 @@ export function Component() {
   return (
     <>
       <title>Compare · Dilutrace</title>
-      <PageHeader title="Compare preparations" description="Stored results side by side: value, uncertainty, where it comes from, what each route uses and throws away." />
+      <PageHeader
+        title="Compare preparations"
+        description="Stored results side by side: value, uncertainty, where it comes from, what each route uses and throws away."
+      />
       {!membership || ids.length < 2 ? (
         <Alert tone="info" title="Choose two to four preparations">
-          Tick them on the <a href={paths.app.preparations.href()}>preparations list</a>, or duplicate a preparation into a variant and compare it with the original.
+          Tick them on the <a href={paths.app.preparations.href()}>preparations list</a>, or duplicate a preparation
+          into a variant and compare it with the original.
         </Alert>
       ) : (
         <ComparePage labId={membership.id} ids={ids} />

@@ -13,9 +13,7 @@ export function Component() {
       <PageHeader
         title={`Welcome, ${me.user.name}`}
         description={
-          membership
-            ? `${membership.name}. What each of your roles does here, and where to start.`
-            : undefined
+          membership ? `${membership.name}. What each of your roles does here, and where to start.` : undefined
         }
       />
       {membership ? (

@@ -14,7 +14,8 @@ import { activeMembership, activeRoles, can } from '../../../lib/authorization';
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
-  if (me?.activeLabId && can(activeRoles(me), 'keepLibrary')) await queryClient.ensureQueryData(csvColumnsQueryOptions(me.activeLabId));
+  if (me?.activeLabId && can(activeRoles(me), 'keepLibrary'))
+    await queryClient.ensureQueryData(csvColumnsQueryOptions(me.activeLabId));
   return null;
 };
 
@@ -51,7 +52,8 @@ function ImportPage({ labId }: { labId: number }) {
         <CsvImportForm key={kind} labId={labId} kind={kind} />
         <Card title={`Columns for ${tab.label.toLowerCase()}`}>
           <p className="mb-3 text-sm">
-            The first line names the columns; their order is free. Numbers take a decimal point (a decimal comma only inside a quoted cell); dates are YYYY-MM-DD.{' '}
+            The first line names the columns; their order is free. Numbers take a decimal point (a decimal comma only
+            inside a quoted cell); dates are YYYY-MM-DD.{' '}
             <a href={csvTemplateUrl(labId, kind)} download>
               Download an empty template
             </a>

@@ -22,7 +22,8 @@ export const clientLoader =
   async ({ params }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
     const itemId = Number(params.itemId);
-    if (me?.activeLabId && Number.isInteger(itemId)) await queryClient.fetchQuery(equipmentItemQueryOptions(me.activeLabId, itemId));
+    if (me?.activeLabId && Number.isInteger(itemId))
+      await queryClient.fetchQuery(equipmentItemQueryOptions(me.activeLabId, itemId));
     return null;
   };
 
@@ -46,7 +47,9 @@ function ItemPage({ labId, itemId, keeper }: { labId: number; itemId: number; ke
   const openRevision = Number(searchParams.get('revision')) || null;
   const data = item.current.data;
   const hazardNotes = typeof data.hazardNotes === 'string' ? data.hazardNotes.trim() : '';
-  const heading = [data.name, data.description].find((value): value is string => typeof value === 'string' && value !== '');
+  const heading = [data.name, data.description].find(
+    (value): value is string => typeof value === 'string' && value !== '',
+  );
   const active = item.status === 'active';
 
   return (
@@ -61,7 +64,10 @@ function ItemPage({ labId, itemId, keeper }: { labId: number; itemId: number; ke
         actions={
           keeper && active ? (
             <>
-              <Link to={paths.app.libraryItemEdit.href(item.id)} className="rounded-md border border-ink bg-ink px-4 py-2 font-semibold text-paper no-underline hover:bg-ink-soft">
+              <Link
+                to={paths.app.libraryItemEdit.href(item.id)}
+                className="rounded-md border border-ink bg-ink px-4 py-2 font-semibold text-paper no-underline hover:bg-ink-soft"
+              >
                 Edit
               </Link>
               <RetireItemButton labId={labId} item={item} />
@@ -91,7 +97,9 @@ function ItemPage({ labId, itemId, keeper }: { labId: number; itemId: number; ke
         </Card>
         <Card title="Certificates">
           <CertificateList labId={labId} certificates={item.certificates} />
-          {keeper && active ? <CertificateUpload labId={labId} itemId={item.id} revisionNumber={item.current.number} /> : null}
+          {keeper && active ? (
+            <CertificateUpload labId={labId} itemId={item.id} revisionNumber={item.current.number} />
+          ) : null}
         </Card>
       </div>
       <RevisionHistory itemId={item.id} kind={item.kind} revisions={item.revisions} openNumber={openRevision} />

@@ -12,7 +12,8 @@ import { activeMembership, activeRoles, can } from '../../../lib/authorization';
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
-  if (me?.activeLabId && can(activeRoles(me), 'keepLibrary')) await queryClient.ensureQueryData(equipmentTemplatesQueryOptions(me.activeLabId));
+  if (me?.activeLabId && can(activeRoles(me), 'keepLibrary'))
+    await queryClient.ensureQueryData(equipmentTemplatesQueryOptions(me.activeLabId));
   return null;
 };
 
@@ -36,7 +37,10 @@ export function Component() {
       <p className="mb-2">
         <Link to={paths.app.library.href({ kind })}>← Back to the library</Link>
       </p>
-      <PageHeader title={title} description="It becomes revision 1 of the item. Later changes make new revisions; budgets keep the revision they used." />
+      <PageHeader
+        title={title}
+        description="It becomes revision 1 of the item. Later changes make new revisions; budgets keep the revision they used."
+      />
       <EquipmentForm key={kind} labId={membership.id} kind={kind} />
     </>
   );

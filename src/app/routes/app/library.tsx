@@ -19,7 +19,13 @@ export const clientLoader =
     const search = new URL(request.url).searchParams;
     if (me?.activeLabId) {
       // fetchQuery, not ensureQueryData: a list marked stale by a change elsewhere is read again before showing.
-      await queryClient.fetchQuery(equipmentListQueryOptions(me.activeLabId, kindFromSearch(search.get('kind')), statusFromSearch(search.get('status'))));
+      await queryClient.fetchQuery(
+        equipmentListQueryOptions(
+          me.activeLabId,
+          kindFromSearch(search.get('kind')),
+          statusFromSearch(search.get('status')),
+        ),
+      );
     }
     return null;
   };
@@ -72,19 +78,34 @@ function LibraryPage({ labId, keeper }: { labId: number; keeper: boolean }) {
         items={items}
         toolbar={
           <>
-            <StatusFilter value={status} onChange={(next) => navigate(paths.app.library.href({ kind, status: next === 'active' ? undefined : next }))} />
+            <StatusFilter
+              value={status}
+              onChange={(next) =>
+                navigate(paths.app.library.href({ kind, status: next === 'active' ? undefined : next }))
+              }
+            />
             <div className="ml-auto flex flex-wrap gap-2">
               {keeper ? (
                 <>
-                  <Link to={paths.app.libraryNew.href(kind)} className={`${ACTION_LINK} border-ink bg-ink text-paper hover:bg-ink-soft`}>
+                  <Link
+                    to={paths.app.libraryNew.href(kind)}
+                    className={`${ACTION_LINK} border-ink bg-ink text-paper hover:bg-ink-soft`}
+                  >
                     Add {tab.singular}
                   </Link>
-                  <Link to={paths.app.libraryImport.href(kind)} className={`${ACTION_LINK} border-line-strong bg-surface text-ink hover:bg-paper`}>
+                  <Link
+                    to={paths.app.libraryImport.href(kind)}
+                    className={`${ACTION_LINK} border-line-strong bg-surface text-ink hover:bg-paper`}
+                  >
                     Import CSV
                   </Link>
                 </>
               ) : null}
-              <a href={csvExportUrl(labId, kind)} download className={`${ACTION_LINK} border-line-strong bg-surface text-ink hover:bg-paper`}>
+              <a
+                href={csvExportUrl(labId, kind)}
+                download
+                className={`${ACTION_LINK} border-line-strong bg-surface text-ink hover:bg-paper`}
+              >
                 Export CSV
               </a>
             </div>

@@ -46,7 +46,10 @@ function MembersPage({ labId, labName, currentUserId }: { labId: number; labName
         title="Members"
         description={`Who works in ${labName}, and what each person may do. Role changes are saved as you tick them.`}
         actions={
-          <a href="#invite" className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper">
+          <a
+            href="#invite"
+            className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper"
+          >
             Invite a member
           </a>
         }

@@ -34,7 +34,9 @@ export function Component() {
 
 function PolicyPage({ labId, labName, editable }: { labId: number; labName: string; editable: boolean }) {
   const { updatedAt, updatedBy, ...policy } = usePolicy(labId);
-  const updated = updatedAt ? `Last changed by ${updatedBy ?? 'a former member'} on ${formatDateTime(updatedAt)}.` : 'The defaults apply; nobody has changed the policy yet.';
+  const updated = updatedAt
+    ? `Last changed by ${updatedBy ?? 'a former member'} on ${formatDateTime(updatedAt)}.`
+    : 'The defaults apply; nobody has changed the policy yet.';
   return (
     <>
       <title>Lab policy · Dilutrace</title>

@@ -16,7 +16,10 @@ import { activeMembership, can } from '../../../lib/authorization';
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
   if (me?.activeLabId) {
-    await Promise.all([queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)), queryClient.ensureQueryData(labPolicyQueryOptions(me.activeLabId))]);
+    await Promise.all([
+      queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)),
+      queryClient.ensureQueryData(labPolicyQueryOptions(me.activeLabId)),
+    ]);
   }
   return null;
 };
@@ -53,9 +56,20 @@ function NewPreparation({ labId }: { labId: number }) {
         editable
         stored={null}
         save={(write) => create.mutateAsync(write)}
-        onSaved={(detail, draft, savedKey) => navigate(paths.app.preparation.href(detail.id), { replace: true, state: { preparationId: detail.id, updatedAt: detail.current.updatedAt, draft, savedKey } })}
+        onSaved={(detail, draft, savedKey) =>
+          navigate(paths.app.preparation.href(detail.id), {
+            replace: true,
+            state: { preparationId: detail.id, updatedAt: detail.current.updatedAt, draft, savedKey },
+          })
+        }
         header={(saveLine, draft) => (
-          <WorkspaceHeader title={draft.title.trim() || 'New preparation'} status={null} versionNumber={null} saveLine={saveLine} actions={null} />
+          <WorkspaceHeader
+            title={draft.title.trim() || 'New preparation'}
+            status={null}
+            versionNumber={null}
+            saveLine={saveLine}
+            actions={null}
+          />
         )}
       />
     </>

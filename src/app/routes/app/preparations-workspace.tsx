@@ -61,18 +61,52 @@ export function Component() {
       </>
     );
   }
-  return <PreparationPage labId={membership.id} preparationId={id} userId={me.user.id} planner={can(membership.roles, 'planPreparations')} />;
+  return (
+    <PreparationPage
+      labId={membership.id}
+      preparationId={id}
+      userId={me.user.id}
+      planner={can(membership.roles, 'planPreparations')}
+    />
+  );
 }
 
-function PreparationPage({ labId, preparationId, userId, planner }: { labId: number; preparationId: number; userId: number; planner: boolean }) {
+function PreparationPage({
+  labId,
+  preparationId,
+  userId,
+  planner,
+}: {
+  labId: number;
+  preparationId: number;
+  userId: number;
+  planner: boolean;
+}) {
   const detail = usePreparation(labId, preparationId);
   const library = useLabEquipment(labId);
   const policy = useLabPolicy(labId);
   // A new version or another preparation starts the workspace afresh from the server's plan.
-  return <PreparationWorkspace key={`${detail.id}-${detail.current.number}-${detail.current.status}`} labId={labId} detail={detail} library={library} policy={policy} userId={userId} planner={planner} />;
+  return (
+    <PreparationWorkspace
+      key={`${detail.id}-${detail.current.number}-${detail.current.status}`}
+      labId={labId}
+      detail={detail}
+      library={library}
+      policy={policy}
+      userId={userId}
+      planner={planner}
+    />
+  );
 }
 
-type PreparationWorkspaceProps = { labId: number; detail: PreparationDetail; library: EquipmentItem[]; policy: LabPolicy; userId: number; planner: boolean };
+type PreparationWorkspaceProps = {
+  labId: number;
+  detail: PreparationDetail;
+  library: EquipmentItem[];
+  policy: LabPolicy;
+  userId: number;
+  planner: boolean;
+};
 
 function PreparationWorkspace({ labId, detail, library, policy, userId, planner }: PreparationWorkspaceProps) {
   const location = useLocation();
@@ -89,12 +123,18 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
   // The workspace reads the plan once, when it opens; from then on it owns the draft.
   const [{ initialDraft, savedKey }] = useState(() => {
     const handOver = location.state as HandOver | null;
-    if (handOver?.preparationId === detail.id && handOver.updatedAt === version.updatedAt) return { initialDraft: handOver.draft, savedKey: handOver.savedKey };
-    const fromServer = draftFromPlan(version.plan, { title: detail.title, overrides: version.overrides, seed: version.seed });
+    if (handOver?.preparationId === detail.id && handOver.updatedAt === version.updatedAt)
+      return { initialDraft: handOver.draft, savedKey: handOver.savedKey };
+    const fromServer = draftFromPlan(version.plan, {
+      title: detail.title,
+      overrides: version.overrides,
+      seed: version.seed,
+    });
     const libraryById = new Map(library.map((item) => [String(item.id), item]));
     return { initialDraft: fromServer, savedKey: JSON.stringify(writeOf(fromServer, libraryById).write) };
   });
-  const stored = !editable && version.snapshot ? { budget: version.snapshot.budget, plan: version.snapshot.plan } : null;
+  const stored =
+    !editable && version.snapshot ? { budget: version.snapshot.budget, plan: version.snapshot.plan } : null;
 
   const failure = duplicate.error ?? newVersion.error;
   const note = failure ? (
@@ -102,7 +142,8 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
   ) : version.status === 'prepared' ? (
     <Alert tone="info" title={`Version ${version.number} has been prepared`}>
       <p>
-        The masses weighed at the bench are recorded and the result below is computed on them, so the plan no longer changes.
+        The masses weighed at the bench are recorded and the result below is computed on them, so the plan no longer
+        changes.
         {planner && owner ? ' Until it is submitted for review you can still correct the readings.' : ''}
       </p>
       {planner && owner ? (
@@ -122,7 +163,13 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
     </Alert>
   ) : null;
   const readings =
-    version.readings && version.snapshot ? <BenchReadings readings={version.readings} stepName={stepNamer(version.snapshot.plan, version.snapshot.items)} plan={version.snapshot.plan} /> : null;
+    version.readings && version.snapshot ? (
+      <BenchReadings
+        readings={version.readings}
+        stepName={stepNamer(version.snapshot.plan, version.snapshot.items)}
+        plan={version.snapshot.plan}
+      />
+    ) : null;
 
   return (
     <>
@@ -151,11 +198,17 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
             actions={
               <>
                 {variantOf ? (
-                  <Link to={paths.app.compare.href([variantOf, detail.id])} className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper">
+                  <Link
+                    to={paths.app.compare.href([variantOf, detail.id])}
+                    className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper"
+                  >
                     Compare with the original
                   </Link>
                 ) : null}
-                <Link to={paths.app.benchSheet.href(detail.id)} className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper">
+                <Link
+                  to={paths.app.benchSheet.href(detail.id)}
+                  className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper"
+                >
                   Bench sheet
                 </Link>
                 {planner ? (
@@ -163,7 +216,11 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
                     variant="secondary"
                     pending={duplicate.isPending}
                     pendingLabel="Duplicating…"
-                    onClick={() => duplicate.mutate(undefined, { onSuccess: (copy) => navigate(paths.app.preparation.href(copy.id, detail.id)) })}
+                    onClick={() =>
+                      duplicate.mutate(undefined, {
+                        onSuccess: (copy) => navigate(paths.app.preparation.href(copy.id, detail.id)),
+                      })
+                    }
                   >
                     Duplicate as a variant
                   </Button>

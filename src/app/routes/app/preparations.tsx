@@ -8,7 +8,11 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
 import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
-import { preparationsQueryOptions, usePreparations, type PreparationListFilter } from '../../../features/preparations/api/get-preparations';
+import {
+  preparationsQueryOptions,
+  usePreparations,
+  type PreparationListFilter,
+} from '../../../features/preparations/api/get-preparations';
 import { PreparationsFilters } from '../../../features/preparations/components/preparations-filters';
 import { PreparationsTable } from '../../../features/preparations/components/preparations-table';
 import { activeMembership, can } from '../../../lib/authorization';
@@ -17,7 +21,8 @@ import { activeMembership, can } from '../../../lib/authorization';
 function filterFrom(search: URLSearchParams): PreparationListFilter {
   const status = preparationStatusSchema.safeParse(search.get('status'));
   const analyst = Number(search.get('analyst'));
-  const date = (name: string) => (/^\d{4}-\d{2}-\d{2}$/.test(search.get(name) ?? '') ? (search.get(name) as string) : undefined);
+  const date = (name: string) =>
+    /^\d{4}-\d{2}-\d{2}$/.test(search.get(name) ?? '') ? (search.get(name) as string) : undefined;
   return {
     status: status.success ? status.data : undefined,
     analyst: Number.isInteger(analyst) && analyst > 0 ? analyst : undefined,
@@ -69,11 +74,17 @@ function PreparationsPage({ labId, planner }: { labId: number; planner: boolean 
   const library = useLabEquipment(labId);
   const [selected, setSelected] = useState<number[]>([]);
 
-  const analysts = [...new Map(everyone.map((row) => [row.createdById, row.createdBy])).entries()].map(([id, name]) => ({ id, name }));
+  const analysts = [...new Map(everyone.map((row) => [row.createdById, row.createdBy])).entries()].map(
+    ([id, name]) => ({ id, name }),
+  );
   const materialCodes = [
-    ...new Set([...library.filter((item) => item.kind.endsWith('-material')).map((item) => item.code), ...everyone.flatMap((row) => (row.materialCode ? [row.materialCode] : []))]),
+    ...new Set([
+      ...library.filter((item) => item.kind.endsWith('-material')).map((item) => item.code),
+      ...everyone.flatMap((row) => (row.materialCode ? [row.materialCode] : [])),
+    ]),
   ].sort();
-  const toggle = (id: number) => setSelected((current) => (current.includes(id) ? current.filter((each) => each !== id) : [...current, id]));
+  const toggle = (id: number) =>
+    setSelected((current) => (current.includes(id) ? current.filter((each) => each !== id) : [...current, id]));
 
   return (
     <>
@@ -83,20 +94,39 @@ function PreparationsPage({ labId, planner }: { labId: number; planner: boolean 
         description="Every planned solution of the lab with its latest version. Open one to see its budget; tick two to four to compare them."
         actions={
           planner ? (
-            <Link to={paths.app.preparationNew.href()} className="rounded-md border border-ink bg-ink px-4 py-2 font-semibold text-paper no-underline hover:bg-ink-soft">
+            <Link
+              to={paths.app.preparationNew.href()}
+              className="rounded-md border border-ink bg-ink px-4 py-2 font-semibold text-paper no-underline hover:bg-ink-soft"
+            >
               New preparation
             </Link>
           ) : null
         }
       />
-      <PreparationsFilters filter={filter} analysts={analysts} materialCodes={materialCodes} onChange={(next) => navigate(paths.app.preparations.href(next), { replace: true })} />
+      <PreparationsFilters
+        filter={filter}
+        analysts={analysts}
+        materialCodes={materialCodes}
+        onChange={(next) => navigate(paths.app.preparations.href(next), { replace: true })}
+      />
       <div className="mb-3 flex flex-wrap items-center gap-3">
-        <Button variant="secondary" disabled={selected.length < 2} onClick={() => navigate(paths.app.compare.href(selected))}>
+        <Button
+          variant="secondary"
+          disabled={selected.length < 2}
+          onClick={() => navigate(paths.app.compare.href(selected))}
+        >
           Compare selected ({selected.length})
         </Button>
-        <span className="text-sm text-muted">{selected.length < 2 ? 'Tick two to four preparations to compare them.' : null}</span>
+        <span className="text-sm text-muted">
+          {selected.length < 2 ? 'Tick two to four preparations to compare them.' : null}
+        </span>
       </div>
-      <PreparationsTable preparations={preparations} hrefOf={(id) => paths.app.preparation.href(id)} selected={selected} onToggle={toggle} />
+      <PreparationsTable
+        preparations={preparations}
+        hrefOf={(id) => paths.app.preparation.href(id)}
+        selected={selected}
+        onToggle={toggle}
+      />
       <p className="mt-2 text-sm text-muted">
         {preparations.length} of {everyone.length} preparations.
       </p>

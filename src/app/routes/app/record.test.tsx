@@ -8,18 +8,37 @@ import { paths } from '../../../config/paths';
 import { authKeys } from '../../../features/auth/api/auth-keys';
 import { recordQueryOptions } from '../../../features/records/api/get-record';
 import { recordVersionQueryOptions } from '../../../features/records/api/get-record-version';
-import { meOf, preparationAt, renderAt, stubServer, type Answer, type SentRequest } from '../../../test-support/component-harness';
+import {
+  meOf,
+  preparationAt,
+  renderAt,
+  stubServer,
+  type Answer,
+  type SentRequest,
+} from '../../../test-support/component-harness';
 import { Component as RecordRoute } from './record';
 
 type Stage = Parameters<typeof preparationAt>[0];
 
 const ACTIONS = ['Submit for review', 'Approve and sign', 'Return with comments', 'Start a new version'] as const;
-const STATUS_WORDS: Record<Stage, string> = { draft: 'Draft', prepared: 'Prepared (readings recorded)', submitted: 'Waiting for review', approved: 'Approved' };
+const STATUS_WORDS: Record<Stage, string> = {
+  draft: 'Draft',
+  prepared: 'Prepared (readings recorded)',
+  submitted: 'Waiting for review',
+  approved: 'Approved',
+};
 const approveUrl = '/api/labs/1/preparations/1/versions/1/approve';
-const emptyAuditPage = (request: SentRequest): Answer | undefined => (request.method === 'GET' && request.url.startsWith('/api/labs/1/audit-events?') ? { status: 200, body: { events: [], total: 0 } } : undefined);
+const emptyAuditPage = (request: SentRequest): Answer | undefined =>
+  request.method === 'GET' && request.url.startsWith('/api/labs/1/audit-events?')
+    ? { status: 200, body: { events: [], total: 0 } }
+    : undefined;
 
 /** `me` with other roles in the demo lab (and, when given, another user id). */
-const withRoles = (me: Me, roles: Role[], userId = me.user.id): Me => ({ ...me, user: { ...me.user, id: userId }, labs: me.labs.map((lab) => ({ ...lab, roles })) });
+const withRoles = (me: Me, roles: Role[], userId = me.user.id): Me => ({
+  ...me,
+  user: { ...me.user, id: userId },
+  labs: me.labs.map((lab) => ({ ...lab, roles })),
+});
 
 /** The record page of version 1 at `stage`, for `me`, with the server's answers already in the cache. */
 async function showRecord(stage: Stage, me: Me, answer: (request: SentRequest) => Answer | undefined = emptyAuditPage) {
@@ -77,7 +96,10 @@ describe('record actions by role and state', () => {
   it('tells a QA member who submitted the version that someone else must review it, and offers no approval', async () => {
     const author = withRoles(meOf('analyst'), ['analyst', 'qa']);
     await showRecord('submitted', author);
-    expect(screen.getByText('You submitted this version; another member of QA must review it.')).toHaveProperty('tagName', 'P');
+    expect(screen.getByText('You submitted this version; another member of QA must review it.')).toHaveProperty(
+      'tagName',
+      'P',
+    );
     expect(actionsShown()).toEqual([]);
   });
 });
@@ -104,7 +126,16 @@ describe('approving a submitted version', () => {
       if (request.method !== 'POST' || request.url !== approveUrl) return emptyAuditPage(request);
       attempts += 1;
       if (attempts === 1) {
-        return { status: 400, body: { error: { code: 'validation_failed', message: 'The password is not right; the approval was not signed.', details: [{ path: 'password', message: 'This is not your password.' }] } } };
+        return {
+          status: 400,
+          body: {
+            error: {
+              code: 'validation_failed',
+              message: 'The password is not right; the approval was not signed.',
+              details: [{ path: 'password', message: 'This is not your password.' }],
+            },
+          },
+        };
       }
       return { status: 200, body: preparationAt('approved') };
     });
@@ -112,7 +143,10 @@ describe('approving a submitted version', () => {
     await user.click(screen.getByRole('button', { name: 'Approve and sign' }));
     const dialog = approveDialog();
     const password = within(dialog).getByLabelText('Your password') as HTMLInputElement;
-    await user.type(within(dialog).getByRole('textbox', { name: 'What you approve' }), 'Budget reviewed; equipment in calibration.');
+    await user.type(
+      within(dialog).getByRole('textbox', { name: 'What you approve' }),
+      'Budget reviewed; equipment in calibration.',
+    );
     await user.type(password, 'not-my-password');
     await user.click(within(dialog).getByRole('button', { name: 'Approve and sign' }));
 
@@ -124,9 +158,19 @@ describe('approving a submitted version', () => {
     await user.type(password, 'the-right-password');
     await user.click(within(dialog).getByRole('button', { name: 'Approve and sign' }));
     await vi.waitFor(() => expect(dialog).toHaveProperty('open', false));
-    expect(sent.filter((request) => request.method === 'POST').map(({ url, body, csrf }) => ({ url, body, csrf }))).toEqual([
-      { url: approveUrl, body: { statement: 'Budget reviewed; equipment in calibration.', password: 'not-my-password' }, csrf: 'test-csrf-token' },
-      { url: approveUrl, body: { statement: 'Budget reviewed; equipment in calibration.', password: 'the-right-password' }, csrf: 'test-csrf-token' },
+    expect(
+      sent.filter((request) => request.method === 'POST').map(({ url, body, csrf }) => ({ url, body, csrf })),
+    ).toEqual([
+      {
+        url: approveUrl,
+        body: { statement: 'Budget reviewed; equipment in calibration.', password: 'not-my-password' },
+        csrf: 'test-csrf-token',
+      },
+      {
+        url: approveUrl,
+        body: { statement: 'Budget reviewed; equipment in calibration.', password: 'the-right-password' },
+        csrf: 'test-csrf-token',
+      },
     ]);
   });
 });

@@ -50,7 +50,9 @@ export const clientLoader =
       await Promise.all([
         queryClient.fetchQuery(recordQueryOptions(labId, preparationId)),
         queryClient.fetchQuery(recordVersionQueryOptions(labId, preparationId, versionNumber)),
-        can(activeRoles(me), 'readAuditTrail') ? queryClient.fetchQuery(auditEventsQueryOptions(labId, preparationHistoryQuery(preparationId))) : null,
+        can(activeRoles(me), 'readAuditTrail')
+          ? queryClient.fetchQuery(auditEventsQueryOptions(labId, preparationHistoryQuery(preparationId)))
+          : null,
       ]);
     }
     return null;
@@ -88,10 +90,24 @@ export function Component() {
       </>
     );
   }
-  return <RecordPage labId={membership.id} preparationId={preparationId} versionNumber={versionNumber} userId={me.user.id} roles={membership.roles} />;
+  return (
+    <RecordPage
+      labId={membership.id}
+      preparationId={preparationId}
+      versionNumber={versionNumber}
+      userId={me.user.id}
+      roles={membership.roles}
+    />
+  );
 }
 
-type RecordPageProps = { labId: number; preparationId: number; versionNumber: number; userId: number; roles: readonly Role[] };
+type RecordPageProps = {
+  labId: number;
+  preparationId: number;
+  versionNumber: number;
+  userId: number;
+  roles: readonly Role[];
+};
 
 function RecordPage({ labId, preparationId, versionNumber, userId, roles }: RecordPageProps) {
   const preparation = useRecord(labId, preparationId);
@@ -104,21 +120,31 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
     <>
       <title>{`${version.approvedAs?.title ?? preparation.title} · v${version.number} · Dilutrace`}</title>
       <p className="mb-2">
-        <BackLink approved={version.status === 'approved'} reviewing={version.status === 'submitted' && can(roles, 'reviewRecords')} />
+        <BackLink
+          approved={version.status === 'approved'}
+          reviewing={version.status === 'submitted' && can(roles, 'reviewRecords')}
+        />
       </p>
       <RecordHeader
         preparation={preparation}
         version={version}
         actions={
           <>
-            <Link to={paths.app.preparation.href(preparationId)} className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper">
+            <Link
+              to={paths.app.preparation.href(preparationId)}
+              className="rounded-md border border-line-strong bg-surface px-4 py-2 font-semibold text-ink no-underline hover:bg-paper"
+            >
               Open in the planner
             </Link>
             <RecordActions labId={labId} preparation={preparation} version={version} userId={userId} roles={roles} />
           </>
         }
       />
-      <VersionSwitcher versions={preparation.versions} current={version.number} hrefOf={(number) => paths.app.record.href(preparationId, number)} />
+      <VersionSwitcher
+        versions={preparation.versions}
+        current={version.number}
+        hrefOf={(number) => paths.app.record.href(preparationId, number)}
+      />
       <div className="flex flex-col gap-6">
         <ReturnNotice version={version} />
         {snapshot ? <HazardCautions items={snapshot.items} /> : null}
@@ -126,7 +152,10 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
           <ResultStatementPanel budget={snapshot.budget} />
         ) : (
           <Alert tone="info" title="Not computed">
-            {version.problem ? `The plan cannot be computed yet: ${version.problem.message}` : 'This version has no computed budget yet.'} Open it in the planner to fix it.
+            {version.problem
+              ? `The plan cannot be computed yet: ${version.problem.message}`
+              : 'This version has no computed budget yet.'}{' '}
+            Open it in the planner to fix it.
           </Alert>
         )}
         {snapshot?.warnings.length ? (
@@ -141,12 +170,20 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
         <div className="grid items-start gap-6 lg:grid-cols-[1fr_22rem]">
           <div className="flex min-w-0 flex-col gap-8">
             {snapshot ? <BudgetSummary budget={snapshot.budget} stepName={stepName} /> : null}
-            {snapshot && version.readings ? <BenchReadings readings={version.readings} stepName={stepName} plan={snapshot.plan} /> : null}
+            {snapshot && version.readings ? (
+              <BenchReadings readings={version.readings} stepName={stepName} plan={snapshot.plan} />
+            ) : null}
             {snapshot ? <EquipmentUsed items={snapshot.items} /> : null}
             <ReviewTrail reviews={version.reviews} />
           </div>
           <div className="flex flex-col gap-6">
-            {snapshot ? <MonteCarloVerdict monteCarlo={snapshot.monteCarlo} validation={snapshot.validation} unit={snapshot.budget.unit} /> : null}
+            {snapshot ? (
+              <MonteCarloVerdict
+                monteCarlo={snapshot.monteCarlo}
+                validation={snapshot.validation}
+                unit={snapshot.budget.unit}
+              />
+            ) : null}
             {version.snapshotSha256 ? <SnapshotHash {...reference} sha256={version.snapshotSha256} /> : null}
             {snapshot ? <RecordDownloads {...reference} approved={version.status === 'approved'} /> : null}
           </div>
@@ -167,7 +204,13 @@ function BackLink({ approved, reviewing }: { approved: boolean; reviewing: boole
 /** The states an analyst may submit from (the server says the same). */
 const SUBMITTABLE: readonly PreparationStatus[] = ['draft', 'prepared', 'returned'];
 
-type RecordActionsProps = { labId: number; preparation: PreparationDetail; version: VersionDetail; userId: number; roles: readonly Role[] };
+type RecordActionsProps = {
+  labId: number;
+  preparation: PreparationDetail;
+  version: VersionDetail;
+  userId: number;
+  roles: readonly Role[];
+};
 
 /** Only the actions the viewer's roles and the version's state allow; an auditor gets none. */
 function RecordActions({ labId, preparation, version, userId, roles }: RecordActionsProps) {
@@ -181,7 +224,11 @@ function RecordActions({ labId, preparation, version, userId, roles }: RecordAct
     await queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) });
   };
   const onReviewed = async (detail: PreparationDetail) => {
-    await Promise.all([refreshRecord(detail), syncPlanner(detail), queryClient.invalidateQueries({ queryKey: auditKeys.lab(labId) })]);
+    await Promise.all([
+      refreshRecord(detail),
+      syncPlanner(detail),
+      queryClient.invalidateQueries({ queryKey: auditKeys.lab(labId) }),
+    ]);
   };
   const owner = preparation.createdById === userId;
   const analyst = roles.includes('analyst');
@@ -199,7 +246,10 @@ function RecordActions({ labId, preparation, version, userId, roles }: RecordAct
         </p>,
       );
     } else {
-      actions.push(<ReturnButton key="return" version={reference} onReviewed={onReviewed} />, <ApproveButton key="approve" version={reference} onReviewed={onReviewed} />);
+      actions.push(
+        <ReturnButton key="return" version={reference} onReviewed={onReviewed} />,
+        <ApproveButton key="approve" version={reference} onReviewed={onReviewed} />,
+      );
     }
   }
   if (analyst && version.status === 'approved' && version.number === latestNumber) {
@@ -207,7 +257,9 @@ function RecordActions({ labId, preparation, version, userId, roles }: RecordAct
       await syncPlanner(detail);
       navigate(paths.app.preparation.href(preparation.id));
     };
-    actions.push(<StartNewVersionButton key="new" labId={labId} preparationId={preparation.id} onStarted={openPlanner} />);
+    actions.push(
+      <StartNewVersionButton key="new" labId={labId} preparationId={preparation.id} onStarted={openPlanner} />,
+    );
   }
   return <>{actions}</>;
 }

@@ -16,7 +16,9 @@ export const clientLoader =
   async ({ request }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
     if (me?.activeLabId && me.labs.some((lab) => lab.id === me.activeLabId)) {
-      await queryClient.fetchQuery(approvedRecordsQueryOptions(me.activeLabId, searchFrom(new URL(request.url).searchParams)));
+      await queryClient.fetchQuery(
+        approvedRecordsQueryOptions(me.activeLabId, searchFrom(new URL(request.url).searchParams)),
+      );
     }
     return null;
   };

@@ -10,7 +10,8 @@ import { activeMembership, activeRoles, can } from '../../../lib/authorization';
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
   // fetchQuery: what waits changes with every submission, so a stale list is read again before showing.
-  if (me?.activeLabId && can(activeRoles(me), 'reviewRecords')) await queryClient.fetchQuery(reviewQueueQueryOptions(me.activeLabId));
+  if (me?.activeLabId && can(activeRoles(me), 'reviewRecords'))
+    await queryClient.fetchQuery(reviewQueueQueryOptions(me.activeLabId));
   return null;
 };
 

@@ -8,7 +8,11 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
 import { useCreatePreparation } from '../../../features/preparations/api/create-preparation';
-import { useFindRoutes, type FoundRoute, type RouteFinderRequest } from '../../../features/route-finder/api/find-routes';
+import {
+  useFindRoutes,
+  type FoundRoute,
+  type RouteFinderRequest,
+} from '../../../features/route-finder/api/find-routes';
 import { materialsQueryOptions, useMaterials } from '../../../features/route-finder/api/get-materials';
 import { RouteFinderForm } from '../../../features/route-finder/components/route-finder-form';
 import { RoutesTable } from '../../../features/route-finder/components/routes-table';
@@ -46,8 +50,18 @@ function RouteFinderPage({ labId, planner }: { labId: number; planner: boolean }
     if (!request) return;
     setPlanningRank(rank);
     create.mutate(
-      { title: `${request.analyte} ${request.target.value} ${request.target.unit}, route ${rank}: ${route.description}`.slice(0, 200), plan: route.plan },
-      { onSuccess: (detail) => navigate(paths.app.preparation.href(detail.id)), onSettled: () => setPlanningRank(null) },
+      {
+        title:
+          `${request.analyte} ${request.target.value} ${request.target.unit}, route ${rank}: ${route.description}`.slice(
+            0,
+            200,
+          ),
+        plan: route.plan,
+      },
+      {
+        onSuccess: (detail) => navigate(paths.app.preparation.href(detail.id)),
+        onSettled: () => setPlanningRank(null),
+      },
     );
   };
 
@@ -73,10 +87,13 @@ function RouteFinderPage({ labId, planner }: { labId: number; planner: boolean }
       {find.data ? (
         <section aria-labelledby="routes-heading">
           <h2 id="routes-heading" className="mb-2 text-xl font-bold">
-            {find.data.routes.length === 0 ? 'No route reaches this target' : `The ${find.data.routes.length} best routes`}
+            {find.data.routes.length === 0
+              ? 'No route reaches this target'
+              : `The ${find.data.routes.length} best routes`}
           </h2>
           <p className="mb-3 text-sm text-muted">
-            {find.data.feasibleCandidates.toLocaleString('en-GB')} routes met every constraint (minimum weight, capacity, volumes on hand).
+            {find.data.feasibleCandidates.toLocaleString('en-GB')} routes met every constraint (minimum weight,
+            capacity, volumes on hand).
             {planner ? ' “Plan this route” makes it a draft preparation and opens it.' : ''}
           </p>
           {find.data.searchNote ? (
@@ -86,7 +103,9 @@ function RouteFinderPage({ labId, planner }: { labId: number; planner: boolean }
               </Alert>
             </div>
           ) : null}
-          {find.data.routes.length > 0 ? <RoutesTable routes={find.data.routes} onPlan={planner ? plan : null} planningRank={planningRank} /> : null}
+          {find.data.routes.length > 0 ? (
+            <RoutesTable routes={find.data.routes} onPlan={planner ? plan : null} planningRank={planningRank} />
+          ) : null}
           {find.data.skipped.length > 0 ? (
             <p className="mt-3 text-sm text-muted">Left out (overdue or expired): {find.data.skipped.join('; ')}.</p>
           ) : null}

@@ -21,7 +21,11 @@ export function AccountStatusCell({ account, isCurrentUser }: { account: Operato
 
   return (
     <>
-      <Button variant={account.active ? 'secondary' : 'primary'} size="small" onClick={() => setAskingToEnable(!account.active)}>
+      <Button
+        variant={account.active ? 'secondary' : 'primary'}
+        size="small"
+        onClick={() => setAskingToEnable(!account.active)}
+      >
         {account.active ? 'Disable' : 'Enable'}
         <span className="sr-only"> {account.email}</span>
       </Button>
@@ -32,7 +36,9 @@ export function AccountStatusCell({ account, isCurrentUser }: { account: Operato
         tone={disabling ? 'danger' : 'primary'}
         pending={setEnabled.isPending}
         onCancel={close}
-        onConfirm={() => setEnabled.mutate({ userId: account.id, enabled: askingToEnable ?? account.active }, { onSuccess: close })}
+        onConfirm={() =>
+          setEnabled.mutate({ userId: account.id, enabled: askingToEnable ?? account.active }, { onSuccess: close })
+        }
       >
         <p>
           {disabling

@@ -31,7 +31,9 @@ export function AccountsTable({ accounts, currentUserId }: { accounts: OperatorA
                 <div className="font-semibold">{account.name}</div>
                 <div className="text-sm break-all text-muted">{account.email}</div>
               </td>
-              <td className="px-4 py-3">{account.labs.length > 0 ? account.labs.join(', ') : <span className="text-muted">No lab</span>}</td>
+              <td className="px-4 py-3">
+                {account.labs.length > 0 ? account.labs.join(', ') : <span className="text-muted">No lab</span>}
+              </td>
               <td className="px-4 py-3">
                 <span className="flex flex-wrap gap-2">
                   {account.active ? <Badge tone="ok">Active</Badge> : <Badge tone="caution">Disabled</Badge>}

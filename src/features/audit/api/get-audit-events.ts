@@ -6,7 +6,8 @@ import { auditKeys } from './audit-keys';
 /** The query string of the audit filters, without the ones left empty. */
 export function auditQueryString(query: Partial<AuditQuery>): string {
   const search = new URLSearchParams();
-  for (const [name, value] of Object.entries(query)) if (value !== undefined && value !== '') search.set(name, String(value));
+  for (const [name, value] of Object.entries(query))
+    if (value !== undefined && value !== '') search.set(name, String(value));
   return search.toString();
 }
 

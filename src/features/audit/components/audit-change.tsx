@@ -6,7 +6,9 @@ export function AuditChange({ label, value }: { label: string; value: unknown })
       {value === null || value === undefined ? (
         <p className="text-muted">—</p>
       ) : (
-        <pre className="max-h-80 overflow-auto rounded-md border border-line bg-paper p-3 font-mono text-sm whitespace-pre-wrap break-words">{JSON.stringify(value, null, 2)}</pre>
+        <pre className="max-h-80 overflow-auto rounded-md border border-line bg-paper p-3 font-mono text-sm whitespace-pre-wrap break-words">
+          {JSON.stringify(value, null, 2)}
+        </pre>
       )}
     </div>
   );

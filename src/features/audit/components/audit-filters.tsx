@@ -29,9 +29,24 @@ export function AuditFilters({ query, onApply, onClear }: AuditFiltersProps) {
       className="mb-4 rounded-lg border border-line bg-surface p-4"
     >
       <div className="grid items-start gap-4 sm:grid-cols-2 lg:grid-cols-[1.2fr_1.5fr_1fr_1fr_1fr]">
-        <TextField label="Person" hint="Name or e-mail, or part of it" error={errors.actor?.message} {...register('actor', EMPTY_AS_UNSET)} />
-        <Select label="Action" options={ACTION_OPTIONS} error={errors.action?.message} {...register('action', EMPTY_AS_UNSET)} />
-        <Select label="About" options={ENTITY_TYPE_OPTIONS} error={errors.entityType?.message} {...register('entityType', EMPTY_AS_UNSET)} />
+        <TextField
+          label="Person"
+          hint="Name or e-mail, or part of it"
+          error={errors.actor?.message}
+          {...register('actor', EMPTY_AS_UNSET)}
+        />
+        <Select
+          label="Action"
+          options={ACTION_OPTIONS}
+          error={errors.action?.message}
+          {...register('action', EMPTY_AS_UNSET)}
+        />
+        <Select
+          label="About"
+          options={ENTITY_TYPE_OPTIONS}
+          error={errors.entityType?.message}
+          {...register('entityType', EMPTY_AS_UNSET)}
+        />
         <TextField label="From" type="date" error={errors.from?.message} {...register('from', EMPTY_AS_UNSET)} />
         <TextField label="To" type="date" error={errors.to?.message} {...register('to', EMPTY_AS_UNSET)} />
       </div>

@@ -1,6 +1,12 @@
 import { Link } from 'react-router';
 
-type AuditPagerProps = { offset: number; pageSize: number; shown: number; total: number; hrefAt: (offset: number) => string };
+type AuditPagerProps = {
+  offset: number;
+  pageSize: number;
+  shown: number;
+  total: number;
+  hrefAt: (offset: number) => string;
+};
 
 /** "Events 51–100 of 230" with links to the newer and older pages. */
 export function AuditPager({ offset, pageSize, shown, total, hrefAt }: AuditPagerProps) {

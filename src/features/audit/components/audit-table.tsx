@@ -22,8 +22,14 @@ export function AuditTable({ events, caption }: { events: AuditEvent[]; caption:
     });
   const columns = column.columns([
     column.accessor('at', { header: 'Time (UTC)', cell: (info) => <AuditTime at={info.getValue()} /> }),
-    column.accessor('actor', { header: 'Person', cell: (info) => info.getValue() ?? <span className="text-muted">System</span> }),
-    column.accessor('action', { header: 'Action', cell: (info) => <code className="font-mono text-sm whitespace-nowrap">{info.getValue()}</code> }),
+    column.accessor('actor', {
+      header: 'Person',
+      cell: (info) => info.getValue() ?? <span className="text-muted">System</span>,
+    }),
+    column.accessor('action', {
+      header: 'Action',
+      cell: (info) => <code className="font-mono text-sm whitespace-nowrap">{info.getValue()}</code>,
+    }),
     column.accessor('entityType', {
       header: 'About',
       cell: (info) => (

@@ -14,8 +14,12 @@ export function RecordAuditHistory({ labId, preparationId }: { labId: number; pr
       </h2>
       <AuditTable events={page.events} caption="Audit events of this preparation, newest first" />
       <p className="mt-2 text-sm text-muted">
-        {page.total > page.events.length ? `The latest ${page.events.length} of ${page.total} events. ` : `${page.total} ${page.total === 1 ? 'event' : 'events'}. `}
-        <Link to={paths.app.audit.href({ entityType: query.entityType, entityId: query.entityId })}>Open in the audit trail</Link>
+        {page.total > page.events.length
+          ? `The latest ${page.events.length} of ${page.total} events. `
+          : `${page.total} ${page.total === 1 ? 'event' : 'events'}. `}
+        <Link to={paths.app.audit.href({ entityType: query.entityType, entityId: query.entityId })}>
+          Open in the audit trail
+        </Link>
       </p>
     </section>
   );

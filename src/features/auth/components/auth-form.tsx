@@ -18,7 +18,16 @@ type AuthFormProps = {
 };
 
 /** The frame of the signed-out forms: the server's error, the fields, and one submit button. */
-export function AuthForm({ onSubmit, formError, submitLabel, pending, pendingLabel, intro, footer, children }: AuthFormProps) {
+export function AuthForm({
+  onSubmit,
+  formError,
+  submitLabel,
+  pending,
+  pendingLabel,
+  intro,
+  footer,
+  children,
+}: AuthFormProps) {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
       {intro}

@@ -34,7 +34,13 @@ export function ForgotPasswordForm() {
   });
 
   return (
-    <AuthForm onSubmit={onSubmit} formError={formError} submitLabel="Send reset link" pending={requestReset.isPending} pendingLabel="Sending…">
+    <AuthForm
+      onSubmit={onSubmit}
+      formError={formError}
+      submitLabel="Send reset link"
+      pending={requestReset.isPending}
+      pendingLabel="Sending…"
+    >
       <TextField
         label="E-mail"
         type="email"

@@ -51,8 +51,20 @@ function NewAccountForm({ token, preview, onAccepted }: InvitationAcceptFormProp
   });
 
   return (
-    <AuthForm onSubmit={onSubmit} formError={formError} submitLabel="Join the lab" pending={accept.isPending} pendingLabel="Joining…">
-      <TextField label="Your name" autoComplete="name" hint="As colleagues and audit records will show it." error={errors.name?.message} {...register('name')} />
+    <AuthForm
+      onSubmit={onSubmit}
+      formError={formError}
+      submitLabel="Join the lab"
+      pending={accept.isPending}
+      pendingLabel="Joining…"
+    >
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        hint="As colleagues and audit records will show it."
+        error={errors.name?.message}
+        {...register('name')}
+      />
       <TextField
         label="Choose a password"
         type="password"
@@ -82,7 +94,8 @@ function ExistingAccountAccept({ token, preview, onAccepted }: InvitationAcceptF
     return (
       <div className="flex flex-col gap-4">
         <p>
-          You already have a Dilutrace account. Sign in as <strong className="break-all">{preview.email}</strong> to accept.
+          You already have a Dilutrace account. Sign in as <strong className="break-all">{preview.email}</strong> to
+          accept.
         </p>
         <Link to={paths.auth.signIn.href(paths.auth.invitation.href(token))} className="font-semibold">
           Sign in as {preview.email} to accept
@@ -95,9 +108,15 @@ function ExistingAccountAccept({ token, preview, onAccepted }: InvitationAcceptF
       <div className="flex flex-col gap-4">
         <p>
           You are signed in as <strong className="break-all">{me.user.email}</strong>, but this invitation is for{' '}
-          <strong className="break-all">{preview.email}</strong>. Sign out, then sign in as {preview.email} to accept it.
+          <strong className="break-all">{preview.email}</strong>. Sign out, then sign in as {preview.email} to accept
+          it.
         </p>
-        <Button variant="secondary" pending={signOut.isPending} pendingLabel="Signing out…" onClick={() => signOut.mutate()}>
+        <Button
+          variant="secondary"
+          pending={signOut.isPending}
+          pendingLabel="Signing out…"
+          onClick={() => signOut.mutate()}
+        >
           Sign out
         </Button>
       </div>
@@ -107,7 +126,13 @@ function ExistingAccountAccept({ token, preview, onAccepted }: InvitationAcceptF
   const onSubmit = (event: FormEvent) => {
     event.preventDefault();
     setFormError(null);
-    accept.mutate({ token }, { onSuccess: onAccepted, onError: (error) => setFormError(isApiError(error) ? error.message : 'The invitation could not be accepted.') });
+    accept.mutate(
+      { token },
+      {
+        onSuccess: onAccepted,
+        onError: (error) => setFormError(isApiError(error) ? error.message : 'The invitation could not be accepted.'),
+      },
+    );
   };
 
   return (

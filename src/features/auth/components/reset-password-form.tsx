@@ -43,7 +43,13 @@ export function ResetPasswordForm({ token }: { token: string }) {
   });
 
   return (
-    <AuthForm onSubmit={onSubmit} formError={formError} submitLabel="Set new password" pending={resetPassword.isPending} pendingLabel="Saving…">
+    <AuthForm
+      onSubmit={onSubmit}
+      formError={formError}
+      submitLabel="Set new password"
+      pending={resetPassword.isPending}
+      pendingLabel="Saving…"
+    >
       <TextField
         label="New password"
         type="password"

@@ -46,7 +46,13 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
         </p>
       }
     >
-      <TextField label="E-mail" type="email" autoComplete="username" error={errors.email?.message} {...register('email')} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        error={errors.email?.message}
+        {...register('email')}
+      />
       <TextField
         label="Password"
         type="password"

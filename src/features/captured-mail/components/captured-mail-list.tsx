@@ -4,10 +4,19 @@ import { paths } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format-date';
 
 /** The captured messages, newest first; the open one is marked as the current item. */
-export function CapturedMailList({ messages, openMessageId }: { messages: CapturedMessage[]; openMessageId: number | null }) {
+export function CapturedMailList({
+  messages,
+  openMessageId,
+}: {
+  messages: CapturedMessage[];
+  openMessageId: number | null;
+}) {
   if (messages.length === 0) return <p className="text-muted">No mail has been captured yet.</p>;
   return (
-    <ul aria-label="Captured mail" className="self-start divide-y divide-line overflow-hidden rounded-lg border border-line bg-surface">
+    <ul
+      aria-label="Captured mail"
+      className="self-start divide-y divide-line overflow-hidden rounded-lg border border-line bg-surface"
+    >
       {messages.map((message) => {
         const open = message.id === openMessageId;
         return (

@@ -30,7 +30,10 @@ const WORK_OF_ROLE: Record<Role, { summary: string; items: string[] }> = {
   },
   admin: {
     summary: 'Look after the lab itself and the people in it.',
-    items: ['Members and their roles; remove someone who has left the lab', 'Invitations by e-mail, and the delivery log of mail Dilutrace has sent about the lab'],
+    items: [
+      'Members and their roles; remove someone who has left the lab',
+      'Invitations by e-mail, and the delivery log of mail Dilutrace has sent about the lab',
+    ],
   },
 };
 

@@ -25,5 +25,7 @@ export function useCsvColumns(labId: number): Record<EquipmentKind, CsvColumn[]>
 }
 
 /** Download addresses: an empty file with the header row, and the kind's active items as CSV. */
-export const csvTemplateUrl = (labId: number, kind: EquipmentKind) => `/api/labs/${labId}/equipment-csv/template?kind=${kind}`;
-export const csvExportUrl = (labId: number, kind: EquipmentKind) => `/api/labs/${labId}/equipment-csv/export?kind=${kind}`;
+export const csvTemplateUrl = (labId: number, kind: EquipmentKind) =>
+  `/api/labs/${labId}/equipment-csv/template?kind=${kind}`;
+export const csvExportUrl = (labId: number, kind: EquipmentKind) =>
+  `/api/labs/${labId}/equipment-csv/export?kind=${kind}`;

@@ -7,7 +7,11 @@ import { libraryKeys } from './library-keys';
 
 const equipmentListSchema = z.array(equipmentItemSchema);
 
-export function getEquipmentList(labId: number, kind: EquipmentKind, status: EquipmentStatusFilter): Promise<EquipmentItem[]> {
+export function getEquipmentList(
+  labId: number,
+  kind: EquipmentKind,
+  status: EquipmentStatusFilter,
+): Promise<EquipmentItem[]> {
   const query = new URLSearchParams({ kind, status });
   return api.get(`/api/labs/${labId}/equipment?${query}`, equipmentListSchema);
 }

@@ -22,7 +22,10 @@ const pistonTemplateSchema: z.ZodType<PistonTemplate> = z.object({
   randomErrorUl: z.number(),
   provenance: provenanceSchema,
 });
-const equipmentTemplatesSchema = z.object({ glassware: z.array(glasswareTemplateSchema), piston: z.array(pistonTemplateSchema) });
+const equipmentTemplatesSchema = z.object({
+  glassware: z.array(glasswareTemplateSchema),
+  piston: z.array(pistonTemplateSchema),
+});
 export type EquipmentTemplates = z.infer<typeof equipmentTemplatesSchema>;
 
 /** ISO 1042:1998, ISO 648:2008 and ISO 8655-2:2002 tolerances for the common nominal volumes. */

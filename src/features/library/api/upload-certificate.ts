@@ -7,10 +7,19 @@ import { libraryKeys } from './library-keys';
 type UploadCertificateInput = { labId: number; itemId: number; revisionNumber: number; file: File };
 
 /** Attaches a PDF, PNG or JPEG (≤ 10 MB; the server checks the bytes, not the name) to one revision. */
-export function uploadCertificate({ labId, itemId, revisionNumber, file }: UploadCertificateInput): Promise<Certificate> {
+export function uploadCertificate({
+  labId,
+  itemId,
+  revisionNumber,
+  file,
+}: UploadCertificateInput): Promise<Certificate> {
   const form = new FormData();
   form.append('file', file);
-  return api.postForm(`/api/labs/${labId}/equipment/${itemId}/revisions/${revisionNumber}/certificates`, form, certificateSchema);
+  return api.postForm(
+    `/api/labs/${labId}/equipment/${itemId}/revisions/${revisionNumber}/certificates`,
+    form,
+    certificateSchema,
+  );
 }
 
 export function useUploadCertificate() {
@@ -26,4 +35,5 @@ export function useUploadCertificate() {
 }
 
 /** The download address of a stored certificate (served as an attachment). */
-export const certificateDownloadUrl = (labId: number, certificateId: number) => `/api/labs/${labId}/certificates/${certificateId}`;
+export const certificateDownloadUrl = (labId: number, certificateId: number) =>
+  `/api/labs/${labId}/certificates/${certificateId}`;

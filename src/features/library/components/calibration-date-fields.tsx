@@ -13,7 +13,12 @@ export function CalibrationDateFields() {
   return (
     <fieldset className="grid gap-4 md:grid-cols-3">
       <legend className="mb-2 text-lg font-bold">Calibration</legend>
-      <TextField label="Calibrated on" type="date" error={errors.data?.calibratedOn?.message} {...register('data.calibratedOn', EMPTY_AS_NULL)} />
+      <TextField
+        label="Calibrated on"
+        type="date"
+        error={errors.data?.calibratedOn?.message}
+        {...register('data.calibratedOn', EMPTY_AS_NULL)}
+      />
       <TextField
         label="Calibration due on"
         type="date"

@@ -40,7 +40,10 @@ export function CsvImportForm({ labId, kind }: { labId: number; kind: EquipmentK
     if (csv.length > MAX_CSV_CHARACTERS) return setProblem('The file is larger than 2 MB.');
     importCsv.mutate(
       { labId, kind, csv, dryRun: true },
-      { onSuccess: (result) => setChecked({ fileName: file.name, csv, result }), onError: (error) => setProblem(messageOf(error)) },
+      {
+        onSuccess: (result) => setChecked({ fileName: file.name, csv, result }),
+        onError: (error) => setProblem(messageOf(error)),
+      },
     );
   };
 
@@ -57,13 +60,18 @@ export function CsvImportForm({ labId, kind }: { labId: number; kind: EquipmentK
         // Refused whole (e.g. another ID was taken since the check): say so and check the file again.
         onError: (error) => {
           setProblem(messageOf(error));
-          importCsv.mutate({ labId, kind, csv: checked.csv, dryRun: true }, { onSuccess: (result) => setChecked({ ...checked, result }) });
+          importCsv.mutate(
+            { labId, kind, csv: checked.csv, dryRun: true },
+            { onSuccess: (result) => setChecked({ ...checked, result }) },
+          );
         },
       },
     );
   };
 
-  const toWrite = checked ? checked.result.rows.filter((row) => row.action === 'create' || row.action === 'revise').length : 0;
+  const toWrite = checked
+    ? checked.result.rows.filter((row) => row.action === 'create' || row.action === 'revise').length
+    : 0;
   return (
     <div className="flex flex-col gap-6">
       <form onSubmit={check} className="flex flex-wrap items-end gap-4" aria-label="Check a CSV file">
@@ -71,13 +79,24 @@ export function CsvImportForm({ labId, kind }: { labId: number; kind: EquipmentK
           label="Kind of item"
           options={KIND_OPTIONS}
           value={kind}
-          onChange={(event) => navigate(paths.app.libraryImport.href(KIND_OPTIONS.find((option) => option.value === event.target.value)?.value))}
+          onChange={(event) =>
+            navigate(
+              paths.app.libraryImport.href(KIND_OPTIONS.find((option) => option.value === event.target.value)?.value),
+            )
+          }
         />
         <div className="flex flex-col gap-1">
           <label htmlFor="csv-file" className="font-semibold">
             CSV file
           </label>
-          <input id="csv-file" ref={fileRef} type="file" accept=".csv,text/csv" className="text-sm file:mr-3 file:rounded-md file:border file:border-line-strong file:bg-surface file:px-3 file:py-1.5 file:font-semibold file:text-ink hover:file:bg-paper" onChange={() => setChecked(null)} />
+          <input
+            id="csv-file"
+            ref={fileRef}
+            type="file"
+            accept=".csv,text/csv"
+            className="text-sm file:mr-3 file:rounded-md file:border file:border-line-strong file:bg-surface file:px-3 file:py-1.5 file:font-semibold file:text-ink hover:file:bg-paper"
+            onChange={() => setChecked(null)}
+          />
         </div>
         <Button type="submit" pending={importCsv.isPending && !checked} pendingLabel="Checking…">
           Check the file
@@ -86,8 +105,9 @@ export function CsvImportForm({ labId, kind }: { labId: number; kind: EquipmentK
       {problem ? <Alert tone="danger">{problem}</Alert> : null}
       {imported ? (
         <Alert tone="ok" title="Imported">
-          {imported.rows.filter((row) => row.action === 'create').length} new items and {imported.rows.filter((row) => row.action === 'revise').length} new revisions
-          were saved; {imported.rows.filter((row) => row.action === 'unchanged').length} rows were unchanged.
+          {imported.rows.filter((row) => row.action === 'create').length} new items and{' '}
+          {imported.rows.filter((row) => row.action === 'revise').length} new revisions were saved;{' '}
+          {imported.rows.filter((row) => row.action === 'unchanged').length} rows were unchanged.
         </Alert>
       ) : null}
       {checked ? (
@@ -96,14 +116,24 @@ export function CsvImportForm({ labId, kind }: { labId: number; kind: EquipmentK
             Check of {checked.fileName}
           </h2>
           {checked.result.errorCount > 0 ? (
-            <Alert tone="danger" title={`${checked.result.errorCount} ${checked.result.errorCount === 1 ? 'row has' : 'rows have'} problems`}>
-              Nothing can be imported until every row is correct. Fix the lines listed below in your file and check it again.
+            <Alert
+              tone="danger"
+              title={`${checked.result.errorCount} ${checked.result.errorCount === 1 ? 'row has' : 'rows have'} problems`}
+            >
+              Nothing can be imported until every row is correct. Fix the lines listed below in your file and check it
+              again.
             </Alert>
           ) : (
             <Alert tone="info">No problems found. Nothing has been saved yet.</Alert>
           )}
           <ImportResultTable rows={checked.result.rows} />
-          <Button onClick={runImport} disabled={checked.result.errorCount > 0 || toWrite === 0} pending={importCsv.isPending} pendingLabel="Importing…" className="self-start">
+          <Button
+            onClick={runImport}
+            disabled={checked.result.errorCount > 0 || toWrite === 0}
+            pending={importCsv.isPending}
+            pendingLabel="Importing…"
+            className="self-start"
+          >
             Import {toWrite} {toWrite === 1 ? 'row' : 'rows'}
           </Button>
         </section>

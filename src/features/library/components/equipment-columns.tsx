@@ -1,4 +1,15 @@
-import { createColumnHelper, createFilteredRowModel, createSortedRowModel, columnFilteringFeature, filterFn_includesString, globalFilteringFeature, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  createFilteredRowModel,
+  createSortedRowModel,
+  columnFilteringFeature,
+  filterFn_includesString,
+  globalFilteringFeature,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  sortFn_basic,
+  tableFeatures,
+} from '@tanstack/react-table';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { EquipmentItem, EquipmentKind } from '../../../../shared/contracts/library';
@@ -21,8 +32,20 @@ const column = createColumnHelper<typeof equipmentTableFeatures, EquipmentItem>(
 
 /** Column ids whose cells hold numbers: right-aligned, in tabular figures. */
 export const NUMERIC_COLUMN_IDS = new Set([
-  'capacityG', 'readabilityG', 'repeatabilityG', 'minimumWeightG', 'nominalMl', 'toleranceMl', 'fillRepeatabilityMl',
-  'pointVolumeUl', 'systematicErrorUl', 'randomErrorUl', 'purity', 'certifiedValue', 'expandedUncertainty', 'certificateCount',
+  'capacityG',
+  'readabilityG',
+  'repeatabilityG',
+  'minimumWeightG',
+  'nominalMl',
+  'toleranceMl',
+  'fillRepeatabilityMl',
+  'pointVolumeUl',
+  'systematicErrorUl',
+  'randomErrorUl',
+  'purity',
+  'certifiedValue',
+  'expandedUncertainty',
+  'certificateCount',
 ]);
 /** Column ids the search box looks in. */
 export const SEARCHED_COLUMN_IDS = new Set(['code', 'description']);
@@ -36,7 +59,8 @@ const textOf = (item: EquipmentItem, key: string) => {
   const value = field(item, key);
   return typeof value === 'string' && value !== '' ? value : undefined;
 };
-const shownNumber = (value: number | undefined | null) => (value === undefined || value === null ? '—' : formatQuantity(value));
+const shownNumber = (value: number | undefined | null) =>
+  value === undefined || value === null ? '—' : formatQuantity(value);
 const firstPoint = (item: EquipmentItem) =>
   (field(item, 'points') as { volumeUl: number; systematicErrorUl: number; randomErrorUl: number }[] | undefined)?.[0];
 
@@ -48,7 +72,13 @@ const withUnit = (label: string, unit: string) => () => (
 );
 
 const numeric = (id: string, header: string | (() => ReactNode), read: (item: EquipmentItem) => number | undefined) =>
-  column.accessor(read, { id, header, sortFn: 'basic', sortUndefined: 'last', cell: (info) => shownNumber(info.getValue()) });
+  column.accessor(read, {
+    id,
+    header,
+    sortFn: 'basic',
+    sortUndefined: 'last',
+    cell: (info) => shownNumber(info.getValue()),
+  });
 
 const codeColumn = column.accessor('code', {
   id: 'code',
@@ -67,17 +97,22 @@ const descriptionColumn = column.accessor((item) => textOf(item, 'description') 
   cell: (info) => <span className="text-sm">{info.getValue() || '—'}</span>,
 });
 /** Materials: the name, with the description under it; the search reads both. */
-const materialNameColumn = column.accessor((item) => [textOf(item, 'name'), textOf(item, 'description')].filter(Boolean).join(' — '), {
-  id: 'description',
-  header: 'Name',
-  sortFn: 'alphanumeric',
-  cell: (info) => (
-    <div>
-      <div>{textOf(info.row.original, 'name')}</div>
-      {textOf(info.row.original, 'description') ? <div className="text-sm text-muted">{textOf(info.row.original, 'description')}</div> : null}
-    </div>
-  ),
-});
+const materialNameColumn = column.accessor(
+  (item) => [textOf(item, 'name'), textOf(item, 'description')].filter(Boolean).join(' — '),
+  {
+    id: 'description',
+    header: 'Name',
+    sortFn: 'alphanumeric',
+    cell: (info) => (
+      <div>
+        <div>{textOf(info.row.original, 'name')}</div>
+        {textOf(info.row.original, 'description') ? (
+          <div className="text-sm text-muted">{textOf(info.row.original, 'description')}</div>
+        ) : null}
+      </div>
+    ),
+  },
+);
 const dateColumn = (key: string, header: string) =>
   column.accessor((item) => textOf(item, key), {
     id: key,
@@ -112,10 +147,17 @@ const calibrationDueColumn = dateColumn('calibrationDueOn', 'Calibration due');
 const glasswareColumns = [
   codeColumn,
   descriptionColumn,
-  column.accessor((item) => textOf(item, 'glassClass'), { id: 'glassClass', header: 'Class', sortFn: 'alphanumeric', cell: (info) => (info.getValue() === 'own' ? 'own' : info.getValue()) }),
+  column.accessor((item) => textOf(item, 'glassClass'), {
+    id: 'glassClass',
+    header: 'Class',
+    sortFn: 'alphanumeric',
+    cell: (info) => (info.getValue() === 'own' ? 'own' : info.getValue()),
+  }),
   numeric('nominalMl', withUnit('Nominal', 'mL'), (item) => numberOf(item, 'nominalMl')),
   numeric('toleranceMl', withUnit('Tolerance', '± mL'), (item) => numberOf(item, 'toleranceMl')),
-  numeric('fillRepeatabilityMl', withUnit('Fill repeatability s', 'mL'), (item) => numberOf(item, 'fillRepeatabilityMl')),
+  numeric('fillRepeatabilityMl', withUnit('Fill repeatability s', 'mL'), (item) =>
+    numberOf(item, 'fillRepeatabilityMl'),
+  ),
   calibrationDueColumn,
   certificatesColumn,
   statusColumn,
@@ -146,7 +188,11 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
       cell: (info) => {
         const min = numberOf(info.row.original, 'minVolumeUl');
         const max = info.getValue();
-        return <span className="whitespace-nowrap">{min === max ? shownNumber(max) : `${shownNumber(min)}–${shownNumber(max)}`}</span>;
+        return (
+          <span className="whitespace-nowrap">
+            {min === max ? shownNumber(max) : `${shownNumber(min)}–${shownNumber(max)}`}
+          </span>
+        );
       },
     }),
     numeric('pointVolumeUl', withUnit('Errors at', 'µL'), (item) => firstPoint(item)?.volumeUl),
@@ -159,7 +205,12 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
   'solid-material': column.columns([
     codeColumn,
     materialNameColumn,
-    column.accessor((item) => textOf(item, 'formula'), { id: 'formula', header: 'Formula', enableSorting: false, cell: (info) => formatFormula(info.getValue() ?? '—') }),
+    column.accessor((item) => textOf(item, 'formula'), {
+      id: 'formula',
+      header: 'Formula',
+      enableSorting: false,
+      cell: (info) => formatFormula(info.getValue() ?? '—'),
+    }),
     lotColumn,
     numeric('purity', withUnit('Purity', 'g/g'), (item) => numberOf(item, 'purity')),
     dateColumn('expiresOn', 'Expires'),
@@ -175,13 +226,16 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
       id: 'certifiedValue',
       header: 'Certified value',
       sortFn: 'basic',
-      cell: (info) => <span className="whitespace-nowrap">{`${shownNumber(info.getValue())} ${textOf(info.row.original, 'certifiedUnit') ?? ''}`}</span>,
+      cell: (info) => (
+        <span className="whitespace-nowrap">{`${shownNumber(info.getValue())} ${textOf(info.row.original, 'certifiedUnit') ?? ''}`}</span>
+      ),
     }),
     column.accessor((item) => numberOf(item, 'expandedUncertainty'), {
       id: 'expandedUncertainty',
       header: 'U (same unit)',
       sortFn: 'basic',
-      cell: (info) => `${shownNumber(info.getValue())} (k = ${shownNumber(numberOf(info.row.original, 'coverageFactor'))})`,
+      cell: (info) =>
+        `${shownNumber(info.getValue())} (k = ${shownNumber(numberOf(info.row.original, 'coverageFactor'))})`,
     }),
     dateColumn('expiresOn', 'Expires'),
     hazardColumn,

@@ -39,7 +39,10 @@ export function EquipmentFormShell({ labId, kind, item, schema, defaultValues, c
   const reviseEquipment = useReviseEquipment();
   const [formError, setFormError] = useState<string | null>(null);
   const [unchanged, setUnchanged] = useState(false);
-  const form = useForm<EquipmentFormValues, unknown, EquipmentFormValues>({ resolver: zodResolver(schema), defaultValues });
+  const form = useForm<EquipmentFormValues, unknown, EquipmentFormValues>({
+    resolver: zodResolver(schema),
+    defaultValues,
+  });
   const { handleSubmit, setError, getValues, register, formState } = form;
 
   const showError = (error: unknown) => {
@@ -65,14 +68,22 @@ export function EquipmentFormShell({ labId, kind, item, schema, defaultValues, c
         },
       );
     } else {
-      createEquipment.mutate({ labId, kind, data }, { onSuccess: (detail) => navigate(paths.app.libraryItem.href(detail.id)), onError: showError });
+      createEquipment.mutate(
+        { labId, kind, data },
+        { onSuccess: (detail) => navigate(paths.app.libraryItem.href(detail.id)), onError: showError },
+      );
     }
   });
 
   const pending = createEquipment.isPending || reviseEquipment.isPending;
   return (
     <FormProvider {...form}>
-      <form onSubmit={onSubmit} noValidate className="flex max-w-4xl flex-col gap-6" aria-label={item ? `Edit ${item.code}` : 'New item'}>
+      <form
+        onSubmit={onSubmit}
+        noValidate
+        className="flex max-w-4xl flex-col gap-6"
+        aria-label={item ? `Edit ${item.code}` : 'New item'}
+      >
         {formError ? <Alert tone="danger">{formError}</Alert> : null}
         {Object.keys(formState.errors).length > 0 && !formError ? (
           <Alert tone="danger">Some fields need attention; each says what is wrong below it.</Alert>
@@ -92,7 +103,10 @@ export function EquipmentFormShell({ labId, kind, item, schema, defaultValues, c
           <Button type="submit" pending={pending} pendingLabel="Saving…">
             {item ? 'Save new revision' : 'Add to library'}
           </Button>
-          <Button variant="secondary" onClick={() => navigate(item ? paths.app.libraryItem.href(item.id) : paths.app.library.href({ kind }))}>
+          <Button
+            variant="secondary"
+            onClick={() => navigate(item ? paths.app.libraryItem.href(item.id) : paths.app.library.href({ kind }))}
+          >
             Cancel
           </Button>
         </div>

@@ -1,5 +1,10 @@
 import { z } from 'zod';
-import { equipmentDataSchemas, reasonSchema, type EquipmentDetail, type EquipmentKind } from '../../../../shared/contracts/library';
+import {
+  equipmentDataSchemas,
+  reasonSchema,
+  type EquipmentDetail,
+  type EquipmentKind,
+} from '../../../../shared/contracts/library';
 import { BalanceFields } from './balance-fields';
 import { CalibrationDateFields } from './calibration-date-fields';
 import { EquipmentFormShell, type EquipmentFormSchema } from './equipment-form-shell';
@@ -18,10 +23,36 @@ const material = { ...identity, name: '', lot: '', supplier: '', hazardNotes: ''
 const NEW_ITEM_DATA: Record<EquipmentKind, Record<string, unknown>> = {
   balance: { ...identity, ...undated, sensitivityCoverageFactor: 2 },
   flask: { ...identity, ...undated, glassClass: 'A', toleranceDistribution: null, calibrationTemperatureC: 20 },
-  'glass-pipette': { ...identity, ...undated, glassClass: 'A', toleranceDistribution: null, calibrationTemperatureC: 20 },
-  'piston-pipette': { ...identity, ...undated, adjustable: true, errorBasis: 'iso-8655', points: [{ volumeUl: null, systematicErrorUl: null, randomErrorUl: null }] },
-  'solid-material': { ...material, formula: '', analyte: '', purityUncertainty: { shape: 'normal', coverageFactor: 2 } },
-  'solution-material': { ...material, analyte: '', certifiedUnit: 'mg/L', coverageFactor: 2, matrix: '', densityGPerMl: null, densityUncertaintyGPerMl: null, openedOn: null },
+  'glass-pipette': {
+    ...identity,
+    ...undated,
+    glassClass: 'A',
+    toleranceDistribution: null,
+    calibrationTemperatureC: 20,
+  },
+  'piston-pipette': {
+    ...identity,
+    ...undated,
+    adjustable: true,
+    errorBasis: 'iso-8655',
+    points: [{ volumeUl: null, systematicErrorUl: null, randomErrorUl: null }],
+  },
+  'solid-material': {
+    ...material,
+    formula: '',
+    analyte: '',
+    purityUncertainty: { shape: 'normal', coverageFactor: 2 },
+  },
+  'solution-material': {
+    ...material,
+    analyte: '',
+    certifiedUnit: 'mg/L',
+    coverageFactor: 2,
+    matrix: '',
+    densityGPerMl: null,
+    densityUncertaintyGPerMl: null,
+    openedOn: null,
+  },
 };
 
 /** The kind's shared schema around the data, and a reason that editing requires (≥ 3 characters). */
@@ -78,7 +109,13 @@ export function EquipmentForm({ labId, kind, item }: { labId: number; kind: Equi
   const stored = item ? equipmentDataSchemas[kind].safeParse(item.current.data) : null;
   const data = item ? (stored?.success ? stored.data : item.current.data) : NEW_ITEM_DATA[kind];
   return (
-    <EquipmentFormShell labId={labId} kind={kind} item={item} schema={formSchemaFor(kind, Boolean(item))} defaultValues={{ data, reason: '' }}>
+    <EquipmentFormShell
+      labId={labId}
+      kind={kind}
+      item={item}
+      schema={formSchemaFor(kind, Boolean(item))}
+      defaultValues={{ data, reason: '' }}
+    >
       <KindFields labId={labId} kind={kind} />
     </EquipmentFormShell>
   );

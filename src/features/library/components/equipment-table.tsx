@@ -2,7 +2,12 @@ import { useTable } from '@tanstack/react-table';
 import { useState, type ReactNode } from 'react';
 import type { EquipmentItem, EquipmentKind } from '../../../../shared/contracts/library';
 import { DataTable, SortButton } from '../../../components/ui/data-table';
-import { EQUIPMENT_COLUMNS, equipmentTableFeatures, NUMERIC_COLUMN_IDS, SEARCHED_COLUMN_IDS } from './equipment-columns';
+import {
+  EQUIPMENT_COLUMNS,
+  equipmentTableFeatures,
+  NUMERIC_COLUMN_IDS,
+  SEARCHED_COLUMN_IDS,
+} from './equipment-columns';
 
 type EquipmentTableProps = {
   kind: EquipmentKind;
@@ -24,7 +29,8 @@ export function EquipmentTable({ kind, caption, items, toolbar }: EquipmentTable
     // IDs in natural order (VF-10-A before VF-100-A) until someone sorts by another column.
     initialState: { sorting: [{ id: 'code', desc: false }] },
     state: { globalFilter: search },
-    onGlobalFilterChange: (updater) => setSearch((previous) => (typeof updater === 'function' ? updater(previous) : updater) ?? ''),
+    onGlobalFilterChange: (updater) =>
+      setSearch((previous) => (typeof updater === 'function' ? updater(previous) : updater) ?? ''),
     globalFilterFn: 'includesString',
     getColumnCanGlobalFilter: (candidate) => SEARCHED_COLUMN_IDS.has(candidate.id),
   });
@@ -50,7 +56,9 @@ export function EquipmentTable({ kind, caption, items, toolbar }: EquipmentTable
       <DataTable
         table={table}
         caption={caption}
-        headerClassName={(header) => `align-bottom ${NUMERIC_COLUMN_IDS.has(header.column.id) ? 'text-right' : ''} ${header.column.id === 'description' ? 'min-w-48' : ''}`}
+        headerClassName={(header) =>
+          `align-bottom ${NUMERIC_COLUMN_IDS.has(header.column.id) ? 'text-right' : ''} ${header.column.id === 'description' ? 'min-w-48' : ''}`
+        }
         sortDirection={(header) => header.column.getIsSorted()}
         renderHeader={(header) =>
           header.isPlaceholder ? null : header.column.getCanSort() ? (

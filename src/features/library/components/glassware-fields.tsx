@@ -65,14 +65,31 @@ export function GlasswareFields({ labId, kind }: { labId: number; kind: 'flask' 
         />
         {chosen ? (
           <TemplateNote standard={chosen.standard} provenance={chosen.provenance}>
-            {chosen.standard} class {chosen.glassClass}, {formatQuantity(chosen.nominalMl)} mL: tolerance ± {formatQuantity(chosen.toleranceMl)} mL.
+            {chosen.standard} class {chosen.glassClass}, {formatQuantity(chosen.nominalMl)} mL: tolerance ±{' '}
+            {formatQuantity(chosen.toleranceMl)} mL.
           </TemplateNote>
         ) : null}
       </div>
       <div className="grid gap-4 md:grid-cols-3">
-        <QuantityField label="Nominal volume" unit="mL" error={error?.nominalMl?.message} registration={register('data.nominalMl', AS_NUMBER)} />
-        <Select label="Class" options={CLASS_OPTIONS} error={error?.glassClass?.message} {...register('data.glassClass')} />
-        <QuantityField label="Tolerance (±)" unit="mL" hint="Maximum permissible error" error={error?.toleranceMl?.message} registration={register('data.toleranceMl', AS_NUMBER)} />
+        <QuantityField
+          label="Nominal volume"
+          unit="mL"
+          error={error?.nominalMl?.message}
+          registration={register('data.nominalMl', AS_NUMBER)}
+        />
+        <Select
+          label="Class"
+          options={CLASS_OPTIONS}
+          error={error?.glassClass?.message}
+          {...register('data.glassClass')}
+        />
+        <QuantityField
+          label="Tolerance (±)"
+          unit="mL"
+          hint="Maximum permissible error"
+          error={error?.toleranceMl?.message}
+          registration={register('data.toleranceMl', AS_NUMBER)}
+        />
         <Select
           label="Tolerance distribution"
           options={DISTRIBUTION_OPTIONS}
@@ -90,7 +107,12 @@ export function GlasswareFields({ labId, kind }: { labId: number; kind: 'flask' 
           error={error?.fillRepeatabilityMl?.message}
           registration={register('data.fillRepeatabilityMl', AS_NUMBER)}
         />
-        <QuantityField label="Calibration temperature" unit="°C" error={error?.calibrationTemperatureC?.message} registration={register('data.calibrationTemperatureC', AS_NUMBER)} />
+        <QuantityField
+          label="Calibration temperature"
+          unit="°C"
+          error={error?.calibrationTemperatureC?.message}
+          registration={register('data.calibrationTemperatureC', AS_NUMBER)}
+        />
       </div>
     </fieldset>
   );

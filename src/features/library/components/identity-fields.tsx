@@ -11,9 +11,25 @@ export function IdentityFields({ descriptionLabel = 'Description' }: { descripti
   } = useFormContext<IdentityValues>();
   return (
     <div className="grid gap-4 md:grid-cols-[14rem_1fr_14rem]">
-      <TextField label="ID" hint="Asset tag or lab ID, unique in the lab" autoComplete="off" error={errors.data?.code?.message} {...register('data.code')} />
-      <TextField label={descriptionLabel} autoComplete="off" error={errors.data?.description?.message} {...register('data.description')} />
-      <TextField label="Certificate reference" autoComplete="off" error={errors.data?.certificateReference?.message} {...register('data.certificateReference')} />
+      <TextField
+        label="ID"
+        hint="Asset tag or lab ID, unique in the lab"
+        autoComplete="off"
+        error={errors.data?.code?.message}
+        {...register('data.code')}
+      />
+      <TextField
+        label={descriptionLabel}
+        autoComplete="off"
+        error={errors.data?.description?.message}
+        {...register('data.description')}
+      />
+      <TextField
+        label="Certificate reference"
+        autoComplete="off"
+        error={errors.data?.certificateReference?.message}
+        {...register('data.certificateReference')}
+      />
     </div>
   );
 }

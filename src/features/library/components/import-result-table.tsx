@@ -19,7 +19,10 @@ const ACTIONS: Record<ImportRow['action'], { words: string; tone: BadgeTone }> =
 const columns = column.columns([
   column.accessor('line', { header: 'Line', cell: (info) => <span className="numeric">{info.getValue()}</span> }),
   column.accessor('code', { header: 'ID', cell: (info) => info.getValue() || '—' }),
-  column.accessor('action', { header: 'What happens', cell: (info) => <Badge tone={ACTIONS[info.getValue()].tone}>{ACTIONS[info.getValue()].words}</Badge> }),
+  column.accessor('action', {
+    header: 'What happens',
+    cell: (info) => <Badge tone={ACTIONS[info.getValue()].tone}>{ACTIONS[info.getValue()].words}</Badge>,
+  }),
   column.accessor('errors', {
     header: 'Problems',
     cell: (info) =>

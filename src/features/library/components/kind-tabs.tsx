@@ -16,7 +16,9 @@ export function KindTabs({ current, status }: { current: EquipmentKind; status: 
                 to={paths.app.library.href({ kind: tab.kind, status: status === 'active' ? undefined : status })}
                 aria-current={active ? 'page' : undefined}
                 className={`block rounded-t-md border px-4 py-2 font-semibold no-underline ${
-                  active ? 'border-line border-b-surface bg-surface text-ink' : 'border-transparent text-muted hover:text-ink'
+                  active
+                    ? 'border-line border-b-surface bg-surface text-ink'
+                    : 'border-transparent text-muted hover:text-ink'
                 }`}
               >
                 {tab.label}

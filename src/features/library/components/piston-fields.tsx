@@ -45,7 +45,11 @@ export function PistonFields({ labId }: { labId: number }) {
     setValue('data.maxVolumeUl', template.nominalUl, options);
     if (!getValues('data.adjustable')) setValue('data.minVolumeUl', template.nominalUl, options);
     setValue('data.errorBasis', 'iso-8655', options);
-    points.update(0, { volumeUl: template.nominalUl, systematicErrorUl: template.systematicErrorUl, randomErrorUl: template.randomErrorUl });
+    points.update(0, {
+      volumeUl: template.nominalUl,
+      systematicErrorUl: template.systematicErrorUl,
+      randomErrorUl: template.randomErrorUl,
+    });
   };
 
   return (
@@ -67,20 +71,39 @@ export function PistonFields({ labId }: { labId: number }) {
         />
         {chosen ? (
           <TemplateNote standard={chosen.standard} provenance={chosen.provenance}>
-            {chosen.standard} at {formatQuantity(chosen.nominalUl)} µL: systematic error ± {formatQuantity(chosen.systematicErrorUl)} µL, random error{' '}
-            {formatQuantity(chosen.randomErrorUl)} µL (standard deviation).
+            {chosen.standard} at {formatQuantity(chosen.nominalUl)} µL: systematic error ±{' '}
+            {formatQuantity(chosen.systematicErrorUl)} µL, random error {formatQuantity(chosen.randomErrorUl)} µL
+            (standard deviation).
           </TemplateNote>
         ) : null}
       </div>
       <div className="grid items-start gap-4 md:grid-cols-4">
         <Checkbox label="Adjustable volume" className="mt-8" {...register('data.adjustable')} />
-        <QuantityField label="Smallest volume" unit="µL" hint="Equal to the nominal volume for a fixed pipette" error={error?.minVolumeUl?.message} registration={register('data.minVolumeUl', AS_NUMBER)} />
-        <QuantityField label="Nominal (largest) volume" unit="µL" error={error?.maxVolumeUl?.message} registration={register('data.maxVolumeUl', AS_NUMBER)} />
-        <Select label="Error basis" options={BASIS_OPTIONS} error={error?.errorBasis?.message} {...register('data.errorBasis')} />
+        <QuantityField
+          label="Smallest volume"
+          unit="µL"
+          hint="Equal to the nominal volume for a fixed pipette"
+          error={error?.minVolumeUl?.message}
+          registration={register('data.minVolumeUl', AS_NUMBER)}
+        />
+        <QuantityField
+          label="Nominal (largest) volume"
+          unit="µL"
+          error={error?.maxVolumeUl?.message}
+          registration={register('data.maxVolumeUl', AS_NUMBER)}
+        />
+        <Select
+          label="Error basis"
+          options={BASIS_OPTIONS}
+          error={error?.errorBasis?.message}
+          {...register('data.errorBasis')}
+        />
       </div>
       <fieldset className="rounded-md border border-line p-4">
         <legend className="px-1 font-bold">Calibration points</legend>
-        <p className="mb-3 text-sm text-muted">Systematic error as ± the largest deviation of the mean; random error as a standard deviation.</p>
+        <p className="mb-3 text-sm text-muted">
+          Systematic error as ± the largest deviation of the mean; random error as a standard deviation.
+        </p>
         {error?.points?.message || error?.points?.root?.message ? (
           <p className="mb-3 text-sm font-semibold text-danger">{error.points.message ?? error.points.root?.message}</p>
         ) : null}
@@ -88,7 +111,12 @@ export function PistonFields({ labId }: { labId: number }) {
           {points.fields.map((point, index) => (
             <li key={point.id} className="grid items-end gap-4 md:grid-cols-[auto_1fr_1fr_1fr_auto]">
               <span className="pb-2 font-semibold">{index + 1}.</span>
-              <QuantityField label="Set volume" unit="µL" error={error?.points?.[index]?.volumeUl?.message} registration={register(`data.points.${index}.volumeUl`, AS_NUMBER)} />
+              <QuantityField
+                label="Set volume"
+                unit="µL"
+                error={error?.points?.[index]?.volumeUl?.message}
+                registration={register(`data.points.${index}.volumeUl`, AS_NUMBER)}
+              />
               <QuantityField
                 label="Systematic error (±)"
                 unit="µL"
@@ -101,7 +129,13 @@ export function PistonFields({ labId }: { labId: number }) {
                 error={error?.points?.[index]?.randomErrorUl?.message}
                 registration={register(`data.points.${index}.randomErrorUl`, AS_NUMBER)}
               />
-              <Button variant="quiet" size="small" disabled={points.fields.length === 1} onClick={() => points.remove(index)} aria-label={`Remove point ${index + 1}`}>
+              <Button
+                variant="quiet"
+                size="small"
+                disabled={points.fields.length === 1}
+                onClick={() => points.remove(index)}
+                aria-label={`Remove point ${index + 1}`}
+              >
                 Remove
               </Button>
             </li>

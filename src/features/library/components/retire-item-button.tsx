@@ -23,7 +23,10 @@ export function RetireItemButton({ labId, item }: { labId: number; item: Equipme
     if (!parsed.success) return setProblem(parsed.error.issues[0]?.message ?? 'Say why, in a few words.');
     retire.mutate(
       { labId, itemId: item.id, reason: parsed.data },
-      { onSuccess: close, onError: (error) => setProblem(isApiError(error) ? error.message : 'The item could not be retired.') },
+      {
+        onSuccess: close,
+        onError: (error) => setProblem(isApiError(error) ? error.message : 'The item could not be retired.'),
+      },
     );
   };
 
@@ -32,11 +35,25 @@ export function RetireItemButton({ labId, item }: { labId: number; item: Equipme
       <Button variant="secondary" onClick={() => setOpen(true)}>
         Retire
       </Button>
-      <ConfirmDialog open={open} title={`Retire ${item.code}?`} confirmLabel={`Retire ${item.code}`} tone="danger" pending={retire.isPending} onConfirm={confirm} onCancel={close}>
+      <ConfirmDialog
+        open={open}
+        title={`Retire ${item.code}?`}
+        confirmLabel={`Retire ${item.code}`}
+        tone="danger"
+        pending={retire.isPending}
+        onConfirm={confirm}
+        onCancel={close}
+      >
         <p className="mb-3">
-          It will no longer be offered for new preparations. Its record, history and certificates stay readable, and budgets that used it keep it.
+          It will no longer be offered for new preparations. Its record, history and certificates stay readable, and
+          budgets that used it keep it.
         </p>
-        <TextAreaField label="Reason for retiring" value={reason} onChange={(event) => setReason(event.target.value)} error={problem && !retire.isError ? problem : undefined} />
+        <TextAreaField
+          label="Reason for retiring"
+          value={reason}
+          onChange={(event) => setReason(event.target.value)}
+          error={problem && !retire.isError ? problem : undefined}
+        />
         {retire.isError && problem ? <Alert tone="danger">{problem}</Alert> : null}
       </ConfirmDialog>
     </>

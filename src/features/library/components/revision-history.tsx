@@ -26,13 +26,24 @@ export function RevisionHistory({ itemId, kind, revisions, openNumber }: Revisio
     column.accessor('number', {
       header: 'Revision',
       cell: (info) => (
-        <Link to={paths.app.libraryItem.href(itemId, info.getValue())} aria-current={info.getValue() === openNumber ? 'true' : undefined} className="font-semibold">
+        <Link
+          to={paths.app.libraryItem.href(itemId, info.getValue())}
+          aria-current={info.getValue() === openNumber ? 'true' : undefined}
+          className="font-semibold"
+        >
           Revision {info.getValue()}
           {info.getValue() === currentNumber ? ' (current)' : ''}
         </Link>
       ),
     }),
-    column.accessor('createdAt', { header: 'Date', cell: (info) => <time dateTime={info.getValue()} className="whitespace-nowrap">{formatDateTime(info.getValue())}</time> }),
+    column.accessor('createdAt', {
+      header: 'Date',
+      cell: (info) => (
+        <time dateTime={info.getValue()} className="whitespace-nowrap">
+          {formatDateTime(info.getValue())}
+        </time>
+      ),
+    }),
     column.accessor('createdBy', { header: 'By' }),
     column.accessor('reason', { header: 'Reason' }),
   ]);
@@ -58,8 +69,14 @@ export function RevisionHistory({ itemId, kind, revisions, openNumber }: Revisio
             <ItemDataList kind={kind} data={open.data} />
           </div>
           <div>
-            <h3 className="mb-3 text-lg font-bold">{previous ? `Changed from revision ${previous.number}` : 'First entry'}</h3>
-            {previous ? <ChangeList kind={kind} before={previous.data} after={open.data} /> : <p className="text-muted">The item was added with this data.</p>}
+            <h3 className="mb-3 text-lg font-bold">
+              {previous ? `Changed from revision ${previous.number}` : 'First entry'}
+            </h3>
+            {previous ? (
+              <ChangeList kind={kind} before={previous.data} after={open.data} />
+            ) : (
+              <p className="text-muted">The item was added with this data.</p>
+            )}
             <p className="mt-4">
               <Link to={paths.app.libraryItem.href(itemId)}>Close revision {open.number}</Link>
             </p>
@@ -72,17 +89,25 @@ export function RevisionHistory({ itemId, kind, revisions, openNumber }: Revisio
   );
 }
 
-function ChangeList({ kind, before, after }: { kind: EquipmentKind; before: Record<string, unknown>; after: Record<string, unknown> }) {
+function ChangeList({
+  kind,
+  before,
+  after,
+}: {
+  kind: EquipmentKind;
+  before: Record<string, unknown>;
+  after: Record<string, unknown>;
+}) {
   const changes = revisionChanges(kind, before, after);
   if (changes.length === 0) return <p className="text-muted">No field changed.</p>;
   return (
     <ul className="flex flex-col gap-2">
       {changes.map((change) => (
         <li key={change.label}>
-          <span className="font-semibold">{change.label}:</span>{' '}
-          <span className="sr-only">was </span>
+          <span className="font-semibold">{change.label}:</span> <span className="sr-only">was </span>
           <del className="numeric text-muted">{change.before}</del> <span aria-hidden="true">→</span>
-          <span className="sr-only">, now</span> <ins className="numeric font-semibold no-underline">{change.after}</ins>
+          <span className="sr-only">, now</span>{' '}
+          <ins className="numeric font-semibold no-underline">{change.after}</ins>
         </li>
       ))}
     </ul>

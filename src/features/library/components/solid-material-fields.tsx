@@ -10,7 +10,12 @@ type SolidInput = z.input<typeof solidMaterialDataSchema>;
 /** Both shapes' boxes stay in the form while QA switches; the schema keeps only the chosen shape's. */
 type SolidValues = {
   data: Omit<SolidInput, 'purityUncertainty'> & {
-    purityUncertainty: { shape: 'normal' | 'rectangular'; expandedUncertainty?: number; coverageFactor?: number; halfWidth?: number };
+    purityUncertainty: {
+      shape: 'normal' | 'rectangular';
+      expandedUncertainty?: number;
+      coverageFactor?: number;
+      halfWidth?: number;
+    };
   };
 };
 
@@ -33,12 +38,35 @@ export function SolidMaterialFields() {
     <fieldset className="flex flex-col gap-4">
       <legend className="mb-2 text-lg font-bold">Composition and purity</legend>
       <div className="grid gap-4 md:grid-cols-3">
-        <TextField label="Formula" hint="As written on the certificate, e.g. Pb(NO3)2" autoComplete="off" error={error?.formula?.message} {...register('data.formula')} />
-        <TextField label="Analyte" hint="Element or ion reported, e.g. Pb" autoComplete="off" error={error?.analyte?.message} {...register('data.analyte')} />
-        <QuantityField label="Purity" unit="g/g" hint="Mass fraction, e.g. 0.9998" error={error?.purity?.message} registration={register('data.purity', AS_NUMBER)} />
+        <TextField
+          label="Formula"
+          hint="As written on the certificate, e.g. Pb(NO3)2"
+          autoComplete="off"
+          error={error?.formula?.message}
+          {...register('data.formula')}
+        />
+        <TextField
+          label="Analyte"
+          hint="Element or ion reported, e.g. Pb"
+          autoComplete="off"
+          error={error?.analyte?.message}
+          {...register('data.analyte')}
+        />
+        <QuantityField
+          label="Purity"
+          unit="g/g"
+          hint="Mass fraction, e.g. 0.9998"
+          error={error?.purity?.message}
+          registration={register('data.purity', AS_NUMBER)}
+        />
       </div>
       <div className="grid items-start gap-4 md:grid-cols-3">
-        <Select label="Purity uncertainty" options={SHAPE_OPTIONS} error={uncertaintyError?.message} {...register('data.purityUncertainty.shape')} />
+        <Select
+          label="Purity uncertainty"
+          options={SHAPE_OPTIONS}
+          error={uncertaintyError?.message}
+          {...register('data.purityUncertainty.shape')}
+        />
         {shape === 'rectangular' ? (
           <QuantityField
             label="Half-width (±)"
@@ -55,7 +83,11 @@ export function SolidMaterialFields() {
               error={uncertaintyError?.expandedUncertainty?.message}
               registration={register('data.purityUncertainty.expandedUncertainty', AS_NUMBER)}
             />
-            <QuantityField label="Coverage factor k" error={uncertaintyError?.coverageFactor?.message} registration={register('data.purityUncertainty.coverageFactor', AS_NUMBER)} />
+            <QuantityField
+              label="Coverage factor k"
+              error={uncertaintyError?.coverageFactor?.message}
+              registration={register('data.purityUncertainty.coverageFactor', AS_NUMBER)}
+            />
           </>
         )}
       </div>

@@ -26,17 +26,64 @@ export function SolutionMaterialFields() {
     <fieldset className="flex flex-col gap-4">
       <legend className="mb-2 text-lg font-bold">Certified value</legend>
       <div className="grid items-start gap-4 md:grid-cols-5">
-        <TextField label="Analyte" hint="e.g. Se" autoComplete="off" error={error?.analyte?.message} {...register('data.analyte')} />
-        <QuantityField label="Certified value" unit={unit} error={error?.certifiedValue?.message} registration={register('data.certifiedValue', AS_NUMBER)} />
-        <Select label="Unit" options={UNIT_OPTIONS} error={error?.certifiedUnit?.message} {...register('data.certifiedUnit')} />
-        <QuantityField label="Expanded uncertainty U" unit={unit} error={error?.expandedUncertainty?.message} registration={register('data.expandedUncertainty', AS_NUMBER)} />
-        <QuantityField label="Coverage factor k" error={error?.coverageFactor?.message} registration={register('data.coverageFactor', AS_NUMBER)} />
+        <TextField
+          label="Analyte"
+          hint="e.g. Se"
+          autoComplete="off"
+          error={error?.analyte?.message}
+          {...register('data.analyte')}
+        />
+        <QuantityField
+          label="Certified value"
+          unit={unit}
+          error={error?.certifiedValue?.message}
+          registration={register('data.certifiedValue', AS_NUMBER)}
+        />
+        <Select
+          label="Unit"
+          options={UNIT_OPTIONS}
+          error={error?.certifiedUnit?.message}
+          {...register('data.certifiedUnit')}
+        />
+        <QuantityField
+          label="Expanded uncertainty U"
+          unit={unit}
+          error={error?.expandedUncertainty?.message}
+          registration={register('data.expandedUncertainty', AS_NUMBER)}
+        />
+        <QuantityField
+          label="Coverage factor k"
+          error={error?.coverageFactor?.message}
+          registration={register('data.coverageFactor', AS_NUMBER)}
+        />
       </div>
       <div className="grid items-start gap-4 md:grid-cols-4">
-        <TextField label="Matrix" hint="e.g. 2 % HNO3" autoComplete="off" error={error?.matrix?.message} {...register('data.matrix')} />
-        <QuantityField label="Density" unit="g/mL" hint="Only if the certificate gives it" error={error?.densityGPerMl?.message} registration={register('data.densityGPerMl', AS_NUMBER)} />
-        <QuantityField label="Density standard uncertainty" unit="g/mL" error={error?.densityUncertaintyGPerMl?.message} registration={register('data.densityUncertaintyGPerMl', AS_NUMBER)} />
-        <TextField label="Opened on" type="date" error={error?.openedOn?.message} {...register('data.openedOn', EMPTY_AS_NULL)} />
+        <TextField
+          label="Matrix"
+          hint="e.g. 2 % HNO3"
+          autoComplete="off"
+          error={error?.matrix?.message}
+          {...register('data.matrix')}
+        />
+        <QuantityField
+          label="Density"
+          unit="g/mL"
+          hint="Only if the certificate gives it"
+          error={error?.densityGPerMl?.message}
+          registration={register('data.densityGPerMl', AS_NUMBER)}
+        />
+        <QuantityField
+          label="Density standard uncertainty"
+          unit="g/mL"
+          error={error?.densityUncertaintyGPerMl?.message}
+          registration={register('data.densityUncertaintyGPerMl', AS_NUMBER)}
+        />
+        <TextField
+          label="Opened on"
+          type="date"
+          error={error?.openedOn?.message}
+          {...register('data.openedOn', EMPTY_AS_NULL)}
+        />
       </div>
     </fieldset>
   );

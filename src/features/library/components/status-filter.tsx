@@ -11,7 +11,13 @@ export function statusFromSearch(value: string | null): EquipmentStatusFilter {
 }
 
 /** Which items the list shows: those in use, the retired ones, or all. */
-export function StatusFilter({ value, onChange }: { value: EquipmentStatusFilter; onChange: (status: EquipmentStatusFilter) => void }) {
+export function StatusFilter({
+  value,
+  onChange,
+}: {
+  value: EquipmentStatusFilter;
+  onChange: (status: EquipmentStatusFilter) => void;
+}) {
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor="library-status" className="font-semibold">

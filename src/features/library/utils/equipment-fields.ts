@@ -20,15 +20,22 @@ const BASIS_WORDS: Record<string, string> = { 'iso-8655': 'ISO 8655-2 limits', o
 const number = (value: unknown) => (typeof value === 'number' ? formatQuantity(value) : String(value));
 /** Small masses also in mg, as balance certificates state them: "0.00001 g (0.01 mg)". */
 const gramsAndMilligrams = (value: unknown) =>
-  typeof value === 'number' && value < 0.1 ? `${formatQuantity(value)} g (${formatQuantity(Number((value * 1000).toPrecision(6)))} mg)` : `${number(value)} g`;
+  typeof value === 'number' && value < 0.1
+    ? `${formatQuantity(value)} g (${formatQuantity(Number((value * 1000).toPrecision(6)))} mg)`
+    : `${number(value)} g`;
 
 type PistonPoint = { volumeUl: number; systematicErrorUl: number; randomErrorUl: number };
 const formatPoints = (value: unknown) =>
   (value as PistonPoint[])
-    .map((point) => `at ${number(point.volumeUl)} µL: ± ${number(point.systematicErrorUl)} µL systematic, ${number(point.randomErrorUl)} µL random (s)`)
+    .map(
+      (point) =>
+        `at ${number(point.volumeUl)} µL: ± ${number(point.systematicErrorUl)} µL systematic, ${number(point.randomErrorUl)} µL random (s)`,
+    )
     .join('; ');
 
-type PurityUncertainty = { shape: 'normal'; expandedUncertainty: number; coverageFactor: number } | { shape: 'rectangular'; halfWidth: number };
+type PurityUncertainty =
+  | { shape: 'normal'; expandedUncertainty: number; coverageFactor: number }
+  | { shape: 'rectangular'; halfWidth: number };
 const formatPurityUncertainty = (value: unknown) => {
   const uncertainty = value as PurityUncertainty;
   return uncertainty.shape === 'normal'
@@ -74,7 +81,11 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
     { key: 'readabilityG', label: 'Readability d', format: gramsAndMilligrams },
     { key: 'repeatabilityG', label: 'Repeatability s', format: gramsAndMilligrams },
     { key: 'linearityG', label: 'Linearity (±)', format: gramsAndMilligrams },
-    { key: 'sensitivityRelativeExpanded', label: 'Calibration uncertainty U, relative', format: (value) => `${number(value)} (${number(Number(value) * 1e6)} ppm)` },
+    {
+      key: 'sensitivityRelativeExpanded',
+      label: 'Calibration uncertainty U, relative',
+      format: (value) => `${number(value)} (${number(Number(value) * 1e6)} ppm)`,
+    },
     { key: 'sensitivityCoverageFactor', label: 'Coverage factor k of U' },
     ...CALIBRATION,
   ],

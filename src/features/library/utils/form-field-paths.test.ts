@@ -3,7 +3,10 @@ import { formFieldPaths } from './form-field-paths';
 
 describe('formFieldPaths', () => {
   it('names nested fields, array items and the groups themselves', () => {
-    const values = { data: { code: 'PP-10', points: [{ volumeUl: 10, randomErrorUl: 0.08 }], calibratedOn: null }, reason: '' };
+    const values = {
+      data: { code: 'PP-10', points: [{ volumeUl: 10, randomErrorUl: 0.08 }], calibratedOn: null },
+      reason: '',
+    };
     expect(formFieldPaths(values)).toEqual([
       'data',
       'data.code',

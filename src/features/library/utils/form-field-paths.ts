@@ -5,7 +5,9 @@
  */
 export function formFieldPaths(values: unknown, prefix = ''): string[] {
   if (values === null || typeof values !== 'object') return prefix ? [prefix] : [];
-  const entries = Array.isArray(values) ? values.map((value, index) => [String(index), value] as const) : Object.entries(values);
+  const entries = Array.isArray(values)
+    ? values.map((value, index) => [String(index), value] as const)
+    : Object.entries(values);
   const nested = entries.flatMap(([key, value]) => formFieldPaths(value, prefix ? `${prefix}.${key}` : key));
   return prefix ? [prefix, ...nested] : nested;
 }

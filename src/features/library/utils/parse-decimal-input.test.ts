@@ -17,6 +17,7 @@ describe('parseDecimalInput', () => {
   });
 
   it('gives NaN for text that is not one number, so the form says so', () => {
-    for (const text of ['zero point one', '1,000.5', '0.06 mL', '1.2.3', ',']) expect(parseDecimalInput(text)).toBeNaN();
+    for (const text of ['zero point one', '1,000.5', '0.06 mL', '1.2.3', ','])
+      expect(parseDecimalInput(text)).toBeNaN();
   });
 });

@@ -26,8 +26,12 @@ describe('revisionChanges', () => {
 
   it('reads nested values (piston points, purity uncertainty) as text before comparing', () => {
     const solid = { purityUncertainty: { shape: 'normal', expandedUncertainty: 0.0002, coverageFactor: 2 } };
-    const changed = revisionChanges('solid-material', solid, { purityUncertainty: { shape: 'rectangular', halfWidth: 0.0002 } });
-    expect(changed).toEqual([{ label: 'Purity uncertainty', before: 'U = 0.0002 (k = 2), normal', after: '± 0.0002, rectangular' }]);
+    const changed = revisionChanges('solid-material', solid, {
+      purityUncertainty: { shape: 'rectangular', halfWidth: 0.0002 },
+    });
+    expect(changed).toEqual([
+      { label: 'Purity uncertainty', before: 'U = 0.0002 (k = 2), normal', after: '± 0.0002, rectangular' },
+    ]);
     expect(revisionChanges('flask', flask, { ...flask })).toEqual([]);
   });
 });

@@ -14,6 +14,7 @@ export function useRemoveMember() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: removeMember,
-    onSettled: (_result, _error, { labId }) => queryClient.invalidateQueries({ queryKey: membersQueryOptions(labId).queryKey }),
+    onSettled: (_result, _error, { labId }) =>
+      queryClient.invalidateQueries({ queryKey: membersQueryOptions(labId).queryKey }),
   });
 }

@@ -14,6 +14,7 @@ export function useRevokeInvitation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: revokeInvitation,
-    onSettled: (_invitation, _error, { labId }) => queryClient.invalidateQueries({ queryKey: invitationsQueryOptions(labId).queryKey }),
+    onSettled: (_invitation, _error, { labId }) =>
+      queryClient.invalidateQueries({ queryKey: invitationsQueryOptions(labId).queryKey }),
   });
 }

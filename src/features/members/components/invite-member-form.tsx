@@ -47,7 +47,9 @@ export function InviteMemberForm({ labId }: { labId: number }) {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Invite a member">
       {formError ? <Alert tone="danger">{formError}</Alert> : null}
-      {invitedEmail ? <Alert tone="ok">Invitation sent to {invitedEmail}. It is listed in the Delivery log.</Alert> : null}
+      {invitedEmail ? (
+        <Alert tone="ok">Invitation sent to {invitedEmail}. It is listed in the Delivery log.</Alert>
+      ) : null}
       <TextField label="Name" autoComplete="off" error={errors.name?.message} {...register('name')} />
       <TextField label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...register('email')} />
       <Select label="Role" options={ROLE_OPTIONS} error={errors.role?.message} {...register('role')} />

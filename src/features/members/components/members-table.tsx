@@ -31,7 +31,8 @@ export function MembersTable({ labId, labName, members, currentUserId }: Members
         column.accessor('active', {
           header: 'Status',
           // The account's status everywhere: only the instance operator disables an account.
-          cell: (info) => (info.getValue() ? <Badge tone="ok">Active</Badge> : <Badge tone="caution">Account disabled</Badge>),
+          cell: (info) =>
+            info.getValue() ? <Badge tone="ok">Active</Badge> : <Badge tone="caution">Account disabled</Badge>,
         }),
         column.accessor('joinedAt', {
           header: 'Joined',

@@ -29,11 +29,16 @@ export function PendingInvitations({ labId, invitations }: { labId: number; invi
             <li key={invitation.id} className="py-3 first:pt-0 last:pb-0">
               <div className="flex flex-wrap items-center justify-between gap-2">
                 <span className="font-semibold">{invitation.name}</span>
-                {expired ? <Badge tone="caution">Expired</Badge> : <Badge tone="accent">{ROLE_LABELS[invitation.role]}</Badge>}
+                {expired ? (
+                  <Badge tone="caution">Expired</Badge>
+                ) : (
+                  <Badge tone="accent">{ROLE_LABELS[invitation.role]}</Badge>
+                )}
               </div>
               <div className="text-sm break-all text-muted">{invitation.email}</div>
               <div className="text-sm text-muted">
-                Invited by {invitation.invitedBy} on <time dateTime={invitation.createdAt}>{formatDate(invitation.createdAt)}</time>
+                Invited by {invitation.invitedBy} on{' '}
+                <time dateTime={invitation.createdAt}>{formatDate(invitation.createdAt)}</time>
                 {expired ? null : (
                   <>
                     {' '}

@@ -9,7 +9,17 @@ import { useRemoveMember } from '../api/remove-member';
  * Removes a member from this lab after a confirmation. The account stays (it may belong to other
  * labs; only the instance operator disables accounts), and so does their work here.
  */
-export function RemoveMemberCell({ labId, labName, member, isCurrentUser }: { labId: number; labName: string; member: Member; isCurrentUser: boolean }) {
+export function RemoveMemberCell({
+  labId,
+  labName,
+  member,
+  isCurrentUser,
+}: {
+  labId: number;
+  labName: string;
+  member: Member;
+  isCurrentUser: boolean;
+}) {
   const removeMember = useRemoveMember();
   const [asking, setAsking] = useState(false);
   if (isCurrentUser) return <span className="text-sm text-muted">This is you</span>;
@@ -35,8 +45,8 @@ export function RemoveMemberCell({ labId, labName, member, isCurrentUser }: { la
         onConfirm={() => removeMember.mutate({ labId, userId: member.userId }, { onSuccess: close })}
       >
         <p>
-          {member.name} will no longer see {labName}. Their past work and audit records here stay as they are, and their account and
-          any other labs they belong to are not affected.
+          {member.name} will no longer see {labName}. Their past work and audit records here stay as they are, and their
+          account and any other labs they belong to are not affected.
         </p>
         {removeMember.isError ? (
           <p role="alert" className="mt-3 font-semibold text-danger">

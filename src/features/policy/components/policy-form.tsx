@@ -54,7 +54,16 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
       {
         onSuccess: () => setSaved(true),
         onError: (error) =>
-          setFormError(applyApiError(error, setError, ['coverage', 'coverage.probability', 'coverage.k', 'glasswareDistribution', 'temperatureHalfRangeC', 'minimumWeightRule'])),
+          setFormError(
+            applyApiError(error, setError, [
+              'coverage',
+              'coverage.probability',
+              'coverage.k',
+              'glasswareDistribution',
+              'temperatureHalfRangeC',
+              'minimumWeightRule',
+            ]),
+          ),
       },
     );
   });
@@ -72,7 +81,8 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
           <span>
             <span className="font-semibold">Coverage probability</span>
             <span className="block text-sm text-muted">
-              k comes from the t-distribution at the effective degrees of freedom (Welch–Satterthwaite); with many degrees of freedom 95.45 % gives k = 2.
+              k comes from the t-distribution at the effective degrees of freedom (Welch–Satterthwaite); with many
+              degrees of freedom 95.45 % gives k = 2.
             </span>
           </span>
         </label>
@@ -90,14 +100,18 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
               <option value="0.9545">95.45 %</option>
               <option value="0.95">95 %</option>
             </select>
-            {coverageErrors?.probability?.message ? <p className="text-sm font-semibold text-danger">{coverageErrors.probability.message}</p> : null}
+            {coverageErrors?.probability?.message ? (
+              <p className="text-sm font-semibold text-danger">{coverageErrors.probability.message}</p>
+            ) : null}
           </div>
         ) : null}
         <label className="flex items-start gap-2">
           <input type="radio" value="fixed-k" className={`${RADIO} mt-1.5`} {...register('coverage.mode')} />
           <span>
             <span className="font-semibold">Fixed coverage factor k</span>
-            <span className="block text-sm text-muted">The same k on every budget, whatever its degrees of freedom (k = 2 is common practice).</span>
+            <span className="block text-sm text-muted">
+              The same k on every budget, whatever its degrees of freedom (k = 2 is common practice).
+            </span>
           </span>
         </label>
         {mode === 'fixed-k' ? (
@@ -126,18 +140,21 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 text-lg font-bold">Glassware tolerance distribution</legend>
         <p className="text-muted">
-          How a flask's or pipette's ± tolerance a becomes a standard uncertainty, unless the item itself says otherwise.
+          How a flask's or pipette's ± tolerance a becomes a standard uncertainty, unless the item itself says
+          otherwise.
         </p>
         <label className="flex items-center gap-2">
           <input type="radio" value="triangular" className={RADIO} {...register('glasswareDistribution')} />
           <span>
-            <span className="font-semibold">Triangular</span>, u = a/√6: values near nominal are likelier (as in the EURACHEM/CITAC CG4 worked examples)
+            <span className="font-semibold">Triangular</span>, u = a/√6: values near nominal are likelier (as in the
+            EURACHEM/CITAC CG4 worked examples)
           </span>
         </label>
         <label className="flex items-center gap-2">
           <input type="radio" value="rectangular" className={RADIO} {...register('glasswareDistribution')} />
           <span>
-            <span className="font-semibold">Rectangular</span>, u = a/√3: any value within the tolerance equally likely (the cautious choice)
+            <span className="font-semibold">Rectangular</span>, u = a/√3: any value within the tolerance equally likely
+            (the cautious choice)
           </span>
         </label>
       </fieldset>
@@ -161,15 +178,20 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
           <span>°C</span>
         </div>
         <p id="temperature-half-range-hint" className="text-sm text-muted">
-          The volume effect V·γ·ΔT of water (γ ≈ 2.1 × 10⁻⁴ K⁻¹) is taken as rectangular over this range; ± 4 °C for a lab kept at 20 ± 4 °C.
+          The volume effect V·γ·ΔT of water (γ ≈ 2.1 × 10⁻⁴ K⁻¹) is taken as rectangular over this range; ± 4 °C for a
+          lab kept at 20 ± 4 °C.
         </p>
-        {errors.temperatureHalfRangeC?.message ? <p className="text-sm font-semibold text-danger">{errors.temperatureHalfRangeC.message}</p> : null}
+        {errors.temperatureHalfRangeC?.message ? (
+          <p className="text-sm font-semibold text-danger">{errors.temperatureHalfRangeC.message}</p>
+        ) : null}
       </fieldset>
 
       <fieldset className="flex flex-col gap-1">
         <legend className="mb-1 text-lg font-bold">Minimum weight</legend>
         <Checkbox label="Apply the USP <41> minimum-weight rule" {...register('minimumWeightRule')} />
-        <p className="text-sm text-muted">Flags a net mass m below a balance's minimum weight: 2·s/m ≤ 0.10 %, with s not below 0.41·d.</p>
+        <p className="text-sm text-muted">
+          Flags a net mass m below a balance's minimum weight: 2·s/m ≤ 0.10 %, with s not below 0.41·d.
+        </p>
       </fieldset>
 
       {saved ? <Alert tone="ok">The lab policy is saved. Budgets computed from now on use it.</Alert> : null}

@@ -1,5 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { preparationDetailSchema, type PreparationDetail, type PreparationWrite } from '../../../../shared/contracts/preparations';
+import {
+  preparationDetailSchema,
+  type PreparationDetail,
+  type PreparationWrite,
+} from '../../../../shared/contracts/preparations';
 import { api } from '../../../lib/api-client';
 import { preparationsKeys } from './preparations-keys';
 

@@ -4,7 +4,11 @@ import { api } from '../../../lib/api-client';
 import { preparationsKeys } from './preparations-keys';
 
 export function duplicatePreparation(labId: number, preparationId: number, title?: string): Promise<PreparationDetail> {
-  return api.post(`/api/labs/${labId}/preparations/${preparationId}/duplicate`, title ? { title } : {}, preparationDetailSchema);
+  return api.post(
+    `/api/labs/${labId}/preparations/${preparationId}/duplicate`,
+    title ? { title } : {},
+    preparationDetailSchema,
+  );
 }
 
 /** Copies a preparation's latest plan into a new preparation (a variant to compare). */

@@ -21,5 +21,7 @@ export function usePreparation(labId: number, preparationId: number): Preparatio
 
 /** Several preparations at once, in the order asked (for the comparison). */
 export function usePreparationList(labId: number, preparationIds: number[]): PreparationDetail[] {
-  return useSuspenseQueries({ queries: preparationIds.map((id) => preparationQueryOptions(labId, id)) }).map((result) => result.data);
+  return useSuspenseQueries({ queries: preparationIds.map((id) => preparationQueryOptions(labId, id)) }).map(
+    (result) => result.data,
+  );
 }

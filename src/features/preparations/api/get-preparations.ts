@@ -1,6 +1,10 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import { preparationSummarySchema, type PreparationStatus, type PreparationSummary } from '../../../../shared/contracts/preparations';
+import {
+  preparationSummarySchema,
+  type PreparationStatus,
+  type PreparationSummary,
+} from '../../../../shared/contracts/preparations';
 import { api } from '../../../lib/api-client';
 import { preparationsKeys } from './preparations-keys';
 
@@ -18,7 +22,8 @@ const listSchema = z.array(preparationSummarySchema);
 
 export function getPreparations(labId: number, filter: PreparationListFilter): Promise<PreparationSummary[]> {
   const query = new URLSearchParams();
-  for (const [name, value] of Object.entries(filter)) if (value !== undefined && value !== '') query.set(name, String(value));
+  for (const [name, value] of Object.entries(filter))
+    if (value !== undefined && value !== '') query.set(name, String(value));
   const search = query.toString();
   return api.get(`/api/labs/${labId}/preparations${search ? `?${search}` : ''}`, listSchema);
 }

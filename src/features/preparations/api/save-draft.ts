@@ -1,4 +1,8 @@
-import { preparationDetailSchema, type PreparationDetail, type PreparationWrite } from '../../../../shared/contracts/preparations';
+import {
+  preparationDetailSchema,
+  type PreparationDetail,
+  type PreparationWrite,
+} from '../../../../shared/contracts/preparations';
 import { api } from '../../../lib/api-client';
 
 /**
@@ -6,6 +10,15 @@ import { api } from '../../../lib/api-client';
  * The workspace calls this itself (see use-autosave) and keeps its own draft, so nothing
  * here overwrites what the analyst is typing.
  */
-export function saveDraft(labId: number, preparationId: number, versionNumber: number, write: PreparationWrite): Promise<PreparationDetail> {
-  return api.put(`/api/labs/${labId}/preparations/${preparationId}/versions/${versionNumber}`, write, preparationDetailSchema);
+export function saveDraft(
+  labId: number,
+  preparationId: number,
+  versionNumber: number,
+  write: PreparationWrite,
+): Promise<PreparationDetail> {
+  return api.put(
+    `/api/labs/${labId}/preparations/${preparationId}/versions/${versionNumber}`,
+    write,
+    preparationDetailSchema,
+  );
 }

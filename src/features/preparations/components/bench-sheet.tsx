@@ -10,7 +10,10 @@ import { HazardNotes } from './hazard-notes';
 const BLANK = <span className="inline-block h-7 w-full border-b border-ink/60" />;
 
 function Readings({ line }: { line: BenchLine }) {
-  const cells = line.readings === 'weighing' ? ['Tare (g)', 'Gross (g)', 'Net (g)', 'Time', 'Initials'] : ['Done ☐', 'Time', 'Initials'];
+  const cells =
+    line.readings === 'weighing'
+      ? ['Tare (g)', 'Gross (g)', 'Net (g)', 'Time', 'Initials']
+      : ['Done ☐', 'Time', 'Initials'];
   if (line.readings === 'none') return null;
   return (
     <table className="mt-2 w-full table-fixed border-collapse text-sm">
@@ -47,7 +50,8 @@ export function BenchSheet({ detail, library }: BenchSheetProps) {
   const settings = (plan.settings ?? {}) as { labTemperatureC?: number };
   const lines = benchSheetLines(plan, settings.labTemperatureC ?? 20);
   const hazards = new Map<string, string>();
-  for (const item of version.snapshot?.items ?? []) if (item.hazardNotes.trim()) hazards.set(item.code, item.hazardNotes.trim());
+  for (const item of version.snapshot?.items ?? [])
+    if (item.hazardNotes.trim()) hazards.set(item.code, item.hazardNotes.trim());
   for (const step of (Array.isArray(plan.steps) ? plan.steps : []) as { material?: { libraryId?: string } }[]) {
     const item = library.find((each) => String(each.id) === step.material?.libraryId);
     if (item && hazardNotesOf(item)) hazards.set(item.code, hazardNotesOf(item));
@@ -60,14 +64,17 @@ export function BenchSheet({ detail, library }: BenchSheetProps) {
           <p className="text-sm font-semibold tracking-wide text-muted uppercase">Bench sheet</p>
           <h1 className="text-2xl font-bold">{detail.title}</h1>
           <p className="text-sm">
-            Preparation {detail.id}, version {version.number} ({STATUS_WORDS[version.status].toLowerCase()}) · planned by {detail.createdBy}
+            Preparation {detail.id}, version {version.number} ({STATUS_WORDS[version.status].toLowerCase()}) · planned
+            by {detail.createdBy}
           </p>
           {version.resultStatement ? (
             <p className="mt-1 font-semibold">
               {version.readings ? 'Result on the masses weighed' : 'Planned result'}: {version.resultStatement}
             </p>
           ) : null}
-          {version.problem ? <p className="mt-1 font-semibold text-danger">The plan is not complete: {version.problem.message}</p> : null}
+          {version.problem ? (
+            <p className="mt-1 font-semibold text-danger">The plan is not complete: {version.problem.message}</p>
+          ) : null}
         </div>
         <div className="print:hidden">
           <Button onClick={() => window.print()}>Print</Button>
@@ -91,7 +98,10 @@ export function BenchSheet({ detail, library }: BenchSheetProps) {
 
       <ol className="space-y-4">
         {lines.map((line) => (
-          <li key={line.stepNumber} className="break-inside-avoid rounded-md border border-line p-3 print:border-ink/40">
+          <li
+            key={line.stepNumber}
+            className="break-inside-avoid rounded-md border border-line p-3 print:border-ink/40"
+          >
             <p>
               <span className="mr-2 font-bold">Step {line.stepNumber}.</span>
               {line.action}
@@ -116,7 +126,9 @@ export function BenchSheet({ detail, library }: BenchSheetProps) {
           </p>
         </div>
       </div>
-      <p className="mt-4 text-xs text-muted">The tool computes; the lab's accredited procedures and its QA system decide.</p>
+      <p className="mt-4 text-xs text-muted">
+        The tool computes; the lab's accredited procedures and its QA system decide.
+      </p>
     </article>
   );
 }

@@ -14,11 +14,34 @@ const budget = evaluatePlan({
   steps: [
     {
       kind: 'weighSolid',
-      material: { kind: 'solidMaterial', itemId: 'CD-1', name: 'Cadmium metal (demo)', formula: 'Cd', purity: { massFraction: 0.9999, uncertainty: { shape: 'rectangular', halfWidth: 0.0001 } } },
-      balance: { kind: 'balance', itemId: 'B-1', capacityG: 220, readabilityG: 0.00001, repeatabilityG: 0.00002, linearityG: 0.00005 },
+      material: {
+        kind: 'solidMaterial',
+        itemId: 'CD-1',
+        name: 'Cadmium metal (demo)',
+        formula: 'Cd',
+        purity: { massFraction: 0.9999, uncertainty: { shape: 'rectangular', halfWidth: 0.0001 } },
+      },
+      balance: {
+        kind: 'balance',
+        itemId: 'B-1',
+        capacityG: 220,
+        readabilityG: 0.00001,
+        repeatabilityG: 0.00002,
+        linearityG: 0.00005,
+      },
       netMassG: 0.10028,
     },
-    { kind: 'makeUpToVolume', flask: { kind: 'volumetricFlask', itemId: 'F-100', nominalMl: 100, toleranceClass: 'A', toleranceMl: 0.1, fillRepeatabilityMl: 0.02 } },
+    {
+      kind: 'makeUpToVolume',
+      flask: {
+        kind: 'volumetricFlask',
+        itemId: 'F-100',
+        nominalMl: 100,
+        toleranceClass: 'A',
+        toleranceMl: 0.1,
+        fillRepeatabilityMl: 0.02,
+      },
+    },
   ],
 });
 
@@ -43,12 +66,22 @@ describe('BudgetTable', () => {
 
   it('shows every source with its distribution and sensitivity unit, and u_c in the footer', () => {
     render(<BudgetTable budget={budget} stepName={stepName} />);
-    const flaskRow = within(budgetTable()).getByRole('cell', { name: 'Flask F-100 (100 mL): tolerance ±0.1 mL (class A)' }).closest('tr') as HTMLTableRowElement;
-    const flaskCells = within(flaskRow).getAllByRole('cell').map((cell) => cell.textContent);
+    const flaskRow = within(budgetTable())
+      .getByRole('cell', { name: 'Flask F-100 (100 mL): tolerance ±0.1 mL (class A)' })
+      .closest('tr') as HTMLTableRowElement;
+    const flaskCells = within(flaskRow)
+      .getAllByRole('cell')
+      .map((cell) => cell.textContent);
     expect(flaskCells).toContain('triangular (Type B)');
     expect(flaskCells.some((text) => /mg\/L per mL$/.test(text ?? ''))).toBe(true);
-    const footer = within(budgetTable()).getByRole('rowheader', { name: 'Combined standard uncertainty u_c(y)' }).closest('tr') as HTMLTableRowElement;
-    expect(within(footer).getAllByRole('cell').map((cell) => cell.textContent)).toEqual([formatUncertainty(budget.standardUncertainty), '100.00']);
+    const footer = within(budgetTable())
+      .getByRole('rowheader', { name: 'Combined standard uncertainty u_c(y)' })
+      .closest('tr') as HTMLTableRowElement;
+    expect(
+      within(footer)
+        .getAllByRole('cell')
+        .map((cell) => cell.textContent),
+    ).toEqual([formatUncertainty(budget.standardUncertainty), '100.00']);
     // The shares of independent sources add up to the whole variance (GUM JCGM 100:2008 §5.1.2, eq. 10).
     expect(budget.rows.reduce((sum, row) => sum + row.indexPercent, 0)).toBeCloseTo(100, 9);
   });

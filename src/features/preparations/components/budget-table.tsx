@@ -1,4 +1,12 @@
-import { createColumnHelper, createSortedRowModel, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures, useTable } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  createSortedRowModel,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  sortFn_basic,
+  tableFeatures,
+  useTable,
+} from '@tanstack/react-table';
 import { Fragment, memo, useState } from 'react';
 import type { BudgetResult, BudgetRow } from '../../../../shared/uncertainty';
 import { Checkbox } from '../../../components/ui/checkbox';
@@ -25,7 +33,12 @@ const SORT_WORDS = { asc: 'ascending', desc: 'descending' } as const;
 
 function budgetColumns(outputUnit: string) {
   return column.columns([
-    column.accessor('label', { id: 'label', header: 'Source', sortFn: 'alphanumeric', cell: (info) => info.getValue() }),
+    column.accessor('label', {
+      id: 'label',
+      header: 'Source',
+      sortFn: 'alphanumeric',
+      cell: (info) => info.getValue(),
+    }),
     column.accessor(stepsOf, { id: 'step', header: 'Step', sortFn: 'alphanumeric', cell: (info) => info.getValue() }),
     column.accessor('estimate', {
       id: 'estimate',
@@ -89,14 +102,25 @@ type BudgetTableProps = { budget: BudgetResult; stepName: StepNamer };
  */
 export const BudgetTable = memo(function BudgetTable({ budget, stepName }: BudgetTableProps) {
   const [grouped, setGrouped] = useState(true);
-  const table = useTable({ features, columns: budgetColumns(budget.unit), data: budget.rows, getRowId: (row) => row.sourceId });
+  const table = useTable({
+    features,
+    columns: budgetColumns(budget.unit),
+    data: budget.rows,
+    getRowId: (row) => row.sourceId,
+  });
   const rows = table.getRowModel().rows;
-  const groups = budget.byStep.map((group) => ({ group, rows: rows.filter((row) => row.original.stepIndices.join('+') === group.key) }));
+  const groups = budget.byStep.map((group) => ({
+    group,
+    rows: rows.filter((row) => row.original.stepIndices.join('+') === group.key),
+  }));
   const columnCount = table.getAllLeafColumns().length;
   const renderRow = (row: (typeof rows)[number]) => (
     <tr key={row.id} className="border-b border-line align-top last:border-b-0">
       {row.getAllCells().map((cell) => (
-        <td key={cell.id} className={`px-3 py-1.5 ${NUMERIC.has(cell.column.id) ? 'text-right whitespace-nowrap' : ''} ${cell.column.id === 'label' && grouped ? 'pl-6' : ''}`}>
+        <td
+          key={cell.id}
+          className={`px-3 py-1.5 ${NUMERIC.has(cell.column.id) ? 'text-right whitespace-nowrap' : ''} ${cell.column.id === 'label' && grouped ? 'pl-6' : ''}`}
+        >
           <table.FlexRender cell={cell} />
         </td>
       ))}
@@ -107,11 +131,17 @@ export const BudgetTable = memo(function BudgetTable({ budget, stepName }: Budge
     <div>
       <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
         <p className="text-sm text-muted">Select a column heading to sort{grouped ? ' (within each step)' : ''}.</p>
-        <Checkbox label="Group by step with subtotals" checked={grouped} onChange={(event) => setGrouped(event.target.checked)} />
+        <Checkbox
+          label="Group by step with subtotals"
+          checked={grouped}
+          onChange={(event) => setGrouped(event.target.checked)}
+        />
       </div>
       <div className="overflow-x-auto rounded-lg border border-line bg-surface">
         <table className="w-full text-left text-sm">
-          <caption className="sr-only">Uncertainty budget of {budget.measurand}, {grouped ? 'grouped by step' : 'all sources'}</caption>
+          <caption className="sr-only">
+            Uncertainty budget of {budget.measurand}, {grouped ? 'grouped by step' : 'all sources'}
+          </caption>
           <thead className="border-b border-line bg-paper text-muted">
             {table.getHeaderGroups().map((headerGroup) => (
               <tr key={headerGroup.id}>
@@ -119,8 +149,17 @@ export const BudgetTable = memo(function BudgetTable({ budget, stepName }: Budge
                   const sorted = header.column.getIsSorted();
                   const align = NUMERIC.has(header.column.id) ? 'text-right' : '';
                   return (
-                    <th key={header.id} scope="col" aria-sort={sorted ? SORT_WORDS[sorted] : undefined} className={`px-3 py-2 align-bottom font-semibold ${align}`}>
-                      <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-end gap-1 font-semibold hover:text-ink">
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={sorted ? SORT_WORDS[sorted] : undefined}
+                      className={`px-3 py-2 align-bottom font-semibold ${align}`}
+                    >
+                      <button
+                        type="button"
+                        onClick={header.column.getToggleSortingHandler()}
+                        className="inline-flex items-end gap-1 font-semibold hover:text-ink"
+                      >
                         <table.FlexRender header={header} />
                         <span aria-hidden="true" className="w-3 text-ink">
                           {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
@@ -140,7 +179,9 @@ export const BudgetTable = memo(function BudgetTable({ budget, stepName }: Budge
                       <th scope="rowgroup" colSpan={columnCount - 2} className="px-3 py-2 text-left font-bold">
                         {stepName(group.key)}
                       </th>
-                      <td className="px-3 py-2 text-right font-bold numeric">{formatUncertainty(group.contribution)}</td>
+                      <td className="px-3 py-2 text-right font-bold numeric">
+                        {formatUncertainty(group.contribution)}
+                      </td>
                       <td className="px-3 py-2 text-right font-bold">
                         <PercentCell percent={group.indexPercent} />
                       </td>
@@ -155,15 +196,17 @@ export const BudgetTable = memo(function BudgetTable({ budget, stepName }: Budge
               <th scope="row" colSpan={columnCount - 2} className="px-3 py-2 text-left font-bold">
                 Combined standard uncertainty u_c(y)
               </th>
-              <td className="px-3 py-2 text-right font-bold numeric">{formatUncertainty(budget.standardUncertainty)}</td>
+              <td className="px-3 py-2 text-right font-bold numeric">
+                {formatUncertainty(budget.standardUncertainty)}
+              </td>
               <td className="px-3 py-2 text-right font-bold numeric">100.00</td>
             </tr>
           </tfoot>
         </table>
       </div>
       <p className="mt-2 text-sm text-muted">
-        An estimate of 0 marks a deviation from the nominal value (tolerance, reading, temperature): it adds uncertainty, not a correction. uᵢ(y) = |cᵢ|·u(xᵢ); step
-        subtotals are √Σ uᵢ(y)².
+        An estimate of 0 marks a deviation from the nominal value (tolerance, reading, temperature): it adds
+        uncertainty, not a correction. uᵢ(y) = |cᵢ|·u(xᵢ); step subtotals are √Σ uᵢ(y)².
       </p>
     </div>
   );

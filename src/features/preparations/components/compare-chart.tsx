@@ -34,8 +34,20 @@ export default function CompareChart({ data, variants }: CompareChartProps) {
         <YAxis unit=" %" tick={{ fontSize: 12 }} width={64} />
         <Legend />
         {variants.map((variant, index) => (
-          <Bar key={variant.key} dataKey={variant.key} name={variant.label} fill={FILLS[index % FILLS.length].fill} stroke="#17323b" isAnimationActive={false}>
-            <LabelList dataKey={variant.key} position="top" formatter={(value: unknown) => (typeof value === 'number' ? value.toFixed(2) : '')} style={{ fontSize: 11, fill: '#17323b' }} />
+          <Bar
+            key={variant.key}
+            dataKey={variant.key}
+            name={variant.label}
+            fill={FILLS[index % FILLS.length].fill}
+            stroke="#17323b"
+            isAnimationActive={false}
+          >
+            <LabelList
+              dataKey={variant.key}
+              position="top"
+              formatter={(value: unknown) => (typeof value === 'number' ? value.toFixed(2) : '')}
+              style={{ fontSize: 11, fill: '#17323b' }}
+            />
           </Bar>
         ))}
       </BarChart>

@@ -21,7 +21,9 @@ type Column = {
 const materialWords = (figures: Column['figures'], code: string | null) => {
   const used = figures?.materialUsed;
   if (!used) return '—';
-  return 'massG' in used ? `${formatSignificant(used.massG, 4)} g of ${code ?? 'solid'}` : `${formatSignificant(used.volumeMl, 4)} mL of ${code ?? 'solution'}`;
+  return 'massG' in used
+    ? `${formatSignificant(used.massG, 4)} g of ${code ?? 'solid'}`
+    : `${formatSignificant(used.volumeMl, 4)} mL of ${code ?? 'solution'}`;
 };
 
 /** Two to four preparations side by side, from their stored (server-computed) snapshots. */
@@ -30,20 +32,47 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
     const snapshot = detail.current.snapshot;
     const budget = snapshot?.budget ?? null;
     const plan = snapshot?.plan ?? detail.current.plan;
-    return { detail, budget, figures: snapshot ? planFigures(plan) : null, steps: (Array.isArray(plan.steps) ? plan.steps : []) as { kind: string }[] };
+    return {
+      detail,
+      budget,
+      figures: snapshot ? planFigures(plan) : null,
+      steps: (Array.isArray(plan.steps) ? plan.steps : []) as { kind: string }[],
+    };
   });
   const computed = columns.filter((column) => column.budget && column.figures);
-  const sentences = computed.slice(1).map((column) =>
-    dilutionComparison(
-      { title: computed[0].detail.title, dilutionSteps: computed[0].figures!.dilutionSteps, relativeU: computed[0].budget!.relativeExpandedUncertainty },
-      { title: column.detail.title, dilutionSteps: column.figures!.dilutionSteps, relativeU: column.budget!.relativeExpandedUncertainty },
-    ),
-  );
+  const sentences = computed
+    .slice(1)
+    .map((column) =>
+      dilutionComparison(
+        {
+          title: computed[0].detail.title,
+          dilutionSteps: computed[0].figures!.dilutionSteps,
+          relativeU: computed[0].budget!.relativeExpandedUncertainty,
+        },
+        {
+          title: column.detail.title,
+          dilutionSteps: column.figures!.dilutionSteps,
+          relativeU: column.budget!.relativeExpandedUncertainty,
+        },
+      ),
+    );
 
   const rows: { label: string; cell: (column: Column) => string }[] = [
-    { label: 'Result', cell: (column) => (column.budget ? `${column.budget.rounded.valueText} ${column.budget.unit}` : 'not computable') },
-    { label: 'Expanded uncertainty U', cell: (column) => (column.budget ? `${column.budget.rounded.uncertaintyText} ${column.budget.unit} (k = ${column.budget.coverageFactor.toFixed(2)})` : '—') },
-    { label: 'Relative U', cell: (column) => (column.budget ? formatPercent(column.budget.relativeExpandedUncertainty) : '—') },
+    {
+      label: 'Result',
+      cell: (column) => (column.budget ? `${column.budget.rounded.valueText} ${column.budget.unit}` : 'not computable'),
+    },
+    {
+      label: 'Expanded uncertainty U',
+      cell: (column) =>
+        column.budget
+          ? `${column.budget.rounded.uncertaintyText} ${column.budget.unit} (k = ${column.budget.coverageFactor.toFixed(2)})`
+          : '—',
+    },
+    {
+      label: 'Relative U',
+      cell: (column) => (column.budget ? formatPercent(column.budget.relativeExpandedUncertainty) : '—'),
+    },
     { label: 'Dilution steps', cell: (column) => (column.figures ? String(column.figures.dilutionSteps) : '—') },
     {
       label: 'Dominant step',
@@ -59,7 +88,14 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
     {
       label: 'Waste (made, not carried forward)',
       cell: (column) =>
-        column.figures ? [`${formatSignificant(column.figures.wasteMl, 4)} mL`, column.figures.wasteG > 0 ? `${formatSignificant(column.figures.wasteG, 4)} g` : null].filter(Boolean).join(' + ') : '—',
+        column.figures
+          ? [
+              `${formatSignificant(column.figures.wasteMl, 4)} mL`,
+              column.figures.wasteG > 0 ? `${formatSignificant(column.figures.wasteG, 4)} g` : null,
+            ]
+              .filter(Boolean)
+              .join(' + ')
+          : '—',
     },
     { label: 'Product volume', cell: (column) => (column.figures?.productMl ? `${column.figures.productMl} mL` : '—') },
   ];
@@ -119,7 +155,9 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
         </table>
       </div>
       {columns.some((column) => column.detail.current.problem) ? (
-        <p className="mt-2 text-sm text-danger">A preparation marked “not computable” has a problem in its plan; open it to see where.</p>
+        <p className="mt-2 text-sm text-danger">
+          A preparation marked “not computable” has a problem in its plan; open it to see where.
+        </p>
       ) : null}
 
       {computed.length > 0 ? (
@@ -127,7 +165,10 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
           <figcaption className="mb-2 font-semibold">Relative contribution of each step, uᵢ(y)/y in %</figcaption>
           <div aria-hidden="true">
             <Suspense fallback={<LoadingLine label="Drawing the chart…" />}>
-              <CompareChart data={chartData} variants={computed.map((column) => ({ key: `p${column.detail.id}`, label: column.detail.title }))} />
+              <CompareChart
+                data={chartData}
+                variants={computed.map((column) => ({ key: `p${column.detail.id}`, label: column.detail.title }))}
+              />
             </Suspense>
           </div>
           <table className="sr-only">
@@ -147,7 +188,11 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
                 <tr key={String(entry.step)}>
                   <th scope="row">{entry.step}</th>
                   {computed.map((column) => (
-                    <td key={column.detail.id}>{typeof entry[`p${column.detail.id}`] === 'number' ? (entry[`p${column.detail.id}`] as number).toFixed(3) : '—'}</td>
+                    <td key={column.detail.id}>
+                      {typeof entry[`p${column.detail.id}`] === 'number'
+                        ? (entry[`p${column.detail.id}`] as number).toFixed(3)
+                        : '—'}
+                    </td>
                   ))}
                 </tr>
               ))}

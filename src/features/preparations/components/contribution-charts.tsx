@@ -13,8 +13,20 @@ type ContributionChartsProps = {
 
 const percentLabel = (value: unknown) => `${Number(value).toFixed(1)} %`;
 
-function ShareChart({ title, groups, nameOf, stale }: { title: string; groups: BudgetGroup[]; nameOf: (key: string) => string; stale: boolean }) {
-  const data = [...groups].sort((a, b) => b.indexPercent - a.indexPercent).map((group) => ({ name: nameOf(group.key), percent: group.indexPercent }));
+function ShareChart({
+  title,
+  groups,
+  nameOf,
+  stale,
+}: {
+  title: string;
+  groups: BudgetGroup[];
+  nameOf: (key: string) => string;
+  stale: boolean;
+}) {
+  const data = [...groups]
+    .sort((a, b) => b.indexPercent - a.indexPercent)
+    .map((group) => ({ name: nameOf(group.key), percent: group.indexPercent }));
   const height = 40 + data.length * 34;
   const summary = data.map((entry) => `${entry.name}: ${entry.percent.toFixed(1)} %`).join('; ');
   return (
@@ -27,7 +39,12 @@ function ShareChart({ title, groups, nameOf, stale }: { title: string; groups: B
             <XAxis type="number" domain={[0, 100]} unit=" %" tick={{ fontSize: 12 }} />
             <YAxis type="category" dataKey="name" width={190} tick={{ fontSize: 12 }} interval={0} />
             <Bar dataKey="percent" fill={stale ? '#8f877a' : '#2a4a54'} isAnimationActive={false}>
-              <LabelList dataKey="percent" position="right" formatter={percentLabel} style={{ fontSize: 12, fill: '#17323b' }} />
+              <LabelList
+                dataKey="percent"
+                position="right"
+                formatter={percentLabel}
+                style={{ fontSize: 12, fill: '#17323b' }}
+              />
             </Bar>
           </BarChart>
         </ResponsiveContainer>
@@ -44,7 +61,12 @@ function ContributionCharts({ byStep, byCategory, stepName, stale }: Contributio
   return (
     <div className={`grid gap-6 ${stale ? 'opacity-60' : ''}`}>
       <ShareChart title="Share of the variance by step" groups={byStep} nameOf={stepName} stale={stale} />
-      <ShareChart title="Share of the variance by source type" groups={byCategory} nameOf={categoryWords} stale={stale} />
+      <ShareChart
+        title="Share of the variance by source type"
+        groups={byCategory}
+        nameOf={categoryWords}
+        stale={stale}
+      />
     </div>
   );
 }

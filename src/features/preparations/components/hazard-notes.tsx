@@ -5,7 +5,10 @@ export const SAFETY_LINE = 'Follow the safety data sheet, your lab’s chemical 
 export function HazardNotes({ code, notes }: { code: string; notes: string }) {
   if (!notes) return null;
   return (
-    <aside aria-label={`Hazards of ${code}`} className="rounded-md border-l-4 border-caution bg-caution-tint px-4 py-3 text-ink print:border print:bg-transparent">
+    <aside
+      aria-label={`Hazards of ${code}`}
+      className="rounded-md border-l-4 border-caution bg-caution-tint px-4 py-3 text-ink print:border print:bg-transparent"
+    >
       <p className="font-bold text-caution">
         <span aria-hidden="true">⚠ </span>Hazards of {code}
       </p>

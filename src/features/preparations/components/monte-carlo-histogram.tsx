@@ -18,7 +18,8 @@ const INTERVAL_STYLES = {
 export default function MonteCarloHistogram({ monteCarlo, budget }: HistogramProps) {
   const { lowerEdge, binWidth, counts } = monteCarlo.histogram;
   const u = budget.standardUncertainty;
-  const density = (x: number) => (monteCarlo.trials * binWidth * Math.exp(-0.5 * ((x - budget.value) / u) ** 2)) / (u * Math.sqrt(2 * Math.PI));
+  const density = (x: number) =>
+    (monteCarlo.trials * binWidth * Math.exp(-0.5 * ((x - budget.value) / u) ** 2)) / (u * Math.sqrt(2 * Math.PI));
   // Each bin is drawn from its lower edge to the next (stepAfter); the density is sampled at the same x.
   const data = [...counts, 0].map((count, index) => {
     const x = lowerEdge + index * binWidth;
@@ -40,13 +41,20 @@ export default function MonteCarloHistogram({ monteCarlo, budget }: HistogramPro
   return (
     <figure className="min-w-0">
       <figcaption className="mb-1 font-semibold">
-        Monte Carlo distribution of {monteCarlo.measurand} ({monteCarlo.trials.toLocaleString('en-GB')} trials) with the GUM result
+        Monte Carlo distribution of {monteCarlo.measurand} ({monteCarlo.trials.toLocaleString('en-GB')} trials) with the
+        GUM result
       </figcaption>
       <div aria-hidden="true">
         <ResponsiveContainer width="100%" height={280} initialDimension={{ width: 640, height: 280 }}>
           <ComposedChart data={data} margin={{ top: 8, right: 16, bottom: 24, left: 8 }}>
             <defs>
-              <pattern id="histogram-hatch" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+              <pattern
+                id="histogram-hatch"
+                width="6"
+                height="6"
+                patternUnits="userSpaceOnUse"
+                patternTransform="rotate(45)"
+              >
                 <rect width="6" height="6" fill="#e8ecec" />
                 <line x1="0" y1="0" x2="0" y2="6" stroke="#55676d" strokeWidth="2" />
               </pattern>
@@ -58,13 +66,38 @@ export default function MonteCarloHistogram({ monteCarlo, budget }: HistogramPro
               domain={[low, high]}
               tickFormatter={(value: number) => formatSignificant(value, 5)}
               tick={{ fontSize: 12 }}
-              label={{ value: `${monteCarlo.measurand} (${unit})`, position: 'insideBottom', offset: -16, fontSize: 12 }}
+              label={{
+                value: `${monteCarlo.measurand} (${unit})`,
+                position: 'insideBottom',
+                offset: -16,
+                fontSize: 12,
+              }}
             />
             <YAxis tick={{ fontSize: 12 }} width={56} tickFormatter={(value: number) => formatSignificant(value, 2)} />
-            <Area type="stepAfter" dataKey="count" stroke="#55676d" fill="url(#histogram-hatch)" isAnimationActive={false} />
-            <Line type="monotone" dataKey="gum" stroke="#a85a24" strokeWidth={2} strokeDasharray="6 3" dot={false} isAnimationActive={false} />
+            <Area
+              type="stepAfter"
+              dataKey="count"
+              stroke="#55676d"
+              fill="url(#histogram-hatch)"
+              isAnimationActive={false}
+            />
+            <Line
+              type="monotone"
+              dataKey="gum"
+              stroke="#a85a24"
+              strokeWidth={2}
+              strokeDasharray="6 3"
+              dot={false}
+              isAnimationActive={false}
+            />
             {lines.map((line) => (
-              <ReferenceLine key={line.key} x={line.x} stroke={line.style.color} strokeWidth={2} strokeDasharray={line.style.dash} />
+              <ReferenceLine
+                key={line.key}
+                x={line.x}
+                stroke={line.style.color}
+                strokeWidth={2}
+                strokeDasharray={line.style.dash}
+              />
             ))}
           </ComposedChart>
         </ResponsiveContainer>
@@ -92,7 +125,9 @@ export default function MonteCarloHistogram({ monteCarlo, budget }: HistogramPro
         ))}
       </ul>
       <table className="sr-only">
-        <caption>Coverage intervals of {monteCarlo.measurand}, in {unit}</caption>
+        <caption>
+          Coverage intervals of {monteCarlo.measurand}, in {unit}
+        </caption>
         <thead>
           <tr>
             <th scope="col">Interval</th>

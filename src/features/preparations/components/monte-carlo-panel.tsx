@@ -24,7 +24,13 @@ type MonteCarloPanelProps = {
  * Monte Carlo (JCGM 101:2008) for the plan on screen: progress, cancel, the seed, the histogram and the verdict
  * against GUM. The run's state lives here, so progress repaints only this panel, never the editor.
  */
-export const MonteCarloPanel = memo(function MonteCarloPanel({ plan, budget, seed, onSeedChange, seedEditable }: MonteCarloPanelProps) {
+export const MonteCarloPanel = memo(function MonteCarloPanel({
+  plan,
+  budget,
+  seed,
+  onSeedChange,
+  seedEditable,
+}: MonteCarloPanelProps) {
   const { state, start: onStart, cancel: onCancel, planKey } = useMonteCarlo(plan, seed, { automatic: true });
   const running = state.phase === 'running';
   const result = state.phase === 'done' ? state.result : null;
@@ -63,7 +69,9 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({ plan, budget, see
           </Button>
         )}
       </div>
-      <p className="mt-1 text-sm text-muted">Runs by itself a second after you stop editing, in the background: keep typing.</p>
+      <p className="mt-1 text-sm text-muted">
+        Runs by itself a second after you stop editing, in the background: keep typing.
+      </p>
 
       <div className="mt-3" aria-live="polite">
         {running ? (
@@ -71,21 +79,35 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({ plan, budget, see
             <label htmlFor="monte-carlo-progress" className="text-sm font-semibold">
               {state.trialsDone.toLocaleString('en-GB')} of {state.trialsPlanned.toLocaleString('en-GB')} trials
             </label>
-            <progress id="monte-carlo-progress" max={state.trialsPlanned} value={state.trialsDone} className="block h-3 w-full accent-[var(--color-ink)]">
+            <progress
+              id="monte-carlo-progress"
+              max={state.trialsPlanned}
+              value={state.trialsDone}
+              className="block h-3 w-full accent-[var(--color-ink)]"
+            >
               {percent} %
             </progress>
           </div>
         ) : null}
-        {state.phase === 'cancelled' ? <p className="text-muted">Monte Carlo cancelled. Run it again when you are ready.</p> : null}
+        {state.phase === 'cancelled' ? (
+          <p className="text-muted">Monte Carlo cancelled. Run it again when you are ready.</p>
+        ) : null}
         {state.phase === 'failed' ? <p className="font-semibold text-danger">{state.message}</p> : null}
         {state.phase === 'idle' && !budget ? <p className="text-muted">Monte Carlo needs a valid plan.</p> : null}
       </div>
 
       {result ? (
         <div className={outOfDate ? 'opacity-60' : ''}>
-          {outOfDate ? <p className="mb-2 font-semibold text-caution">This result is for an earlier version of the plan; a new run starts shortly.</p> : null}
+          {outOfDate ? (
+            <p className="mb-2 font-semibold text-caution">
+              This result is for an earlier version of the plan; a new run starts shortly.
+            </p>
+          ) : null}
           {validation ? (
-            <p className={`mb-3 rounded-md border-l-4 px-4 py-3 font-semibold ${validation.passed ? 'border-ok bg-ok-tint text-ok' : 'border-caution bg-caution-tint text-caution'}`} data-testid="validation-verdict">
+            <p
+              className={`mb-3 rounded-md border-l-4 px-4 py-3 font-semibold ${validation.passed ? 'border-ok bg-ok-tint text-ok' : 'border-caution bg-caution-tint text-caution'}`}
+              data-testid="validation-verdict"
+            >
               {validationVerdict(validation, unit)}
             </p>
           ) : null}
@@ -105,13 +127,15 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({ plan, budget, see
             <div>
               <dt className="text-muted">Symmetric {(result.coverageProbability * 100).toFixed(2)} % interval</dt>
               <dd className="numeric font-semibold">
-                [{formatSignificant(result.symmetricInterval.low, 6)}, {formatSignificant(result.symmetricInterval.high, 6)}]
+                [{formatSignificant(result.symmetricInterval.low, 6)},{' '}
+                {formatSignificant(result.symmetricInterval.high, 6)}]
               </dd>
             </div>
             <div>
               <dt className="text-muted">Shortest interval</dt>
               <dd className="numeric font-semibold">
-                [{formatSignificant(result.shortestInterval.low, 6)}, {formatSignificant(result.shortestInterval.high, 6)}]
+                [{formatSignificant(result.shortestInterval.low, 6)},{' '}
+                {formatSignificant(result.shortestInterval.high, 6)}]
               </dd>
             </div>
           </dl>

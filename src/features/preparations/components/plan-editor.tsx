@@ -48,7 +48,8 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
   const errorAt = (name: string) => (field === name && problem ? fieldMessage(problem.message) : undefined);
 
   const setSteps = (steps: DraftStep[]) => onChange({ ...draft, steps });
-  const changeStep = (index: number, step: DraftStep) => setSteps(draft.steps.map((each, at) => (at === index ? step : each)));
+  const changeStep = (index: number, step: DraftStep) =>
+    setSteps(draft.steps.map((each, at) => (at === index ? step : each)));
   const moveStep = (index: number, offset: -1 | 1) => {
     const steps = [...draft.steps];
     const [moved] = steps.splice(index, 1);
@@ -56,7 +57,11 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
     setSteps(steps);
   };
   const duplicateStep = (index: number) => {
-    const copy = { ...draft.steps[index], key: newKey('step'), extraSources: draft.steps[index].extraSources.map((source) => ({ ...source, key: newKey('source') })) };
+    const copy = {
+      ...draft.steps[index],
+      key: newKey('step'),
+      extraSources: draft.steps[index].extraSources.map((source) => ({ ...source, key: newKey('source') })),
+    };
     setSteps([...draft.steps.slice(0, index + 1), copy, ...draft.steps.slice(index + 1)]);
   };
 
@@ -64,7 +69,8 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
     const chosen = materials.find((item) => String(item.id) === materialId);
     if (!chosen) return onChange({ ...draft, materialId });
     const previous = material ? defaultAnalyteOf(material) : '';
-    const analyte = draft.analyte.trim() === '' || draft.analyte === previous ? defaultAnalyteOf(chosen) : draft.analyte;
+    const analyte =
+      draft.analyte.trim() === '' || draft.analyte === previous ? defaultAnalyteOf(chosen) : draft.analyte;
     let steps = draft.steps;
     if (steps.length === 0) steps = startingSteps(chosen);
     else if (isStartKind(steps[0].kind) && steps[0].kind !== startKindFor(chosen.kind)) {
@@ -73,7 +79,8 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
     onChange({ ...draft, materialId, analyte, steps });
   };
 
-  const stepWarnings = (index: number) => warnings.filter((warning) => warning.stepIndex === index).map((warning) => warning.text);
+  const stepWarnings = (index: number) =>
+    warnings.filter((warning) => warning.stepIndex === index).map((warning) => warning.text);
 
   return (
     <fieldset disabled={readOnly} className="min-w-0">
@@ -83,16 +90,22 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
         materials={materials}
         onChange={(change) => onChange({ ...draft, ...change })}
         onMaterialChange={changeMaterial}
-        onOverrideChange={(libraryId, reason) => onChange({ ...draft, overrides: { ...draft.overrides, [libraryId]: reason } })}
+        onOverrideChange={(libraryId, reason) =>
+          onChange({ ...draft, overrides: { ...draft.overrides, [libraryId]: reason } })
+        }
         errorAt={errorAt}
       />
       <h2 className="mt-6 mb-3 text-xl font-bold">Steps</h2>
-      {errorAt('steps') || errorAt('plan') ? <p className="mb-3 font-semibold text-danger">{errorAt('steps') ?? errorAt('plan')}</p> : null}
+      {errorAt('steps') || errorAt('plan') ? (
+        <p className="mb-3 font-semibold text-danger">{errorAt('steps') ?? errorAt('plan')}</p>
+      ) : null}
       <ol className="space-y-3">
         {draft.steps.map((step, index) => {
           const info = STEP_KINDS[step.kind];
           const absoluteUnit =
-            step.kind === 'startFromCertifiedSolution' ? String(material?.current.data.certifiedUnit ?? 'mg/L') : info.quantity?.unit ?? (info.slot === 'flask' ? 'mL' : 'g');
+            step.kind === 'startFromCertifiedSolution'
+              ? String(material?.current.data.certifiedUnit ?? 'mg/L')
+              : (info.quantity?.unit ?? (info.slot === 'flask' ? 'mL' : 'g'));
           return (
             <StepCard
               key={step.key}
@@ -106,7 +119,9 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
               warnings={stepWarnings(index)}
               errorAt={errorAt}
               onChange={(changed) => changeStep(index, changed)}
-              onOverrideChange={(libraryId, reason) => onChange({ ...draft, overrides: { ...draft.overrides, [libraryId]: reason } })}
+              onOverrideChange={(libraryId, reason) =>
+                onChange({ ...draft, overrides: { ...draft.overrides, [libraryId]: reason } })
+              }
               onMove={(offset) => moveStep(index, offset)}
               onDuplicate={() => duplicateStep(index)}
               onRemove={() => setSteps(draft.steps.filter((_, at) => at !== index))}

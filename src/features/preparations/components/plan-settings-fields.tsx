@@ -18,7 +18,14 @@ type PlanSettingsFieldsProps = {
 const UNIT_OPTIONS = concentrationUnitNames.map((unit) => ({ value: unit, label: unit }));
 
 /** Title, reference material (with an override reason when it has expired), analyte, reporting unit and lab temperature. */
-export function PlanSettingsFields({ draft, materials, onChange, onMaterialChange, onOverrideChange, errorAt }: PlanSettingsFieldsProps) {
+export function PlanSettingsFields({
+  draft,
+  materials,
+  onChange,
+  onMaterialChange,
+  onOverrideChange,
+  errorAt,
+}: PlanSettingsFieldsProps) {
   const material = materials.find((item) => String(item.id) === draft.materialId);
   return (
     <div className="grid gap-4 md:grid-cols-6">
@@ -35,9 +42,14 @@ export function PlanSettingsFields({ draft, materials, onChange, onMaterialChang
         className="md:col-span-4"
         value={draft.materialId}
         onChange={(event) => onMaterialChange(event.target.value)}
-        options={[{ value: '', label: 'Choose from the library…' }, ...materials.map((item) => ({ value: String(item.id), label: equipmentOptionLabel(item) }))]}
+        options={[
+          { value: '', label: 'Choose from the library…' },
+          ...materials.map((item) => ({ value: String(item.id), label: equipmentOptionLabel(item) })),
+        ]}
         error={errorAt('material')}
-        hint={material ? String(material.current.data.name ?? '') : 'Solids are weighed; certified solutions are pipetted.'}
+        hint={
+          material ? String(material.current.data.name ?? '') : 'Solids are weighed; certified solutions are pipetted.'
+        }
       />
       <TextField
         label="Analyte"

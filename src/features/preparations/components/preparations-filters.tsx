@@ -20,14 +20,33 @@ type PreparationsFiltersProps = {
 export function PreparationsFilters({ filter, analysts, materialCodes, onChange }: PreparationsFiltersProps) {
   const set = (change: Partial<PreparationListFilter>) => onChange({ ...filter, ...change });
   return (
-    <form role="search" aria-label="Filter preparations" className="mb-4 flex flex-wrap items-end gap-3" onSubmit={(event) => event.preventDefault()}>
-      <TextField label="Search titles" type="search" value={filter.q ?? ''} onChange={(event) => set({ q: event.target.value || undefined })} className="w-56" />
-      <Select label="Status" value={filter.status ?? ''} onChange={(event) => set({ status: (event.target.value || undefined) as PreparationStatus | undefined })} options={STATUS_OPTIONS} />
+    <form
+      role="search"
+      aria-label="Filter preparations"
+      className="mb-4 flex flex-wrap items-end gap-3"
+      onSubmit={(event) => event.preventDefault()}
+    >
+      <TextField
+        label="Search titles"
+        type="search"
+        value={filter.q ?? ''}
+        onChange={(event) => set({ q: event.target.value || undefined })}
+        className="w-56"
+      />
+      <Select
+        label="Status"
+        value={filter.status ?? ''}
+        onChange={(event) => set({ status: (event.target.value || undefined) as PreparationStatus | undefined })}
+        options={STATUS_OPTIONS}
+      />
       <Select
         label="Analyst"
         value={filter.analyst === undefined ? '' : String(filter.analyst)}
         onChange={(event) => set({ analyst: event.target.value ? Number(event.target.value) : undefined })}
-        options={[{ value: '', label: 'Anyone' }, ...analysts.map((analyst) => ({ value: String(analyst.id), label: analyst.name }))]}
+        options={[
+          { value: '', label: 'Anyone' },
+          ...analysts.map((analyst) => ({ value: String(analyst.id), label: analyst.name })),
+        ]}
       />
       <Select
         label="Material"
@@ -35,8 +54,18 @@ export function PreparationsFilters({ filter, analysts, materialCodes, onChange 
         onChange={(event) => set({ material: event.target.value || undefined })}
         options={[{ value: '', label: 'Any material' }, ...materialCodes.map((code) => ({ value: code, label: code }))]}
       />
-      <TextField label="Changed from" type="date" value={filter.from ?? ''} onChange={(event) => set({ from: event.target.value || undefined })} />
-      <TextField label="to" type="date" value={filter.to ?? ''} onChange={(event) => set({ to: event.target.value || undefined })} />
+      <TextField
+        label="Changed from"
+        type="date"
+        value={filter.from ?? ''}
+        onChange={(event) => set({ from: event.target.value || undefined })}
+      />
+      <TextField
+        label="to"
+        type="date"
+        value={filter.to ?? ''}
+        onChange={(event) => set({ to: event.target.value || undefined })}
+      />
     </form>
   );
 }

@@ -1,4 +1,12 @@
-import { createColumnHelper, createSortedRowModel, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures, useTable } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  createSortedRowModel,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  sortFn_basic,
+  tableFeatures,
+  useTable,
+} from '@tanstack/react-table';
 import { Link } from 'react-router';
 import type { PreparationSummary } from '../../../../shared/contracts/preparations';
 import { DataTable, SortButton } from '../../../components/ui/data-table';
@@ -6,7 +14,11 @@ import { formatDateTime } from '../../../lib/format-date';
 import { formatPercent, formatSignificant } from '../utils/format-number';
 import { StatusBadge } from './status-badge';
 
-const features = tableFeatures({ rowSortingFeature, sortedRowModel: createSortedRowModel(), sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic } });
+const features = tableFeatures({
+  rowSortingFeature,
+  sortedRowModel: createSortedRowModel(),
+  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic },
+});
 const column = createColumnHelper<typeof features, PreparationSummary>();
 
 type PreparationsTableProps = {
@@ -43,7 +55,12 @@ export function PreparationsTable({ preparations, hrefOf, selected, onToggle }: 
       ),
     }),
     column.accessor('analyte', { header: 'Analyte', sortFn: 'alphanumeric', cell: (info) => info.getValue() || '—' }),
-    column.accessor((row) => row.materialCode ?? '', { id: 'material', header: 'Material', sortFn: 'alphanumeric', cell: (info) => info.getValue() || '—' }),
+    column.accessor((row) => row.materialCode ?? '', {
+      id: 'material',
+      header: 'Material',
+      sortFn: 'alphanumeric',
+      cell: (info) => info.getValue() || '—',
+    }),
     column.accessor('createdBy', { header: 'Analyst', sortFn: 'alphanumeric', cell: (info) => info.getValue() }),
     column.accessor((row) => row.latestVersion.status, {
       id: 'status',
@@ -51,7 +68,8 @@ export function PreparationsTable({ preparations, hrefOf, selected, onToggle }: 
       sortFn: 'alphanumeric',
       cell: (info) => (
         <span className="whitespace-nowrap">
-          <StatusBadge status={info.getValue()} /> <span className="text-sm text-muted">v{info.row.original.latestVersion.number}</span>
+          <StatusBadge status={info.getValue()} />{' '}
+          <span className="text-sm text-muted">v{info.row.original.latestVersion.number}</span>
         </span>
       ),
     }),
@@ -65,7 +83,8 @@ export function PreparationsTable({ preparations, hrefOf, selected, onToggle }: 
           <span className="text-sm text-muted">not computable yet</span>
         ) : (
           <span className="numeric whitespace-nowrap">
-            {formatSignificant(row.value, 5)} {row.unit} <span className="text-sm text-muted">(U {formatPercent(row.relativeExpandedUncertainty ?? 0)})</span>
+            {formatSignificant(row.value, 5)} {row.unit}{' '}
+            <span className="text-sm text-muted">(U {formatPercent(row.relativeExpandedUncertainty ?? 0)})</span>
           </span>
         );
       },

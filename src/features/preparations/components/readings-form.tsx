@@ -7,9 +7,25 @@ import { describedBy, FieldMessages } from '../../../components/ui/field-message
 import { isApiError } from '../../../lib/api-error';
 import { formatDateTime } from '../../../lib/format-date';
 import { useRecordReadings } from '../api/record-readings';
-import { netFromGrossAndTare, placeServerIssues, readingsRequest, typedFromRecorded, weighingRows, type ReadingErrors, type TypedReading, type WeighingRow } from '../utils/bench-readings';
+import {
+  netFromGrossAndTare,
+  placeServerIssues,
+  readingsRequest,
+  typedFromRecorded,
+  weighingRows,
+  type ReadingErrors,
+  type TypedReading,
+  type WeighingRow,
+} from '../utils/bench-readings';
 
-type ReadingInputProps = { id: string; label: string; value: string; error?: string; hint?: string; onChange: (value: string) => void };
+type ReadingInputProps = {
+  id: string;
+  label: string;
+  value: string;
+  error?: string;
+  hint?: string;
+  onChange: (value: string) => void;
+};
 
 /** A mass box in the readings table: its label is read out ("Step 1 tare (g)") but the column header shows it. */
 function ReadingInput({ id, label, value, error, hint, onChange }: ReadingInputProps) {
@@ -61,14 +77,20 @@ export function ReadingsForm({ labId, detail, recordHref, onRecorded }: Readings
   }, [confirmation, recordedAt]);
 
   return (
-    <section aria-labelledby="record-readings-heading" className="mt-8 rounded-lg border border-ink bg-surface p-6 print:hidden">
+    <section
+      aria-labelledby="record-readings-heading"
+      className="mt-8 rounded-lg border border-ink bg-surface p-6 print:hidden"
+    >
       <h2 id="record-readings-heading" className="text-xl font-bold">
         {version.readings ? 'Correct the readings' : 'Record the readings'}
       </h2>
       {confirmation ? (
         <div ref={confirmationRef} tabIndex={-1} className="mt-3 outline-none">
           <Alert tone="ok" title={`Readings recorded: version ${confirmation.current.number} is prepared`}>
-            <p>The budget was recomputed on the masses weighed{confirmation.current.resultStatement ? `: ${confirmation.current.resultStatement}` : '.'}</p>
+            <p>
+              The budget was recomputed on the masses weighed
+              {confirmation.current.resultStatement ? `: ${confirmation.current.resultStatement}` : '.'}
+            </p>
             <p className="mt-1">
               <Link to={recordHref} className="font-semibold">
                 Open the record to check it and submit it for review
@@ -99,7 +121,10 @@ export function ReadingsForm({ labId, detail, recordHref, onRecorded }: Readings
 type TypedReadingsProps = {
   detail: PreparationDetail;
   pending: boolean;
-  onSubmit: (request: NonNullable<ReturnType<typeof readingsRequest>['request']>, onError: (error: unknown) => void) => void;
+  onSubmit: (
+    request: NonNullable<ReturnType<typeof readingsRequest>['request']>,
+    onError: (error: unknown) => void,
+  ) => void;
 };
 
 function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
@@ -121,10 +146,19 @@ function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
   const howNetHint = `${formId}-net-hint`;
 
   if (!version.snapshot) {
-    return <p className="mt-2">The plan cannot be computed yet{version.problem ? ` (${version.problem.message})` : ''}. Complete it in the workspace before recording what was weighed.</p>;
+    return (
+      <p className="mt-2">
+        The plan cannot be computed yet{version.problem ? ` (${version.problem.message})` : ''}. Complete it in the
+        workspace before recording what was weighed.
+      </p>
+    );
   }
   if (rows.length === 0) {
-    return <p className="mt-2">This plan has no weighing steps, so there are no masses to record. Submit it for review from its record page.</p>;
+    return (
+      <p className="mt-2">
+        This plan has no weighing steps, so there are no masses to record. Submit it for review from its record page.
+      </p>
+    );
   }
 
   const clearError = (path: string) =>
@@ -173,12 +207,14 @@ function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
     <form ref={formRef} noValidate onSubmit={submit} aria-labelledby="record-readings-heading" className="mt-2">
       {version.readings ? (
         <p className="text-muted">
-          Recorded by {version.readings.recordedBy}, <time dateTime={version.readings.recordedAt}>{formatDateTime(version.readings.recordedAt)}</time>. You can correct them until the version is
-          submitted for review.
+          Recorded by {version.readings.recordedBy},{' '}
+          <time dateTime={version.readings.recordedAt}>{formatDateTime(version.readings.recordedAt)}</time>. You can
+          correct them until the version is submitted for review.
         </p>
       ) : null}
       <p className="mt-1">
-        Enter what the balance showed for each weighing. The budget is then recomputed on the masses weighed; the planned masses stay in the record.
+        Enter what the balance showed for each weighing. The budget is then recomputed on the masses weighed; the
+        planned masses stay in the record.
       </p>
       <p id={howNetHint} className="mt-1 text-sm text-muted">
         Net fills in as gross − tare once both are typed; if you tared the balance, type the net alone.
@@ -253,7 +289,11 @@ function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
           aria-describedby={describedBy(fieldId('deviations'), 'hint', errors.deviations)}
           className={`rounded-md border bg-surface px-3 py-2 text-base text-ink ${errors.deviations ? 'border-danger' : 'border-line-strong'}`}
         />
-        <FieldMessages id={fieldId('deviations')} hint="Anything done differently from the plan (another flask, a spill and restart). Leave it empty if there was none." error={errors.deviations} />
+        <FieldMessages
+          id={fieldId('deviations')}
+          hint="Anything done differently from the plan (another flask, a spill and restart). Leave it empty if there was none."
+          error={errors.deviations}
+        />
       </div>
       {formError ? (
         <div className="mt-4">

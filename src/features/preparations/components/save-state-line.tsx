@@ -8,14 +8,14 @@ export function SaveStateLine({ state }: { state: SaveState }) {
     state.phase === 'unsaved'
       ? 'Not saved yet: it saves itself once the plan can be computed'
       : state.phase === 'saved'
-      ? state.at
-        ? `Saved at ${timeFormat.format(state.at)}`
-        : 'Saved'
-      : state.phase === 'saving'
-        ? 'Saving…'
-        : state.phase === 'waiting'
-          ? 'Changes not saved yet…'
-          : `Not saved: ${state.reason}`;
+        ? state.at
+          ? `Saved at ${timeFormat.format(state.at)}`
+          : 'Saved'
+        : state.phase === 'saving'
+          ? 'Saving…'
+          : state.phase === 'waiting'
+            ? 'Changes not saved yet…'
+            : `Not saved: ${state.reason}`;
   const tone = state.phase === 'failed' ? 'text-danger' : state.phase === 'saved' ? 'text-ok' : 'text-muted';
   return (
     <p role="status" className={`text-sm font-semibold ${tone}`} data-testid="save-state">

@@ -30,7 +30,8 @@ type StepCardProps = {
 
 /** One step of the plan: its equipment from the library, its mass or volume, its extra sources, and what it gives. */
 export function StepCard(props: StepCardProps) {
-  const { step, index, count, library, material, overrides, runningValue, warnings, errorAt, onChange, readOnly } = props;
+  const { step, index, count, library, material, overrides, runningValue, warnings, errorAt, onChange, readOnly } =
+    props;
   const info = STEP_KINDS[step.kind];
   const number = index + 1;
   const choices = info.slot ? library.filter((item) => SLOT_KINDS[info.slot!].includes(item.kind)) : [];
@@ -39,11 +40,16 @@ export function StepCard(props: StepCardProps) {
   const stepError = errorAt(`step-${index}`);
 
   return (
-    <li className={`rounded-lg border bg-surface p-4 ${stepError ? 'border-danger' : 'border-line'}`} aria-labelledby={`step-${step.key}-title`}>
+    <li
+      className={`rounded-lg border bg-surface p-4 ${stepError ? 'border-danger' : 'border-line'}`}
+      aria-labelledby={`step-${step.key}-title`}
+    >
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <h3 id={`step-${step.key}-title`} className="text-lg font-bold">
-            <span className="mr-2 inline-flex size-7 items-center justify-center rounded-full bg-ink text-sm text-paper">{number}</span>
+            <span className="mr-2 inline-flex size-7 items-center justify-center rounded-full bg-ink text-sm text-paper">
+              {number}
+            </span>
             {info.label}
           </h3>
           <p className="text-sm text-muted">{info.hint}</p>
@@ -51,10 +57,22 @@ export function StepCard(props: StepCardProps) {
         <div className="flex items-start gap-3">
           {readOnly ? null : (
             <div className="flex flex-wrap gap-1" role="group" aria-label={`Step ${number} actions`}>
-              <Button variant="quiet" size="small" disabled={index === 0} onClick={() => props.onMove(-1)} aria-label={`Move step ${number} up`}>
+              <Button
+                variant="quiet"
+                size="small"
+                disabled={index === 0}
+                onClick={() => props.onMove(-1)}
+                aria-label={`Move step ${number} up`}
+              >
                 ↑
               </Button>
-              <Button variant="quiet" size="small" disabled={index === count - 1} onClick={() => props.onMove(1)} aria-label={`Move step ${number} down`}>
+              <Button
+                variant="quiet"
+                size="small"
+                disabled={index === count - 1}
+                onClick={() => props.onMove(1)}
+                aria-label={`Move step ${number} down`}
+              >
                 ↓
               </Button>
               <Button variant="quiet" size="small" onClick={props.onDuplicate} aria-label={`Duplicate step ${number}`}>
@@ -82,9 +100,16 @@ export function StepCard(props: StepCardProps) {
             onChange={(event) => {
               const chosen = library.find((candidate) => String(candidate.id) === event.target.value);
               const nominal = chosen?.kind === 'glass-pipette' ? String(chosen.current.data.nominalMl) : step.quantity;
-              onChange({ ...step, equipmentId: event.target.value, quantity: step.kind === 'pipetteAliquot' ? nominal : step.quantity });
+              onChange({
+                ...step,
+                equipmentId: event.target.value,
+                quantity: step.kind === 'pipetteAliquot' ? nominal : step.quantity,
+              });
             }}
-            options={[{ value: '', label: 'Choose from the library…' }, ...choices.map((choice) => ({ value: String(choice.id), label: equipmentOptionLabel(choice) }))]}
+            options={[
+              { value: '', label: 'Choose from the library…' },
+              ...choices.map((choice) => ({ value: String(choice.id), label: equipmentOptionLabel(choice) })),
+            ]}
             error={errorAt(`step-${index}-equipment`)}
           />
         ) : null}

@@ -41,28 +41,49 @@ type WorkspaceProps = {
  * it cannot compute (with its problem) but refuses one that is not a plan document yet (a step without its
  * equipment, a mass that is not a number), so such a draft waits here until the marked field is filled.
  */
-export function writeOf(draft: PlanDraft, library: Map<string, EquipmentItem>): { write: PreparationWrite | null; blocked: string | null } {
+export function writeOf(
+  draft: PlanDraft,
+  library: Map<string, EquipmentItem>,
+): { write: PreparationWrite | null; blocked: string | null } {
   if (!draft.title.trim()) return { write: null, blocked: 'give the preparation a title.' };
   if (!draft.materialId) return { write: null, blocked: 'choose the reference material.' };
   const plan = storedPlan(draft, library);
   try {
     parsePlan(plan);
   } catch (error) {
-    if (error instanceof PlanError) return { write: null, blocked: `complete the plan first (${fieldMessage(error.message)})` };
+    if (error instanceof PlanError)
+      return { write: null, blocked: `complete the plan first (${fieldMessage(error.message)})` };
     throw error;
   }
-  return { write: { title: draft.title.trim(), plan, overrides: overridesToSave(draft), seed: draft.seed }, blocked: null };
+  return {
+    write: { title: draft.title.trim(), plan, overrides: overridesToSave(draft), seed: draft.seed },
+    blocked: null,
+  };
 }
 
 /**
  * The analyst's workspace: the plan editor with the live GUM budget beside it (recomputed on every change
  * with the shared engine and the lab policy), the budget table, charts, Monte Carlo in a worker and autosave.
  */
-export function Workspace({ initialDraft, savedKey, library, policy, editable, stored, save, onSaved, header, readings }: WorkspaceProps) {
+export function Workspace({
+  initialDraft,
+  savedKey,
+  library,
+  policy,
+  editable,
+  stored,
+  save,
+  onSaved,
+  header,
+  readings,
+}: WorkspaceProps) {
   const [draft, setDraft] = useState(initialDraft);
   const libraryById = useMemo(() => new Map(library.map((item) => [String(item.id), item])), [library]);
   // VF-25-A before VF-100-A: codes in natural order.
-  const sortedLibrary = useMemo(() => [...library].sort((a, b) => a.code.localeCompare(b.code, 'en', { numeric: true })), [library]);
+  const sortedLibrary = useMemo(
+    () => [...library].sort((a, b) => a.code.localeCompare(b.code, 'en', { numeric: true })),
+    [library],
+  );
   // The same plan (a renamed title, a retyped "0.1599") keeps the same result object, so the table and charts skip repainting.
   const previous = useRef<{ key: string; evaluation: DraftEvaluation } | null>(null);
   const evaluation = useMemo(() => {
@@ -80,7 +101,10 @@ export function Workspace({ initialDraft, savedKey, library, policy, editable, s
   const budget = shown?.budget ?? null;
   const liveProblem = stored ? null : evaluation.problem;
   const warnings = placedWarnings(budget, draft, libraryById);
-  const stepName = useMemo(() => stepNamer(draft.steps, draft.materialId, libraryById), [draft.steps, draft.materialId, libraryById]);
+  const stepName = useMemo(
+    () => stepNamer(draft.steps, draft.materialId, libraryById),
+    [draft.steps, draft.materialId, libraryById],
+  );
 
   const draftRef = useRef(draft);
   draftRef.current = draft;
@@ -122,7 +146,15 @@ export function Workspace({ initialDraft, savedKey, library, policy, editable, s
           <h2 id="plan-heading" className="sr-only">
             Plan
           </h2>
-          <PlanEditor draft={draft} onChange={setDraft} library={sortedLibrary} problem={liveProblem} budget={budget} warnings={warnings} readOnly={!editable} />
+          <PlanEditor
+            draft={draft}
+            onChange={setDraft}
+            library={sortedLibrary}
+            problem={liveProblem}
+            budget={budget}
+            warnings={warnings}
+            readOnly={!editable}
+          />
         </section>
         <aside aria-labelledby="result-heading" className="lg:sticky lg:top-4">
           <section className={`rounded-lg border bg-surface p-5 ${stale ? 'border-line opacity-60' : 'border-ink'}`}>
@@ -130,17 +162,30 @@ export function Workspace({ initialDraft, savedKey, library, policy, editable, s
               Result
             </h2>
             {stale && budget ? (
-              <p className="mb-2 text-sm font-semibold text-danger">Last valid result, shown until the marked field is fixed.</p>
+              <p className="mb-2 text-sm font-semibold text-danger">
+                Last valid result, shown until the marked field is fixed.
+              </p>
             ) : null}
-            {budget ? <ResultStatement budget={budget} /> : <p className="text-muted">The budget appears as soon as the plan is complete.</p>}
-            {stored ? <p className="mt-2 text-sm text-muted">As stored when this version was computed{readings ? ', on the masses weighed' : ''}.</p> : null}
+            {budget ? (
+              <ResultStatement budget={budget} />
+            ) : (
+              <p className="text-muted">The budget appears as soon as the plan is complete.</p>
+            )}
+            {stored ? (
+              <p className="mt-2 text-sm text-muted">
+                As stored when this version was computed{readings ? ', on the masses weighed' : ''}.
+              </p>
+            ) : null}
           </section>
           {warnings.filter((warning) => warning.stepIndex === null).length > 0 ? (
             <ul className="mt-3 space-y-1">
               {warnings
                 .filter((warning) => warning.stepIndex === null)
                 .map((warning) => (
-                  <li key={warning.text} className="rounded-md bg-caution-tint px-3 py-1.5 text-sm font-semibold text-caution">
+                  <li
+                    key={warning.text}
+                    className="rounded-md bg-caution-tint px-3 py-1.5 text-sm font-semibold text-caution"
+                  >
                     {warning.text}
                   </li>
                 ))}
@@ -149,7 +194,12 @@ export function Workspace({ initialDraft, savedKey, library, policy, editable, s
           {budget ? (
             <div className="mt-4 rounded-lg border border-line bg-surface p-4">
               <Suspense fallback={<LoadingLine label="Drawing the charts…" />}>
-                <ContributionCharts byStep={budget.byStep} byCategory={budget.byCategory} stepName={stepName} stale={stale} />
+                <ContributionCharts
+                  byStep={budget.byStep}
+                  byCategory={budget.byCategory}
+                  stepName={stepName}
+                  stale={stale}
+                />
               </Suspense>
             </div>
           ) : null}
@@ -171,7 +221,13 @@ export function Workspace({ initialDraft, savedKey, library, policy, editable, s
         <h2 id="monte-carlo-heading" className="mb-3 text-xl font-bold">
           Monte Carlo check
         </h2>
-        <MonteCarloPanel plan={monteCarloPlan} budget={budget} seed={draft.seed} onSeedChange={changeSeed} seedEditable={editable} />
+        <MonteCarloPanel
+          plan={monteCarloPlan}
+          budget={budget}
+          seed={draft.seed}
+          onSeedChange={changeSeed}
+          seedEditable={editable}
+        />
       </section>
     </>
   );

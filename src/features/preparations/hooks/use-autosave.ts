@@ -30,7 +30,9 @@ export function useAutosave(input: {
   const { write, blocked, enabled } = input;
   const key = write ? JSON.stringify(write) : null;
   // A preparation loaded from the server is saved as it stands; a new one has nothing saved yet.
-  const [state, setState] = useState<SaveState>(input.initialKey === null ? { phase: 'unsaved' } : { phase: 'saved', at: null });
+  const [state, setState] = useState<SaveState>(
+    input.initialKey === null ? { phase: 'unsaved' } : { phase: 'saved', at: null },
+  );
   const savedKey = useRef<string | null>(input.initialKey);
   const inFlight = useRef(false);
   const latest = useRef({ write, key, save: input.save, onSaved: input.onSaved });

@@ -41,7 +41,8 @@ export function useMonteCarlo(plan: PlanInput | null, seed: number, options: { a
     worker.onmessage = (event: MessageEvent<MonteCarloReply>) => {
       const reply = event.data;
       if (reply.runId !== runIdRef.current) return;
-      if (reply.type === 'progress') setState({ phase: 'running', trialsDone: reply.trialsDone, trialsPlanned: reply.trialsPlanned });
+      if (reply.type === 'progress')
+        setState({ phase: 'running', trialsDone: reply.trialsDone, trialsPlanned: reply.trialsPlanned });
       else if (reply.type === 'done') {
         setState({ phase: 'done', result: reply.result, planKey: key });
         stopWorker();
@@ -50,7 +51,8 @@ export function useMonteCarlo(plan: PlanInput | null, seed: number, options: { a
         stopWorker();
       }
     };
-    worker.onerror = () => setState({ phase: 'failed', message: 'The Monte Carlo worker stopped unexpectedly. Start it again.' });
+    worker.onerror = () =>
+      setState({ phase: 'failed', message: 'The Monte Carlo worker stopped unexpectedly. Start it again.' });
     setState({ phase: 'running', trialsDone: 0, trialsPlanned: BROWSER_TRIALS });
     const request: MonteCarloRequest = { type: 'start', runId, plan, seed, trials: BROWSER_TRIALS };
     worker.postMessage(request);

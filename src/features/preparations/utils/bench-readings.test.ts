@@ -1,10 +1,22 @@
 import { describe, expect, it } from 'vitest';
 import type { RecordedReadings } from '../../../../shared/contracts/preparations';
-import { netFromGrossAndTare, placeServerIssues, plannedPlan, readingsRequest, typedFromRecorded, weighingRows } from './bench-readings';
+import {
+  netFromGrossAndTare,
+  placeServerIssues,
+  plannedPlan,
+  readingsRequest,
+  typedFromRecorded,
+  weighingRows,
+} from './bench-readings';
 
 const plan = {
   steps: [
-    { kind: 'weighSolid', netMassG: 0.1599, balance: { itemId: 'BAL-05', readabilityG: 0.00001 }, material: { itemId: 'RM-PBN-01', name: 'Lead(II) nitrate' } },
+    {
+      kind: 'weighSolid',
+      netMassG: 0.1599,
+      balance: { itemId: 'BAL-05', readabilityG: 0.00001 },
+      material: { itemId: 'RM-PBN-01', name: 'Lead(II) nitrate' },
+    },
     { kind: 'makeUpToVolume', flask: { itemId: 'VF-100-A' } },
     { kind: 'weighAliquot', netMassG: 2.5, balance: { itemId: 'BAL-04', readabilityG: 0.0001 } },
   ],
@@ -40,11 +52,21 @@ describe('weighingRows', () => {
       recordedAt: '2026-12-02T10:00:00.000Z',
       recordedBy: 'Ana Analyst',
       deviations: '',
-      readings: [{ stepIndex: 0, field: 'netMassG', plannedG: 0.1599, actualG: 0.1602, tareG: 12.18577, grossG: 12.34597 }],
+      readings: [
+        { stepIndex: 0, field: 'netMassG', plannedG: 0.1599, actualG: 0.1602, tareG: 12.18577, grossG: 12.34597 },
+      ],
     };
     const weighed = { steps: [{ ...plan.steps[0], netMassG: 0.1602 }, plan.steps[1], plan.steps[2]] };
-    expect(weighingRows(weighed, readings)[0]).toMatchObject({ plannedG: 0.1599, plannedText: '0.15990', recorded: { actualG: 0.1602 } });
-    expect(typedFromRecorded(weighingRows(weighed, readings)[0])).toEqual({ tare: '12.18577', gross: '12.34597', net: '0.16020' });
+    expect(weighingRows(weighed, readings)[0]).toMatchObject({
+      plannedG: 0.1599,
+      plannedText: '0.15990',
+      recorded: { actualG: 0.1602 },
+    });
+    expect(typedFromRecorded(weighingRows(weighed, readings)[0])).toEqual({
+      tare: '12.18577',
+      gross: '12.34597',
+      net: '0.16020',
+    });
     expect((plannedPlan(weighed, readings).steps as { netMassG?: number }[])[0].netMassG).toBe(0.1599);
   });
 });
@@ -53,7 +75,14 @@ describe('readingsRequest', () => {
   const rows = weighingRows(plan, null);
 
   it('builds the request in the order of the rows, with tare and gross when typed', () => {
-    const result = readingsRequest(rows, [{ tare: '12.18577', gross: '12.34567', net: '0.15990' }, { tare: '', gross: '', net: '2,4988' }], ' Flask rinsed twice. ');
+    const result = readingsRequest(
+      rows,
+      [
+        { tare: '12.18577', gross: '12.34567', net: '0.15990' },
+        { tare: '', gross: '', net: '2,4988' },
+      ],
+      ' Flask rinsed twice. ',
+    );
     expect(result.request).toEqual({
       readings: [
         { stepIndex: 0, actualMassG: 0.1599, tareG: 12.18577, grossG: 12.34567 },
@@ -64,7 +93,14 @@ describe('readingsRequest', () => {
   });
 
   it('puts each problem on its field under the path the server uses', () => {
-    const result = readingsRequest(rows, [{ tare: '12.3', gross: '12.1', net: '' }, { tare: '', gross: '', net: '2.5g' }], '');
+    const result = readingsRequest(
+      rows,
+      [
+        { tare: '12.3', gross: '12.1', net: '' },
+        { tare: '', gross: '', net: '2.5g' },
+      ],
+      '',
+    );
     expect(result.errors).toEqual({
       'readings.0.grossG': 'The gross must be more than the tare.',
       'readings.0.actualMassG': 'Enter the net mass weighed, or the tare and gross.',
@@ -81,7 +117,10 @@ describe('placeServerIssues', () => {
       { path: 'plan.steps.2.netMassG', message: 'The aliquot is larger than the solution.' },
       { path: 'plan.settings', message: 'Something else.' },
     ]);
-    expect(placed.errors).toEqual({ 'readings.0.actualMassG': 'Gross − tare is 0.159900 g, not 0.16 g.', 'readings.1.actualMassG': 'The aliquot is larger than the solution.' });
+    expect(placed.errors).toEqual({
+      'readings.0.actualMassG': 'Gross − tare is 0.159900 g, not 0.16 g.',
+      'readings.1.actualMassG': 'The aliquot is larger than the solution.',
+    });
     expect(placed.unplaced).toEqual(['Something else.']);
   });
 });

@@ -1,4 +1,8 @@
-import { readingsRequestSchema, type ReadingsRequest, type RecordedReadings } from '../../../../shared/contracts/preparations';
+import {
+  readingsRequestSchema,
+  type ReadingsRequest,
+  type RecordedReadings,
+} from '../../../../shared/contracts/preparations';
 import { formatToReadability } from './format-number';
 import { parseDecimal } from './parse-decimal';
 
@@ -30,7 +34,8 @@ export type WeighingRow = {
 };
 
 /** A mass as the balance shows it (to its readability), or as stored when the readability is not known. */
-const asShown = (massG: number, readabilityG: number | null) => (readabilityG === null ? String(massG) : formatToReadability(massG, readabilityG));
+const asShown = (massG: number, readabilityG: number | null) =>
+  readabilityG === null ? String(massG) : formatToReadability(massG, readabilityG);
 
 const text = (value: unknown) => (typeof value === 'string' ? value : '');
 
@@ -118,7 +123,11 @@ const NOT_A_NUMBER = 'Enter the mass as a number, e.g. 0.15990.';
  * The readings request for the typed rows (in the order of `rows`), checked with the shared schema,
  * or the errors to show on the fields.
  */
-export function readingsRequest(rows: WeighingRow[], typed: TypedReading[], deviations: string): { request: ReadingsRequest; errors: null } | { request: null; errors: ReadingErrors } {
+export function readingsRequest(
+  rows: WeighingRow[],
+  typed: TypedReading[],
+  deviations: string,
+): { request: ReadingsRequest; errors: null } | { request: null; errors: ReadingErrors } {
   const errors: ReadingErrors = {};
   const readings = rows.map((row, index) => {
     const tareG = parseDecimal(typed[index]?.tare ?? '');
@@ -127,10 +136,16 @@ export function readingsRequest(rows: WeighingRow[], typed: TypedReading[], devi
     if (Number.isNaN(tareG)) errors[`readings.${index}.tareG`] = NOT_A_NUMBER;
     else if (tareG !== null && tareG < 0) errors[`readings.${index}.tareG`] = 'The tare cannot be negative.';
     if (Number.isNaN(grossG)) errors[`readings.${index}.grossG`] = NOT_A_NUMBER;
-    else if (grossG !== null && tareG !== null && !Number.isNaN(tareG) && grossG <= tareG) errors[`readings.${index}.grossG`] = 'The gross must be more than the tare.';
+    else if (grossG !== null && tareG !== null && !Number.isNaN(tareG) && grossG <= tareG)
+      errors[`readings.${index}.grossG`] = 'The gross must be more than the tare.';
     if (netG === null) errors[`readings.${index}.actualMassG`] = 'Enter the net mass weighed, or the tare and gross.';
     else if (Number.isNaN(netG)) errors[`readings.${index}.actualMassG`] = NOT_A_NUMBER;
-    return { stepIndex: row.stepIndex, actualMassG: netG ?? Number.NaN, ...(tareG === null ? {} : { tareG }), ...(grossG === null ? {} : { grossG }) };
+    return {
+      stepIndex: row.stepIndex,
+      actualMassG: netG ?? Number.NaN,
+      ...(tareG === null ? {} : { tareG }),
+      ...(grossG === null ? {} : { grossG }),
+    };
   });
   if (Object.keys(errors).length > 0) return { request: null, errors };
   const parsed = readingsRequestSchema.safeParse({ readings, deviations });
@@ -145,14 +160,21 @@ export function readingsRequest(rows: WeighingRow[], typed: TypedReading[], devi
  * Where a refused request's problems go on the form: field issues by their path; a plan the readings made
  * uncomputable ("plan.steps.0.netMassG") on the net mass of that step's row. Issues with no field are returned apart.
  */
-export function placeServerIssues(rows: WeighingRow[], issues: { path: string; message: string }[]): { errors: ReadingErrors; unplaced: string[] } {
+export function placeServerIssues(
+  rows: WeighingRow[],
+  issues: { path: string; message: string }[],
+): { errors: ReadingErrors; unplaced: string[] } {
   const errors: ReadingErrors = {};
   const unplaced: string[] = [];
   for (const issue of issues) {
     const planStep = /^plan\.steps\.(\d+)\./.exec(issue.path);
     const rowIndex = planStep ? rows.findIndex((row) => row.stepIndex === Number(planStep[1])) : -1;
-    const path = rowIndex >= 0 ? `readings.${rowIndex}.actualMassG` : issue.path.replace(/^readings\.(\d+)\.stepIndex$/, 'readings.$1.actualMassG');
-    if (/^readings\.\d+\.(tareG|grossG|actualMassG)$/.test(path) || path === 'deviations') errors[path] ??= issue.message;
+    const path =
+      rowIndex >= 0
+        ? `readings.${rowIndex}.actualMassG`
+        : issue.path.replace(/^readings\.(\d+)\.stepIndex$/, 'readings.$1.actualMassG');
+    if (/^readings\.\d+\.(tareG|grossG|actualMassG)$/.test(path) || path === 'deviations')
+      errors[path] ??= issue.message;
     else unplaced.push(issue.message);
   }
   return { errors, unplaced };

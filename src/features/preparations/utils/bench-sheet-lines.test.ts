@@ -6,7 +6,12 @@ describe('benchSheetLines', () => {
     const lines = benchSheetLines(
       {
         steps: [
-          { kind: 'weighSolid', netMassG: 0.1599, balance: { itemId: 'BAL-05', readabilityG: 0.00001 }, material: { itemId: 'RM-PBN-01', name: 'Lead(II) nitrate' } },
+          {
+            kind: 'weighSolid',
+            netMassG: 0.1599,
+            balance: { itemId: 'BAL-05', readabilityG: 0.00001 },
+            material: { itemId: 'RM-PBN-01', name: 'Lead(II) nitrate' },
+          },
           { kind: 'makeUpToVolume', flask: { itemId: 'VF-100-A', nominalMl: 100, toleranceClass: 'A' } },
           { kind: 'pipetteAliquot', volumeMl: 0.25, pipette: { kind: 'pistonPipette', itemId: 'PP-1000' } },
           { kind: 'weighAliquot', netMassG: 2.5, balance: { itemId: 'BAL-04', readabilityG: 0.0001 } },

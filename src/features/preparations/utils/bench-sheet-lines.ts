@@ -14,7 +14,8 @@ const text = (value: unknown) => (typeof value === 'string' ? value : '');
 const numberOf = (value: unknown) => (typeof value === 'number' ? value : Number.NaN);
 
 /** A balance's reading to its scale interval: 0.1599 g on a d = 0.00001 g balance reads "0.15990 g". */
-const onBalance = (massG: unknown, balance: Item) => `${formatToReadability(numberOf(massG), numberOf(balance.readabilityG))} g`;
+const onBalance = (massG: unknown, balance: Item) =>
+  `${formatToReadability(numberOf(massG), numberOf(balance.readabilityG))} g`;
 
 /**
  * The steps of a computed plan (inline equipment) as bench instructions: target masses to each balance's
@@ -60,11 +61,26 @@ export function benchSheetLines(plan: Record<string, unknown>, labTemperatureC: 
         return { stepNumber, action, equipment: [text(pipette.itemId)], readings: 'volume' };
       }
       case 'weighAliquot':
-        return { stepNumber, action: `Weigh ${onBalance(step.netMassG, balance)} of the solution by difference on ${text(balance.itemId)}.`, equipment: [text(balance.itemId)], readings: 'weighing' };
+        return {
+          stepNumber,
+          action: `Weigh ${onBalance(step.netMassG, balance)} of the solution by difference on ${text(balance.itemId)}.`,
+          equipment: [text(balance.itemId)],
+          readings: 'weighing',
+        };
       case 'makeUpToMass':
-        return { stepNumber, action: `Add solvent to a total solution mass of ${onBalance(step.finalMassG, balance)} on ${text(balance.itemId)}; mix.`, equipment: [text(balance.itemId)], readings: 'weighing' };
+        return {
+          stepNumber,
+          action: `Add solvent to a total solution mass of ${onBalance(step.finalMassG, balance)} on ${text(balance.itemId)}; mix.`,
+          equipment: [text(balance.itemId)],
+          readings: 'weighing',
+        };
       case 'dissolveInSolvent':
-        return { stepNumber, action: `Dissolve in ${onBalance(step.solventMassG, balance)} of solvent weighed on ${text(balance.itemId)}.`, equipment: [text(balance.itemId)], readings: 'weighing' };
+        return {
+          stepNumber,
+          action: `Dissolve in ${onBalance(step.solventMassG, balance)} of solvent weighed on ${text(balance.itemId)}.`,
+          equipment: [text(balance.itemId)],
+          readings: 'weighing',
+        };
       default:
         return { stepNumber, action: `Step ${stepNumber}: ${text(step.kind)}.`, equipment: [], readings: 'none' };
     }

@@ -13,7 +13,11 @@ export const DOMINANT_STEP_PERCENT = 50;
  * The warnings of a live budget: the engine's own (minimum weight), a step contributing more than half
  * of the variance, and every flagged library item the plan uses (calibration due or overdue, expiring material).
  */
-export function placedWarnings(budget: BudgetResult | null, draft: PlanDraft, library: Map<string, EquipmentItem>): PlacedWarning[] {
+export function placedWarnings(
+  budget: BudgetResult | null,
+  draft: PlanDraft,
+  library: Map<string, EquipmentItem>,
+): PlacedWarning[] {
   const warnings: PlacedWarning[] = [];
   for (const text of budget?.warnings ?? []) {
     const step = /^Step (\d+)/.exec(text);
@@ -30,10 +34,12 @@ export function placedWarnings(budget: BudgetResult | null, draft: PlanDraft, li
     }
   }
   const material = library.get(draft.materialId);
-  if (material && material.flags.length > 0) warnings.push({ stepIndex: 0, text: `${material.code}: ${material.flags.join('; ')}.` });
+  if (material && material.flags.length > 0)
+    warnings.push({ stepIndex: 0, text: `${material.code}: ${material.flags.join('; ')}.` });
   draft.steps.forEach((step, index) => {
     const item = library.get(step.equipmentId);
-    if (item && item.flags.length > 0) warnings.push({ stepIndex: index, text: `${item.code}: ${item.flags.join('; ')}.` });
+    if (item && item.flags.length > 0)
+      warnings.push({ stepIndex: index, text: `${item.code}: ${item.flags.join('; ')}.` });
   });
   return warnings;
 }

@@ -7,10 +7,12 @@ export function equipmentOptionLabel(item: EquipmentItem): string {
   const fields = data(item);
   const facts: string[] = [];
   if (item.kind === 'balance') facts.push(`d = ${fields.readabilityG} g`, `max ${fields.capacityG} g`);
-  if (item.kind === 'flask' || item.kind === 'glass-pipette') facts.push(`${fields.nominalMl} mL`, `class ${fields.glassClass}`, `± ${fields.toleranceMl} mL`);
+  if (item.kind === 'flask' || item.kind === 'glass-pipette')
+    facts.push(`${fields.nominalMl} mL`, `class ${fields.glassClass}`, `± ${fields.toleranceMl} mL`);
   if (item.kind === 'piston-pipette') facts.push(`${fields.minVolumeUl}–${fields.maxVolumeUl} µL`);
   if (item.kind === 'solid-material') facts.push(String(fields.formula), `purity ${fields.purity}`);
-  if (item.kind === 'solution-material') facts.push(`${fields.analyte} ${fields.certifiedValue} ${fields.certifiedUnit}`);
+  if (item.kind === 'solution-material')
+    facts.push(`${fields.analyte} ${fields.certifiedValue} ${fields.certifiedUnit}`);
   const flags = item.flags.length > 0 ? ` — ${item.flags.join('; ')}` : '';
   return `${item.code} (${facts.join(', ')})${flags}`;
 }

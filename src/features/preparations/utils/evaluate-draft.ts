@@ -19,21 +19,32 @@ const OVERRIDE_MESSAGE = 'Say why this item may be used, in a few words (at leas
 export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>): PlanProblem | null {
   const material = library.get(draft.materialId);
   if (!draft.materialId) return { path: ['material'], message: 'Choose the reference material.' };
-  if (!material) return { path: ['material'], message: 'This material is no longer in the library (retired or removed). Choose another.' };
+  if (!material)
+    return {
+      path: ['material'],
+      message: 'This material is no longer in the library (retired or removed). Choose another.',
+    };
   if (needsOverride(material) && (draft.overrides[material.id] ?? '').trim().length < 3) {
-    return { path: ['material', 'override'], message: `${material.code}: ${material.flags.join('; ')}. ${OVERRIDE_MESSAGE}` };
+    return {
+      path: ['material', 'override'],
+      message: `${material.code}: ${material.flags.join('; ')}. ${OVERRIDE_MESSAGE}`,
+    };
   }
-  if (!draft.analyte.trim()) return { path: ['analyte', 'formula'], message: 'Enter the analyte as a formula, e.g. Pb.' };
-  if (Number.isNaN(parseDecimal(draft.labTemperatureC))) return { path: ['settings', 'labTemperatureC'], message: 'Enter the lab temperature as a number, e.g. 20.' };
+  if (!draft.analyte.trim())
+    return { path: ['analyte', 'formula'], message: 'Enter the analyte as a formula, e.g. Pb.' };
+  if (Number.isNaN(parseDecimal(draft.labTemperatureC)))
+    return { path: ['settings', 'labTemperatureC'], message: 'Enter the lab temperature as a number, e.g. 20.' };
   if (draft.steps.length === 0) return { path: ['steps'], message: 'Add the steps of the preparation.' };
   for (const [index, step] of draft.steps.entries()) {
     const info = STEP_KINDS[step.kind];
-    if (isStartKind(step.kind) && index !== 0) return { path: ['steps', index], message: 'The material is weighed or taken only in the first step.' };
+    if (isStartKind(step.kind) && index !== 0)
+      return { path: ['steps', index], message: 'The material is weighed or taken only in the first step.' };
     if (info.slot) {
       const path = ['steps', index, info.slot];
       const item = library.get(step.equipmentId);
       if (!step.equipmentId) return { path, message: `Choose the ${info.slot} from the library.` };
-      if (!item) return { path, message: 'This item is no longer in the library (retired or removed). Choose another.' };
+      if (!item)
+        return { path, message: 'This item is no longer in the library (retired or removed). Choose another.' };
       if (!SLOT_KINDS[info.slot].includes(item.kind)) return { path, message: `${item.code} is not a ${info.slot}.` };
       if (needsOverride(item) && (draft.overrides[item.id] ?? '').trim().length < 3) {
         return { path: [...path, 'override'], message: `${item.code}: ${item.flags.join('; ')}. ${OVERRIDE_MESSAGE}` };
@@ -43,17 +54,26 @@ export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>
     if (info.quantity && !glass) {
       const value = parseDecimal(step.quantity);
       const path = ['steps', index, info.quantity.field];
-      if (value === null) return { path, message: `Enter the ${info.quantity.label.toLowerCase()} in ${info.quantity.unit}.` };
-      if (Number.isNaN(value)) return { path, message: `Enter the ${info.quantity.label.toLowerCase()} as a number, e.g. ${info.quantity.unit === 'g' ? '0.1600' : '10'}.` };
+      if (value === null)
+        return { path, message: `Enter the ${info.quantity.label.toLowerCase()} in ${info.quantity.unit}.` };
+      if (Number.isNaN(value))
+        return {
+          path,
+          message: `Enter the ${info.quantity.label.toLowerCase()} as a number, e.g. ${info.quantity.unit === 'g' ? '0.1600' : '10'}.`,
+        };
     }
     if (info.container && Number.isNaN(parseDecimal(step.containerMassG))) {
-      return { path: ['steps', index, 'containerMassG'], message: 'Enter the container mass as a number in g, or leave it empty.' };
+      return {
+        path: ['steps', index, 'containerMassG'],
+        message: 'Enter the container mass as a number in g, or leave it empty.',
+      };
     }
     for (const [sourceIndex, source] of step.extraSources.entries()) {
       const path = ['steps', index, 'extraSources', sourceIndex];
       if (!source.name.trim()) return { path: [...path, 'name'], message: 'Name the source, e.g. evaporation.' };
       const amount = parseDecimal(source.amount);
-      if (amount === null || Number.isNaN(amount)) return { path: [...path, 'distribution'], message: 'Enter the width as a number.' };
+      if (amount === null || Number.isNaN(amount))
+        return { path: [...path, 'distribution'], message: 'Enter the width as a number.' };
     }
   }
   return null;
@@ -69,16 +89,23 @@ export function fieldMessage(message: string): string {
  * revisions inline, the lab policy applied with withPolicy, the same engine. Minimum-weight warnings
  * are dropped when the policy switches the rule off (as the server does).
  */
-export function evaluateDraft(draft: PlanDraft, library: Map<string, EquipmentItem>, policy: LabPolicy): DraftEvaluation {
+export function evaluateDraft(
+  draft: PlanDraft,
+  library: Map<string, EquipmentItem>,
+  policy: LabPolicy,
+): DraftEvaluation {
   const problem = checkDraft(draft, library);
   if (problem) return { ok: false, budget: null, plan: null, problem };
   const plan = withPolicy(enginePlan(draft, library), policy);
   try {
     const budget = evaluatePlan(plan);
-    const warnings = policy.minimumWeightRule ? budget.warnings : budget.warnings.filter((warning) => !/minimum weight|USP/i.test(warning));
+    const warnings = policy.minimumWeightRule
+      ? budget.warnings
+      : budget.warnings.filter((warning) => !/minimum weight|USP/i.test(warning));
     return { ok: true, budget: { ...budget, warnings }, plan, problem: null };
   } catch (error) {
-    if (error instanceof PlanError) return { ok: false, budget: null, plan: null, problem: { path: error.path, message: error.message } };
+    if (error instanceof PlanError)
+      return { ok: false, budget: null, plan: null, problem: { path: error.path, message: error.message } };
     throw error;
   }
 }

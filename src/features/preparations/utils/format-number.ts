@@ -4,7 +4,10 @@ export function formatSignificant(value: number, digits = 3): string {
   if (value === 0) return '0';
   const magnitude = Math.abs(value);
   if (magnitude >= 1e-4 && magnitude < 1e7) return Number(value.toPrecision(digits)).toString();
-  return value.toExponential(digits - 1).replace('e', '×10^').replace('+', '');
+  return value
+    .toExponential(digits - 1)
+    .replace('e', '×10^')
+    .replace('+', '');
 }
 
 /** An uncertainty to `digits` significant digits, trailing zeros kept ("0.10", "0.0050"). */
@@ -13,7 +16,10 @@ export function formatUncertainty(value: number, digits = 2): string {
   if (value === 0) return '0';
   const magnitude = Math.abs(value);
   if (magnitude >= 1e-4 && magnitude < 1e7) return value.toPrecision(digits).replace(/e\+?(-?\d+)$/, '×10^$1');
-  return value.toExponential(digits - 1).replace('e', '×10^').replace('+', '');
+  return value
+    .toExponential(digits - 1)
+    .replace('e', '×10^')
+    .replace('+', '');
 }
 
 /** "0.36 %" for 0.0036. */

@@ -6,7 +6,11 @@ import { problemField } from './problem-field';
 
 /** The demo lead standard: 0.1599 g of Pb(NO3)2 on BAL-05 into VF-100-A, then 10 mL (GP-10-A) into VF-100-B. */
 function leadStandard(): PlanDraft {
-  const step = (kind: Parameters<typeof emptyStep>[0], equipmentId: string, quantity = '') => ({ ...emptyStep(kind), equipmentId, quantity });
+  const step = (kind: Parameters<typeof emptyStep>[0], equipmentId: string, quantity = '') => ({
+    ...emptyStep(kind),
+    equipmentId,
+    quantity,
+  });
   return {
     title: 'Pb 100 mg/L',
     materialId: '8',
@@ -15,7 +19,12 @@ function leadStandard(): PlanDraft {
     labTemperatureC: '20',
     overrides: {},
     seed: 42,
-    steps: [step('weighSolid', '1', '0.1599'), step('makeUpToVolume', '3'), step('pipetteAliquot', '6', '10'), step('makeUpToVolume', '4')],
+    steps: [
+      step('weighSolid', '1', '0.1599'),
+      step('makeUpToVolume', '3'),
+      step('pipetteAliquot', '6', '10'),
+      step('makeUpToVolume', '4'),
+    ],
   };
 }
 
@@ -48,7 +57,10 @@ describe('the live budget of a draft', () => {
     draft.steps[0] = { ...draft.steps[0], equipmentId: '2' };
     const refused = evaluateDraft(draft, DEMO_LIBRARY_BY_ID, DEMO_POLICY);
     expect(refused.ok ? null : problemField(refused.problem)).toBe('step-0-override');
-    const reasoned = { ...draft, overrides: { '2': 'Checked with a 100 g weight today', '5': 'VF-250-A is not in this plan' } };
+    const reasoned = {
+      ...draft,
+      overrides: { '2': 'Checked with a 100 g weight today', '5': 'VF-250-A is not in this plan' },
+    };
     expect(evaluateDraft(reasoned, DEMO_LIBRARY_BY_ID, DEMO_POLICY).ok).toBe(true);
     expect(overridesToSave(reasoned)).toEqual([{ libraryId: '2', reason: 'Checked with a 100 g weight today' }]);
   });

@@ -55,11 +55,22 @@ export function emptyStep(kind: StepKind): DraftStep {
 }
 
 export function emptyDraft(seed: number = randomSeed()): PlanDraft {
-  return { title: '', materialId: '', analyte: '', outputUnit: 'mg/L', labTemperatureC: '20', steps: [], overrides: {}, seed };
+  return {
+    title: '',
+    materialId: '',
+    analyte: '',
+    outputUnit: 'mg/L',
+    labTemperatureC: '20',
+    steps: [],
+    overrides: {},
+    seed,
+  };
 }
 
-const isRecord = (value: unknown): value is Record<string, unknown> => typeof value === 'object' && value !== null && !Array.isArray(value);
-const text = (value: unknown) => (typeof value === 'number' && Number.isFinite(value) ? String(value) : typeof value === 'string' ? value : '');
+const isRecord = (value: unknown): value is Record<string, unknown> =>
+  typeof value === 'object' && value !== null && !Array.isArray(value);
+const text = (value: unknown) =>
+  typeof value === 'number' && Number.isFinite(value) ? String(value) : typeof value === 'string' ? value : '';
 const libraryIdOf = (value: unknown) => (isRecord(value) && typeof value.libraryId === 'string' ? value.libraryId : '');
 
 function extraSourceFromPlan(source: unknown): DraftExtraSource | null {
@@ -73,11 +84,20 @@ function extraSourceFromPlan(source: unknown): DraftExtraSource | null {
         ? distribution.standardUncertainty
         : Number(distribution.expandedUncertainty) / Number(distribution.coverageFactor)
       : distribution.halfWidth;
-  return { key: newKey('source'), name: text(source.name), effect: source.effect === 'absolute' ? 'absolute' : 'relative', shape, amount: text(amount) };
+  return {
+    key: newKey('source'),
+    name: text(source.name),
+    effect: source.effect === 'absolute' ? 'absolute' : 'relative',
+    shape,
+    amount: text(amount),
+  };
 }
 
 /** Reads a stored plan document (or a route finder's plan) back into the editor, exactly as it was saved. */
-export function draftFromPlan(plan: Record<string, unknown>, extras: { title: string; overrides: { libraryId: string; reason: string }[]; seed: number }): PlanDraft {
+export function draftFromPlan(
+  plan: Record<string, unknown>,
+  extras: { title: string; overrides: { libraryId: string; reason: string }[]; seed: number },
+): PlanDraft {
   const settings = isRecord(plan.settings) ? plan.settings : {};
   const steps = Array.isArray(plan.steps) ? plan.steps.filter(isRecord) : [];
   const start = steps.find((step) => step.kind === 'weighSolid' || step.kind === 'startFromCertifiedSolution');
@@ -90,7 +110,10 @@ export function draftFromPlan(plan: Record<string, unknown>, extras: { title: st
     overrides: Object.fromEntries(extras.overrides.map((override) => [override.libraryId, override.reason])),
     seed: extras.seed,
     steps: steps
-      .filter((step): step is Record<string, unknown> & { kind: StepKind } => typeof step.kind === 'string' && step.kind in STEP_KINDS)
+      .filter(
+        (step): step is Record<string, unknown> & { kind: StepKind } =>
+          typeof step.kind === 'string' && step.kind in STEP_KINDS,
+      )
       .map((step) => {
         const info = STEP_KINDS[step.kind];
         return {
@@ -98,17 +121,22 @@ export function draftFromPlan(plan: Record<string, unknown>, extras: { title: st
           kind: step.kind,
           equipmentId: info.slot ? libraryIdOf(step[info.slot]) : '',
           quantity: info.quantity ? text(step[info.quantity.field]) : '',
-          containerMassG: step.containerMassG === undefined || step.containerMassG === 0 ? '' : text(step.containerMassG),
-          extraSources: (Array.isArray(step.extraSources) ? step.extraSources : []).map(extraSourceFromPlan).filter((source) => source !== null),
+          containerMassG:
+            step.containerMassG === undefined || step.containerMassG === 0 ? '' : text(step.containerMassG),
+          extraSources: (Array.isArray(step.extraSources) ? step.extraSources : [])
+            .map(extraSourceFromPlan)
+            .filter((source) => source !== null),
         };
       }),
   };
 }
 
-
 function extraSourceToPlan(source: DraftExtraSource) {
   const amount = parseDecimal(source.amount) ?? Number.NaN;
-  const distribution = source.shape === 'normal' ? { shape: 'normal', standardUncertainty: amount } : { shape: source.shape, halfWidth: amount };
+  const distribution =
+    source.shape === 'normal'
+      ? { shape: 'normal', standardUncertainty: amount }
+      : { shape: source.shape, halfWidth: amount };
   return { name: source.name.trim(), effect: source.effect, distribution };
 }
 
@@ -127,7 +155,10 @@ function buildPlan(draft: PlanDraft, library: Map<string, EquipmentItem>, withTi
     if (info.quantity) {
       const item = library.get(step.equipmentId);
       // A one-mark glass pipette delivers its nominal volume, whatever was typed.
-      const glassVolume = step.kind === 'pipetteAliquot' && item?.kind === 'glass-pipette' ? (item.current.data.nominalMl as number) : undefined;
+      const glassVolume =
+        step.kind === 'pipetteAliquot' && item?.kind === 'glass-pipette'
+          ? (item.current.data.nominalMl as number)
+          : undefined;
       const typed = parseDecimal(step.quantity);
       out[info.quantity.field] = glassVolume ?? (typed === null ? undefined : typed);
     }
@@ -143,7 +174,10 @@ function buildPlan(draft: PlanDraft, library: Map<string, EquipmentItem>, withTi
     formatVersion: 1,
     ...(withTitle && draft.title.trim() ? { title: draft.title.trim() } : {}),
     analyte: { formula: draft.analyte.trim() },
-    settings: { outputUnit: draft.outputUnit as PlanInput['settings']['outputUnit'], ...(temperature === null ? {} : { labTemperatureC: temperature }) },
+    settings: {
+      outputUnit: draft.outputUnit as PlanInput['settings']['outputUnit'],
+      ...(temperature === null ? {} : { labTemperatureC: temperature }),
+    },
     steps: steps as PlanInput['steps'],
   };
 }

@@ -33,7 +33,8 @@ export function planFigures(plan: Record<string, unknown>): PlanFigures {
   for (const [index, step] of steps.entries()) {
     if (step.kind === 'weighSolid') materialUsed = { massG: numberOf(step.netMassG) };
     if (step.kind === 'pipetteAliquot' || step.kind === 'weighAliquot') {
-      const taken: { volumeMl: number } | { massG: number } = step.kind === 'pipetteAliquot' ? { volumeMl: numberOf(step.volumeMl) } : { massG: numberOf(step.netMassG) };
+      const taken: { volumeMl: number } | { massG: number } =
+        step.kind === 'pipetteAliquot' ? { volumeMl: numberOf(step.volumeMl) } : { massG: numberOf(step.netMassG) };
       if (index > 0 && steps[index - 1].kind === 'startFromCertifiedSolution') materialUsed = taken;
       else dilutionSteps += 1;
       if (open && 'volumeMl' in open) wasteMl += open.volumeMl - ('volumeMl' in taken ? taken.volumeMl : 0);
@@ -55,7 +56,10 @@ export function dominantStep(budget: BudgetResult) {
  * One sentence answering "does one more dilution step lower the total uncertainty?" for two variants:
  * compares their relative expanded uncertainties (at two significant digits) and their number of dilutions.
  */
-export function dilutionComparison(first: { title: string; dilutionSteps: number; relativeU: number }, second: { title: string; dilutionSteps: number; relativeU: number }): string {
+export function dilutionComparison(
+  first: { title: string; dilutionSteps: number; relativeU: number },
+  second: { title: string; dilutionSteps: number; relativeU: number },
+): string {
   const percent = (value: number) => `${(value * 100).toPrecision(2)} %`;
   const [fewer, more] = first.dilutionSteps <= second.dilutionSteps ? [first, second] : [second, first];
   const sameU = percent(fewer.relativeU) === percent(more.relativeU);
@@ -63,6 +67,10 @@ export function dilutionComparison(first: { title: string; dilutionSteps: number
   if (extra === 0) {
     return `“${first.title}” and “${second.title}” both use ${first.dilutionSteps} dilution ${first.dilutionSteps === 1 ? 'step' : 'steps'}; relative U ${percent(first.relativeU)} against ${percent(second.relativeU)}${sameU ? ': the same' : `: “${first.relativeU < second.relativeU ? first.title : second.title}” is lower`}.`;
   }
-  const effect = sameU ? 'does not change the total uncertainty' : more.relativeU < fewer.relativeU ? 'lowers the total uncertainty' : 'raises the total uncertainty';
+  const effect = sameU
+    ? 'does not change the total uncertainty'
+    : more.relativeU < fewer.relativeU
+      ? 'lowers the total uncertainty'
+      : 'raises the total uncertainty';
   return `“${more.title}” uses ${extra} more dilution ${extra === 1 ? 'step' : 'steps'} than “${fewer.title}” (${more.dilutionSteps} against ${fewer.dilutionSteps}); relative U ${percent(more.relativeU)} against ${percent(fewer.relativeU)}: the extra ${extra === 1 ? 'step' : 'steps'} ${effect}.`;
 }

@@ -11,11 +11,14 @@ export function problemField(problem: PlanProblem): string {
   if (first === 'title') return 'title';
   if (first === 'material') return second === 'override' ? 'materialOverride' : 'material';
   if (first === 'analyte') return 'analyte';
-  if (first === 'settings') return second === 'outputUnit' ? 'outputUnit' : second === 'labTemperatureC' ? 'labTemperatureC' : 'plan';
+  if (first === 'settings')
+    return second === 'outputUnit' ? 'outputUnit' : second === 'labTemperatureC' ? 'labTemperatureC' : 'plan';
   if (first === 'steps' && typeof second === 'number') {
     if (third === 'material') return 'material';
-    if (third === 'balance' || third === 'flask' || third === 'pipette') return fourth === 'override' ? `step-${second}-override` : `step-${second}-equipment`;
-    if (third === 'netMassG' || third === 'volumeMl' || third === 'finalMassG' || third === 'solventMassG') return `step-${second}-quantity`;
+    if (third === 'balance' || third === 'flask' || third === 'pipette')
+      return fourth === 'override' ? `step-${second}-override` : `step-${second}-equipment`;
+    if (third === 'netMassG' || third === 'volumeMl' || third === 'finalMassG' || third === 'solventMassG')
+      return `step-${second}-quantity`;
     if (third === 'containerMassG') return `step-${second}-container`;
     if (third === 'extraSources' && typeof fourth === 'number') return `step-${second}-source-${fourth}`;
     return `step-${second}`;

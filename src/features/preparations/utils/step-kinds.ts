@@ -73,7 +73,13 @@ export const STEP_KINDS: Record<StepKind, StepKindInfo> = {
 };
 
 /** Steps the analyst may add after the start (the start follows from the material). */
-export const ADDABLE_STEP_KINDS: StepKind[] = ['makeUpToVolume', 'pipetteAliquot', 'weighAliquot', 'makeUpToMass', 'dissolveInSolvent'];
+export const ADDABLE_STEP_KINDS: StepKind[] = [
+  'makeUpToVolume',
+  'pipetteAliquot',
+  'weighAliquot',
+  'makeUpToMass',
+  'dissolveInSolvent',
+];
 
 /** Which library kinds fill each slot. */
 export const SLOT_KINDS: Record<EquipmentSlot, EquipmentKind[]> = {
@@ -83,6 +89,7 @@ export const SLOT_KINDS: Record<EquipmentSlot, EquipmentKind[]> = {
 };
 
 /** The step that starts a plan from a material of this kind. */
-export const startKindFor = (materialKind: EquipmentKind): StepKind => (materialKind === 'solution-material' ? 'startFromCertifiedSolution' : 'weighSolid');
+export const startKindFor = (materialKind: EquipmentKind): StepKind =>
+  materialKind === 'solution-material' ? 'startFromCertifiedSolution' : 'weighSolid';
 
 export const isStartKind = (kind: StepKind) => kind === 'weighSolid' || kind === 'startFromCertifiedSolution';

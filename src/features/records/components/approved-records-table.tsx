@@ -1,4 +1,12 @@
-import { createColumnHelper, createSortedRowModel, rowSortingFeature, sortFn_alphanumeric, sortFn_basic, tableFeatures, useTable } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  createSortedRowModel,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  sortFn_basic,
+  tableFeatures,
+  useTable,
+} from '@tanstack/react-table';
 import { Link } from 'react-router';
 import type { ApprovedRecord } from '../../../../shared/contracts/reviews';
 import { DataTable, SortButton } from '../../../components/ui/data-table';
@@ -20,7 +28,10 @@ const columnsFor = (labId: number) =>
       header: 'Preparation',
       sortFn: 'alphanumeric',
       cell: (info) => (
-        <Link to={paths.app.record.href(info.row.original.preparationId, info.row.original.versionNumber)} className="font-semibold">
+        <Link
+          to={paths.app.record.href(info.row.original.preparationId, info.row.original.versionNumber)}
+          className="font-semibold"
+        >
           {info.getValue()}
         </Link>
       ),
@@ -28,7 +39,10 @@ const columnsFor = (labId: number) =>
     column.accessor('analyte', { header: 'Analyte', sortFn: 'alphanumeric' }),
     column.accessor('versionNumber', { header: 'Version', sortFn: 'basic', cell: (info) => `v${info.getValue()}` }),
     column.accessor('analyst', { header: 'Analyst', sortFn: 'alphanumeric' }),
-    column.accessor('approvedBy', { header: () => <span className="whitespace-nowrap">Approved by</span>, sortFn: 'alphanumeric' }),
+    column.accessor('approvedBy', {
+      header: () => <span className="whitespace-nowrap">Approved by</span>,
+      sortFn: 'alphanumeric',
+    }),
     column.accessor('approvedAt', {
       header: 'Approved',
       sortFn: 'alphanumeric',
@@ -38,7 +52,11 @@ const columnsFor = (labId: number) =>
         </time>
       ),
     }),
-    column.accessor('resultStatement', { header: 'Result', enableSorting: false, cell: (info) => info.getValue() ?? '—' }),
+    column.accessor('resultStatement', {
+      header: 'Result',
+      enableSorting: false,
+      cell: (info) => info.getValue() ?? '—',
+    }),
     column.accessor('snapshotSha256', {
       header: 'SHA-256',
       enableSorting: false,
@@ -55,10 +73,18 @@ const columnsFor = (labId: number) =>
         const { preparationId, versionNumber, title } = row.original;
         return (
           <span className="flex gap-3 whitespace-nowrap">
-            <a href={recordPdfUrl(labId, preparationId, versionNumber)} download aria-label={`Signed PDF of ${title}, version ${versionNumber}`}>
+            <a
+              href={recordPdfUrl(labId, preparationId, versionNumber)}
+              download
+              aria-label={`Signed PDF of ${title}, version ${versionNumber}`}
+            >
               PDF
             </a>
-            <a href={snapshotJsonUrl(labId, preparationId, versionNumber)} download aria-label={`Snapshot JSON of ${title}, version ${versionNumber}`}>
+            <a
+              href={snapshotJsonUrl(labId, preparationId, versionNumber)}
+              download
+              aria-label={`Snapshot JSON of ${title}, version ${versionNumber}`}
+            >
               JSON
             </a>
           </span>
@@ -68,7 +94,15 @@ const columnsFor = (labId: number) =>
   ]);
 
 /** The lab's approved versions, newest approval first until a heading is chosen. */
-export function ApprovedRecordsTable({ labId, records, search }: { labId: number; records: ApprovedRecord[]; search: string }) {
+export function ApprovedRecordsTable({
+  labId,
+  records,
+  search,
+}: {
+  labId: number;
+  records: ApprovedRecord[];
+  search: string;
+}) {
   const table = useTable({
     features,
     columns: columnsFor(labId),
@@ -98,9 +132,15 @@ export function ApprovedRecordsTable({ labId, records, search }: { labId: number
             <table.FlexRender header={header} />
           )
         }
-        cellClassName={(cell) => `${cell.column.id === 'title' ? 'min-w-44' : ''} ${cell.column.id === 'resultStatement' ? 'min-w-56' : ''}`}
+        cellClassName={(cell) =>
+          `${cell.column.id === 'title' ? 'min-w-44' : ''} ${cell.column.id === 'resultStatement' ? 'min-w-56' : ''}`
+        }
       >
-        {rows.length === 0 ? <p className="p-4 text-muted">{search ? `No approved record matches “${search}”.` : 'Nothing has been approved in this lab yet.'}</p> : null}
+        {rows.length === 0 ? (
+          <p className="p-4 text-muted">
+            {search ? `No approved record matches “${search}”.` : 'Nothing has been approved in this lab yet.'}
+          </p>
+        ) : null}
       </DataTable>
       <p className="mt-2 text-sm text-muted">
         {rows.length} approved {rows.length === 1 ? 'record' : 'records'}. Select a column heading to sort by it.

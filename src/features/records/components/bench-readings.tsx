@@ -7,7 +7,11 @@ import { RecordTable, type RecordTableFeatures } from './record-table';
 type Reading = RecordedReadings['readings'][number];
 const column = createColumnHelper<RecordTableFeatures, Reading>();
 const NUMERIC = new Set(['plannedG', 'actualG', 'differenceMg', 'differencePercent', 'tareG', 'grossG']);
-const FIELD_WORDS: Record<Reading['field'], string> = { netMassG: 'net mass', finalMassG: 'final solution mass', solventMassG: 'solvent mass' };
+const FIELD_WORDS: Record<Reading['field'], string> = {
+  netMassG: 'net mass',
+  finalMassG: 'final solution mass',
+  solventMassG: 'solvent mass',
+};
 
 /** The readability d (g) of the balance each step of the computed plan weighs on, by step index. */
 function readabilities(plan: Record<string, unknown> | undefined): (stepIndex: number) => number | undefined {
@@ -19,7 +23,8 @@ function readabilities(plan: Record<string, unknown> | undefined): (stepIndex: n
 }
 
 /** A mass as the balance shows it: to its readability, or five decimals (0.01 mg) when it is not known. */
-const grams = (value: number | null, readabilityG: number | undefined) => (value === null ? '—' : value.toFixed(readabilityG ? Math.max(0, Math.round(-Math.log10(readabilityG))) : 5));
+const grams = (value: number | null, readabilityG: number | undefined) =>
+  value === null ? '—' : value.toFixed(readabilityG ? Math.max(0, Math.round(-Math.log10(readabilityG))) : 5);
 
 type BenchReadingsProps = {
   readings: RecordedReadings;
@@ -41,20 +46,42 @@ export function BenchReadings({ readings, stepName, plan }: BenchReadingsProps) 
         </>
       ),
     }),
-    column.accessor('plannedG', { header: () => <span className="whitespace-nowrap">Planned (g)</span>, cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)) }),
-    column.accessor('actualG', { header: () => <span className="whitespace-nowrap">Weighed (g)</span>, cell: (info) => <span className="font-semibold">{grams(info.getValue(), readabilityOf(info.row.original.stepIndex))}</span> }),
+    column.accessor('plannedG', {
+      header: () => <span className="whitespace-nowrap">Planned (g)</span>,
+      cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)),
+    }),
+    column.accessor('actualG', {
+      header: () => <span className="whitespace-nowrap">Weighed (g)</span>,
+      cell: (info) => (
+        <span className="font-semibold">{grams(info.getValue(), readabilityOf(info.row.original.stepIndex))}</span>
+      ),
+    }),
     column.display({
       id: 'differenceMg',
       header: () => <span className="whitespace-nowrap">Difference (mg)</span>,
-      cell: ({ row }) => <span className="whitespace-nowrap">{massDifference(row.original.plannedG, row.original.actualG, readabilityOf(row.original.stepIndex)).mg}</span>,
+      cell: ({ row }) => (
+        <span className="whitespace-nowrap">
+          {massDifference(row.original.plannedG, row.original.actualG, readabilityOf(row.original.stepIndex)).mg}
+        </span>
+      ),
     }),
     column.display({
       id: 'differencePercent',
       header: () => <span className="whitespace-nowrap">Difference (%)</span>,
-      cell: ({ row }) => <span className="whitespace-nowrap">{massDifference(row.original.plannedG, row.original.actualG, readabilityOf(row.original.stepIndex)).percent}</span>,
+      cell: ({ row }) => (
+        <span className="whitespace-nowrap">
+          {massDifference(row.original.plannedG, row.original.actualG, readabilityOf(row.original.stepIndex)).percent}
+        </span>
+      ),
     }),
-    column.accessor('tareG', { header: 'Tare (g)', cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)) }),
-    column.accessor('grossG', { header: 'Gross (g)', cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)) }),
+    column.accessor('tareG', {
+      header: 'Tare (g)',
+      cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)),
+    }),
+    column.accessor('grossG', {
+      header: 'Gross (g)',
+      cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)),
+    }),
   ]);
   return (
     <section aria-labelledby="readings-heading">
@@ -62,12 +89,24 @@ export function BenchReadings({ readings, stepName, plan }: BenchReadingsProps) 
         Planned and actual
       </h2>
       <p className="mb-3 text-muted">
-        Readings recorded by {readings.recordedBy}, <time dateTime={readings.recordedAt}>{formatDateTime(readings.recordedAt)}</time>. The result and the budget use the masses weighed.
+        Readings recorded by {readings.recordedBy},{' '}
+        <time dateTime={readings.recordedAt}>{formatDateTime(readings.recordedAt)}</time>. The result and the budget use
+        the masses weighed.
       </p>
-      <RecordTable caption="Masses weighed beside the planned masses" columns={columns} data={readings.readings} rowId={(reading) => `${reading.stepIndex}-${reading.field}`} numericColumns={NUMERIC} />
+      <RecordTable
+        caption="Masses weighed beside the planned masses"
+        columns={columns}
+        data={readings.readings}
+        rowId={(reading) => `${reading.stepIndex}-${reading.field}`}
+        numericColumns={NUMERIC}
+      />
       <p className="mt-2" data-testid="deviations">
         <span className="font-semibold">Deviations from the plan:</span>{' '}
-        {readings.deviations ? <span className="whitespace-pre-line">{readings.deviations}</span> : <span className="text-muted">none noted</span>}
+        {readings.deviations ? (
+          <span className="whitespace-pre-line">{readings.deviations}</span>
+        ) : (
+          <span className="text-muted">none noted</span>
+        )}
       </p>
     </section>
   );

@@ -10,7 +10,10 @@ const NUMERIC = new Set(['contribution', 'indexPercent']);
 /** Contributions by step with each one's share of the combined variance; the full budget is in the workspace and the PDF. */
 export function BudgetSummary({ budget, stepName }: { budget: BudgetResult; stepName: (key: string) => string }) {
   const columns = column.columns([
-    column.accessor('key', { header: 'Step', cell: (info) => <span className="font-semibold">{stepName(info.getValue())}</span> }),
+    column.accessor('key', {
+      header: 'Step',
+      cell: (info) => <span className="font-semibold">{stepName(info.getValue())}</span>,
+    }),
     column.accessor('contribution', {
       header: () => (
         <>
@@ -24,7 +27,10 @@ export function BudgetSummary({ budget, stepName }: { budget: BudgetResult; step
       cell: (info) => (
         <span className="inline-flex items-center justify-end gap-2">
           <span aria-hidden="true" className="h-2 w-24 overflow-hidden rounded-full bg-paper">
-            <span className="block h-full rounded-full bg-accent" style={{ width: `${Math.min(100, Math.max(0, info.getValue()))}%` }} />
+            <span
+              className="block h-full rounded-full bg-accent"
+              style={{ width: `${Math.min(100, Math.max(0, info.getValue()))}%` }}
+            />
           </span>
           <span className="w-16">{formatPercentOfVariance(info.getValue())}</span>
         </span>
@@ -37,11 +43,19 @@ export function BudgetSummary({ budget, stepName }: { budget: BudgetResult; step
         Uncertainty budget by step
       </h2>
       <p className="mb-3 text-muted">
-        Combined standard uncertainty u<sub>c</sub> = <span className="numeric">{formatSignificant(budget.standardUncertainty)}</span> {budget.unit}, effective
-        degrees of freedom ν<sub>eff</sub> = <span className="numeric">{formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)}</span>. Every source row is in the
-        PDF record.
+        Combined standard uncertainty u<sub>c</sub> ={' '}
+        <span className="numeric">{formatSignificant(budget.standardUncertainty)}</span> {budget.unit}, effective
+        degrees of freedom ν<sub>eff</sub> ={' '}
+        <span className="numeric">{formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)}</span>. Every source row is
+        in the PDF record.
       </p>
-      <RecordTable caption={`Contributions to u(${budget.measurand}) by step`} columns={columns} data={budget.byStep} rowId={(row) => row.key} numericColumns={NUMERIC} />
+      <RecordTable
+        caption={`Contributions to u(${budget.measurand}) by step`}
+        columns={columns}
+        data={budget.byStep}
+        rowId={(row) => row.key}
+        numericColumns={NUMERIC}
+      />
     </section>
   );
 }

@@ -11,7 +11,10 @@ const kindWords = (kind: string) => {
 };
 
 const columns = column.columns([
-  column.accessor('code', { header: 'ID', cell: (info) => <span className="font-semibold whitespace-nowrap">{info.getValue()}</span> }),
+  column.accessor('code', {
+    header: 'ID',
+    cell: (info) => <span className="font-semibold whitespace-nowrap">{info.getValue()}</span>,
+  }),
   column.accessor('kind', { header: 'Kind', cell: (info) => kindWords(info.getValue()) }),
   column.accessor('revisionNumber', { header: 'Revision' }),
   column.accessor('certificateReference', { header: 'Certificate', cell: (info) => info.getValue() || '—' }),
@@ -47,7 +50,12 @@ export function EquipmentUsed({ items }: { items: UsedItem[] }) {
         Equipment and materials used
       </h2>
       {items.length > 0 ? (
-        <RecordTable caption="Library items with the revision the budget used" columns={columns} data={items} rowId={(item) => item.revisionId} />
+        <RecordTable
+          caption="Library items with the revision the budget used"
+          columns={columns}
+          data={items}
+          rowId={(item) => item.revisionId}
+        />
       ) : (
         <p className="text-muted">The plan uses no library items.</p>
       )}

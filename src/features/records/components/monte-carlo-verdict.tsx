@@ -13,14 +13,18 @@ export function MonteCarloVerdict({ monteCarlo, validation, unit }: MonteCarloVe
         <h2 id="monte-carlo-heading" className="text-lg font-bold">
           Monte Carlo check
         </h2>
-        <Badge tone={validation.passed ? 'ok' : 'caution'}>{validation.passed ? 'GUM result confirmed' : 'GUM result not confirmed'}</Badge>
+        <Badge tone={validation.passed ? 'ok' : 'caution'}>
+          {validation.passed ? 'GUM result confirmed' : 'GUM result not confirmed'}
+        </Badge>
       </div>
       <p>{validationWords(validation, unit)}</p>
       <p className="mt-2 text-sm text-muted">
-        <span className="numeric">{monteCarlo.trials.toLocaleString('en-GB')}</span> trials, seed <span className="numeric">{monteCarlo.seed}</span>; symmetric{' '}
+        <span className="numeric">{monteCarlo.trials.toLocaleString('en-GB')}</span> trials, seed{' '}
+        <span className="numeric">{monteCarlo.seed}</span>; symmetric{' '}
         {(monteCarlo.coverageProbability * 100).toFixed(2)} % interval{' '}
         <span className="numeric whitespace-nowrap">
-          [{formatSignificant(monteCarlo.symmetricInterval.low, 6)}, {formatSignificant(monteCarlo.symmetricInterval.high, 6)}] {unit}
+          [{formatSignificant(monteCarlo.symmetricInterval.low, 6)},{' '}
+          {formatSignificant(monteCarlo.symmetricInterval.high, 6)}] {unit}
         </span>
         .
       </p>

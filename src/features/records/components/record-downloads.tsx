@@ -12,14 +12,24 @@ export function RecordDownloads({ labId, preparationId, versionNumber, approved 
         Downloads
       </h2>
       <div className="flex flex-wrap gap-2">
-        <a href={recordPdfUrl(labId, preparationId, versionNumber)} download className={`${LINK} border-ink bg-ink text-paper hover:bg-ink-soft`}>
+        <a
+          href={recordPdfUrl(labId, preparationId, versionNumber)}
+          download
+          className={`${LINK} border-ink bg-ink text-paper hover:bg-ink-soft`}
+        >
           {approved ? 'Download signed PDF' : 'Download draft PDF'}
         </a>
-        <a href={snapshotJsonUrl(labId, preparationId, versionNumber)} download className={`${LINK} border-line-strong bg-surface text-ink hover:bg-paper`}>
+        <a
+          href={snapshotJsonUrl(labId, preparationId, versionNumber)}
+          download
+          className={`${LINK} border-line-strong bg-surface text-ink hover:bg-paper`}
+        >
           Download snapshot JSON
         </a>
       </div>
-      {approved ? null : <p className="mt-2 text-sm text-muted">Until it is approved, the PDF carries a DRAFT watermark.</p>}
+      {approved ? null : (
+        <p className="mt-2 text-sm text-muted">Until it is approved, the PDF carries a DRAFT watermark.</p>
+      )}
     </section>
   );
 }

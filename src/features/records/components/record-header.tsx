@@ -25,7 +25,16 @@ export function RecordHeader({ preparation, version, actions }: RecordHeaderProp
     ['Version started', <When key="started" at={version.createdAt} />],
     ['Last computed', version.snapshot ? <When key="computed" at={version.snapshot.computedAt} /> : 'Not computed'],
     ...(submitted ? ([['Submitted', <When key="submitted" at={submitted.at} />]] as [string, ReactNode][]) : []),
-    ...(approved ? ([['Approved', <span key="approved">{approved.actor}, <When at={approved.at} /></span>]] as [string, ReactNode][]) : []),
+    ...(approved
+      ? ([
+          [
+            'Approved',
+            <span key="approved">
+              {approved.actor}, <When at={approved.at} />
+            </span>,
+          ],
+        ] as [string, ReactNode][])
+      : []),
   ];
   return (
     <header className="mb-6 border-b border-line pb-4">

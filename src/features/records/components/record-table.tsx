@@ -15,7 +15,14 @@ type RecordTableProps<Row extends RowData> = {
 };
 
 /** A plain read-only table of the record page (no sorting: the rows keep the record's own order). */
-export function RecordTable<Row extends RowData>({ caption, visibleCaption = false, columns, data, rowId, numericColumns = new Set() }: RecordTableProps<Row>) {
+export function RecordTable<Row extends RowData>({
+  caption,
+  visibleCaption = false,
+  columns,
+  data,
+  rowId,
+  numericColumns = new Set(),
+}: RecordTableProps<Row>) {
   const table = useTable({ features: recordTableFeatures, columns, data, getRowId: rowId });
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface">
@@ -25,7 +32,11 @@ export function RecordTable<Row extends RowData>({ caption, visibleCaption = fal
           {table.getHeaderGroups().map((headerGroup) => (
             <tr key={headerGroup.id}>
               {headerGroup.headers.map((header) => (
-                <th key={header.id} scope="col" className={`px-3 py-2 align-bottom font-semibold ${numericColumns.has(header.column.id) ? 'text-right' : ''}`}>
+                <th
+                  key={header.id}
+                  scope="col"
+                  className={`px-3 py-2 align-bottom font-semibold ${numericColumns.has(header.column.id) ? 'text-right' : ''}`}
+                >
                   <table.FlexRender header={header} />
                 </th>
               ))}
@@ -36,7 +47,10 @@ export function RecordTable<Row extends RowData>({ caption, visibleCaption = fal
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className="border-b border-line align-top last:border-b-0">
               {row.getAllCells().map((cell) => (
-                <td key={cell.id} className={`px-3 py-2 ${numericColumns.has(cell.column.id) ? 'numeric text-right' : ''}`}>
+                <td
+                  key={cell.id}
+                  className={`px-3 py-2 ${numericColumns.has(cell.column.id) ? 'numeric text-right' : ''}`}
+                >
                   <table.FlexRender cell={cell} />
                 </td>
               ))}

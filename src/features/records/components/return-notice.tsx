@@ -3,7 +3,8 @@ import { formatDateTime } from '../../../lib/format-date';
 
 /** While a version is back with its analyst: who returned it, when, and the comments, above everything else. */
 export function ReturnNotice({ version }: { version: VersionDetail }) {
-  const lastReturn = version.status === 'returned' ? version.reviews.findLast((review) => review.action === 'returned') : undefined;
+  const lastReturn =
+    version.status === 'returned' ? version.reviews.findLast((review) => review.action === 'returned') : undefined;
   if (!lastReturn) return null;
   return (
     <div role="status" className="rounded-md border-l-4 border-caution bg-caution-tint px-4 py-3 text-ink">

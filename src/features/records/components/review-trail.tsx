@@ -21,9 +21,13 @@ export function ReviewTrail({ reviews }: { reviews: Review[] }) {
           {reviews.map((review) => {
             const words = ACTION_WORDS[review.action];
             return (
-              <li key={review.id} className={`rounded-md border border-l-4 border-line bg-surface px-4 py-3 ${words.mark}`}>
+              <li
+                key={review.id}
+                className={`rounded-md border border-l-4 border-line bg-surface px-4 py-3 ${words.mark}`}
+              >
                 <p>
-                  <span className="font-bold">{words.verb}</span> by {review.actor}, <time dateTime={review.at}>{formatDateTime(review.at)}</time>
+                  <span className="font-bold">{words.verb}</span> by {review.actor},{' '}
+                  <time dateTime={review.at}>{formatDateTime(review.at)}</time>
                 </p>
                 {review.comment ? (
                   <div className="mt-1">

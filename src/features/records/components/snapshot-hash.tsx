@@ -14,11 +14,18 @@ export function SnapshotHash({ labId, preparationId, versionNumber, sha256 }: Sn
       <h2 id="hash-heading" className="mb-2 text-lg font-bold">
         Snapshot fingerprint
       </h2>
-      <p className="text-sm text-muted">SHA-256 of the stored snapshot (plan, equipment revisions, engine version, seed and results):</p>
+      <p className="text-sm text-muted">
+        SHA-256 of the stored snapshot (plan, equipment revisions, engine version, seed and results):
+      </p>
       <p className="my-2 font-mono text-sm break-all" data-testid="snapshot-sha256">
         {sha256}
       </p>
-      <Button variant="secondary" onClick={() => verify.mutate({ labId, preparationId, versionNumber })} pending={verify.isPending} pendingLabel="Verifying…">
+      <Button
+        variant="secondary"
+        onClick={() => verify.mutate({ labId, preparationId, versionNumber })}
+        pending={verify.isPending}
+        pendingLabel="Verifying…"
+      >
         Verify
       </Button>
       <div className="mt-3" aria-live="polite">
@@ -32,11 +39,17 @@ export function SnapshotHash({ labId, preparationId, versionNumber, sha256 }: Sn
               <p>{result.message}</p>
               <p className="mt-1 font-mono text-sm break-all">Now: {result.computedSha256}</p>
               <p className="font-mono text-sm break-all">Recorded: {result.storedSha256 ?? '—'}</p>
-              {result.approvedSha256 ? <p className="font-mono text-sm break-all">Signed: {result.approvedSha256}</p> : null}
+              {result.approvedSha256 ? (
+                <p className="font-mono text-sm break-all">Signed: {result.approvedSha256}</p>
+              ) : null}
             </Alert>
           )
         ) : null}
-        {verify.isError ? <Alert tone="danger">{isApiError(verify.error) ? verify.error.message : 'The check could not run. Try again.'}</Alert> : null}
+        {verify.isError ? (
+          <Alert tone="danger">
+            {isApiError(verify.error) ? verify.error.message : 'The check could not run. Try again.'}
+          </Alert>
+        ) : null}
       </div>
     </section>
   );

@@ -8,7 +8,8 @@ export function formatSignificant(value: number, digits = 2): string {
 }
 
 /** "12.3 %" for a percentage already scaled to 0–100. */
-export const formatPercentOfVariance = (indexPercent: number) => `${indexPercent < 0.1 && indexPercent > 0 ? '< 0.1' : indexPercent.toFixed(1)} %`;
+export const formatPercentOfVariance = (indexPercent: number) =>
+  `${indexPercent < 0.1 && indexPercent > 0 ? '< 0.1' : indexPercent.toFixed(1)} %`;
 
 /** The first and last characters of a SHA-256, enough to tell records apart at a glance. */
 export const shortHash = (sha256: string) => `${sha256.slice(0, 8)}…${sha256.slice(-4)}`;

@@ -10,11 +10,23 @@ function signed(text: string): string {
  *
  * @example massDifference(0.1599, 0.1602, 0.00001) // { mg: "+0.30", percent: "+0.19" }
  */
-export function massDifference(plannedG: number, weighedG: number, readabilityG?: number): { mg: string; percent: string } {
+export function massDifference(
+  plannedG: number,
+  weighedG: number,
+  readabilityG?: number,
+): { mg: string; percent: string } {
   const differenceMg = (weighedG - plannedG) * 1000;
   const decimals = readabilityG && readabilityG > 0 ? Math.max(0, Math.round(-Math.log10(readabilityG)) - 3) : 2;
   const mg = signed(differenceMg.toFixed(decimals));
   const relativePercent = plannedG > 0 ? ((weighedG - plannedG) / plannedG) * 100 : Number.NaN;
-  const percent = !Number.isFinite(relativePercent) ? '—' : mg.replace(/^[+−]/, '') === (0).toFixed(decimals) ? '0' : signed(Math.abs(relativePercent) >= 10 ? String(Number(relativePercent.toPrecision(2))) : relativePercent.toPrecision(2));
+  const percent = !Number.isFinite(relativePercent)
+    ? '—'
+    : mg.replace(/^[+−]/, '') === (0).toFixed(decimals)
+      ? '0'
+      : signed(
+          Math.abs(relativePercent) >= 10
+            ? String(Number(relativePercent.toPrecision(2)))
+            : relativePercent.toPrecision(2),
+        );
   return { mg, percent };
 }

@@ -17,7 +17,11 @@ const used = (libraryId: string, code: string): UsedItem => ({
 // An invented two-step plan in the plan format's shape (only the fields the namer reads).
 const plan = {
   steps: [
-    { kind: 'weighSolid', material: { libraryId: '9', itemId: 'RM-PBN-01' }, balance: { libraryId: '1', itemId: 'BAL-05' } },
+    {
+      kind: 'weighSolid',
+      material: { libraryId: '9', itemId: 'RM-PBN-01' },
+      balance: { libraryId: '1', itemId: 'BAL-05' },
+    },
     { kind: 'makeUpToVolume', flask: { libraryId: '4', itemId: 'asset-77' } },
   ],
 };

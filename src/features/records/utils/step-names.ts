@@ -33,7 +33,11 @@ export function stepNamer(plan: Record<string, unknown>, items: UsedItem[]): (ke
   return (key) => {
     const indices = key.split('+').map(Number);
     if (indices.some((index) => !Number.isInteger(index))) return key;
-    if (indices.length > 1) return `Shared by steps ${indices.slice(0, -1).map((index) => index + 1).join(', ')} and ${indices[indices.length - 1] + 1}`;
+    if (indices.length > 1)
+      return `Shared by steps ${indices
+        .slice(0, -1)
+        .map((index) => index + 1)
+        .join(', ')} and ${indices[indices.length - 1] + 1}`;
     const step = steps[indices[0]];
     if (!step) return `Step ${indices[0] + 1}`;
     const slot = SLOTS.find((name) => name in step);

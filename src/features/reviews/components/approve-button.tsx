@@ -19,7 +19,11 @@ export function ApproveButton({ version, onReviewed }: { version: VersionReferen
   const approve = useApproveVersion(onReviewed);
   const [open, setOpen] = useState(false);
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, reset, resetField, setError, formState } = useForm<ApproveValues, unknown, z.output<typeof approveRequestSchema>>({
+  const { register, handleSubmit, reset, resetField, setError, formState } = useForm<
+    ApproveValues,
+    unknown,
+    z.output<typeof approveRequestSchema>
+  >({
     resolver: zodResolver(approveRequestSchema),
     defaultValues: { statement: '', password: '' },
   });
@@ -46,10 +50,17 @@ export function ApproveButton({ version, onReviewed }: { version: VersionReferen
   return (
     <>
       <Button onClick={() => setOpen(true)}>Approve and sign</Button>
-      <FormDialog open={open} title={`Approve and sign version ${version.versionNumber}`} submitLabel="Approve and sign" pending={approve.isPending} onSubmit={onSubmit} onClose={close}>
+      <FormDialog
+        open={open}
+        title={`Approve and sign version ${version.versionNumber}`}
+        submitLabel="Approve and sign"
+        pending={approve.isPending}
+        onSubmit={onSubmit}
+        onClose={close}
+      >
         <p>
-          Your password is your signature: entering it here signs this approval in your name, with the date, on the record and its PDF. An approved version never
-          changes.
+          Your password is your signature: entering it here signs this approval in your name, with the date, on the
+          record and its PDF. An approved version never changes.
         </p>
         {formError ? <Alert tone="danger">{formError}</Alert> : null}
         <TextAreaField
@@ -59,7 +70,13 @@ export function ApproveButton({ version, onReviewed }: { version: VersionReferen
           error={errors.statement?.message}
           {...register('statement')}
         />
-        <TextField label="Your password" type="password" autoComplete="current-password" error={errors.password?.message} {...register('password')} />
+        <TextField
+          label="Your password"
+          type="password"
+          autoComplete="current-password"
+          error={errors.password?.message}
+          {...register('password')}
+        />
       </FormDialog>
     </>
   );

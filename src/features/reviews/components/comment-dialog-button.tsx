@@ -18,7 +18,10 @@ type CommentDialogButtonProps = {
   /** The request's schema: a comment, required or not. */
   schema: z.ZodType<CommentRequest, { comment?: string }>;
   /** The review action the dialog sends. */
-  mutation: Pick<UseMutationResult<PreparationDetail, Error, VersionReference & { request: CommentRequest }>, 'mutate' | 'isPending'>;
+  mutation: Pick<
+    UseMutationResult<PreparationDetail, Error, VersionReference & { request: CommentRequest }>,
+    'mutate' | 'isPending'
+  >;
   variant?: 'primary' | 'secondary';
   /** The words on the button that opens the dialog and on the one that sends it. */
   label: string;
@@ -29,10 +32,23 @@ type CommentDialogButtonProps = {
 };
 
 /** A button that opens a dialog with one comment box and sends a review action with that comment. */
-export function CommentDialogButton({ version, schema, mutation, variant, label, title, explanation, commentField }: CommentDialogButtonProps) {
+export function CommentDialogButton({
+  version,
+  schema,
+  mutation,
+  variant,
+  label,
+  title,
+  explanation,
+  commentField,
+}: CommentDialogButtonProps) {
   const [open, setOpen] = useState(false);
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, reset, setError, formState } = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
+  const { register, handleSubmit, reset, setError, formState } = useForm<
+    z.input<typeof schema>,
+    unknown,
+    z.output<typeof schema>
+  >({
     resolver: zodResolver(schema),
     defaultValues: { comment: '' },
   });
@@ -43,14 +59,24 @@ export function CommentDialogButton({ version, schema, mutation, variant, label,
   };
   const onSubmit = handleSubmit((request) => {
     setFormError(null);
-    mutation.mutate({ ...version, request }, { onSuccess: close, onError: (error) => setFormError(applyApiError(error, setError, ['comment'])) });
+    mutation.mutate(
+      { ...version, request },
+      { onSuccess: close, onError: (error) => setFormError(applyApiError(error, setError, ['comment'])) },
+    );
   });
   return (
     <>
       <Button variant={variant} onClick={() => setOpen(true)}>
         {label}
       </Button>
-      <FormDialog open={open} title={title} submitLabel={label} pending={mutation.isPending} onSubmit={onSubmit} onClose={close}>
+      <FormDialog
+        open={open}
+        title={title}
+        submitLabel={label}
+        pending={mutation.isPending}
+        onSubmit={onSubmit}
+        onClose={close}
+      >
         <p>{explanation}</p>
         {formError ? <Alert tone="danger">{formError}</Alert> : null}
         <TextAreaField {...commentField} error={formState.errors.comment?.message} {...register('comment')} />

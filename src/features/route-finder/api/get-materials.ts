@@ -15,7 +15,8 @@ export async function getMaterials(labId: number): Promise<EquipmentItem[]> {
   return [...solids, ...solutions];
 }
 
-export const materialsQueryOptions = (labId: number) => queryOptions({ queryKey: routeFinderKeys.materials(labId), queryFn: () => getMaterials(labId) });
+export const materialsQueryOptions = (labId: number) =>
+  queryOptions({ queryKey: routeFinderKeys.materials(labId), queryFn: () => getMaterials(labId) });
 
 export function useMaterials(labId: number): EquipmentItem[] {
   return useSuspenseQuery(materialsQueryOptions(labId)).data;

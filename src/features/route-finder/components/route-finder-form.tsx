@@ -16,7 +16,8 @@ type RouteFinderFormProps = {
   onSubmit: (request: RouteFinderRequest) => void;
 };
 
-const analyteOf = (item: EquipmentItem | undefined) => (typeof item?.current.data.analyte === 'string' ? item.current.data.analyte : '');
+const analyteOf = (item: EquipmentItem | undefined) =>
+  typeof item?.current.data.analyte === 'string' ? item.current.data.analyte : '';
 
 /** Target, analyte, material and the most dilutions allowed. */
 export function RouteFinderForm({ materials, pending, onSubmit }: RouteFinderFormProps) {
@@ -38,11 +39,28 @@ export function RouteFinderForm({ materials, pending, onSubmit }: RouteFinderFor
         if (!materialId) return setError('Choose the reference material.');
         if (!analyte.trim()) return setError('Enter the analyte, e.g. Se.');
         setError(null);
-        onSubmit({ target: { value: target, unit }, analyte: analyte.trim(), materialLibraryId: materialId, maximumDilutions: Number(maximumDilutions), limit: 10 });
+        onSubmit({
+          target: { value: target, unit },
+          analyte: analyte.trim(),
+          materialLibraryId: materialId,
+          maximumDilutions: Number(maximumDilutions),
+          limit: 10,
+        });
       }}
     >
-      <TextField label="Target concentration" inputMode="decimal" value={value} onChange={(event) => setValue(event.target.value)} className="md:col-span-1" />
-      <Select label="Unit" value={unit} onChange={(event) => isTargetUnit(event.target.value) && setUnit(event.target.value)} options={TARGET_UNITS.map((each) => ({ value: each, label: each }))} />
+      <TextField
+        label="Target concentration"
+        inputMode="decimal"
+        value={value}
+        onChange={(event) => setValue(event.target.value)}
+        className="md:col-span-1"
+      />
+      <Select
+        label="Unit"
+        value={unit}
+        onChange={(event) => isTargetUnit(event.target.value) && setUnit(event.target.value)}
+        options={TARGET_UNITS.map((each) => ({ value: each, label: each }))}
+      />
       <Select
         label="Reference material"
         className="md:col-span-2"
@@ -55,10 +73,18 @@ export function RouteFinderForm({ materials, pending, onSubmit }: RouteFinderFor
         }}
         options={[
           { value: '', label: 'Choose…' },
-          ...materials.map((item) => ({ value: String(item.id), label: `${item.code} — ${String(item.current.data.name ?? '')}${item.flags.length ? ` (${item.flags.join('; ')})` : ''}` })),
+          ...materials.map((item) => ({
+            value: String(item.id),
+            label: `${item.code} — ${String(item.current.data.name ?? '')}${item.flags.length ? ` (${item.flags.join('; ')})` : ''}`,
+          })),
         ]}
       />
-      <TextField label="Analyte" value={analyte} onChange={(event) => setAnalyte(event.target.value)} hint="As a formula" />
+      <TextField
+        label="Analyte"
+        value={analyte}
+        onChange={(event) => setAnalyte(event.target.value)}
+        hint="As a formula"
+      />
       <Select
         label="Most dilutions"
         value={maximumDilutions}

@@ -1,0 +1,154 @@
+// ESLint flat config. The layer rules of CONVENTIONS.md §2 live here (boundaries/dependencies and
+// no-restricted-globals); tests/unit/lint-boundaries.test.ts proves each one fires.
+import js from '@eslint/js';
+import boundaries from 'eslint-plugin-boundaries';
+import reactHooks from 'eslint-plugin-react-hooks';
+import globals from 'globals';
+import tseslint from 'typescript-eslint';
+
+const testFiles = ['**/*.test.ts', '**/*.test.tsx', 'tests/**', '**/test-support/**'];
+
+/** The layers, matched on the path from the repository root; a file belongs to its innermost element. */
+const elements = [
+  { type: 'engine', pattern: 'shared/uncertainty', partialMatch: false },
+  { type: 'contracts', pattern: 'shared/contracts', partialMatch: false },
+  { type: 'server', pattern: 'server', partialMatch: false },
+  { type: 'client-app', pattern: 'src/app', partialMatch: false },
+  { type: 'feature', pattern: 'src/features/*', partialMatch: false, capture: ['feature'] },
+  { type: 'client-base', pattern: 'src/{components,config,hooks,lib,test-support}', partialMatch: false },
+];
+
+const clientTypes = ['client-app', 'feature', 'client-base'];
+
+/** What each layer may not reach. Anything not named here is allowed. */
+/** The policies that keep host modules (Node, frameworks) out of shared code, found by their message. */
+const hostPolicyMessage = /imports only/;
+
+const layerPolicies = [
+  {
+    // The engine runs unchanged in the browser, a Web Worker and Node: it imports only itself and zod.
+    from: { element: { type: 'engine' } },
+    disallow: {
+      to: [
+        { module: { origin: 'core' } },
+        { module: { origin: 'external', source: '!zod' } },
+        { element: { type: ['contracts', 'server', ...clientTypes] } },
+      ],
+    },
+    message: 'The engine (shared/uncertainty) imports only its own files and zod: no Node, DOM, framework or app code.',
+  },
+  {
+    from: { element: { type: 'contracts' } },
+    disallow: { to: { element: { type: ['server', ...clientTypes] } } },
+    message: 'shared/ imports neither src nor server.',
+  },
+  {
+    // Both sides load the contracts, the browser included.
+    from: { element: { type: 'contracts' } },
+    disallow: { to: [{ module: { origin: 'core' } }, { module: { origin: 'external', source: '!zod' } }] },
+    message: 'shared/contracts imports only zod and shared code: no Node, DOM or framework.',
+  },
+  {
+    from: { element: { type: 'server' } },
+    disallow: { to: { element: { type: clientTypes } } },
+    message: 'The server never imports the client (src).',
+  },
+  {
+    from: { element: { type: clientTypes } },
+    disallow: { to: { element: { type: 'server' } } },
+    message: 'The client never imports the server.',
+  },
+  {
+    from: { element: { type: 'feature' } },
+    disallow: { to: { element: { type: 'feature', captured: { feature: '!{{ from.element.captured.feature }}' } } } },
+    message: 'Features do not import other features: move the shared piece to src/components or src/lib.',
+  },
+  {
+    from: { element: { type: ['feature', 'client-base'] } },
+    disallow: { to: { element: { type: 'client-app' } } },
+    message: 'Only the app layer (src/app, src/main.tsx) imports the app layer.',
+  },
+  {
+    from: { element: { type: 'client-base' } },
+    disallow: { to: { element: { type: 'feature' } } },
+    message: 'src/components, src/lib and src/config import no feature.',
+  },
+];
+
+/** Host globals the engine must not touch (the DOM's and Node's). */
+const hostGlobals = [
+  'window',
+  'document',
+  'navigator',
+  'localStorage',
+  'sessionStorage',
+  'location',
+  'fetch',
+  'process',
+  'Buffer',
+  'require',
+  'module',
+  '__dirname',
+  '__filename',
+  'global',
+  'setImmediate',
+].map((name) => ({ name, message: 'The engine runs in the browser and Node alike: pass what it needs in.' }));
+
+export default tseslint.config(
+  { ignores: ['dist/**', 'node_modules/**', 'tests/fixtures/**', 'coverage/**'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    linterOptions: { reportUnusedDisableDirectives: 'error' },
+    languageOptions: { globals: { ...globals.node } },
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/consistent-type-imports': ['error', { fixStyle: 'inline-type-imports' }],
+      eqeqeq: ['error', 'always', { null: 'ignore' }],
+    },
+  },
+  {
+    files: ['**/*.{ts,tsx,js,mjs}'],
+    plugins: { boundaries },
+    settings: {
+      'boundaries/elements': elements,
+      'import/resolver': { node: { extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] } },
+    },
+    rules: {
+      'boundaries/dependencies': ['error', { default: 'allow', checkAllOrigins: true, policies: layerPolicies }],
+    },
+  },
+  {
+    // Tests of shared code may read fixtures from disk and use Node's crypto; the layer rules still bind them.
+    files: ['shared/**/*.test.ts'],
+    rules: {
+      'boundaries/dependencies': [
+        'error',
+        {
+          default: 'allow',
+          checkAllOrigins: true,
+          policies: layerPolicies.filter((policy) => !hostPolicyMessage.test(policy.message)),
+        },
+      ],
+    },
+  },
+  {
+    files: ['shared/**/*.ts'],
+    ignores: ['**/*.test.ts'],
+    languageOptions: { globals: {} },
+    rules: { 'no-restricted-globals': ['error', ...hostGlobals] },
+  },
+  {
+    files: ['src/**/*.{ts,tsx}'],
+    ignores: testFiles,
+    languageOptions: { globals: { ...globals.browser } },
+  },
+  {
+    files: ['src/**/*.{ts,tsx}'],
+    plugins: { 'react-hooks': reactHooks },
+    rules: {
+      ...reactHooks.configs.flat.recommended.rules,
+      'react-hooks/exhaustive-deps': 'error',
+    },
+  },
+);

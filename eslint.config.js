@@ -105,6 +105,9 @@ export default tseslint.config(
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
       '@typescript-eslint/consistent-type-imports': ['error', { fixStyle: 'inline-type-imports' }],
       eqeqeq: ['error', 'always', { null: 'ignore' }],
+      // Declaration merging (express's Request and User) needs `declare global { namespace Express }`.
+      '@typescript-eslint/no-namespace': ['error', { allowDeclarations: true }],
+      '@typescript-eslint/no-empty-object-type': ['error', { allowInterfaces: 'with-single-extends' }],
     },
   },
   {
@@ -149,6 +152,9 @@ export default tseslint.config(
     rules: {
       ...reactHooks.configs.flat.recommended.rules,
       'react-hooks/exhaustive-deps': 'error',
+      // Off: it flags the latest-value ref (`ref.current = value` in render, read by a timer or worker callback)
+      // and react-hook-form's callback `field.ref`, both correct here; it found no real bug in this tree.
+      'react-hooks/refs': 'off',
     },
   },
 );

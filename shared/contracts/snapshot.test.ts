@@ -13,7 +13,7 @@ import {
   type PlanInput,
 } from '../uncertainty';
 import { degreesOfFreedomSchema, storedNumberSchema } from './json-number';
-import { budgetSchema, monteCarloSchema, snapshotSchema, validationSchema, type Snapshot } from './snapshot';
+import { budgetSchema, type monteCarloSchema, snapshotSchema, type validationSchema, type Snapshot } from './snapshot';
 
 const fixtures = new URL('../../tests/fixtures/', import.meta.url);
 const readJson = <T>(relative: string): T => JSON.parse(readFileSync(new URL(relative, fixtures), 'utf8')) as T;

@@ -30,7 +30,7 @@ const fieldIssueListSchema = z.array(fieldIssueSchema);
  * body) still yields an ApiError with a plain message.
  */
 export function apiErrorFromResponse(status: number, bodyText: string): ApiError {
-  let parsedBody: unknown = null;
+  let parsedBody: unknown;
   try {
     parsedBody = bodyText ? JSON.parse(bodyText) : null;
   } catch {

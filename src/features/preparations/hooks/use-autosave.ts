@@ -61,6 +61,7 @@ export function useAutosave(input: {
   useEffect(() => {
     if (!enabled || key === savedKey.current) return;
     if (key === null) {
+      // eslint-disable-next-line react-hooks/set-state-in-effect -- the state follows the autosave timer, an outside system
       setState(blocked ? { phase: 'failed', reason: blocked } : { phase: 'waiting' });
       return;
     }

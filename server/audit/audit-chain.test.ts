@@ -82,15 +82,13 @@ describe('the audit trail is a hash chain', () => {
 
   it('refuses an event written without its chain hash', async () => {
     await expect(
-      t
-        .db('audit_events')
-        .insert({
-          lab_id: labId,
-          action: 'x',
-          entity_type: 'lab',
-          summary: 'unchained',
-          created_at: new Date().toISOString(),
-        }),
+      t.db('audit_events').insert({
+        lab_id: labId,
+        action: 'x',
+        entity_type: 'lab',
+        summary: 'unchained',
+        created_at: new Date().toISOString(),
+      }),
     ).rejects.toThrow(/chain hash/);
   });
 

@@ -62,15 +62,13 @@ export function errorHandler(log: (message: string, error: unknown) => void): Er
       return;
     }
     if (error instanceof PlanError) {
-      res
-        .status(400)
-        .json({
-          error: {
-            code: 'plan_invalid',
-            message: error.message,
-            details: [{ path: error.path.join('.'), message: error.message }],
-          },
-        });
+      res.status(400).json({
+        error: {
+          code: 'plan_invalid',
+          message: error.message,
+          details: [{ path: error.path.join('.'), message: error.message }],
+        },
+      });
       return;
     }
     const http = error as HttpishError;

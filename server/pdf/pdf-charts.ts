@@ -21,12 +21,10 @@ export function drawContributionBars(
       .lineWidth(0.4)
       .strokeColor('#b9b2a2')
       .stroke();
-    doc
-      .fillColor('#17323b')
-      .text(`${group.indexPercent.toFixed(1)} %`, input.x + labelWidth + barWidth + 6, y, {
-        width: 44,
-        lineBreak: false,
-      });
+    doc.fillColor('#17323b').text(`${group.indexPercent.toFixed(1)} %`, input.x + labelWidth + barWidth + 6, y, {
+      width: 44,
+      lineBreak: false,
+    });
     doc.y = y + 13;
   }
   doc.x = input.x;

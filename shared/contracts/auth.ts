@@ -29,14 +29,12 @@ export const labMembershipSchema = z.object({
   name: z.string(),
   roles: z.array(roleSchema),
 });
-export type LabMembership = z.infer<typeof labMembershipSchema>;
 
 export const userSummarySchema = z.object({
   id: z.number().int(),
   email: z.string(),
   name: z.string(),
 });
-export type UserSummary = z.infer<typeof userSummarySchema>;
 
 /** `GET /api/auth/me`, also returned by sign-in and by switching lab. */
 export const meSchema = z.object({

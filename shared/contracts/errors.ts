@@ -8,7 +8,6 @@ export const errorBodySchema = z.object({
     details: z.unknown().optional(),
   }),
 });
-export type ErrorBody = z.infer<typeof errorBodySchema>;
 
 /** One field problem, as listed in `details` of a `validation_failed` error. */
 export const fieldIssueSchema = z.object({ path: z.string(), message: z.string() });

@@ -68,7 +68,6 @@ const DATES_ORDER_MESSAGE = {
 export const toleranceDistributionSchema = z.enum(['triangular', 'rectangular'], {
   message: 'Choose triangular or rectangular.',
 });
-export type ToleranceDistribution = z.infer<typeof toleranceDistributionSchema>;
 
 export const balanceDataSchema = z
   .object({
@@ -226,15 +225,6 @@ export const equipmentDataSchemas = {
   'solid-material': solidMaterialDataSchema,
   'solution-material': solutionMaterialDataSchema,
 } as const satisfies Record<EquipmentKind, z.ZodType>;
-
-export type EquipmentData = {
-  balance: BalanceData;
-  flask: GlasswareData;
-  'glass-pipette': GlasswareData;
-  'piston-pipette': PistonPipetteData;
-  'solid-material': SolidMaterialData;
-  'solution-material': SolutionMaterialData;
-};
 
 export const reasonSchema = z
   .string()

@@ -21,7 +21,6 @@ export const approvedAsSchema = z.object({
   preparationName: z.string(),
   labName: z.string(),
 });
-export type ApprovedAsView = z.infer<typeof approvedAsSchema>;
 
 export const submitRequestSchema = z.object({ comment: z.string().trim().max(2000).default('') });
 export const returnRequestSchema = z.object({

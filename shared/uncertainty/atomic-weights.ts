@@ -11,11 +11,12 @@ export interface AtomicWeight {
 
 export type AtomicWeightTable = Readonly<Record<string, AtomicWeight>>;
 
-/** Where the default table comes from, to print beside results. */
-export const atomicWeightSource =
-  'CIAAW standard atomic weights 2021 (Prohaska et al., Pure Appl. Chem. 94 (2022) 573–600, Table 1). ' +
-  'An interval [a, b] is used as (a + b)/2 with rectangular half-width (b − a)/2, i.e. u = (b − a)/(2√3) ' +
-  '(van der Veen et al., Pure Appl. Chem. 93 (2021) 629); a value with its uncertainty in parentheses is taken as rectangular with that half-width (EURACHEM/CITAC CG4 practice).';
+/*
+ * Source: CIAAW standard atomic weights 2021 (Prohaska et al., Pure Appl. Chem. 94 (2022) 573–600, Table 1).
+ * An interval [a, b] is used as (a + b)/2 with rectangular half-width (b − a)/2, i.e. u = (b − a)/(2√3)
+ * (van der Veen et al., Pure Appl. Chem. 93 (2021) 629); a value with its uncertainty in parentheses is taken as
+ * rectangular with that half-width (EURACHEM/CITAC CG4 practice).
+ */
 
 /** CIAAW 2021 Table 1 in its own notation; elements without a standard atomic weight are left out. */
 const ciaaw2021 = `
@@ -62,7 +63,7 @@ export function parseAtomicWeightTable(text: string): AtomicWeightTable {
   return table;
 }
 
-/** The default table: CIAAW 2021 (see atomicWeightSource). */
+/** The default table: CIAAW 2021 (source above). */
 export const standardAtomicWeights: AtomicWeightTable = parseAtomicWeightTable(ciaaw2021);
 
 /** The atomic weight of an element; @throws PlanError for a symbol the table does not hold. */

@@ -17,13 +17,3 @@ export class PlanError extends Error {
     this.path = [...path];
   }
 }
-
-/**
- * Throws a PlanError unless `value` is a finite number.
- * @throws PlanError
- */
-export function requireFinite(value: number, path: PlanPathSegment[], what: string): void {
-  if (!Number.isFinite(value)) {
-    throw new PlanError(path, `${what} must be a finite number (got ${String(value)}).`);
-  }
-}

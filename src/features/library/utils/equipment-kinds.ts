@@ -16,5 +16,3 @@ export function kindFromSearch(value: string | null): EquipmentKind {
 }
 
 export const singularOf = (kind: EquipmentKind) => KIND_TABS.find((tab) => tab.kind === kind)?.singular ?? kind;
-
-export const isMaterialKind = (kind: EquipmentKind) => kind === 'solid-material' || kind === 'solution-material';

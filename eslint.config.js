@@ -13,6 +13,7 @@ const elements = [
   { type: 'engine', pattern: 'shared/uncertainty', partialMatch: false },
   { type: 'contracts', pattern: 'shared/contracts', partialMatch: false },
   { type: 'server', pattern: 'server', partialMatch: false },
+  { type: 'tooling', pattern: '{bench,migrations,tests}', partialMatch: false },
   { type: 'client-app', pattern: 'src/app', partialMatch: false },
   { type: 'feature', pattern: 'src/features/*', partialMatch: false, capture: ['feature'] },
   { type: 'client-base', pattern: 'src/{components,config,hooks,lib,test-support}', partialMatch: false },
@@ -32,15 +33,15 @@ const layerPolicies = [
       to: [
         { module: { origin: 'core' } },
         { module: { origin: 'external', source: '!zod' } },
-        { element: { type: ['contracts', 'server', ...clientTypes] } },
+        { element: { type: ['contracts', 'server', 'tooling', ...clientTypes] } },
       ],
     },
     message: 'The engine (shared/uncertainty) imports only its own files and zod: no Node, DOM, framework or app code.',
   },
   {
     from: { element: { type: 'contracts' } },
-    disallow: { to: { element: { type: ['server', ...clientTypes] } } },
-    message: 'shared/ imports neither src nor server.',
+    disallow: { to: { element: { type: ['server', 'tooling', ...clientTypes] } } },
+    message: 'shared/ imports neither src nor server (nor bench, migrations or tests).',
   },
   {
     // Both sides load the contracts, the browser included.
@@ -115,6 +116,7 @@ export default tseslint.config(
     plugins: { boundaries },
     settings: {
       'boundaries/elements': elements,
+      'boundaries/dependency-nodes': ['import', 'export', 'dynamic-import', 'require'],
       'import/resolver': { node: { extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] } },
     },
     rules: {

@@ -95,6 +95,27 @@ const hostGlobals = [
   'setImmediate',
 ].map((name) => ({ name, message: 'The engine runs in the browser and Node alike: pass what it needs in.' }));
 
+/** Server layers (routers → services → repositories → Knex); services read the time from the injected clock. */
+const serverProduction = { files: ['server/**/*.ts'], ignores: [...testFiles, 'server/lib/clock.ts'] };
+const noSystemTime = {
+  selector: "NewExpression[callee.name='Date'][arguments.length=0]",
+  message: 'Read the time from the injected clock (server/lib/clock.ts), never new Date().',
+};
+const noDateInService = {
+  selector: "NewExpression[callee.name='Date']",
+  message: 'Services read the time from the injected clock (`now`), never new Date().',
+};
+const noInlineRoles = {
+  selector:
+    "CallExpression[callee.property.name='lab']:matches([callee.object.name='authorize'], [callee.object.property.name='authorize']) > ArrayExpression",
+  message: 'Name a permission of shared/contracts/permissions.ts, never an inline list of roles.',
+};
+const noSqlInService = [
+  { selector: 'CallExpression[callee.name=/^(db|trx)$/]', message: 'Queries live in repositories.' },
+  { selector: "MemberExpression[object.name='db']", message: 'Queries live in repositories.' },
+  { selector: "CallExpression[callee.property.name='raw']", message: 'Queries live in repositories.' },
+];
+
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', 'tests/fixtures/**', 'coverage/**'] },
   js.configs.recommended,
@@ -142,6 +163,44 @@ export default tseslint.config(
     ignores: ['**/*.test.ts'],
     languageOptions: { globals: {} },
     rules: { 'no-restricted-globals': ['error', ...hostGlobals] },
+  },
+  { ...serverProduction, rules: { 'no-restricted-syntax': ['error', noSystemTime] } },
+  {
+    ...serverProduction,
+    files: ['server/**/*-router.ts'],
+    rules: {
+      'no-restricted-syntax': ['error', noSystemTime, noInlineRoles],
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: [{ name: 'knex', message: 'Routers reach the database only through services.' }],
+          patterns: [
+            { regex: '(^|/)db/connection$', message: 'Routers reach the database only through services.' },
+            { regex: '-repository$', message: 'Routers reach the database only through services.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    ...serverProduction,
+    files: ['server/**/*-service.ts'],
+    rules: {
+      'no-restricted-syntax': ['error', noDateInService, ...noSqlInService],
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          paths: [{ name: 'knex', message: 'Transactions come through Transact.', allowTypeImports: true }],
+          patterns: [
+            {
+              regex: '(^|/)db/connection$',
+              message: 'Services get the database through repositories and Transact.',
+              allowTypeImports: true,
+            },
+          ],
+        },
+      ],
+    },
   },
   {
     files: ['src/**/*.{ts,tsx}'],

@@ -1,3 +1,4 @@
+import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { ESLint } from 'eslint';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -127,5 +128,50 @@ describe('client layers (app → features → components, lib, config)', () => {
 
   it('lets the app layer import features', async () => {
     expect(await rulesFired('src/app/router.tsx', importing('../features/auth/api/get-me'))).toEqual([]);
+  });
+});
+
+describe('server layers (routers → services → repositories → Knex)', () => {
+  const router = 'server/policy/policy-router.ts';
+  const service = 'server/policy/policy-service.ts';
+
+  it('lints real files: the rules select routers and services by these names', () => {
+    expect(existsSync(join(root, router))).toBe(true);
+    expect(existsSync(join(root, service))).toBe(true);
+  });
+
+  it('refuses Knex, the connection and repositories in a router', async () => {
+    for (const specifier of ['knex', '../db/connection', './policy-repository']) {
+      expect(await rulesFired(router, importing(specifier))).toEqual(['no-restricted-imports']);
+    }
+    expect(await rulesFired(router, importing('./policy-service'))).toEqual([]);
+  });
+
+  it('refuses an inline list of roles in a router', async () => {
+    const code = (argument: string) => `export const guard = (deps) => deps.authorize.lab(${argument});\n`;
+    expect(await rulesFired(router, code("['admin']"))).toEqual(['no-restricted-syntax']);
+    expect(await rulesFired(router, code("'keepLibrary'"))).toEqual([]);
+  });
+
+  it('refuses SQL and a Knex value import in a service, but not a Knex type', async () => {
+    expect(await rulesFired(service, "export const rows = (db) => db('labs').select();\n")).toEqual([
+      'no-restricted-syntax',
+    ]);
+    expect(await rulesFired(service, 'export const sql = (q) => q.raw(1);\n')).toEqual(['no-restricted-syntax']);
+    expect(await rulesFired(service, importing('knex'))).toEqual(['@typescript-eslint/no-restricted-imports']);
+    expect(await rulesFired(service, "import type { Knex } from 'knex';\nexport type Handle = Knex;\n")).toEqual([]);
+  });
+
+  it('refuses the system time outside the clock, and any Date in a service', async () => {
+    expect(await rulesFired('server/lib/background.ts', 'export const at = new Date();\n')).toEqual([
+      'no-restricted-syntax',
+    ]);
+    expect(await rulesFired('server/lib/clock.ts', 'export const at = new Date();\n')).toEqual([]);
+    expect(await rulesFired(service, 'export const at = (text: string) => new Date(text);\n')).toEqual([
+      'no-restricted-syntax',
+    ]);
+    expect(
+      await rulesFired('server/lib/background.ts', 'export const at = (text: string) => new Date(text);\n'),
+    ).toEqual([]);
   });
 });

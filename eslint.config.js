@@ -1,5 +1,6 @@
-// ESLint flat config. The layer rules of CONVENTIONS.md §2 live here (boundaries/dependencies and
-// no-restricted-globals); tests/unit/lint-boundaries.test.ts proves each one fires.
+// ESLint flat config. The layer rules of CONVENTIONS.md §2 and §8 live here (boundaries/dependencies,
+// no-restricted-globals, no-restricted-imports, no-restricted-syntax); tests/unit/lint-boundaries.test.ts
+// proves each one fires.
 import js from '@eslint/js';
 import boundaries from 'eslint-plugin-boundaries';
 import reactHooks from 'eslint-plugin-react-hooks';
@@ -21,33 +22,27 @@ const elements = [
 
 const clientTypes = ['client-app', 'feature', 'client-base'];
 
-/** What each layer may not reach. Anything not named here is allowed. */
-/** The policies that keep host modules (Node, frameworks) out of shared code, found by their message. */
-const hostPolicyMessage = /imports only/;
+/** Host modules (Node built-ins, frameworks) kept out of shared code; its tests may read fixtures from disk. */
+const hostPolicies = [
+  {
+    // Shared code runs unchanged in the browser (the engine also in a Web Worker) and in Node.
+    from: { element: { type: ['engine', 'contracts'] } },
+    disallow: { to: [{ module: { origin: 'core' } }, { module: { origin: 'external', source: '!zod' } }] },
+    message: 'shared/ imports only its own files and zod: no Node module, DOM library or framework.',
+  },
+];
 
+/** What each layer may not reach. Anything not named here is allowed. */
 const layerPolicies = [
   {
-    // The engine runs unchanged in the browser, a Web Worker and Node: it imports only itself and zod.
     from: { element: { type: 'engine' } },
-    disallow: {
-      to: [
-        { module: { origin: 'core' } },
-        { module: { origin: 'external', source: '!zod' } },
-        { element: { type: ['contracts', 'server', 'tooling', ...clientTypes] } },
-      ],
-    },
-    message: 'The engine (shared/uncertainty) imports only its own files and zod: no Node, DOM, framework or app code.',
+    disallow: { to: { element: { type: ['contracts', 'server', 'tooling', ...clientTypes] } } },
+    message: 'The engine (shared/uncertainty) imports only its own files and zod.',
   },
   {
     from: { element: { type: 'contracts' } },
     disallow: { to: { element: { type: ['server', 'tooling', ...clientTypes] } } },
     message: 'shared/ imports neither src nor server (nor bench, migrations or tests).',
-  },
-  {
-    // Both sides load the contracts, the browser included.
-    from: { element: { type: 'contracts' } },
-    disallow: { to: [{ module: { origin: 'core' } }, { module: { origin: 'external', source: '!zod' } }] },
-    message: 'shared/contracts imports only zod and shared code: no Node, DOM or framework.',
   },
   {
     from: { element: { type: 'server' } },
@@ -76,7 +71,7 @@ const layerPolicies = [
   },
 ];
 
-/** Host globals the engine must not touch (the DOM's and Node's). */
+/** Host globals shared code must not touch (the DOM's and Node's). */
 const hostGlobals = [
   'window',
   'document',
@@ -93,7 +88,7 @@ const hostGlobals = [
   '__filename',
   'global',
   'setImmediate',
-].map((name) => ({ name, message: 'The engine runs in the browser and Node alike: pass what it needs in.' }));
+].map((name) => ({ name, message: 'Shared code runs in the browser and Node alike: pass what it needs in.' }));
 
 /** Server layers (routers → services → repositories → Knex); services read the time from the injected clock. */
 const serverProduction = { files: ['server/**/*.ts'], ignores: [...testFiles, 'server/lib/clock.ts'] };
@@ -141,27 +136,22 @@ export default tseslint.config(
       'import/resolver': { node: { extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] } },
     },
     rules: {
-      'boundaries/dependencies': ['error', { default: 'allow', checkAllOrigins: true, policies: layerPolicies }],
+      'boundaries/dependencies': [
+        'error',
+        { default: 'allow', checkAllOrigins: true, policies: [...hostPolicies, ...layerPolicies] },
+      ],
     },
   },
   {
     // Tests of shared code may read fixtures from disk and use Node's crypto; the layer rules still bind them.
     files: ['shared/**/*.test.ts'],
     rules: {
-      'boundaries/dependencies': [
-        'error',
-        {
-          default: 'allow',
-          checkAllOrigins: true,
-          policies: layerPolicies.filter((policy) => !hostPolicyMessage.test(policy.message)),
-        },
-      ],
+      'boundaries/dependencies': ['error', { default: 'allow', checkAllOrigins: true, policies: layerPolicies }],
     },
   },
   {
     files: ['shared/**/*.ts'],
     ignores: ['**/*.test.ts'],
-    languageOptions: { globals: {} },
     rules: { 'no-restricted-globals': ['error', ...hostGlobals] },
   },
   { ...serverProduction, rules: { 'no-restricted-syntax': ['error', noSystemTime] } },

@@ -14,7 +14,7 @@ import type {
 import { parsePlan, PlanError } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { LabActor } from '../auth/authorize';
-import { allowedActions, allows, type LabMember } from '../../shared/domain/version-lifecycle';
+import { allowedActions, allows, ownsPreparation, type LabMember } from '../../shared/domain/version-lifecycle';
 import { sha256Hex } from '../lib/canonical-json';
 import { AppError, conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
@@ -338,7 +338,7 @@ export function preparationsService(deps: {
       if (!current) throw notFound(`Version ${number}`);
       if (!allows('edit', current.status))
         throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
-      if (prep.created_by !== actor.id)
+      if (!ownsPreparation(actor, { ownerId: prep.created_by }))
         throw forbidden(
           'Only the analyst who owns this preparation can change its draft. Duplicate it to make your own variant.',
         );
@@ -427,7 +427,7 @@ export function preparationsService(deps: {
       if (!prep) throw notFound('The preparation');
       const current = await preparations.version(id, number);
       if (!current) throw notFound(`Version ${number}`);
-      if (prep.created_by !== actor.id)
+      if (!ownsPreparation(actor, { ownerId: prep.created_by }))
         throw forbidden('Only the analyst who owns this preparation records its readings.');
       if (!allows('recordReadings', current.status))
         throw conflict('not_draft', `Version ${number} is ${current.status}; its readings can no longer change.`);

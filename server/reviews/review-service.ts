@@ -1,7 +1,13 @@
 import type { ApprovedRecord, ReviewQueueItem, SnapshotVerification } from '../../shared/contracts/reviews';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
-import { allows, isOwnWork, OWN_WORK_REVIEW_REFUSAL, statesAllowing } from '../../shared/domain/version-lifecycle';
+import {
+  allows,
+  isOwnWork,
+  OWN_WORK_REVIEW_REFUSAL,
+  ownsPreparation,
+  statesAllowing,
+} from '../../shared/domain/version-lifecycle';
 import { lastSubmitterId } from '../preparations/version-facts';
 import { verifyPassword } from '../auth/password';
 import type { UsersRepository } from '../auth/users-repository';
@@ -69,7 +75,8 @@ export function reviewService(deps: {
       comment: string,
     ): Promise<void> {
       const { prep, version } = await load(labId, preparationId, number);
-      if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can submit it.');
+      if (!ownsPreparation(actor, { ownerId: prep.created_by }))
+        throw forbidden('Only the analyst who owns this preparation can submit it.');
       if (!allows('submit', version.status))
         throw conflict(
           'not_draft',

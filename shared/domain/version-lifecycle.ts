@@ -26,7 +26,7 @@ export const VERSION_TRANSITIONS = {
   startNewVersion: { from: ['approved'], to: null },
 } as const satisfies Record<string, { from: readonly PreparationStatus[]; to: PreparationStatus | null }>;
 
-export type VersionTransition = keyof typeof VERSION_TRANSITIONS;
+type VersionTransition = keyof typeof VERSION_TRANSITIONS;
 
 /** The states a transition may start from. */
 export const statesAllowing = (transition: VersionTransition): readonly PreparationStatus[] =>
@@ -57,7 +57,8 @@ export interface LabMember {
 }
 
 /** Only the analyst who owns a preparation changes it, records its readings and submits it. */
-export const ownsPreparation = (member: LabMember, version: VersionFacts) => member.id === version.ownerId;
+export const ownsPreparation = (member: Pick<LabMember, 'id'>, version: Pick<VersionFacts, 'ownerId'>) =>
+  member.id === version.ownerId;
 
 /** Separation of duties: whoever owns or submitted a version never reviews it. */
 export const isOwnWork = (member: Pick<LabMember, 'id'>, version: Pick<VersionFacts, 'ownerId' | 'submitterId'>) =>

@@ -125,13 +125,16 @@ describe('an approved version keeps what it showed when it was signed', () => {
     await dropTrigger(t.db, 'preparation_versions_approved_no_update', 'preparation_versions');
     await dropTrigger(t.db, 'version_reviews_no_update', 'version_reviews');
     await t.db('version_reviews').update({ record_sha256: null });
-    await t.db('preparation_versions').where({ preparation_id: preparationId, number: 1 }).update({
-      approved_title: null,
-      approved_analyte: null,
-      approved_preparation_name: null,
-      approved_lab_name: null,
-      record_sha256: null,
-    });
+    await t
+      .db('preparation_versions')
+      .where({ preparation_id: preparationId, number: 1 })
+      .update({
+        approved_title: null,
+        approved_analyte: null,
+        approved_preparation_name: null,
+        approved_lab_name: null,
+        record_sha256: null,
+      });
     const old = (await qa.get(version(1, 'verify')).expect(200)).body;
     expect(old.intact).toBe(true);
     expect(old.record).toBeNull();

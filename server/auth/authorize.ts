@@ -1,4 +1,4 @@
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import { idParam } from '../../shared/contracts/auth';
 import { can, type Permission } from '../../shared/contracts/permissions';
 import type { Role } from '../../shared/contracts/roles';
@@ -16,6 +16,13 @@ export interface LabContext {
   id: number;
   roles: Role[];
 }
+
+/** The signed-in user with their roles in the request's lab (on routes behind `authorize.lab`). */
+export type LabActor = SessionUser & { roles: readonly Role[] };
+export const labActor = (req: Request): LabActor => ({
+  ...(req.user as SessionUser),
+  roles: (req.lab as LabContext).roles,
+});
 
 declare module 'express-serve-static-core' {
   interface Request {

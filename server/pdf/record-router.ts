@@ -1,7 +1,7 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
-import type { Authorize, LabContext } from '../auth/authorize';
+import { labActor, type Authorize, type LabContext } from '../auth/authorize';
 import type { LabsService } from '../labs/labs-service';
 import type { Clock } from '../lib/clock';
 import { validationError } from '../lib/errors';
@@ -26,8 +26,8 @@ export function recordRouter(deps: {
     async (req: Request, res) => {
       const { params } = valid(req, { params: versionParams });
       const labId = (req.lab as LabContext).id;
-      const preparation = await deps.preparations.detail(labId, params.preparationId);
-      const version = await deps.preparations.version(labId, params.preparationId, params.number);
+      const preparation = await deps.preparations.detail(labId, params.preparationId, labActor(req));
+      const version = await deps.preparations.version(labId, params.preparationId, params.number, labActor(req));
       if (!version.snapshot)
         throw validationError('This version has no computed budget yet, so there is no record to print.');
       // An approved version prints what it was signed under, not what later versions renamed.

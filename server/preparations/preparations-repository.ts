@@ -1,4 +1,5 @@
 import type { PreparationStatus } from '../../shared/contracts/preparations';
+import { statesAllowing, VERSION_TRANSITIONS } from '../../shared/domain/version-lifecycle';
 import type { Db } from '../db/connection';
 import { insertedId } from '../db/inserted-id';
 import type { ApprovedAsColumns } from '../reviews/approved-record';
@@ -50,9 +51,6 @@ export interface ReviewRow {
   snapshot_sha256: string | null;
   record_sha256: string | null;
 }
-
-/** The statuses in which the author may still change a version. */
-export const EDITABLE_STATUSES: PreparationStatus[] = ['draft', 'returned'];
 
 export type VersionWrite = Pick<
   VersionRow,
@@ -165,21 +163,28 @@ export function preparationsRepository(db: Db) {
     },
     /** Only a draft (or a returned version) changes in place; the WHERE makes that hold even if two requests race. */
     updateDraft: (versionId: number, row: VersionWrite, trx: Db) =>
-      trx('preparation_versions').where({ id: versionId }).whereIn('status', EDITABLE_STATUSES).update(row),
+      trx('preparation_versions').where({ id: versionId }).whereIn('status', statesAllowing('edit')).update(row),
     /** Stores the actual readings and their recomputed result; only before the version is submitted. */
-    recordReadings: (versionId: number, row: VersionWrite & { readings_json: string; status: 'prepared' }, trx: Db) =>
+    recordReadings: (versionId: number, row: VersionWrite & { readings_json: string }, trx: Db) =>
       trx('preparation_versions')
         .where({ id: versionId })
-        .whereIn('status', [...EDITABLE_STATUSES, 'prepared'])
-        .update(row),
-    /** Moves a version between statuses; returns 0 when it was not in `from` any more. */
-    setStatus: (versionId: number, from: PreparationStatus, to: PreparationStatus, trx: Db) =>
-      trx('preparation_versions').where({ id: versionId, status: from }).update({ status: to }),
+        .whereIn('status', statesAllowing('recordReadings'))
+        .update({ ...row, status: VERSION_TRANSITIONS.recordReadings.to }),
+    /**
+     * Moves a version through a transition of the lifecycle table from the state it was read in;
+     * returns 0 when it was not in `from` any more or the table does not allow the transition from there.
+     */
+    transition: (versionId: number, from: PreparationStatus, transition: 'submit' | 'return', trx: Db) =>
+      trx('preparation_versions')
+        .where({ id: versionId, status: from })
+        .whereIn('status', statesAllowing(transition))
+        .update({ status: VERSION_TRANSITIONS[transition].to }),
     /** Approves a submitted version and freezes what it shows, in one update; 0 when it was not submitted any more. */
     approve: (versionId: number, frozen: ApprovedAsColumns & { record_sha256: string }, trx: Db) =>
       trx('preparation_versions')
-        .where({ id: versionId, status: 'submitted' })
-        .update({ status: 'approved', ...frozen }),
+        .where({ id: versionId })
+        .whereIn('status', statesAllowing('approve'))
+        .update({ status: VERSION_TRANSITIONS.approve.to, ...frozen }),
     reviewsOf: (versionId: number, trx: Db = db): Promise<ReviewRow[]> =>
       trx('version_reviews as r')
         .join('users as u', 'u.id', 'r.actor_user_id')

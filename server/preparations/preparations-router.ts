@@ -9,7 +9,7 @@ import {
   routeFinderRequestSchema,
   titleSchema,
 } from '../../shared/contracts/preparations';
-import type { Authorize, LabContext, SessionUser } from '../auth/authorize';
+import { labActor, type Authorize, type LabContext } from '../auth/authorize';
 import { clientSignal } from '../lib/client-signal';
 import { valid, validate } from '../lib/validate';
 import type { PreparationsService } from './preparations-service';
@@ -30,7 +30,6 @@ export function preparationsRouter(deps: {
   const read = authorize.lab('member');
   const plan = authorize.lab('planPreparations');
   const lab = (req: Request) => (req.lab as LabContext).id;
-  const actor = (req: Request) => req.user as SessionUser;
 
   router.get('/preparations', read, validate({ query: preparationListQuerySchema }), async (req, res) => {
     const { query } = valid(req, { query: preparationListQuerySchema });
@@ -39,12 +38,12 @@ export function preparationsRouter(deps: {
 
   router.post('/preparations', plan, validate({ body: preparationWriteSchema }), async (req, res) => {
     const { body } = valid(req, { body: preparationWriteSchema });
-    res.status(201).json(await preparations.create(lab(req), actor(req), body, clientSignal(res)));
+    res.status(201).json(await preparations.create(lab(req), labActor(req), body, clientSignal(res)));
   });
 
   router.get('/preparations/:preparationId', read, validate({ params: prepParams }), async (req, res) => {
     const { params } = valid(req, { params: prepParams });
-    res.json(await preparations.detail(lab(req), params.preparationId));
+    res.json(await preparations.detail(lab(req), params.preparationId, labActor(req)));
   });
 
   router.get(
@@ -53,7 +52,7 @@ export function preparationsRouter(deps: {
     validate({ params: versionParams }),
     async (req, res) => {
       const { params } = valid(req, { params: versionParams });
-      res.json(await preparations.version(lab(req), params.preparationId, params.number));
+      res.json(await preparations.version(lab(req), params.preparationId, params.number, labActor(req)));
     },
   );
 
@@ -66,7 +65,7 @@ export function preparationsRouter(deps: {
       res.json(
         await preparations.saveDraft(
           lab(req),
-          actor(req),
+          labActor(req),
           params.preparationId,
           params.number,
           body,
@@ -85,7 +84,7 @@ export function preparationsRouter(deps: {
       res.json(
         await preparations.recordReadings(
           lab(req),
-          actor(req),
+          labActor(req),
           params.preparationId,
           params.number,
           body,
@@ -97,7 +96,9 @@ export function preparationsRouter(deps: {
 
   router.post('/preparations/:preparationId/versions', plan, validate({ params: prepParams }), async (req, res) => {
     const { params } = valid(req, { params: prepParams });
-    res.status(201).json(await preparations.newVersion(lab(req), actor(req), params.preparationId, clientSignal(res)));
+    res
+      .status(201)
+      .json(await preparations.newVersion(lab(req), labActor(req), params.preparationId, clientSignal(res)));
   });
 
   router.post(
@@ -108,7 +109,9 @@ export function preparationsRouter(deps: {
       const { params, body } = valid(req, { params: prepParams, body: duplicateSchema });
       res
         .status(201)
-        .json(await preparations.duplicate(lab(req), actor(req), params.preparationId, body.title, clientSignal(res)));
+        .json(
+          await preparations.duplicate(lab(req), labActor(req), params.preparationId, body.title, clientSignal(res)),
+        );
     },
   );
 

@@ -13,7 +13,8 @@ import type {
 } from '../../shared/contracts/preparations';
 import { parsePlan, PlanError } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
-import type { SessionUser } from '../auth/authorize';
+import type { LabActor } from '../auth/authorize';
+import { allowedActions, allows, ownsPreparation, type LabMember } from '../../shared/domain/version-lifecycle';
 import { sha256Hex } from '../lib/canonical-json';
 import { AppError, conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { LibraryService } from '../library/library-service';
@@ -22,7 +23,6 @@ import type { Computer } from '../compute/compute-pool';
 import { resolvePlan } from './plan-resolver';
 import { readStoredSnapshot, storedSnapshotJson } from './stored-snapshot';
 import {
-  EDITABLE_STATUSES,
   type PreparationRow,
   type PreparationsRepository,
   type ReviewRow,
@@ -31,6 +31,7 @@ import {
 } from './preparations-repository';
 import type { Review } from '../../shared/contracts/reviews';
 import { approvedAsOf } from '../reviews/approved-record';
+import { versionFacts } from './version-facts';
 import type { Transact } from '../db/transaction';
 
 const parse = <T>(json: string | null): T | null => (json === null ? null : (JSON.parse(json) as T));
@@ -44,7 +45,7 @@ function toSummary(row: VersionRow): VersionSummary {
     createdAt: row.created_at,
     updatedAt: row.updated_at,
     resultStatement: row.result_statement,
-    editable: EDITABLE_STATUSES.includes(row.status),
+    editable: allows('edit', row.status),
   };
 }
 
@@ -58,7 +59,13 @@ const toReview = (row: ReviewRow): Review => ({
   recordSha256: row.record_sha256 ?? null,
 });
 
-export function toVersionDetail(row: VersionRow, reviews: ReviewRow[]): VersionDetail {
+/** A version as `member` reads it: with what they may do with it now. */
+function toVersionDetail(
+  row: VersionRow,
+  reviews: ReviewRow[],
+  preparation: { ownerId: number; latestNumber: number },
+  member: LabMember,
+): VersionDetail {
   return {
     ...toSummary(row),
     reviews: reviews.map(toReview),
@@ -71,6 +78,7 @@ export function toVersionDetail(row: VersionRow, reviews: ReviewRow[]): VersionD
     snapshotSha256: row.snapshot_sha256,
     approvedAs: approvedAsOf(row),
     recordSha256: row.record_sha256 ?? null,
+    allowedActions: allowedActions(member, versionFacts(row, reviews, preparation)),
   };
 }
 
@@ -98,6 +106,21 @@ const MASS_FIELDS: Record<string, RecordedReadings['readings'][number]['field']>
   makeUpToMass: 'finalMassG',
   dissolveInSolvent: 'solventMassG',
 };
+
+/** Why no new version can start while the latest one is still on its way. */
+function noNewVersionFrom(latest: VersionRow): AppError {
+  if (allows('edit', latest.status))
+    return conflict('draft_exists', `Version ${latest.number} can still be edited: change that one.`);
+  if (latest.status === 'submitted')
+    return conflict(
+      'under_review',
+      `Version ${latest.number} is waiting for review; a new version can start once it is approved or returned.`,
+    );
+  return conflict(
+    'draft_exists',
+    `Version ${latest.number} has been prepared: correct its readings or submit it for review.`,
+  );
+}
 
 const analyteOf = (plan: Record<string, unknown>) =>
   String((plan.analyte as { formula?: unknown } | undefined)?.formula ?? '').slice(0, 40);
@@ -190,14 +213,20 @@ export function preparationsService(deps: {
     return row;
   }
 
-  async function detail(labId: number, id: number): Promise<PreparationDetail> {
+  async function detail(labId: number, id: number, member: LabMember): Promise<PreparationDetail> {
     const prep = await preparations.find(labId, id);
     if (!prep) throw notFound('The preparation');
     const versions = await preparations.versionsOf(id);
+    const [latest] = versions;
     return {
-      ...preparationSummary(prep, versions[0]),
+      ...preparationSummary(prep, latest),
       versions: versions.map(toSummary),
-      current: toVersionDetail(versions[0], await preparations.reviewsOf(versions[0].id)),
+      current: toVersionDetail(
+        latest,
+        await preparations.reviewsOf(latest.id),
+        { ownerId: prep.created_by, latestNumber: latest.number },
+        member,
+      ),
     };
   }
 
@@ -231,9 +260,18 @@ export function preparationsService(deps: {
       return rows.map((row) => preparationSummary(row, latest.get(row.latest_version_id) as VersionRow));
     },
 
-    async version(labId: number, id: number, number: number): Promise<VersionDetail> {
-      const row = await versionRow(labId, id, number);
-      return toVersionDetail(row, await preparations.reviewsOf(row.id));
+    async version(labId: number, id: number, number: number, member: LabMember): Promise<VersionDetail> {
+      const prep = await preparations.find(labId, id);
+      if (!prep) throw notFound('The preparation');
+      const [latest] = await preparations.versionsOf(id);
+      const row = await preparations.version(id, number);
+      if (!row) throw notFound(`Version ${number}`);
+      return toVersionDetail(
+        row,
+        await preparations.reviewsOf(row.id),
+        { ownerId: prep.created_by, latestNumber: latest.number },
+        member,
+      );
     },
 
     /**
@@ -254,7 +292,7 @@ export function preparationsService(deps: {
 
     async create(
       labId: number,
-      actor: SessionUser,
+      actor: LabActor,
       input: PreparationWrite & { overrides: Override[] },
       signal?: AbortSignal,
     ): Promise<PreparationDetail> {
@@ -282,13 +320,13 @@ export function preparationsService(deps: {
         );
         return preparationId;
       });
-      return detail(labId, id);
+      return detail(labId, id, actor);
     },
 
     /** Saves (and recomputes) the draft version; only its author may, and only while it is a draft. */
     async saveDraft(
       labId: number,
-      actor: SessionUser,
+      actor: LabActor,
       id: number,
       number: number,
       input: PreparationWrite & { overrides: Override[] },
@@ -298,9 +336,9 @@ export function preparationsService(deps: {
       if (!prep) throw notFound('The preparation');
       const current = await preparations.version(id, number);
       if (!current) throw notFound(`Version ${number}`);
-      if (!EDITABLE_STATUSES.includes(current.status))
+      if (!allows('edit', current.status))
         throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
-      if (prep.created_by !== actor.id)
+      if (!ownsPreparation(actor, { ownerId: prep.created_by }))
         throw forbidden(
           'Only the analyst who owns this preparation can change its draft. Duplicate it to make your own variant.',
         );
@@ -328,26 +366,15 @@ export function preparationsService(deps: {
           trx,
         );
       });
-      return detail(labId, id);
+      return detail(labId, id, actor);
     },
 
-    /** Starts a new draft version from the latest one (after approval or return). */
-    async newVersion(labId: number, actor: SessionUser, id: number, signal?: AbortSignal): Promise<PreparationDetail> {
+    /** Starts a new draft version from the latest one, once it is approved (a returned one is edited instead). */
+    async newVersion(labId: number, actor: LabActor, id: number, signal?: AbortSignal): Promise<PreparationDetail> {
       const prep = await preparations.find(labId, id);
       if (!prep) throw notFound('The preparation');
       const [latest] = await preparations.versionsOf(id);
-      if (EDITABLE_STATUSES.includes(latest.status))
-        throw conflict('draft_exists', `Version ${latest.number} can still be edited: change that one.`);
-      if (latest.status === 'prepared')
-        throw conflict(
-          'draft_exists',
-          `Version ${latest.number} has been prepared: correct its readings or submit it for review.`,
-        );
-      if (latest.status === 'submitted')
-        throw conflict(
-          'under_review',
-          `Version ${latest.number} is waiting for review; a new version can start once it is approved or returned.`,
-        );
+      if (!allows('startNewVersion', latest.status)) throw noNewVersionFrom(latest);
       const computed = await compute(
         labId,
         JSON.parse(latest.plan_json),
@@ -380,7 +407,7 @@ export function preparationsService(deps: {
           trx,
         );
       });
-      return detail(labId, id);
+      return detail(labId, id, actor);
     },
 
     /**
@@ -390,7 +417,7 @@ export function preparationsService(deps: {
      */
     async recordReadings(
       labId: number,
-      actor: SessionUser,
+      actor: LabActor,
       id: number,
       number: number,
       input: ReadingsRequest & { deviations: string },
@@ -400,9 +427,9 @@ export function preparationsService(deps: {
       if (!prep) throw notFound('The preparation');
       const current = await preparations.version(id, number);
       if (!current) throw notFound(`Version ${number}`);
-      if (prep.created_by !== actor.id)
+      if (!ownsPreparation(actor, { ownerId: prep.created_by }))
         throw forbidden('Only the analyst who owns this preparation records its readings.');
-      if (![...EDITABLE_STATUSES, 'prepared'].includes(current.status))
+      if (!allows('recordReadings', current.status))
         throw conflict('not_draft', `Version ${number} is ${current.status}; its readings can no longer change.`);
       const previous = parse<RecordedReadings>(current.readings_json);
       const plan = JSON.parse(current.plan_json) as { steps?: Record<string, unknown>[] };
@@ -470,7 +497,7 @@ export function preparationsService(deps: {
       await transact(async (trx) => {
         const changed = await preparations.recordReadings(
           current.id,
-          { ...write, readings_json: JSON.stringify(readings), status: 'prepared' },
+          { ...write, readings_json: JSON.stringify(readings) },
           trx,
         );
         if (changed === 0) throw conflict('not_draft', `Version ${number} changed meanwhile; reload it.`);
@@ -493,13 +520,13 @@ export function preparationsService(deps: {
           trx,
         );
       });
-      return detail(labId, id);
+      return detail(labId, id, actor);
     },
 
     /** A new preparation with a copy of this one's plan, for comparing variants. */
     async duplicate(
       labId: number,
-      actor: SessionUser,
+      actor: LabActor,
       id: number,
       title?: string,
       signal?: AbortSignal,

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
 import { approveRequestSchema, returnRequestSchema, submitRequestSchema } from '../../shared/contracts/reviews';
 import type { AttemptLimits } from '../auth/attempt-limits';
-import type { Authorize, LabContext, SessionUser } from '../auth/authorize';
+import { labActor, type Authorize, type LabContext, type SessionUser } from '../auth/authorize';
 import { valid, validate } from '../lib/validate';
 import type { PreparationsService } from '../preparations/preparations-service';
 import type { ReviewService } from './review-service';
@@ -31,7 +31,7 @@ export function reviewRouter(deps: {
     async (req, res) => {
       const { params, body } = valid(req, { params: versionParams, body: submitRequestSchema });
       await reviews.submit(lab(req), actor(req), params.preparationId, params.number, body.comment);
-      res.json(await preparations.detail(lab(req), params.preparationId));
+      res.json(await preparations.detail(lab(req), params.preparationId, labActor(req)));
     },
   );
 
@@ -44,7 +44,7 @@ export function reviewRouter(deps: {
     async (req, res) => {
       const { params, body } = valid(req, { params: versionParams, body: approveRequestSchema });
       await reviews.decide(lab(req), actor(req), params.preparationId, params.number, { kind: 'approved', ...body });
-      res.json(await preparations.detail(lab(req), params.preparationId));
+      res.json(await preparations.detail(lab(req), params.preparationId, labActor(req)));
     },
   );
 
@@ -58,7 +58,7 @@ export function reviewRouter(deps: {
         kind: 'returned',
         comment: body.comment,
       });
-      res.json(await preparations.detail(lab(req), params.preparationId));
+      res.json(await preparations.detail(lab(req), params.preparationId, labActor(req)));
     },
   );
 

@@ -1,6 +1,14 @@
 import type { ApprovedRecord, ReviewQueueItem, SnapshotVerification } from '../../shared/contracts/reviews';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
+import {
+  allows,
+  isOwnWork,
+  OWN_WORK_REVIEW_REFUSAL,
+  ownsPreparation,
+  statesAllowing,
+} from '../../shared/domain/version-lifecycle';
+import { lastSubmitterId } from '../preparations/version-facts';
 import { verifyPassword } from '../auth/password';
 import type { UsersRepository } from '../auth/users-repository';
 import type { LabsRepository } from '../labs/labs-repository';
@@ -8,10 +16,14 @@ import { sha256Hex } from '../lib/canonical-json';
 import { conflict, forbidden, notFound, validationError } from '../lib/errors';
 import type { Mailer } from '../mail/mailer';
 import { decisionMessage, submittedMessage } from '../mail/messages';
-import type { PreparationsRepository, VersionRow } from '../preparations/preparations-repository';
+import type { PreparationsRepository } from '../preparations/preparations-repository';
 import type { ReviewsRepository } from './reviews-repository';
 import { approvedAsOf, approvedRecordSha256, toApprovedAsColumns, type ApprovedAs } from './approved-record';
 import type { Transact } from '../db/transaction';
+
+/** 'a, b or c'. */
+const listOf = (words: readonly string[]) =>
+  words.length > 1 ? `${words.slice(0, -1).join(', ')} or ${words[words.length - 1]}` : words.join('');
 
 /** The plan document's own title, if it has one. */
 function planTitle(planJson: string): string | null {
@@ -54,9 +66,6 @@ export function reviewService(deps: {
     }
   }
 
-  const lastSubmission = async (version: VersionRow) =>
-    [...(await preparations.reviewsOf(version.id))].reverse().find((r) => r.action === 'submitted');
-
   return {
     async submit(
       labId: number,
@@ -66,11 +75,12 @@ export function reviewService(deps: {
       comment: string,
     ): Promise<void> {
       const { prep, version } = await load(labId, preparationId, number);
-      if (prep.created_by !== actor.id) throw forbidden('Only the analyst who owns this preparation can submit it.');
-      if (!['draft', 'prepared', 'returned'].includes(version.status))
+      if (!ownsPreparation(actor, { ownerId: prep.created_by }))
+        throw forbidden('Only the analyst who owns this preparation can submit it.');
+      if (!allows('submit', version.status))
         throw conflict(
           'not_draft',
-          `Version ${number} is ${version.status}; only a draft, prepared or returned version can be submitted.`,
+          `Version ${number} is ${version.status}; only a ${listOf(statesAllowing('submit'))} version can be submitted.`,
         );
       if (!version.snapshot_json)
         throw validationError(
@@ -78,7 +88,7 @@ export function reviewService(deps: {
         );
       const at = now().toISOString();
       await transact(async (trx) => {
-        if ((await preparations.setStatus(version.id, version.status, 'submitted', trx)) === 0)
+        if ((await preparations.transition(version.id, version.status, 'submit', trx)) === 0)
           throw conflict('not_draft', 'The version changed meanwhile; reload it.');
         await preparations.insertReview(
           {
@@ -135,14 +145,14 @@ export function reviewService(deps: {
       decision: { kind: 'approved'; password: string; statement: string } | { kind: 'returned'; comment: string },
     ): Promise<void> {
       const { prep, version } = await load(labId, preparationId, number);
-      if (version.status !== 'submitted')
+      const transition = decision.kind === 'approved' ? 'approve' : 'return';
+      if (!allows(transition, version.status))
         throw conflict(
           'not_submitted',
           `Version ${number} is ${version.status}; only a submitted version can be reviewed.`,
         );
-      const submission = await lastSubmission(version);
-      if (submission?.actor_user_id === actor.id || prep.created_by === actor.id)
-        throw forbidden('You submitted this version; another member of QA must review it.');
+      const submitterId = lastSubmitterId(await preparations.reviewsOf(version.id));
+      if (isOwnWork(actor, { ownerId: prep.created_by, submitterId })) throw forbidden(OWN_WORK_REVIEW_REFUSAL);
       if (decision.kind === 'approved') {
         const account = await users.findById(actor.id);
         if (!account || !(await verifyPassword(decision.password, account.password_hash))) {
@@ -186,7 +196,7 @@ export function reviewService(deps: {
                 { ...toApprovedAsColumns(approvedAs), record_sha256: recordSha256 },
                 trx,
               )
-            : await preparations.setStatus(version.id, 'submitted', decision.kind, trx);
+            : await preparations.transition(version.id, version.status, 'return', trx);
         if (changed === 0) throw conflict('not_submitted', 'The version changed meanwhile; reload it.');
         await preparations.insertReview(
           {

@@ -96,7 +96,7 @@ export const versionSummarySchema = z.object({
   createdAt: z.string(),
   updatedAt: z.string(),
   resultStatement: z.string().nullable(),
-  /** A returned or draft version can be edited by its author. */
+  /** The version's state lets its plan change (shared/domain/version-lifecycle.ts); who may is in allowedActions. */
   editable: z.boolean(),
 });
 export type VersionSummary = z.infer<typeof versionSummarySchema>;
@@ -117,6 +117,23 @@ export const preparationSummarySchema = z.object({
 });
 export type PreparationSummary = z.infer<typeof preparationSummarySchema>;
 
+/**
+ * What the signed-in member may do with a version now, computed by the server from the version
+ * lifecycle (shared/domain/version-lifecycle.ts) and the permission table; the client shows actions from it.
+ */
+export const allowedActionsSchema = z.object({
+  edit: z.boolean(),
+  submit: z.boolean(),
+  withdraw: z.boolean(),
+  recordReadings: z.boolean(),
+  /** Approve (signed with the password) or return with comments. */
+  review: z.boolean(),
+  startNewVersion: z.boolean(),
+  /** Why this member of QA may not review the submitted version (it is their own work), or null. */
+  reviewRefusal: z.string().nullable(),
+});
+export type AllowedActions = z.infer<typeof allowedActionsSchema>;
+
 /** A version in full: the plan as saved, and the computed snapshot (null while the plan has a problem). */
 export const versionDetailSchema = versionSummarySchema.extend({
   plan: z.record(z.string(), z.unknown()),
@@ -134,6 +151,8 @@ export const versionDetailSchema = versionSummarySchema.extend({
   readings: recordedReadingsSchema.nullable().default(null),
   /** Submissions, returns with their comments, and the signed approval, oldest first. */
   reviews: z.array(reviewSchema).default([]),
+  /** For the member who asked. */
+  allowedActions: allowedActionsSchema,
 });
 export type VersionDetail = z.infer<typeof versionDetailSchema>;
 

@@ -18,10 +18,20 @@ const raw = JSON.parse(readFileSync(resolve('tests/fixtures/records/lead-check-s
   unknown
 > & {
   me: Record<Person, unknown>;
+  allowedActionsOf: Record<Exclude<Person, 'analyst'>, Record<Stage, unknown>>;
 };
 
-/** The fixture's preparation as the server answered after `stage`, read through the client's own schema. */
-export const preparationAt = (stage: Stage): PreparationDetail => preparationDetailSchema.parse(raw[stage]);
+/**
+ * The fixture's preparation as the server answered `person` (the owning analyst unless said) after `stage`,
+ * read through the client's own schema. Readers' answers differ only in what they may do (`allowedActions`).
+ */
+export function preparationAt(stage: Stage, person: Person = 'analyst'): PreparationDetail {
+  const answer = raw[stage] as { current: object };
+  const allowedActions = person === 'analyst' ? undefined : raw.allowedActionsOf[person][stage];
+  return preparationDetailSchema.parse(
+    allowedActions ? { ...answer, current: { ...answer.current, allowedActions } } : answer,
+  );
+}
 
 /** The fixture's signed-in `Me` of a demo person, read through the client's own schema. */
 export const meOf = (person: Person): Me => meSchema.parse(raw.me[person]);

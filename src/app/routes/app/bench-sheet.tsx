@@ -1,6 +1,5 @@
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
-import type { PreparationStatus } from '../../../../shared/contracts/preparations';
 import { Alert } from '../../../components/ui/alert';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
@@ -9,10 +8,7 @@ import { preparationQueryOptions, usePreparation } from '../../../features/prepa
 import { BenchSheet } from '../../../features/preparations/components/bench-sheet';
 import { ReadingsForm } from '../../../features/preparations/components/readings-form';
 import { recordsKeys } from '../../../features/records/api/records-keys';
-import { activeMembership, can } from '../../../lib/authorization';
-
-/** The states whose readings the owner may record or correct (the server says the same). */
-const READINGS_OPEN: readonly PreparationStatus[] = ['draft', 'returned', 'prepared'];
+import { activeMembership } from '../../../lib/authorization';
 
 const idFrom = (value: string | undefined) => {
   const id = Number(value);
@@ -45,32 +41,15 @@ export function Component() {
       </Alert>
     );
   }
-  return (
-    <BenchSheetPage
-      labId={membership.id}
-      preparationId={id}
-      userId={me.user.id}
-      planner={can(membership.roles, 'planPreparations')}
-    />
-  );
+  return <BenchSheetPage labId={membership.id} preparationId={id} />;
 }
 
-function BenchSheetPage({
-  labId,
-  preparationId,
-  userId,
-  planner,
-}: {
-  labId: number;
-  preparationId: number;
-  userId: number;
-  planner: boolean;
-}) {
+function BenchSheetPage({ labId, preparationId }: { labId: number; preparationId: number }) {
   const queryClient = useQueryClient();
   const detail = usePreparation(labId, preparationId);
   const library = useLabEquipment(labId);
   const version = detail.current;
-  const recordsReadings = planner && detail.createdById === userId && READINGS_OPEN.includes(version.status);
+  const recordsReadings = version.allowedActions.recordReadings;
   return (
     <>
       <title>{`Bench sheet · ${detail.title} · Dilutrace`}</title>

@@ -62,24 +62,17 @@ export function Component() {
     );
   }
   return (
-    <PreparationPage
-      labId={membership.id}
-      preparationId={id}
-      userId={me.user.id}
-      planner={can(membership.roles, 'planPreparations')}
-    />
+    <PreparationPage labId={membership.id} preparationId={id} planner={can(membership.roles, 'planPreparations')} />
   );
 }
 
 function PreparationPage({
   labId,
   preparationId,
-  userId,
   planner,
 }: {
   labId: number;
   preparationId: number;
-  userId: number;
   planner: boolean;
 }) {
   const detail = usePreparation(labId, preparationId);
@@ -93,7 +86,6 @@ function PreparationPage({
       detail={detail}
       library={library}
       policy={policy}
-      userId={userId}
       planner={planner}
     />
   );
@@ -104,11 +96,10 @@ type PreparationWorkspaceProps = {
   detail: PreparationDetail;
   library: EquipmentItem[];
   policy: LabPolicy;
-  userId: number;
   planner: boolean;
 };
 
-function PreparationWorkspace({ labId, detail, library, policy, userId, planner }: PreparationWorkspaceProps) {
+function PreparationWorkspace({ labId, detail, library, policy, planner }: PreparationWorkspaceProps) {
   const location = useLocation();
   const navigate = useNavigate();
   const queryClient = useQueryClient();
@@ -117,8 +108,8 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
   const duplicate = useDuplicatePreparation(labId, detail.id);
   const newVersion = useStartNewVersion(labId, detail.id);
   const version = detail.current;
-  const owner = detail.createdById === userId;
-  const editable = planner && owner && version.editable;
+  const allowed = version.allowedActions;
+  const editable = allowed.edit;
 
   // The workspace reads the plan once, when it opens; from then on it owns the draft.
   const [{ initialDraft, savedKey }] = useState(() => {
@@ -144,9 +135,9 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
       <p>
         The masses weighed at the bench are recorded and the result below is computed on them, so the plan no longer
         changes.
-        {planner && owner ? ' Until it is submitted for review you can still correct the readings.' : ''}
+        {allowed.recordReadings ? ' Until it is submitted for review you can still correct the readings.' : ''}
       </p>
-      {planner && owner ? (
+      {allowed.recordReadings ? (
         <p className="mt-1 flex flex-wrap gap-x-4">
           <Link to={paths.app.benchSheet.href(detail.id)}>Correct the readings on the bench sheet</Link>
           <Link to={paths.app.record.href(detail.id, version.number)}>Submit it for review from the record page</Link>
@@ -156,7 +147,7 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
   ) : !editable ? (
     <Alert tone="info">
       {!version.editable
-        ? `Version ${version.number} is ${version.status} and cannot change.${planner && version.status === 'approved' ? ' Start a new version to change the plan.' : ''}`
+        ? `Version ${version.number} is ${version.status} and cannot change.${allowed.startNewVersion ? ' Start a new version to change the plan.' : ''}`
         : planner
           ? `Only ${detail.createdBy} can change this draft. Duplicate it to make your own variant.`
           : 'You can read this preparation; analysts plan and change preparations.'}
@@ -225,8 +216,7 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
                     Duplicate as a variant
                   </Button>
                 ) : null}
-                {/* The server opens a new version only from an approved one: a prepared or submitted one is still on its way. */}
-                {planner && version.status === 'approved' ? (
+                {allowed.startNewVersion ? (
                   <Button pending={newVersion.isPending} pendingLabel="Starting…" onClick={() => newVersion.mutate()}>
                     Start a new version
                   </Button>

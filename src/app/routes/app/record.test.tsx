@@ -3,6 +3,7 @@ import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Me } from '../../../../shared/contracts/auth';
+import type { AllowedActions, PreparationDetail } from '../../../../shared/contracts/preparations';
 import type { Role } from '../../../../shared/contracts/roles';
 import { paths } from '../../../config/paths';
 import { authKeys } from '../../../features/auth/api/auth-keys';
@@ -40,10 +41,19 @@ const withRoles = (me: Me, roles: Role[], userId = me.user.id): Me => ({
   labs: me.labs.map((lab) => ({ ...lab, roles })),
 });
 
-/** The record page of version 1 at `stage`, for `me`, with the server's answers already in the cache. */
-async function showRecord(stage: Stage, me: Me, answer: (request: SentRequest) => Answer | undefined = emptyAuditPage) {
+/** `detail` as the server would answer a reader allowed `allowed`. */
+const allowing = (detail: PreparationDetail, allowed: Partial<AllowedActions>): PreparationDetail => ({
+  ...detail,
+  current: { ...detail.current, allowedActions: { ...detail.current.allowedActions, ...allowed } },
+});
+
+/** The record page of version 1 as the server answered (`detail`), for `me`, with the answers already in the cache. */
+async function showRecord(
+  detail: PreparationDetail,
+  me: Me,
+  answer: (request: SentRequest) => Answer | undefined = emptyAuditPage,
+) {
   const sent = stubServer(answer);
-  const detail = preparationAt(stage);
   renderAt(<RecordRoute />, {
     pattern: paths.app.record.path,
     path: paths.app.record.href(detail.id, 1),
@@ -83,23 +93,31 @@ describe('record actions by role and state', () => {
     ['submitted', 'auditor', []],
     ['approved', 'auditor', []],
   ] as const)('%s version, seen by the %s: actions %j', async (stage, person, expected) => {
-    await showRecord(stage, meOf(person));
+    await showRecord(preparationAt(stage, person), meOf(person));
     expect(screen.getAllByText(STATUS_WORDS[stage]).length).toBeGreaterThan(0); // the page shows the version in that state
     expect(actionsShown()).toEqual(expected);
   });
 
-  it('does not let another analyst submit someone else’s draft', async () => {
-    await showRecord('draft', withRoles(meOf('analyst'), ['analyst'], 99));
+  it('offers only what the server allows, whatever the reader’s roles: no submission of another analyst’s draft', async () => {
+    // The server answers another analyst's read of the draft with nothing allowed (server/reviews/allowed-actions.test.ts).
+    const theirs = allowing(preparationAt('draft'), { edit: false, submit: false, recordReadings: false });
+    await showRecord(theirs, withRoles(meOf('analyst'), ['analyst'], 99));
     expect(actionsShown()).toEqual([]);
   });
 
   it('tells a QA member who submitted the version that someone else must review it, and offers no approval', async () => {
+    const refusal = 'You submitted this version; another member of QA must review it.';
     const author = withRoles(meOf('analyst'), ['analyst', 'qa']);
-    await showRecord('submitted', author);
-    expect(screen.getByText('You submitted this version; another member of QA must review it.')).toHaveProperty(
-      'tagName',
-      'P',
-    );
+    await showRecord(allowing(preparationAt('submitted', 'analyst'), { reviewRefusal: refusal }), author);
+    expect(screen.getByText(refusal)).toHaveProperty('tagName', 'P');
+    expect(actionsShown()).toEqual([]);
+  });
+
+  it('offers no approval to a QA member who submitted the version but does not own it (the server’s rule)', async () => {
+    // The page used to check only the owner, so this reviewer was offered Approve and Return, which the server refused.
+    const refusal = 'You submitted this version; another member of QA must review it.';
+    await showRecord(allowing(preparationAt('submitted', 'analyst'), { reviewRefusal: refusal }), meOf('qa'));
+    expect(screen.getByText(refusal)).toHaveProperty('tagName', 'P');
     expect(actionsShown()).toEqual([]);
   });
 });
@@ -108,7 +126,7 @@ describe('approving a submitted version', () => {
   const approveDialog = () => screen.getByRole('dialog', { name: 'Approve and sign version 1' });
 
   it('asks for a statement and the password before sending anything', async () => {
-    const sent = await showRecord('submitted', meOf('qa'));
+    const sent = await showRecord(preparationAt('submitted', 'qa'), meOf('qa'));
     const user = userEvent.setup();
     await user.click(screen.getByRole('button', { name: 'Approve and sign' }));
     const dialog = approveDialog();
@@ -122,7 +140,7 @@ describe('approving a submitted version', () => {
 
   it('keeps the dialog open with the password emptied when the server refuses the password, then signs with the right one', async () => {
     let attempts = 0;
-    const sent = await showRecord('submitted', meOf('qa'), (request) => {
+    const sent = await showRecord(preparationAt('submitted', 'qa'), meOf('qa'), (request) => {
       if (request.method !== 'POST' || request.url !== approveUrl) return emptyAuditPage(request);
       attempts += 1;
       if (attempts === 1) {

@@ -1,7 +1,7 @@
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { Link, useNavigate, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router';
-import type { PreparationDetail, PreparationStatus, VersionDetail } from '../../../../shared/contracts/preparations';
+import type { PreparationDetail, VersionDetail } from '../../../../shared/contracts/preparations';
 import type { Role } from '../../../../shared/contracts/roles';
 import { Alert } from '../../../components/ui/alert';
 import { paths } from '../../../config/paths';
@@ -95,7 +95,6 @@ export function Component() {
       labId={membership.id}
       preparationId={preparationId}
       versionNumber={versionNumber}
-      userId={me.user.id}
       roles={membership.roles}
     />
   );
@@ -105,11 +104,10 @@ type RecordPageProps = {
   labId: number;
   preparationId: number;
   versionNumber: number;
-  userId: number;
   roles: readonly Role[];
 };
 
-function RecordPage({ labId, preparationId, versionNumber, userId, roles }: RecordPageProps) {
+function RecordPage({ labId, preparationId, versionNumber, roles }: RecordPageProps) {
   const preparation = useRecord(labId, preparationId);
   const version = useRecordVersion(labId, preparationId, versionNumber);
   const snapshot = version.snapshot;
@@ -122,7 +120,7 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
       <p className="mb-2">
         <BackLink
           approved={version.status === 'approved'}
-          reviewing={version.status === 'submitted' && can(roles, 'reviewRecords')}
+          reviewing={version.allowedActions.review || version.allowedActions.reviewRefusal !== null}
         />
       </p>
       <RecordHeader
@@ -136,7 +134,7 @@ function RecordPage({ labId, preparationId, versionNumber, userId, roles }: Reco
             >
               Open in the planner
             </Link>
-            <RecordActions labId={labId} preparation={preparation} version={version} userId={userId} roles={roles} />
+            <RecordActions labId={labId} preparation={preparation} version={version} />
           </>
         }
       />
@@ -201,19 +199,14 @@ function BackLink({ approved, reviewing }: { approved: boolean; reviewing: boole
   return <Link to={paths.app.preparations.href()}>← Preparations</Link>;
 }
 
-/** The states an analyst may submit from (the server says the same). */
-const SUBMITTABLE: readonly PreparationStatus[] = ['draft', 'prepared', 'returned'];
-
 type RecordActionsProps = {
   labId: number;
   preparation: PreparationDetail;
   version: VersionDetail;
-  userId: number;
-  roles: readonly Role[];
 };
 
-/** Only the actions the viewer's roles and the version's state allow; an auditor gets none. */
-function RecordActions({ labId, preparation, version, userId, roles }: RecordActionsProps) {
+/** Only the actions the server allows the viewer (`allowedActions`); an auditor gets none. */
+function RecordActions({ labId, preparation, version }: RecordActionsProps) {
   const queryClient = useQueryClient();
   const navigate = useNavigate();
   const refreshRecord = useRecordRefresh(labId);
@@ -230,29 +223,26 @@ function RecordActions({ labId, preparation, version, userId, roles }: RecordAct
       queryClient.invalidateQueries({ queryKey: auditKeys.lab(labId) }),
     ]);
   };
-  const owner = preparation.createdById === userId;
-  const analyst = roles.includes('analyst');
-  const latestNumber = Math.max(...preparation.versions.map((each) => each.number));
+  const allowed = version.allowedActions;
   const actions: ReactNode[] = [];
 
-  if (analyst && owner && SUBMITTABLE.includes(version.status) && version.snapshot) {
+  if (allowed.submit) {
     actions.push(<SubmitForReviewButton key="submit" version={reference} onReviewed={onReviewed} />);
   }
-  if (can(roles, 'reviewRecords') && version.status === 'submitted') {
-    if (owner) {
-      actions.push(
-        <p key="own" className="max-w-xs text-sm text-muted">
-          You submitted this version; another member of QA must review it.
-        </p>,
-      );
-    } else {
-      actions.push(
-        <ReturnButton key="return" version={reference} onReviewed={onReviewed} />,
-        <ApproveButton key="approve" version={reference} onReviewed={onReviewed} />,
-      );
-    }
+  if (allowed.reviewRefusal) {
+    actions.push(
+      <p key="own" className="max-w-xs text-sm text-muted">
+        {allowed.reviewRefusal}
+      </p>,
+    );
   }
-  if (analyst && version.status === 'approved' && version.number === latestNumber) {
+  if (allowed.review) {
+    actions.push(
+      <ReturnButton key="return" version={reference} onReviewed={onReviewed} />,
+      <ApproveButton key="approve" version={reference} onReviewed={onReviewed} />,
+    );
+  }
+  if (allowed.startNewVersion) {
     const openPlanner = async (detail: PreparationDetail) => {
       await syncPlanner(detail);
       navigate(paths.app.preparation.href(preparation.id));

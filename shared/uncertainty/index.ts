@@ -35,6 +35,7 @@ export {
 export { parsePlan } from './parse-plan';
 export { compilePlan, type CompileOptions } from './plan-compiler';
 export { evaluatePlan } from './evaluate-plan';
+export type { EngineWarning } from './engine-warning';
 export { propagate, type BudgetResult, type BudgetRow, type BudgetGroup } from './gum-budget';
 export type { CompiledModel, SourceDefinition, SourceCategory, TapeNode, Checkpoint } from './model-types';
 export { standardUncertainty, degreesOfFreedom, type Distribution } from './distributions';

@@ -1,7 +1,7 @@
 import { lazy, Suspense } from 'react';
 import { Link } from 'react-router';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
-import type { BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { formatPercent, formatSignificant } from '../utils/format-number';
 import { dilutionComparison, dominantStep, planFigures } from '../utils/plan-figures';
@@ -13,7 +13,7 @@ type CompareViewProps = { preparations: PreparationDetail[]; hrefOf: (id: number
 
 type Column = {
   detail: PreparationDetail;
-  budget: BudgetResult | null;
+  budget: Budget | null;
   figures: ReturnType<typeof planFigures> | null;
   steps: { kind: string }[];
 };
@@ -40,22 +40,20 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
     };
   });
   const computed = columns.filter((column) => column.budget && column.figures);
-  const sentences = computed
-    .slice(1)
-    .map((column) =>
-      dilutionComparison(
-        {
-          title: computed[0].detail.title,
-          dilutionSteps: computed[0].figures!.dilutionSteps,
-          relativeU: computed[0].budget!.relativeExpandedUncertainty,
-        },
-        {
-          title: column.detail.title,
-          dilutionSteps: column.figures!.dilutionSteps,
-          relativeU: column.budget!.relativeExpandedUncertainty,
-        },
-      ),
-    );
+  const sentences = computed.slice(1).map((column) =>
+    dilutionComparison(
+      {
+        title: computed[0].detail.title,
+        dilutionSteps: computed[0].figures!.dilutionSteps,
+        relativeU: computed[0].budget!.relativeExpandedUncertainty,
+      },
+      {
+        title: column.detail.title,
+        dilutionSteps: column.figures!.dilutionSteps,
+        relativeU: column.budget!.relativeExpandedUncertainty,
+      },
+    ),
+  );
 
   const rows: { label: string; cell: (column: Column) => string }[] = [
     {

@@ -1,7 +1,9 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PreparationDetail, PreparationWrite } from '../../../../shared/contracts/preparations';
-import { parsePlan, PlanError, type BudgetResult, type PlanInput } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import { warningText } from '../../../../shared/contracts/warning-text';
+import { parsePlan, PlanError, type PlanInput } from '../../../../shared/uncertainty';
 import { Alert } from '../../../components/ui/alert';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { useAutosave } from '../hooks/use-autosave';
@@ -27,7 +29,7 @@ type WorkspaceProps = {
   policy: LabPolicy;
   editable: boolean;
   /** The stored result of a read-only version: shown instead of a live recomputation. */
-  stored: { budget: BudgetResult; plan: PlanInput } | null;
+  stored: { budget: Budget; plan: PlanInput } | null;
   save: (write: PreparationWrite) => Promise<PreparationDetail>;
   onSaved?: (detail: PreparationDetail, draft: PlanDraft, savedKey: string) => void;
   /** The page header, given the save-state line and the current draft. */
@@ -93,7 +95,7 @@ export function Workspace({
     previous.current = { key, evaluation: next };
     return next;
   }, [draft, libraryById, policy]);
-  const lastValid = useRef<{ budget: BudgetResult; plan: PlanInput } | null>(null);
+  const lastValid = useRef<{ budget: Budget; plan: PlanInput } | null>(null);
   if (evaluation.ok) lastValid.current = { budget: evaluation.budget, plan: evaluation.plan };
 
   const shown = stored ?? lastValid.current;
@@ -101,6 +103,7 @@ export function Workspace({
   const budget = shown?.budget ?? null;
   const liveProblem = stored ? null : evaluation.problem;
   const warnings = placedWarnings(budget, draft, libraryById);
+  const planWarnings = warnings.filter((warning) => !('stepIndex' in warning)).map(warningText);
   const stepName = useMemo(
     () => stepNamer(draft.steps, draft.materialId, libraryById),
     [draft.steps, draft.materialId, libraryById],
@@ -177,18 +180,13 @@ export function Workspace({
               </p>
             ) : null}
           </section>
-          {warnings.filter((warning) => warning.stepIndex === null).length > 0 ? (
+          {planWarnings.length > 0 ? (
             <ul className="mt-3 space-y-1">
-              {warnings
-                .filter((warning) => warning.stepIndex === null)
-                .map((warning) => (
-                  <li
-                    key={warning.text}
-                    className="rounded-md bg-caution-tint px-3 py-1.5 text-sm font-semibold text-caution"
-                  >
-                    {warning.text}
-                  </li>
-                ))}
+              {planWarnings.map((text) => (
+                <li key={text} className="rounded-md bg-caution-tint px-3 py-1.5 text-sm font-semibold text-caution">
+                  {text}
+                </li>
+              ))}
             </ul>
           ) : null}
           {budget ? (

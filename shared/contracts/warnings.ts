@@ -20,20 +20,19 @@ export const engineWarningSchema = z.discriminatedUnion('code', [
 /** A warning stored as an English sentence, before warnings had codes: its words are the stored text. */
 const recordedTextWarningSchema = z.object({ code: z.literal('recordedText'), params: z.object({ text: z.string() }) });
 
+const warningObjectSchema = z.discriminatedUnion('code', [...engineWarningSchema.options, recordedTextWarningSchema]);
+
 /**
  * A warning in a stored snapshot or an API answer: the engine's object, or the plain string of a snapshot
- * stored before warnings had codes, read as a `recordedText` warning and written back as the same string, so
- * an old snapshot decodes and encodes to the very text it was stored with.
+ * stored before warnings had codes, read as a `recordedText` warning. Encoding writes that one back as the
+ * same string, so an old snapshot decodes and encodes to the very text it was stored with; the API sends the
+ * decoded object, which reads back as itself.
  */
-export const storedWarningSchema = z.codec(
-  z.union([z.string(), engineWarningSchema]),
-  z.discriminatedUnion('code', [...engineWarningSchema.options, recordedTextWarningSchema]),
-  {
-    decode: (stored) =>
-      typeof stored === 'string' ? { code: 'recordedText' as const, params: { text: stored } } : stored,
-    encode: (warning) => (warning.code === 'recordedText' ? warning.params.text : warning),
-  },
-);
+export const storedWarningSchema = z.codec(z.union([z.string(), warningObjectSchema]), warningObjectSchema, {
+  decode: (stored) =>
+    typeof stored === 'string' ? { code: 'recordedText' as const, params: { text: stored } } : stored,
+  encode: (warning) => (warning.code === 'recordedText' ? warning.params.text : warning),
+});
 export type StoredWarning = z.output<typeof storedWarningSchema>;
 
 /** Warnings the planner shows beside the live budget (budget-warnings.ts in the client makes them). */

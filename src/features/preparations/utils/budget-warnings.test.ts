@@ -50,7 +50,7 @@ describe('the planner’s live warnings', () => {
   it('place each warning on its step: minimum weight, a dominant step, a flagged item', () => {
     const draft = leadOnFourPlaceBalance('0.1000');
     const budget = liveBudget(draft, true);
-    const warnings = placedWarnings(budget, draft, DEMO_LIBRARY_BY_ID);
+    const warnings = placedWarnings({ budget, warnings: budget.warnings }, draft, DEMO_LIBRARY_BY_ID);
     expect(warnings.map((warning) => [warning.code, 'stepIndex' in warning ? warning.stepIndex : null])).toEqual([
       ['belowMinimumWeight', 0],
       ['dominantStep', 0],
@@ -70,8 +70,18 @@ describe('the planner’s live warnings', () => {
     const budget = liveBudget(draft, true);
     expect(budget.byStep.length).toBe(4);
     expect(Math.max(...budget.byStep.map((group) => group.indexPercent))).toBeLessThan(50);
-    expect(placedWarnings(budget, draft, DEMO_LIBRARY_BY_ID).map((warning) => warning.code)).not.toContain(
-      'dominantStep',
-    );
+    expect(
+      placedWarnings({ budget, warnings: budget.warnings }, draft, DEMO_LIBRARY_BY_ID).map((warning) => warning.code),
+    ).not.toContain('dominantStep');
+  });
+
+  it('of a stored version are the snapshot’s, as the policy kept them, not the budget’s own list', () => {
+    // A snapshot computed with the rule off: the budget keeps what the engine raised, `warnings` is empty
+    // (server/preparations/compute-snapshot.ts). The read-only planner showed the budget's list before.
+    const draft = leadOnFourPlaceBalance('0.1599');
+    const budget = liveBudget(draft, true);
+    expect(budget.warnings.map((warning) => warning.code)).toEqual(['belowMinimumWeight']);
+    const codes = placedWarnings({ budget, warnings: [] }, draft, DEMO_LIBRARY_BY_ID).map((warning) => warning.code);
+    expect(codes).toEqual(['flaggedItem']);
   });
 });

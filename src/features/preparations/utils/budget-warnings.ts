@@ -1,23 +1,28 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import type { Budget } from '../../../../shared/contracts/snapshot';
-import type { Warning } from '../../../../shared/contracts/warnings';
+import type { StoredWarning, Warning } from '../../../../shared/contracts/warnings';
 import type { PlanDraft } from './plan-draft';
 import { STEP_KINDS } from './step-kinds';
 
 /** Above this share of the variance one step dominates the budget. */
 const DOMINANT_STEP_PERCENT = 50;
 
+/** A budget the planner shows, with its warnings as the lab policy kept them (a snapshot's `warnings`). */
+export type ShownResult = { budget: Budget; warnings: readonly StoredWarning[] };
+
 /**
- * The warnings of a budget in the planner: the budget's own (minimum weight), a step contributing more than
- * half of the variance, and every flagged library item the plan uses (calibration due or overdue, expiring
- * material). A warning without a step index belongs to the whole plan; warning-text.ts gives the words.
+ * The warnings the planner shows with a result: its own (minimum weight, as the policy kept them: for a stored
+ * version the snapshot's list, never the budget's unfiltered one), a step contributing more than half of the
+ * variance, and every flagged library item the plan uses (calibration due or overdue, expiring material).
+ * A warning without a step index belongs to the whole plan; warning-text.ts gives the words.
  */
 export function placedWarnings(
-  budget: Budget | null,
+  shown: ShownResult | null,
   draft: PlanDraft,
   library: Map<string, EquipmentItem>,
 ): Warning[] {
-  const warnings: Warning[] = [...(budget?.warnings ?? [])];
+  const budget = shown?.budget;
+  const warnings: Warning[] = [...(shown?.warnings ?? [])];
   for (const group of budget?.byStep ?? []) {
     if (group.indexPercent > DOMINANT_STEP_PERCENT && /^\d+$/.test(group.key)) {
       const index = Number(group.key);

@@ -9,6 +9,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { nonFiniteNumberReplacer } from '../../shared/contracts/json-number';
+import { warningText } from '../../shared/contracts/warning-text';
 import {
   evaluatePlan,
   parsePlan,
@@ -85,7 +86,7 @@ try {
     checkpoints: budget.checkpoints,
     monteCarlo: monteCarlo ?? null,
     validation: monteCarlo ? validateAgainstGum(budget, monteCarlo) : null,
-    warnings: budget.warnings,
+    warnings: budget.warnings.map((warning) => ({ ...warning, message: warningText(warning) })),
   };
   process.stdout.write(`${JSON.stringify(output, nonFiniteNumberReplacer, 2)}\n`);
 } catch (error) {

@@ -40,6 +40,15 @@ function pdfText(pdf: Buffer, name: string): string {
   return readFileSync(join(work, `${name}.txt`), 'utf8');
 }
 
+/** A snapshot stored while warnings were English sentences: 0.1599 g on BAL-04, below its minimum weight. */
+const storedWithTextWarnings = JSON.parse(
+  readFileSync(
+    new URL('../../tests/fixtures/snapshots/lead-standard-stored-with-text-warnings.json', import.meta.url),
+    'utf8',
+  ),
+) as { snapshotSha256: string; snapshotJson: string };
+const MINIMUM_WEIGHT_SENTENCE = (JSON.parse(storedWithTextWarnings.snapshotJson) as { warnings: string[] }).warnings[0];
+
 beforeEach(async () => {
   t = await buildTestApp();
   labId = (await t.db('labs').first()).id;
@@ -145,6 +154,31 @@ describe('the PDF record', () => {
     const flat = pdfText(await downloadPdf(analyst), 'stored-before-typing').replace(/\s+/g, ' ');
     expect(flat).toContain('effective degrees of freedom ν_eff = ∞; coverage factor k = 2.00');
     expect(flat).toContain(legacy.snapshotSha256);
+  });
+
+  it('prints a warning in the words it was stored with, for a snapshot stored while warnings were sentences', async () => {
+    const legacy = storedWithTextWarnings;
+    expect(MINIMUM_WEIGHT_SENTENCE).toMatch(/^Step 1: 0\.1599 g is below the minimum weight of Balance BAL-04/);
+    await t
+      .db('preparation_versions')
+      .where({ preparation_id: preparationId, number: 1 })
+      .update({ snapshot_json: legacy.snapshotJson, snapshot_sha256: legacy.snapshotSha256 });
+    const flat = pdfText(await downloadPdf(analyst), 'text-warnings').replace(/\s+/g, ' ');
+    expect(flat).toContain(`Warning: ${MINIMUM_WEIGHT_SENTENCE}`);
+    const verified = await analyst.get(url(`/preparations/${preparationId}/versions/1/verify`)).expect(200);
+    expect(verified.body.computedSha256).toBe(legacy.snapshotSha256);
+    expect(verified.body.storedSha256).toBe(legacy.snapshotSha256);
+  });
+
+  it('prints a warning computed today in the same words', async () => {
+    const library = await libraryByCode(analyst, labId);
+    preparationId = (
+      await analyst
+        .post(url('/preparations'), { title: 'Pb on BAL-04', plan: leadPlan(library, { balance: 'BAL-04' }), seed: 5 })
+        .expect(201)
+    ).body.id;
+    const flat = pdfText(await downloadPdf(analyst), 'code-warnings').replace(/\s+/g, ' ');
+    expect(flat).toContain(`Warning: ${MINIMUM_WEIGHT_SENTENCE}`);
   });
 
   it('is refused for a version with no computed budget', async () => {

@@ -1,5 +1,6 @@
 import PDFDocument from 'pdfkit';
 import type { VersionDetail } from '../../shared/contracts/preparations';
+import { warningText } from '../../shared/contracts/warning-text';
 import { formatDegreesOfFreedom } from '../../shared/uncertainty';
 import { PDF_FONTS } from './fonts';
 import { percent, significant, utc } from './format';
@@ -136,7 +137,8 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
       .strokeColor('#a85a24')
       .stroke();
     doc.y += 14;
-    for (const warning of snapshot.warnings) paragraph(`Warning: ${warning}`, { size: 8.5, color: '#8a5a00' });
+    for (const warning of snapshot.warnings)
+      paragraph(`Warning: ${warningText(warning)}`, { size: 8.5, color: '#8a5a00' });
 
     // Plan
     heading('Plan');

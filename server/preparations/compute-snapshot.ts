@@ -1,5 +1,6 @@
 import { withPolicy } from '../../shared/contracts/engine-equipment';
 import type { LabPolicy } from '../../shared/contracts/library';
+import { warningsUnderPolicy } from '../../shared/contracts/warning-policy';
 import type { Snapshot, UsedItem } from '../../shared/contracts/snapshot';
 import { ENGINE_VERSION, evaluatePlan, parsePlan, runMonteCarlo, validateAgainstGum } from '../../shared/uncertainty';
 
@@ -22,9 +23,6 @@ export function computeSnapshot(input: {
   const budget = evaluatePlan(plan);
   const monteCarlo = runMonteCarlo(plan, { seed: input.seed, trials: input.trials ?? SERVER_TRIALS });
   const validation = validateAgainstGum(budget, monteCarlo);
-  const warnings = input.policy.minimumWeightRule
-    ? budget.warnings
-    : budget.warnings.filter((w) => !/minimum weight|USP/i.test(w));
   return {
     engineVersion: ENGINE_VERSION,
     computedAt: input.computedAt,
@@ -35,6 +33,6 @@ export function computeSnapshot(input: {
     budget,
     monteCarlo,
     validation,
-    warnings,
+    warnings: warningsUnderPolicy(budget.warnings, input.policy),
   };
 }

@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { preparationDetailSchema, versionDetailSchema } from '../../shared/contracts/preparations';
+import { warningText } from '../../shared/contracts/warning-text';
 import { canonicalJson } from '../lib/canonical-json';
 import { leadPlan, libraryByCode } from '../test-support/demo-plans';
 import { buildTestApp, demo, DEMO_PASSWORD, signIn, type Client, type TestApp } from '../test-support/test-app';
@@ -91,5 +92,41 @@ describe('a snapshot stored before snapshots were typed (tests/fixtures/snapshot
     expect(download.snapshot.budget.effectiveDegreesOfFreedom).toBeNull();
     expect(canonicalJson(download.snapshot)).toBe(legacy.snapshotJson);
     expect(sha256(canonicalJson(download.snapshot))).toBe(download.snapshotSha256);
+  });
+});
+
+describe('a snapshot stored while warnings were sentences (tests/fixtures/snapshots)', () => {
+  const withTextWarnings = JSON.parse(
+    readFileSync(
+      new URL('../../tests/fixtures/snapshots/lead-standard-stored-with-text-warnings.json', import.meta.url),
+      'utf8',
+    ),
+  ) as { snapshotSha256: string; snapshotJson: string };
+  const storedSentence = (JSON.parse(withTextWarnings.snapshotJson) as { warnings: string[] }).warnings[0];
+
+  beforeEach(async () => {
+    await t
+      .db('preparation_versions')
+      .where({ preparation_id: preparationId, number: 1 })
+      .update({ snapshot_json: withTextWarnings.snapshotJson, snapshot_sha256: withTextWarnings.snapshotSha256 });
+  });
+
+  it('reads through the API and the client schema, each sentence a warning whose words are the stored text', async () => {
+    expect(storedSentence).toMatch(/^Step 1: 0\.1599 g is below the minimum weight of Balance BAL-04/);
+    const parsed = versionDetailSchema.parse((await analyst.get(v1()).expect(200)).body);
+    const recorded = { code: 'recordedText', params: { text: storedSentence } };
+    expect(parsed.snapshot?.warnings).toEqual([recorded]);
+    expect(parsed.snapshot?.budget.warnings).toEqual([recorded]);
+    expect(parsed.snapshot?.warnings.map(warningText)).toEqual([storedSentence]);
+  });
+
+  it('is never rewritten: it verifies, and its download is the stored text', async () => {
+    expect((await analyst.get(v1('/verify')).expect(200)).body).toMatchObject({
+      intact: true,
+      computedSha256: withTextWarnings.snapshotSha256,
+    });
+    const download = (await analyst.get(v1('/snapshot.json')).expect(200)).body;
+    expect(download.snapshot.warnings).toEqual([storedSentence]);
+    expect(canonicalJson(download.snapshot)).toBe(withTextWarnings.snapshotJson);
   });
 });

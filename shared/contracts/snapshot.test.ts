@@ -8,12 +8,14 @@ import {
   runMonteCarlo,
   validateAgainstGum,
   type BudgetResult,
+  type EngineWarning,
   type GumValidation,
   type MonteCarloResult,
   type PlanInput,
 } from '../uncertainty';
 import { degreesOfFreedomSchema, storedNumberSchema } from './json-number';
 import { budgetSchema, type monteCarloSchema, snapshotSchema, type validationSchema, type Snapshot } from './snapshot';
+import { type engineWarningSchema, type StoredWarning } from './warnings';
 
 const fixtures = new URL('../../tests/fixtures/', import.meta.url);
 const readJson = <T>(relative: string): T => JSON.parse(readFileSync(new URL(relative, fixtures), 'utf8')) as T;
@@ -59,7 +61,11 @@ const throughJson = (snapshot: Snapshot): Snapshot =>
 
 describe('the stored snapshot schemas', () => {
   it('describe exactly the engine’s result types', () => {
-    expectTypeOf<z.output<typeof budgetSchema>>().toEqualTypeOf<BudgetResult>();
+    expectTypeOf<Omit<z.output<typeof budgetSchema>, 'warnings'>>().toEqualTypeOf<Omit<BudgetResult, 'warnings'>>();
+    // Warnings: the engine's, or a sentence stored before warnings had codes (warnings.test.ts).
+    expectTypeOf<z.output<typeof budgetSchema>['warnings']>().toEqualTypeOf<StoredWarning[]>();
+    expectTypeOf<z.output<typeof engineWarningSchema>>().toEqualTypeOf<EngineWarning>();
+    expectTypeOf<Exclude<StoredWarning, { code: 'recordedText' }>>().toEqualTypeOf<EngineWarning>();
     expectTypeOf<z.output<typeof monteCarloSchema>>().toEqualTypeOf<MonteCarloResult>();
     expectTypeOf<z.output<typeof validationSchema>>().toEqualTypeOf<GumValidation>();
   });

@@ -3,6 +3,7 @@ import { DISTRIBUTION_SHAPES } from '../uncertainty/distributions';
 import { SOURCE_CATEGORIES } from '../uncertainty/model-types';
 import { planSchema } from '../uncertainty/plan-schema';
 import { degreesOfFreedomSchema, storedNumberSchema as number } from './json-number';
+import { storedWarningSchema } from './warnings';
 
 /**
  * The snapshot a computed version stores: the plan as computed, the library items it used, and the engine's
@@ -54,7 +55,7 @@ const roundedResultSchema = z.object({
   uncertaintyText: z.string(),
 });
 
-/** The GUM budget (engine: BudgetResult). */
+/** The GUM budget (engine: BudgetResult; its warnings may also be sentences stored before warnings had codes). */
 export const budgetSchema = z.object({
   engineVersion: z.string(),
   measurand: z.string(),
@@ -75,8 +76,14 @@ export const budgetSchema = z.object({
   ),
   rounded: roundedResultSchema,
   statement: z.string(),
-  warnings: z.array(z.string()),
+  warnings: z.array(storedWarningSchema),
 });
+
+/**
+ * A GUM budget to show: live from the engine (BudgetResult is one) or read from a stored snapshot, whose
+ * warnings may be sentences recorded before warnings had codes.
+ */
+export type Budget = z.output<typeof budgetSchema>;
 
 const intervalSchema = z.object({ low: number, high: number });
 
@@ -123,6 +130,7 @@ export const snapshotSchema = z.object({
   budget: budgetSchema,
   monteCarlo: monteCarloSchema,
   validation: validationSchema,
-  warnings: z.array(z.string()),
+  /** The budget's warnings as the lab policy kept them when it was computed: the ones to show and print. */
+  warnings: z.array(storedWarningSchema),
 });
 export type Snapshot = z.output<typeof snapshotSchema>;

@@ -30,9 +30,11 @@ export function weighByDifference(
   }
   const minimum = minimumWeightG(balance.repeatabilityG, balance.readabilityG);
   if (netMassG < minimum) {
-    builder.warn(
-      `Step ${stepIndex + 1}: ${netMassG} g is below the minimum weight of ${name} (${formatMass(minimum)} g by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`,
-    );
+    builder.warn({
+      code: 'belowMinimumWeight',
+      stepIndex,
+      params: { balanceItemId: balance.itemId, netMassG, minimumWeightG: minimum },
+    });
   }
   const readingErrors = (reading: 'gross' | 'tare') => {
     const parts: [string, SourceCategory, Distribution, number][] = [
@@ -91,8 +93,4 @@ export function weighByDifference(
     net = builder.multiply(net, builder.add(builder.constant(1), deviation));
   }
   return net;
-}
-
-function formatMass(massG: number): string {
-  return massG.toPrecision(3);
 }

@@ -189,6 +189,18 @@ describe('warnings', () => {
     const plan = clone(leadPlan) as { steps: { netMassG?: number }[] };
     plan.steps[0].netMassG = 0.05;
     const result = evaluatePlan(plan as PlanInput);
-    expect(result.warnings.join(' ')).toMatch(/minimum weight of Balance B-01 \(0.100 g by USP <41>/);
+    expect(result.warnings).toHaveLength(1);
+    const [warning] = result.warnings;
+    expect(warning).toMatchObject({
+      code: 'belowMinimumWeight',
+      stepIndex: 0,
+      params: { balanceItemId: 'B-01', netMassG: 0.05 },
+    });
+    // B-01 in the fixture: s = 0.00005 g ≥ 0.41·d, so m_min = 2000·s = 0.100 g (USP <41>).
+    expect(warning.params.minimumWeightG).toBeCloseTo(0.1, 12);
+  });
+
+  it('a net mass at or above the minimum weight raises none', () => {
+    expect(evaluatePlan(leadPlan as PlanInput).warnings).toEqual([]);
   });
 });

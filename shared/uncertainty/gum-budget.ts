@@ -1,5 +1,6 @@
 import { coverageFactorOf, coverageProbabilityOf, type CoverageSetting } from './coverage-setting';
 import type { Distribution } from './distributions';
+import type { EngineWarning } from './engine-warning';
 import { ENGINE_VERSION } from './engine-version';
 import { evaluateDuals } from './evaluate-duals';
 import type { CompiledModel, SourceCategory } from './model-types';
@@ -52,7 +53,7 @@ export interface BudgetResult {
   checkpoints: { stepIndex: number; label: string; value: number; unit: string; standardUncertainty: number }[];
   rounded: RoundedResult;
   statement: string;
-  warnings: string[];
+  warnings: EngineWarning[];
 }
 
 /**

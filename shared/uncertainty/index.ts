@@ -13,6 +13,7 @@ export type {
 export { parsePlan } from './parse-plan';
 export { compilePlan } from './plan-compiler';
 export { evaluatePlan } from './evaluate-plan';
+export type { EngineWarning } from './engine-warning';
 export { propagate, type BudgetResult, type BudgetRow, type BudgetGroup } from './gum-budget';
 export type { CompiledModel, SourceCategory } from './model-types';
 export { formatDegreesOfFreedom } from './effective-degrees';

@@ -5,6 +5,7 @@ import {
   standardUncertainty,
   type Distribution,
 } from './distributions';
+import type { EngineWarning } from './engine-warning';
 import type { Checkpoint, CompiledModel, SourceCategory, SourceDefinition, TapeNode } from './model-types';
 import { PlanError, type PlanPathSegment } from './plan-error';
 
@@ -34,7 +35,7 @@ export class ModelBuilder {
   private readonly sourceNodes = new Map<string, NodeReference>();
   private readonly nodes: TapeNode[] = [];
   private readonly checkpoints: Checkpoint[] = [];
-  private readonly warnings: string[] = [];
+  private readonly warnings: EngineWarning[] = [];
 
   /** The node of a source; the same id always gives the same node. @throws PlanError on conflicting data */
   source(request: SourceRequest): NodeReference {
@@ -109,8 +110,8 @@ export class ModelBuilder {
     this.checkpoints.push(checkpoint);
   }
 
-  warn(message: string): void {
-    this.warnings.push(message);
+  warn(warning: EngineWarning): void {
+    this.warnings.push(warning);
   }
 
   constantValue(node: NodeReference): number | undefined {

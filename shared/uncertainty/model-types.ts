@@ -1,4 +1,5 @@
 import type { Distribution } from './distributions';
+import type { EngineWarning } from './engine-warning';
 
 /** What physical effect a source stands for; budgets are also summed per category. */
 export const SOURCE_CATEGORIES = [
@@ -71,5 +72,5 @@ export interface CompiledModel {
   /** What the output is, e.g. 'c(Pb)'. */
   measurand: string;
   checkpoints: Checkpoint[];
-  warnings: string[];
+  warnings: EngineWarning[];
 }

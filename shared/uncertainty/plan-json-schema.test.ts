@@ -1,5 +1,7 @@
 import { spawnSync } from 'node:child_process';
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { planJsonSchema } from './plan-json-schema';
@@ -52,6 +54,30 @@ describe('budget CLI', () => {
         validation.highEndDifference <= validation.numericalTolerance,
     );
     expect(output.contributions.length).toBeGreaterThan(5);
+  });
+
+  it('prints each warning as its code, step and figures, with its words', () => {
+    const plan = JSON.parse(
+      readFileSync(join(root, 'tests/fixtures/plans/lead-standard-from-nitrate.json'), 'utf8'),
+    ) as {
+      steps: { netMassG?: number }[];
+    };
+    plan.steps[0].netMassG = 0.05;
+    const file = join(mkdtempSync(join(tmpdir(), 'dilutrace-cli-')), 'below-minimum.json');
+    writeFileSync(file, JSON.stringify(plan));
+    const result = run(file, '--trials', '0');
+    expect(result.status).toBe(0);
+    const { warnings } = JSON.parse(result.stdout) as { warnings: Record<string, unknown>[] };
+    // B-01: s = 0.05 mg ≥ 0.41·d, so m_min = 2000·s = 0.100 g (USP <41>).
+    expect(warnings).toEqual([
+      {
+        code: 'belowMinimumWeight',
+        stepIndex: 0,
+        params: { balanceItemId: 'B-01', netMassG: 0.05, minimumWeightG: expect.closeTo(0.1, 12) },
+        message:
+          'Step 1: 0.05 g is below the minimum weight of Balance B-01 (0.100 g by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).',
+      },
+    ]);
   });
 
   it('exits non-zero with a message on stderr for a missing file', () => {

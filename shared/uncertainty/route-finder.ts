@@ -14,6 +14,7 @@ import {
   type PistonPipette,
   type VolumetricFlask,
 } from './equipment-schema';
+import type { EngineWarning } from './engine-warning';
 import { evaluatePlan } from './evaluate-plan';
 import { minimumWeightG } from './minimum-weight';
 import { parseWithSchema } from './parse-plan';
@@ -73,7 +74,7 @@ export interface Route {
   solutionVolumeMl: number;
   /** One line: "0.1599 g on B-01 → F-100-A; 10 mL (GP-10-A) → F-100-B". */
   description: string;
-  warnings: string[];
+  warnings: EngineWarning[];
 }
 
 export interface RouteResult {

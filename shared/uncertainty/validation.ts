@@ -19,7 +19,7 @@ export interface GumValidation {
  * d_low = |y − U_p − y_low|, d_high = |y + U_p − y_high|; validated when both ≤ δ.
  */
 export function validateAgainstGum(
-  budget: BudgetResult,
+  budget: Pick<BudgetResult, 'value' | 'standardUncertainty' | 'expandedUncertainty'>,
   monteCarlo: MonteCarloResult,
   significantDigits = 2,
 ): GumValidation {

@@ -124,8 +124,7 @@ function PreparationWorkspace({ labId, detail, library, policy, planner }: Prepa
     const libraryById = new Map(library.map((item) => [String(item.id), item]));
     return { initialDraft: fromServer, savedKey: JSON.stringify(writeOf(fromServer, libraryById).write) };
   });
-  const stored =
-    !editable && version.snapshot ? { budget: version.snapshot.budget, plan: version.snapshot.plan } : null;
+  const stored = !editable && version.snapshot ? version.snapshot : null;
 
   const failure = duplicate.error ?? newVersion.error;
   const note = failure ? (

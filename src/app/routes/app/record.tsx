@@ -20,6 +20,7 @@ import { HazardCautions } from '../../../features/records/components/hazard-caut
 import { MonteCarloVerdict } from '../../../features/records/components/monte-carlo-verdict';
 import { RecordDownloads } from '../../../features/records/components/record-downloads';
 import { RecordHeader } from '../../../features/records/components/record-header';
+import { RecordedWarnings } from '../../../features/records/components/recorded-warnings';
 import { ResultStatementPanel } from '../../../features/records/components/result-statement-panel';
 import { ReturnNotice } from '../../../features/records/components/return-notice';
 import { ReviewTrail } from '../../../features/records/components/review-trail';
@@ -156,15 +157,7 @@ function RecordPage({ labId, preparationId, versionNumber, roles }: RecordPagePr
             Open it in the planner to fix it.
           </Alert>
         )}
-        {snapshot?.warnings.length ? (
-          <Alert tone="info" title="Warnings recorded with the budget">
-            <ul className="list-disc pl-5">
-              {snapshot.warnings.map((warning) => (
-                <li key={warning}>{warning}</li>
-              ))}
-            </ul>
-          </Alert>
-        ) : null}
+        {snapshot ? <RecordedWarnings warnings={snapshot.warnings} /> : null}
         <div className="grid items-start gap-6 lg:grid-cols-[1fr_22rem]">
           <div className="flex min-w-0 flex-col gap-8">
             {snapshot ? <BudgetSummary budget={snapshot.budget} stepName={stepName} /> : null}

@@ -8,7 +8,8 @@ import {
   useTable,
 } from '@tanstack/react-table';
 import { Fragment, memo, useState } from 'react';
-import type { BudgetResult, BudgetRow } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import type { BudgetRow } from '../../../../shared/uncertainty';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { formatSignificant, formatUncertainty } from '../utils/format-number';
 
@@ -94,11 +95,11 @@ function PercentCell({ percent }: { percent: number }) {
 /** "Step 2 · Make up to volume", or "Shared by steps 2, 4" for an item used twice. */
 export type StepNamer = (key: string) => string;
 
-type BudgetTableProps = { budget: BudgetResult; stepName: StepNamer };
+type BudgetTableProps = { budget: Budget; stepName: StepNamer };
 
 /**
  * The uncertainty budget: one row per elementary source, sortable by any column, grouped by step with
- * the step's subtotal uᵢ(y) = √Σ uⱼ(y)² and share of the variance (BudgetResult.byStep).
+ * the step's subtotal uᵢ(y) = √Σ uⱼ(y)² and share of the variance (Budget.byStep).
  */
 export const BudgetTable = memo(function BudgetTable({ budget, stepName }: BudgetTableProps) {
   const [grouped, setGrouped] = useState(true);

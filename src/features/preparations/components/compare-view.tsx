@@ -1,7 +1,7 @@
 import { lazy, Suspense } from 'react';
 import { Link } from 'react-router';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
-import type { BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { formatPercent, formatSignificant } from '../utils/format-number';
 import { dilutionComparison, dominantStep, planFigures } from '../utils/plan-figures';
@@ -13,7 +13,7 @@ type CompareViewProps = { preparations: PreparationDetail[]; hrefOf: (id: number
 
 type Column = {
   detail: PreparationDetail;
-  budget: BudgetResult | null;
+  budget: Budget | null;
   figures: ReturnType<typeof planFigures> | null;
   steps: { kind: string }[];
 };

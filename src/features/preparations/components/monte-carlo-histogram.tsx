@@ -1,8 +1,9 @@
 import { Area, CartesianGrid, ComposedChart, Line, ReferenceLine, ResponsiveContainer, XAxis, YAxis } from 'recharts';
-import type { BudgetResult, MonteCarloResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import type { MonteCarloResult } from '../../../../shared/uncertainty';
 import { formatSignificant } from '../utils/format-number';
 
-type HistogramProps = { monteCarlo: MonteCarloResult; budget: BudgetResult };
+type HistogramProps = { monteCarlo: MonteCarloResult; budget: Budget };
 
 /** The line style of each interval end, drawn in the chart and in its key (dash patterns, not colour alone). */
 const INTERVAL_STYLES = {

@@ -1,5 +1,6 @@
 import { lazy, memo, Suspense } from 'react';
-import { validateAgainstGum, type BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import { validateAgainstGum } from '../../../../shared/uncertainty';
 import { Button } from '../../../components/ui/button';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { TextField } from '../../../components/ui/text-field';
@@ -14,7 +15,7 @@ const MonteCarloHistogram = lazy(() => import('./monte-carlo-histogram'));
 type MonteCarloPanelProps = {
   /** The valid engine plan to sample (null while the plan has a problem). */
   plan: PlanInput | null;
-  budget: BudgetResult | null;
+  budget: Budget | null;
   seed: number;
   onSeedChange: (seed: number) => void;
   seedEditable: boolean;

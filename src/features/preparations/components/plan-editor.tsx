@@ -1,10 +1,12 @@
 import { useState } from 'react';
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import type { PlanProblem } from '../../../../shared/contracts/preparations';
-import { roundToUncertainty, type BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import { warningText } from '../../../../shared/contracts/warning-text';
+import type { Warning } from '../../../../shared/contracts/warnings';
+import { roundToUncertainty } from '../../../../shared/uncertainty';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
-import type { PlacedWarning } from '../utils/budget-warnings';
 import { defaultAnalyteOf } from '../utils/equipment-labels';
 import { fieldMessage } from '../utils/evaluate-draft';
 import { emptyStep, newKey, type DraftStep, type PlanDraft } from '../utils/plan-draft';
@@ -20,8 +22,8 @@ type PlanEditorProps = {
   library: EquipmentItem[];
   problem: PlanProblem | null;
   /** The budget shown beside the editor (the last valid one while the draft has a problem). */
-  budget: BudgetResult | null;
-  warnings: PlacedWarning[];
+  budget: Budget | null;
+  warnings: Warning[];
   readOnly: boolean;
 };
 
@@ -33,7 +35,7 @@ function startingSteps(material: EquipmentItem): DraftStep[] {
 }
 
 /** The running concentration after a step, rounded to its own uncertainty. */
-function runningValueOf(budget: BudgetResult | null, index: number): string | null {
+function runningValueOf(budget: Budget | null, index: number): string | null {
   const checkpoint = budget?.checkpoints.find((each) => each.stepIndex === index);
   if (!checkpoint) return null;
   return `${roundToUncertainty(checkpoint.value, 2 * checkpoint.standardUncertainty).valueText} ${checkpoint.unit}`;
@@ -80,7 +82,7 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
   };
 
   const stepWarnings = (index: number) =>
-    warnings.filter((warning) => warning.stepIndex === index).map((warning) => warning.text);
+    warnings.filter((warning) => 'stepIndex' in warning && warning.stepIndex === index).map(warningText);
 
   return (
     <fieldset disabled={readOnly} className="min-w-0">

@@ -1,9 +1,10 @@
 import { memo } from 'react';
-import { formatDegreesOfFreedom, type BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import { formatDegreesOfFreedom } from '../../../../shared/uncertainty';
 import { formatPercent } from '../utils/format-number';
 
 /** The result as the GUM asks for it (JCGM 100:2008 7.2.3): value, U, k, coverage probability and ν_eff. */
-export const ResultStatement = memo(function ResultStatement({ budget }: { budget: BudgetResult }) {
+export const ResultStatement = memo(function ResultStatement({ budget }: { budget: Budget }) {
   const { rounded } = budget;
   const facts: [string, string][] = [
     [`Value ${budget.measurand}`, `${rounded.valueText} ${budget.unit}`],

@@ -1,11 +1,12 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PreparationDetail, PreparationWrite } from '../../../../shared/contracts/preparations';
-import { parsePlan, PlanError, type BudgetResult, type PlanInput } from '../../../../shared/uncertainty';
+import { warningText } from '../../../../shared/contracts/warning-text';
+import { parsePlan, PlanError, type PlanInput } from '../../../../shared/uncertainty';
 import { Alert } from '../../../components/ui/alert';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { useAutosave } from '../hooks/use-autosave';
-import { placedWarnings } from '../utils/budget-warnings';
+import { placedWarnings, type ShownResult } from '../utils/budget-warnings';
 import { hazardNotesOf } from '../utils/equipment-labels';
 import { evaluateDraft, fieldMessage, type DraftEvaluation } from '../utils/evaluate-draft';
 import { overridesToSave, storedPlan, type PlanDraft } from '../utils/plan-draft';
@@ -26,8 +27,8 @@ type WorkspaceProps = {
   library: EquipmentItem[];
   policy: LabPolicy;
   editable: boolean;
-  /** The stored result of a read-only version: shown instead of a live recomputation. */
-  stored: { budget: BudgetResult; plan: PlanInput } | null;
+  /** The stored result of a read-only version (its snapshot): shown instead of a live recomputation. */
+  stored: (ShownResult & { plan: PlanInput }) | null;
   save: (write: PreparationWrite) => Promise<PreparationDetail>;
   onSaved?: (detail: PreparationDetail, draft: PlanDraft, savedKey: string) => void;
   /** The page header, given the save-state line and the current draft. */
@@ -93,14 +94,16 @@ export function Workspace({
     previous.current = { key, evaluation: next };
     return next;
   }, [draft, libraryById, policy]);
-  const lastValid = useRef<{ budget: BudgetResult; plan: PlanInput } | null>(null);
-  if (evaluation.ok) lastValid.current = { budget: evaluation.budget, plan: evaluation.plan };
+  const lastValid = useRef<(ShownResult & { plan: PlanInput }) | null>(null);
+  if (evaluation.ok)
+    lastValid.current = { budget: evaluation.budget, plan: evaluation.plan, warnings: evaluation.budget.warnings };
 
   const shown = stored ?? lastValid.current;
   const stale = !stored && !evaluation.ok;
   const budget = shown?.budget ?? null;
   const liveProblem = stored ? null : evaluation.problem;
-  const warnings = placedWarnings(budget, draft, libraryById);
+  const warnings = placedWarnings(shown, draft, libraryById);
+  const planWarnings = warnings.filter((warning) => !('stepIndex' in warning)).map(warningText);
   const stepName = useMemo(
     () => stepNamer(draft.steps, draft.materialId, libraryById),
     [draft.steps, draft.materialId, libraryById],
@@ -177,18 +180,13 @@ export function Workspace({
               </p>
             ) : null}
           </section>
-          {warnings.filter((warning) => warning.stepIndex === null).length > 0 ? (
+          {planWarnings.length > 0 ? (
             <ul className="mt-3 space-y-1">
-              {warnings
-                .filter((warning) => warning.stepIndex === null)
-                .map((warning) => (
-                  <li
-                    key={warning.text}
-                    className="rounded-md bg-caution-tint px-3 py-1.5 text-sm font-semibold text-caution"
-                  >
-                    {warning.text}
-                  </li>
-                ))}
+              {planWarnings.map((text) => (
+                <li key={text} className="rounded-md bg-caution-tint px-3 py-1.5 text-sm font-semibold text-caution">
+                  {text}
+                </li>
+              ))}
             </ul>
           ) : null}
           {budget ? (

@@ -1,45 +1,46 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
-import type { BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import type { StoredWarning, Warning } from '../../../../shared/contracts/warnings';
 import type { PlanDraft } from './plan-draft';
 import { STEP_KINDS } from './step-kinds';
 
-/** A warning and the step it belongs to (null: the whole plan), so it can be shown in place. */
-export type PlacedWarning = { stepIndex: number | null; text: string };
-
 /** Above this share of the variance one step dominates the budget. */
-export const DOMINANT_STEP_PERCENT = 50;
+const DOMINANT_STEP_PERCENT = 50;
+
+/** A budget the planner shows, with its warnings as the lab policy kept them (a snapshot's `warnings`). */
+export type ShownResult = { budget: Budget; warnings: readonly StoredWarning[] };
 
 /**
- * The warnings of a live budget: the engine's own (minimum weight), a step contributing more than half
- * of the variance, and every flagged library item the plan uses (calibration due or overdue, expiring material).
+ * The warnings the planner shows with a result: its own (minimum weight, as the policy kept them: for a stored
+ * version the snapshot's list, never the budget's unfiltered one), a step contributing more than half of the
+ * variance, and every flagged library item the plan uses (calibration due or overdue, expiring material).
+ * A warning without a step index belongs to the whole plan; warning-text.ts gives the words.
  */
 export function placedWarnings(
-  budget: BudgetResult | null,
+  shown: ShownResult | null,
   draft: PlanDraft,
   library: Map<string, EquipmentItem>,
-): PlacedWarning[] {
-  const warnings: PlacedWarning[] = [];
-  for (const text of budget?.warnings ?? []) {
-    const step = /^Step (\d+)/.exec(text);
-    warnings.push({ stepIndex: step ? Number(step[1]) - 1 : null, text });
-  }
+): Warning[] {
+  const budget = shown?.budget;
+  const warnings: Warning[] = [...(shown?.warnings ?? [])];
   for (const group of budget?.byStep ?? []) {
     if (group.indexPercent > DOMINANT_STEP_PERCENT && /^\d+$/.test(group.key)) {
       const index = Number(group.key);
-      const label = draft.steps[index] ? STEP_KINDS[draft.steps[index].kind].label.toLowerCase() : 'this step';
+      const stepLabel = draft.steps[index] ? STEP_KINDS[draft.steps[index].kind].label.toLowerCase() : 'this step';
       warnings.push({
+        code: 'dominantStep',
         stepIndex: index,
-        text: `Step ${index + 1} (${label}) contributes ${Math.round(group.indexPercent)} % of the variance: better equipment here lowers the uncertainty most.`,
+        params: { indexPercent: group.indexPercent, stepLabel },
       });
     }
   }
   const material = library.get(draft.materialId);
   if (material && material.flags.length > 0)
-    warnings.push({ stepIndex: 0, text: `${material.code}: ${material.flags.join('; ')}.` });
+    warnings.push({ code: 'flaggedItem', stepIndex: 0, params: { itemCode: material.code, flags: material.flags } });
   draft.steps.forEach((step, index) => {
     const item = library.get(step.equipmentId);
     if (item && item.flags.length > 0)
-      warnings.push({ stepIndex: index, text: `${item.code}: ${item.flags.join('; ')}.` });
+      warnings.push({ code: 'flaggedItem', stepIndex: index, params: { itemCode: item.code, flags: item.flags } });
   });
   return warnings;
 }

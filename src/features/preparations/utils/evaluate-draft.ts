@@ -1,6 +1,7 @@
 import { withPolicy } from '../../../../shared/contracts/engine-equipment';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PlanProblem } from '../../../../shared/contracts/preparations';
+import { warningsUnderPolicy } from '../../../../shared/contracts/warning-policy';
 import { evaluatePlan, PlanError, type BudgetResult, type PlanInput } from '../../../../shared/uncertainty';
 import { enginePlan, type PlanDraft } from './plan-draft';
 import { parseDecimal } from './parse-decimal';
@@ -86,8 +87,8 @@ export function fieldMessage(message: string): string {
 
 /**
  * The live GUM budget of the draft, exactly as the server will compute it: the library's current
- * revisions inline, the lab policy applied with withPolicy, the same engine. Minimum-weight warnings
- * are dropped when the policy switches the rule off (as the server does).
+ * revisions inline, the lab policy applied with withPolicy, the same engine, and its warnings kept as the
+ * policy keeps them (warningsUnderPolicy, as the server does).
  */
 export function evaluateDraft(
   draft: PlanDraft,
@@ -99,10 +100,12 @@ export function evaluateDraft(
   const plan = withPolicy(enginePlan(draft, library), policy);
   try {
     const budget = evaluatePlan(plan);
-    const warnings = policy.minimumWeightRule
-      ? budget.warnings
-      : budget.warnings.filter((warning) => !/minimum weight|USP/i.test(warning));
-    return { ok: true, budget: { ...budget, warnings }, plan, problem: null };
+    return {
+      ok: true,
+      budget: { ...budget, warnings: warningsUnderPolicy(budget.warnings, policy) },
+      plan,
+      problem: null,
+    };
   } catch (error) {
     if (error instanceof PlanError)
       return { ok: false, budget: null, plan: null, problem: { path: error.path, message: error.message } };

@@ -1,4 +1,4 @@
-import type { BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
 
 /** What a preparation consumes and makes, read from its computed plan (inline equipment). */
 export type PlanFigures = {
@@ -48,7 +48,7 @@ export function planFigures(plan: Record<string, unknown>): PlanFigures {
 }
 
 /** The step with the largest share of the variance. */
-export function dominantStep(budget: BudgetResult) {
+export function dominantStep(budget: Budget) {
   return [...budget.byStep].sort((a, b) => b.indexPercent - a.indexPercent)[0] ?? null;
 }
 

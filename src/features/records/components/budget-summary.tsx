@@ -1,14 +1,15 @@
 import { createColumnHelper } from '@tanstack/react-table';
-import { formatDegreesOfFreedom, type BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import { formatDegreesOfFreedom } from '../../../../shared/uncertainty';
 import { formatPercentOfVariance, formatSignificant } from '../utils/format-figures';
 import { RecordTable, type RecordTableFeatures } from './record-table';
 
-type StepRow = BudgetResult['byStep'][number];
+type StepRow = Budget['byStep'][number];
 const column = createColumnHelper<RecordTableFeatures, StepRow>();
 const NUMERIC = new Set(['contribution', 'indexPercent']);
 
 /** Contributions by step with each one's share of the combined variance; the full budget is in the workspace and the PDF. */
-export function BudgetSummary({ budget, stepName }: { budget: BudgetResult; stepName: (key: string) => string }) {
+export function BudgetSummary({ budget, stepName }: { budget: Budget; stepName: (key: string) => string }) {
   const columns = column.columns([
     column.accessor('key', {
       header: 'Step',

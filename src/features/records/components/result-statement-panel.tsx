@@ -1,8 +1,9 @@
-import { formatDegreesOfFreedom, type BudgetResult } from '../../../../shared/uncertainty';
+import type { Budget } from '../../../../shared/contracts/snapshot';
+import { formatDegreesOfFreedom } from '../../../../shared/uncertainty';
 import { formatSignificant } from '../utils/format-figures';
 
 /** The result as the GUM asks for it (JCGM 100:2008 7.2.3), prominently, with the figures it is made of. */
-export function ResultStatementPanel({ budget }: { budget: BudgetResult }) {
+export function ResultStatementPanel({ budget }: { budget: Budget }) {
   const facts: [string, string][] = [
     [budget.measurand, `${budget.rounded.valueText} ${budget.unit}`],
     ['Expanded uncertainty U', `${budget.rounded.uncertaintyText} ${budget.unit}`],

@@ -1,6 +1,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { z } from 'zod';
 import type { routeFinderRequestSchema } from '../../../../shared/contracts/preparations';
+import { engineWarningSchema } from '../../../../shared/contracts/warnings';
 import { api } from '../../../lib/api-client';
 
 export type RouteFinderRequest = z.input<typeof routeFinderRequestSchema>;
@@ -15,7 +16,7 @@ const routeSchema = z.object({
   materialUsed: z.union([z.object({ massG: z.number() }), z.object({ volumeMl: z.number() })]),
   solutionVolumeMl: z.number(),
   description: z.string(),
-  warnings: z.array(z.string()),
+  warnings: z.array(engineWarningSchema),
 });
 const routeResultSchema = z.object({
   routes: z.array(routeSchema),

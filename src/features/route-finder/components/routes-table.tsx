@@ -1,3 +1,4 @@
+import { warningText } from '../../../../shared/contracts/warning-text';
 import { Button } from '../../../components/ui/button';
 import type { FoundRoute } from '../api/find-routes';
 
@@ -58,9 +59,9 @@ export function RoutesTable({ routes, onPlan, planningRank }: RoutesTableProps) 
                 <span className="block text-sm text-muted">
                   Gives {route.value.toPrecision(5)} {route.unit}
                 </span>
-                {route.warnings.map((warning) => (
-                  <span key={warning} className="mt-1 block text-sm font-semibold text-caution">
-                    ▲ {warning}
+                {route.warnings.map(warningText).map((text) => (
+                  <span key={text} className="mt-1 block text-sm font-semibold text-caution">
+                    ▲ {text}
                   </span>
                 ))}
               </td>

@@ -1,0 +1,21 @@
+import { itemLabel } from '../uncertainty/step-context';
+import type { Warning } from './warnings';
+
+/**
+ * The English words of a warning: the one place they are made, for the planner, the record page, the PDF,
+ * the route finder and the CLI alike. A warning stored as a sentence (`recordedText`) is its own words.
+ */
+export function warningText(warning: Warning): string {
+  switch (warning.code) {
+    case 'belowMinimumWeight': {
+      const { balanceItemId, netMassG, minimumWeightG } = warning.params;
+      return `Step ${warning.stepIndex + 1}: ${netMassG} g is below the minimum weight of ${itemLabel('Balance', balanceItemId)} (${minimumWeightG.toPrecision(3)} g by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`;
+    }
+    case 'dominantStep':
+      return `Step ${warning.stepIndex + 1} (${warning.params.stepLabel}) contributes ${Math.round(warning.params.indexPercent)} % of the variance: better equipment here lowers the uncertainty most.`;
+    case 'flaggedItem':
+      return `${warning.params.itemCode}: ${warning.params.flags.join('; ')}.`;
+    case 'recordedText':
+      return warning.params.text;
+  }
+}

@@ -1,0 +1,54 @@
+import { z } from 'zod';
+
+/**
+ * Warnings as data: `{ code, stepIndex?, params }`. The engine raises the engine codes; the planner adds its
+ * own while an analyst edits; records stored before warnings had codes hold English sentences, read as
+ * `recordedText`. Words are made only by warning-text.ts, and rules (the lab policy) read the code.
+ */
+
+const stepIndex = z.number().int().min(0);
+
+/** The engine's warnings (engine: EngineWarning; snapshot.test.ts checks they stay the same). */
+export const engineWarningSchema = z.discriminatedUnion('code', [
+  z.object({
+    code: z.literal('belowMinimumWeight'),
+    stepIndex,
+    params: z.object({ balanceItemId: z.string(), netMassG: z.number(), minimumWeightG: z.number() }),
+  }),
+]);
+
+/** A warning stored as an English sentence, before warnings had codes: its words are the stored text. */
+const recordedTextWarningSchema = z.object({ code: z.literal('recordedText'), params: z.object({ text: z.string() }) });
+
+const warningObjectSchema = z.discriminatedUnion('code', [...engineWarningSchema.options, recordedTextWarningSchema]);
+
+/**
+ * A warning in a stored snapshot or an API answer: the engine's object, or the plain string of a snapshot
+ * stored before warnings had codes, read as a `recordedText` warning. Encoding writes that one back as the
+ * same string, so an old snapshot decodes and encodes to the very text it was stored with; the API sends the
+ * decoded object, which reads back as itself.
+ */
+export const storedWarningSchema = z.codec(z.union([z.string(), warningObjectSchema]), warningObjectSchema, {
+  decode: (stored) =>
+    typeof stored === 'string' ? { code: 'recordedText' as const, params: { text: stored } } : stored,
+  encode: (warning) => (warning.code === 'recordedText' ? warning.params.text : warning),
+});
+export type StoredWarning = z.output<typeof storedWarningSchema>;
+
+/** Warnings the planner shows beside the live budget (budget-warnings.ts in the client makes them). */
+type PlannerWarning =
+  | {
+      /** One step contributes more than the dominant share of the variance. */
+      code: 'dominantStep';
+      stepIndex: number;
+      params: { indexPercent: number; stepLabel: string };
+    }
+  | {
+      /** A library item the plan uses is flagged (calibration due or overdue, material expiring or expired). */
+      code: 'flaggedItem';
+      stepIndex: number;
+      params: { itemCode: string; flags: string[] };
+    };
+
+/** Every warning there is. */
+export type Warning = StoredWarning | PlannerWarning;

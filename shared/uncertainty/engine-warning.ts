@@ -1,0 +1,10 @@
+/**
+ * A warning the engine raises while it builds a model: what happened (`code`), the plan step it belongs to,
+ * and the figures its words need. The engine writes no words; shared/contracts/warning-text.ts does.
+ */
+export type EngineWarning = {
+  /** A net mass below the balance's USP <41> minimum weight (2·s/m ≤ 0.10 %, s not below 0.41·d). */
+  code: 'belowMinimumWeight';
+  stepIndex: number;
+  params: { balanceItemId: string; netMassG: number; minimumWeightG: number };
+};

@@ -1,0 +1,87 @@
+import { describe, expect, it } from 'vitest';
+import { warningText } from '../../../../shared/contracts/warning-text';
+import { DEMO_LIBRARY_BY_ID, DEMO_POLICY } from '../test-support/demo-library';
+import { placedWarnings } from './budget-warnings';
+import { evaluateDraft } from './evaluate-draft';
+import { emptyStep, type PlanDraft } from './plan-draft';
+
+/** The demo lead standard weighed on the four-place BAL-04 (calibration overdue, used with a reason). */
+function leadOnFourPlaceBalance(netMassG: string): PlanDraft {
+  const step = (kind: Parameters<typeof emptyStep>[0], equipmentId: string, quantity = '') => ({
+    ...emptyStep(kind),
+    equipmentId,
+    quantity,
+  });
+  return {
+    title: 'Pb 100 mg/L',
+    materialId: '8',
+    analyte: 'Pb',
+    outputUnit: 'mg/L',
+    labTemperatureC: '20',
+    overrides: { '2': 'Checked with a 100 g weight today' },
+    seed: 42,
+    steps: [
+      step('weighSolid', '2', netMassG),
+      step('makeUpToVolume', '3'),
+      step('pipetteAliquot', '6', '10'),
+      step('makeUpToVolume', '4'),
+    ],
+  };
+}
+
+function liveBudget(draft: PlanDraft, minimumWeightRule: boolean) {
+  const evaluation = evaluateDraft(draft, DEMO_LIBRARY_BY_ID, { ...DEMO_POLICY, minimumWeightRule });
+  if (!evaluation.ok) throw new Error(evaluation.problem.message);
+  return evaluation.budget;
+}
+
+describe('the planner’s live warnings', () => {
+  // BAL-04: s = 0.08 mg, d = 0.1 mg, so m_min = 2000·max(s, 0.41·d) = 0.160 g (USP <41>).
+  it('keep the belowMinimumWeight warning while the lab applies the rule', () => {
+    const budget = liveBudget(leadOnFourPlaceBalance('0.1599'), true);
+    expect(budget.warnings.map((warning) => warning.code)).toEqual(['belowMinimumWeight']);
+    expect(budget.warnings[0].stepIndex).toBe(0);
+  });
+
+  it('drop it by its code when the lab switches the rule off', () => {
+    expect(liveBudget(leadOnFourPlaceBalance('0.1599'), false).warnings).toEqual([]);
+  });
+
+  it('place each warning on its step: minimum weight, a dominant step, a flagged item', () => {
+    const draft = leadOnFourPlaceBalance('0.1000');
+    const budget = liveBudget(draft, true);
+    const warnings = placedWarnings({ budget, warnings: budget.warnings }, draft, DEMO_LIBRARY_BY_ID);
+    expect(warnings.map((warning) => [warning.code, 'stepIndex' in warning ? warning.stepIndex : null])).toEqual([
+      ['belowMinimumWeight', 0],
+      ['dominantStep', 0],
+      ['flaggedItem', 0],
+    ]);
+    const [, dominant, flagged] = warnings.map(warningText);
+    const percent = Math.round(budget.byStep[0].indexPercent);
+    expect(percent).toBeGreaterThan(50);
+    expect(dominant).toBe(
+      `Step 1 (weigh the solid) contributes ${percent} % of the variance: better equipment here lowers the uncertainty most.`,
+    );
+    expect(flagged).toBe('BAL-04: calibration overdue.');
+  });
+
+  it('name no dominant step when no step holds more than half of the variance', () => {
+    const draft = leadOnFourPlaceBalance('0.1599');
+    const budget = liveBudget(draft, true);
+    expect(budget.byStep.length).toBe(4);
+    expect(Math.max(...budget.byStep.map((group) => group.indexPercent))).toBeLessThan(50);
+    expect(
+      placedWarnings({ budget, warnings: budget.warnings }, draft, DEMO_LIBRARY_BY_ID).map((warning) => warning.code),
+    ).not.toContain('dominantStep');
+  });
+
+  it('of a stored version are the snapshot’s, as the policy kept them, not the budget’s own list', () => {
+    // A snapshot computed with the rule off: the budget keeps what the engine raised, `warnings` is empty
+    // (server/preparations/compute-snapshot.ts). The read-only planner showed the budget's list before.
+    const draft = leadOnFourPlaceBalance('0.1599');
+    const budget = liveBudget(draft, true);
+    expect(budget.warnings.map((warning) => warning.code)).toEqual(['belowMinimumWeight']);
+    const codes = placedWarnings({ budget, warnings: [] }, draft, DEMO_LIBRARY_BY_ID).map((warning) => warning.code);
+    expect(codes).toEqual(['flaggedItem']);
+  });
+});

@@ -1,3 +1,4 @@
+import { RECORD_CAUTIONS } from '../../shared/contracts/safety-advice';
 import PDFDocument from 'pdfkit';
 import type { VersionDetail } from '../../shared/contracts/preparations';
 import { warningText } from '../../shared/contracts/warning-text';
@@ -14,13 +15,6 @@ export interface RecordPdfInput {
   version: VersionDetail;
   generatedAt: string;
 }
-
-/** The cautions every record carries, in our words. */
-export const RECORD_CAUTIONS = [
-  'Many analytes prepared with this record are toxic (for example lead, arsenic, mercury, cadmium, chromium(VI)), and stock solutions are usually made in strong acid.',
-  'Follow the safety data sheet of every material, the laboratory’s chemical hygiene plan and local regulations.',
-  'Dilutrace computes the budget; the laboratory’s accredited procedures and its quality system decide how it is used.',
-];
 
 const MARGIN = 48;
 const PAGE = { width: 595.28, height: 841.89 };

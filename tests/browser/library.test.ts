@@ -1,3 +1,4 @@
+import { SAFETY_ADVICE } from '../../shared/contracts/safety-advice';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { launchChromium, openCleanPage, screenshot } from './support/chromium';
@@ -145,9 +146,7 @@ describe('the tolerance library, kept by QA', () => {
     await screenshot(page, 'library-solid-materials');
     await page.getByRole('link', { name: 'RM-PBN-01' }).click();
     await page.getByRole('heading', { name: 'Caution: hazardous material' }).waitFor();
-    await page
-      .getByText("Follow the safety data sheet, your lab's chemical hygiene plan and local regulations.")
-      .waitFor();
+    await page.getByText(SAFETY_ADVICE).waitFor();
     await screenshot(page, 'library-item-material');
     expect(problems).toEqual([]);
   });

@@ -1,3 +1,4 @@
+import { SAFETY_ADVICE } from '../../shared/contracts/safety-advice';
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -123,9 +124,7 @@ describe('review and approval of a preparation record', () => {
     await expect(statusBadge(page).innerText()).resolves.toBe('Draft');
     await expect(page.getByTestId('record-result-statement').innerText()).resolves.toBe(approved.statement);
     // The lead nitrate carries QA's hazard notes; the record repeats them with the standing advice.
-    await expect(page.getByRole('complementary', { name: /Caution/ }).innerText()).resolves.toContain(
-      "Follow the safety data sheet, your lab's chemical hygiene plan and local regulations.",
-    );
+    await expect(page.getByRole('complementary', { name: /Caution/ }).innerText()).resolves.toContain(SAFETY_ADVICE);
     await expect(page.getByRole('link', { name: 'Download draft PDF' }).count()).resolves.toBe(1);
     const stepRows = page.getByRole('table', { name: /by step/ }).locator('tbody tr');
     await expect(stepRows.count()).resolves.toBe(4);

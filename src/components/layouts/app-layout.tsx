@@ -1,3 +1,4 @@
+import { LAB_DECIDES } from '../../../shared/contracts/safety-advice';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import { NameMark } from '../ui/name-mark';
@@ -35,9 +36,7 @@ export function AppLayout({ homeHref, account, navigation, busy, children }: App
       <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-6 py-8 print:max-w-none print:p-0">
         {children}
       </main>
-      <footer className="border-t border-line py-4 text-center text-sm text-muted">
-        The tool computes; the lab's accredited procedures and its QA system decide.
-      </footer>
+      <footer className="border-t border-line py-4 text-center text-sm text-muted">{LAB_DECIDES}</footer>
     </div>
   );
 }

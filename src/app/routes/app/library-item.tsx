@@ -8,7 +8,7 @@ import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me
 import { equipmentItemQueryOptions, useEquipmentItem } from '../../../features/library/api/get-equipment-item';
 import { CertificateList } from '../../../features/library/components/certificate-list';
 import { CertificateUpload } from '../../../features/library/components/certificate-upload';
-import { HazardCaution } from '../../../features/library/components/hazard-caution';
+import { HazardCaution } from '../../../components/hazard-caution';
 import { ItemDataList } from '../../../features/library/components/item-data-list';
 import { ItemStatusBadges } from '../../../features/library/components/item-status-badges';
 import { MinimumWeightNote } from '../../../features/library/components/minimum-weight-note';
@@ -84,7 +84,7 @@ function ItemPage({ labId, itemId, keeper }: { labId: number; itemId: number; ke
             ))}
           </ul>
         ) : null}
-        {hazardNotes ? <HazardCaution notes={hazardNotes} /> : null}
+        <HazardCaution title="Caution: hazardous material" entries={[{ key: 0, notes: hazardNotes }]} />
       </div>
       <div className="mb-10 grid items-start gap-6 lg:grid-cols-[1fr_22rem]">
         <Card title={`Current data · revision ${item.current.number}`}>

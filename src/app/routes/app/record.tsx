@@ -16,7 +16,7 @@ import { useRecordRefresh } from '../../../features/records/api/use-record-refre
 import { BenchReadings } from '../../../features/records/components/bench-readings';
 import { BudgetSummary } from '../../../features/records/components/budget-summary';
 import { EquipmentUsed } from '../../../features/records/components/equipment-used';
-import { HazardCautions } from '../../../features/records/components/hazard-cautions';
+import { HazardCaution } from '../../../components/hazard-caution';
 import { MonteCarloVerdict } from '../../../features/records/components/monte-carlo-verdict';
 import { RecordDownloads } from '../../../features/records/components/record-downloads';
 import { RecordHeader } from '../../../features/records/components/record-header';
@@ -146,7 +146,12 @@ function RecordPage({ labId, preparationId, versionNumber, roles }: RecordPagePr
       />
       <div className="flex flex-col gap-6">
         <ReturnNotice version={version} />
-        {snapshot ? <HazardCautions items={snapshot.items} /> : null}
+        {snapshot ? (
+          <HazardCaution
+            title="Caution: hazardous materials"
+            entries={snapshot.items.map((item) => ({ key: item.revisionId, code: item.code, notes: item.hazardNotes }))}
+          />
+        ) : null}
         {snapshot ? (
           <ResultStatementPanel budget={snapshot.budget} />
         ) : (

@@ -1,3 +1,4 @@
+import { LAB_DECIDES } from '../../../../shared/contracts/safety-advice';
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
 import { Button } from '../../../components/ui/button';
@@ -5,7 +6,7 @@ import { plannedPlan } from '../utils/bench-readings';
 import { benchSheetLines, type BenchLine } from '../utils/bench-sheet-lines';
 import { STATUS_WORDS } from '../utils/status-words';
 import { hazardNotesOf } from '../utils/equipment-labels';
-import { HazardNotes } from './hazard-notes';
+import { HazardCaution } from '../../../components/hazard-caution';
 
 const BLANK = <span className="inline-block h-7 w-full border-b border-ink/60" />;
 
@@ -92,7 +93,7 @@ export function BenchSheet({ detail, library }: BenchSheetProps) {
 
       {[...hazards].map(([code, notes]) => (
         <div key={code} className="mb-4 break-inside-avoid">
-          <HazardNotes code={code} notes={notes} />
+          <HazardCaution title={`Hazards of ${code}`} entries={[{ key: code, code, notes }]} />
         </div>
       ))}
 
@@ -126,9 +127,7 @@ export function BenchSheet({ detail, library }: BenchSheetProps) {
           </p>
         </div>
       </div>
-      <p className="mt-4 text-xs text-muted">
-        The tool computes; the lab's accredited procedures and its QA system decide.
-      </p>
+      <p className="mt-4 text-xs text-muted">{LAB_DECIDES}</p>
     </article>
   );
 }

@@ -12,7 +12,7 @@ import { evaluateDraft, fieldMessage, type DraftEvaluation } from '../utils/eval
 import { overridesToSave, storedPlan, type PlanDraft } from '../utils/plan-draft';
 import { stepNamer } from '../utils/step-names';
 import { BudgetTable } from './budget-table';
-import { HazardNotes } from './hazard-notes';
+import { HazardCaution } from '../../../components/hazard-caution';
 import { MonteCarloPanel } from './monte-carlo-panel';
 import { PlanEditor } from './plan-editor';
 import { ResultStatement } from './result-statement';
@@ -141,7 +141,10 @@ export function Workspace({
       ) : null}
       {material ? (
         <div className="mb-6">
-          <HazardNotes code={material.code} notes={hazardNotesOf(material)} />
+          <HazardCaution
+            title={`Hazards of ${material.code}`}
+            entries={[{ key: material.code, code: material.code, notes: hazardNotesOf(material) }]}
+          />
         </div>
       ) : null}
       <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">

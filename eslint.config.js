@@ -1,4 +1,4 @@
-// ESLint flat config. The layer rules of CONVENTIONS.md §2 and §8 live here (boundaries/dependencies,
+// ESLint flat config. The layer rules (DEVELOPERS.md, "Lint, format, unused code") live here (boundaries/dependencies,
 // no-restricted-globals, no-restricted-imports, no-restricted-syntax); tests/unit/lint-boundaries.test.ts
 // proves each one fires.
 import js from '@eslint/js';

@@ -1,7 +1,7 @@
 import type { Role } from './roles';
 
 /**
- * What a member may do in a lab, and which roles grant it (DESIGN.md §2): the one table the
+ * What a member may do in a lab, and which roles grant it: the one table the
  * server's `authorize.lab(permission)` and the client's navigation and buttons both read.
  * Reading a lab's data needs only membership ('member'), so it has no entry here.
  */

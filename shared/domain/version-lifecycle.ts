@@ -3,7 +3,7 @@ import type { AllowedActions, PreparationStatus } from '../contracts/preparation
 import type { Role } from '../contracts/roles';
 
 /**
- * The life of a preparation version (DESIGN.md §4), the one home of its rules: which states allow
+ * The life of a preparation version, the one home of its rules: which states allow
  * which action, and who may act. The server refuses every change through this table; it also computes
  * `allowedActions` from it for the signed-in member, and the client shows or hides actions from that.
  *

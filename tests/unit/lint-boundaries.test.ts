@@ -4,7 +4,7 @@ import { ESLint } from 'eslint';
 import { beforeAll, describe, expect, it } from 'vitest';
 
 /**
- * The layer rules live in eslint.config.js (CONVENTIONS.md §2). Each case lints a small snippet as if it
+ * The layer rules live in eslint.config.js. Each case lints a small snippet as if it
  * sat at a real path and checks which rule fires, so a rule that stops matching fails here.
  */
 const root = join(import.meta.dirname, '..', '..');

@@ -13,6 +13,7 @@ const testFiles = ['**/*.test.ts', '**/*.test.tsx', 'tests/**', '**/test-support
 const elements = [
   { type: 'engine', pattern: 'shared/uncertainty', partialMatch: false },
   { type: 'contracts', pattern: 'shared/contracts', partialMatch: false },
+  { type: 'domain', pattern: 'shared/domain', partialMatch: false },
   { type: 'server', pattern: 'server', partialMatch: false },
   { type: 'tooling', pattern: '{bench,migrations,tests}', partialMatch: false },
   { type: 'client-app', pattern: 'src/app', partialMatch: false },
@@ -26,7 +27,7 @@ const clientTypes = ['client-app', 'feature', 'client-base'];
 const hostPolicies = [
   {
     // Shared code runs unchanged in the browser (the engine also in a Web Worker) and in Node.
-    from: { element: { type: ['engine', 'contracts'] } },
+    from: { element: { type: ['engine', 'contracts', 'domain'] } },
     disallow: { to: [{ module: { origin: 'core' } }, { module: { origin: 'external', source: '!zod' } }] },
     message: 'shared/ imports only its own files and zod: no Node module, DOM library or framework.',
   },
@@ -36,11 +37,16 @@ const hostPolicies = [
 const layerPolicies = [
   {
     from: { element: { type: 'engine' } },
-    disallow: { to: { element: { type: ['contracts', 'server', 'tooling', ...clientTypes] } } },
+    disallow: { to: { element: { type: ['contracts', 'domain', 'server', 'tooling', ...clientTypes] } } },
     message: 'The engine (shared/uncertainty) imports only its own files and zod.',
   },
   {
     from: { element: { type: 'contracts' } },
+    disallow: { to: { element: { type: ['domain', 'server', 'tooling', ...clientTypes] } } },
+    message: 'shared/contracts holds shapes and words: it imports neither the rules of shared/domain, src nor server.',
+  },
+  {
+    from: { element: { type: 'domain' } },
     disallow: { to: { element: { type: ['server', 'tooling', ...clientTypes] } } },
     message: 'shared/ imports neither src nor server (nor bench, migrations or tests).',
   },

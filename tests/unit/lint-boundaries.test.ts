@@ -80,6 +80,30 @@ describe('shared/contracts serves both sides', () => {
   });
 });
 
+describe('shared/domain holds the rules over the contracts', () => {
+  it('refuses the server, the client, Node and frameworks', async () => {
+    for (const specifier of ['../../server/lib/errors', '../../src/lib/api-error', 'node:fs', 'react']) {
+      expect(await rulesFired('shared/domain/version-lifecycle.ts', importing(specifier))).toEqual([
+        'boundaries/dependencies',
+      ]);
+    }
+  });
+
+  it('allows the contracts and zod, and is not imported by them', async () => {
+    expect(await rulesFired('shared/domain/version-lifecycle.ts', importing('../contracts/permissions'))).toEqual([]);
+    expect(await rulesFired('shared/domain/version-lifecycle.ts', importing('zod'))).toEqual([]);
+    expect(await rulesFired('shared/contracts/library.ts', importing('../domain/version-lifecycle'))).toEqual([
+      'boundaries/dependencies',
+    ]);
+  });
+
+  it('stays out of the engine', async () => {
+    expect(await rulesFired('shared/uncertainty/gum-budget.ts', importing('../domain/version-lifecycle'))).toEqual([
+      'boundaries/dependencies',
+    ]);
+  });
+});
+
 describe('src and server never import each other', () => {
   it('refuses the server in the client', async () => {
     expect(await rulesFired('src/lib/api-client.ts', importing('../../server/lib/errors'))).toEqual([

@@ -1,14 +1,13 @@
-import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { QueryClient } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import type { PreparationStatus } from '../../../../shared/contracts/preparations';
 import { Alert } from '../../../components/ui/alert';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
-import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
-import { preparationQueryOptions, usePreparation } from '../../../features/preparations/api/get-preparation';
+import { activeEquipmentQueryOptions, useActiveEquipment } from '../../../lib/api/lab-equipment';
+import { preparationQueryOptions, usePreparation } from '../../../lib/api/preparation';
 import { BenchSheet } from '../../../features/preparations/components/bench-sheet';
 import { ReadingsForm } from '../../../features/preparations/components/readings-form';
-import { recordsKeys } from '../../../features/records/api/records-keys';
 import { activeMembership, can } from '../../../lib/authorization';
 
 /** The states whose readings the owner may record or correct (the server says the same). */
@@ -28,7 +27,7 @@ export const clientLoader =
       await Promise.all([
         // The sheet prints what the server holds now, not a copy cached before the last autosave.
         queryClient.fetchQuery({ ...preparationQueryOptions(me.activeLabId, id), staleTime: 0 }),
-        queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)),
+        queryClient.ensureQueryData(activeEquipmentQueryOptions(me.activeLabId)),
       ]);
     }
     return null;
@@ -66,9 +65,8 @@ function BenchSheetPage({
   userId: number;
   planner: boolean;
 }) {
-  const queryClient = useQueryClient();
   const detail = usePreparation(labId, preparationId);
-  const library = useLabEquipment(labId);
+  const library = useActiveEquipment(labId);
   const version = detail.current;
   const recordsReadings = planner && detail.createdById === userId && READINGS_OPEN.includes(version.status);
   return (
@@ -84,13 +82,7 @@ function BenchSheetPage({
       </p>
       <BenchSheet detail={detail} library={library} />
       {recordsReadings ? (
-        <ReadingsForm
-          labId={labId}
-          detail={detail}
-          recordHref={paths.app.record.href(detail.id, version.number)}
-          // The record page keeps its own copy of the preparation and its versions.
-          onRecorded={() => queryClient.invalidateQueries({ queryKey: recordsKeys.preparation(labId, detail.id) })}
-        />
+        <ReadingsForm labId={labId} detail={detail} recordHref={paths.app.record.href(detail.id, version.number)} />
       ) : null}
     </>
   );

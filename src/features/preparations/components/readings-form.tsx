@@ -57,18 +57,17 @@ type ReadingsFormProps = {
   detail: PreparationDetail;
   /** Where the analyst submits the prepared version. */
   recordHref: string;
-  onRecorded?: (detail: PreparationDetail) => Promise<unknown>;
 };
 
 /**
  * The screen-only form under the bench sheet: the masses actually weighed (tare, gross, net) for each weighing
  * step and any deviation. The server recomputes the budget on them and the version becomes "prepared".
  */
-export function ReadingsForm({ labId, detail, recordHref, onRecorded }: ReadingsFormProps) {
+export function ReadingsForm({ labId, detail, recordHref }: ReadingsFormProps) {
   const version = detail.current;
   const [confirmation, setConfirmation] = useState<PreparationDetail | null>(null);
   const confirmationRef = useRef<HTMLDivElement>(null);
-  const record = useRecordReadings(labId, detail.id, onRecorded);
+  const record = useRecordReadings(labId, detail.id);
   const recordedAt = version.readings?.recordedAt;
   // Move focus to the confirmation once it is on screen, and again after the form below is rebuilt
   // for the recorded set (that rebuild removes the button that had focus).

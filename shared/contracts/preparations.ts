@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { MAXIMUM_FORMULA_LENGTH, MAXIMUM_MONTE_CARLO_TRIALS } from '../uncertainty/plan-limits';
 import { concentrationUnitNames } from '../uncertainty/units';
+import type { EquipmentItem } from './library';
 import { approvedAsSchema, reviewSchema } from './reviews';
 import { snapshotSchema } from './snapshot';
 
@@ -22,10 +23,23 @@ export const titleSchema = z
   .min(1, 'Give the preparation a title.')
   .max(200, 'Use at most 200 characters.');
 
-/** Using an overdue or expired item needs a recorded reason. */
+/**
+ * An item whose calibration is overdue or whose material has expired is used only with a recorded reason.
+ * The server's plan resolver and the planner's checks both ask this.
+ */
+export const needsOverrideReason = (item: Pick<EquipmentItem, 'calibration' | 'expiry'>): boolean =>
+  item.calibration === 'overdue' || item.expiry === 'expired';
+
+/** The reason recorded for using such an item: the server stores it, the planner checks it with the same words. */
+export const overrideReasonSchema = z
+  .string()
+  .trim()
+  .min(3, 'Say why this item may be used, in a few words (at least 3 characters).')
+  .max(500, 'Use at most 500 characters.');
+
 export const overrideSchema = z.object({
   libraryId: z.string().min(1),
-  reason: z.string().trim().min(3, 'Say why this item may be used, in a few words.').max(500),
+  reason: overrideReasonSchema,
 });
 export type Override = z.infer<typeof overrideSchema>;
 

@@ -1,10 +1,8 @@
 // @vitest-environment happy-dom
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { act, cleanup, renderHook, waitFor } from '@testing-library/react';
-import { Suspense, type ReactNode } from 'react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { DEFAULT_LAB_POLICY, type LabPolicy } from '../../../shared/contracts/library';
-import { stubServer } from '../../test-support/component-harness';
+import { queryWrapper, stubServer } from '../../test-support/component-harness';
 import { policyKeys, useLabPolicy, useUpdateLabPolicy } from './lab-policy';
 
 afterEach(() => {
@@ -32,15 +30,8 @@ function policyServer() {
 describe('the lab policy is one cache entry', () => {
   it('saving the policy re-reads it for an open planner before the save settles', async () => {
     const sent = policyServer();
-    // Fresh data never goes stale on its own here: only the save's invalidation can bring the new policy.
-    const client = new QueryClient({
-      defaultOptions: { queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } },
-    });
-    const wrapper = ({ children }: { children: ReactNode }) => (
-      <QueryClientProvider client={client}>
-        <Suspense fallback={null}>{children}</Suspense>
-      </QueryClientProvider>
-    );
+    // Fresh data never goes stale here: only the save's invalidation can bring the new policy.
+    const { client, wrapper } = queryWrapper();
     // The planner's read of the policy and the policy page's save, open at the same time.
     const { result } = renderHook(() => ({ planner: useLabPolicy(1), save: useUpdateLabPolicy() }), { wrapper });
     await waitFor(() => expect(result.current?.planner.coverage).toEqual({ mode: 'probability', probability: 0.9545 }));

@@ -28,7 +28,7 @@ export const equipmentKeys = {
 
 const equipmentListSchema = z.array(equipmentItemSchema);
 
-export function getEquipmentList(labId: number, { kind, status }: EquipmentListFilter): Promise<EquipmentItem[]> {
+function getEquipmentList(labId: number, { kind, status }: EquipmentListFilter): Promise<EquipmentItem[]> {
   const query = new URLSearchParams(kind ? { kind, status } : { status });
   return api.get(`/api/labs/${labId}/equipment?${query}`, equipmentListSchema);
 }
@@ -48,7 +48,7 @@ export function useActiveEquipment(labId: number): EquipmentItem[] {
 }
 
 /** One item with its revisions (newest first) and certificates. */
-export function getEquipmentItem(labId: number, itemId: number): Promise<EquipmentDetail> {
+function getEquipmentItem(labId: number, itemId: number): Promise<EquipmentDetail> {
   return api.get(`/api/labs/${labId}/equipment/${itemId}`, equipmentDetailSchema);
 }
 

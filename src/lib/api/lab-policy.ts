@@ -12,7 +12,7 @@ export const policyKeys = {
 export type StoredLabPolicy = z.infer<typeof labPolicyResponseSchema>;
 
 /** The lab's budget policy (coverage, glassware distribution, temperature range), with who set it and when. */
-export function getLabPolicy(labId: number): Promise<StoredLabPolicy> {
+function getLabPolicy(labId: number): Promise<StoredLabPolicy> {
   return api.get(`/api/labs/${labId}/policy`, labPolicyResponseSchema);
 }
 
@@ -25,7 +25,7 @@ export function useLabPolicy(labId: number): StoredLabPolicy {
 
 type UpdateLabPolicyInput = { labId: number; policy: LabPolicy };
 
-export function updateLabPolicy({ labId, policy }: UpdateLabPolicyInput): Promise<StoredLabPolicy> {
+function updateLabPolicy({ labId, policy }: UpdateLabPolicyInput): Promise<StoredLabPolicy> {
   return api.put(`/api/labs/${labId}/policy`, policy, labPolicyResponseSchema);
 }
 

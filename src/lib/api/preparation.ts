@@ -37,7 +37,7 @@ export const preparationKeys = {
 };
 
 /** The preparation with its list of versions (the latest in full). */
-export function getPreparation(labId: number, preparationId: number): Promise<PreparationDetail> {
+function getPreparation(labId: number, preparationId: number): Promise<PreparationDetail> {
   return api.get(`/api/labs/${labId}/preparations/${preparationId}`, preparationDetailSchema);
 }
 
@@ -62,7 +62,7 @@ export function usePreparationList(labId: number, preparationIds: number[]): Pre
 }
 
 /** One version in full: its plan, computed snapshot, hash and review trail. */
-export function getVersion(labId: number, preparationId: number, versionNumber: number): Promise<VersionDetail> {
+function getVersion(labId: number, preparationId: number, versionNumber: number): Promise<VersionDetail> {
   return api.get(`/api/labs/${labId}/preparations/${preparationId}/versions/${versionNumber}`, versionDetailSchema);
 }
 

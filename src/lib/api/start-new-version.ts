@@ -4,7 +4,7 @@ import { api } from '../api-client';
 import { usePreparationChanged } from './preparation';
 
 /** Opens a new draft version after an approved one (which itself never changes). */
-export function startNewVersion(labId: number, preparationId: number): Promise<PreparationDetail> {
+function startNewVersion(labId: number, preparationId: number): Promise<PreparationDetail> {
   return api.post(`/api/labs/${labId}/preparations/${preparationId}/versions`, {}, preparationDetailSchema);
 }
 

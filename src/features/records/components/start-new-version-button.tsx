@@ -17,7 +17,14 @@ export function StartNewVersionButton({ labId, preparationId, onStarted }: Start
   return (
     <div className="flex flex-col items-end gap-2">
       <Button
-        onClick={() => start.mutate(undefined, { onSuccess: onStarted })}
+        // mutateAsync, not mutate's callbacks: once the new draft is stored this button is no longer offered and
+        // unmounts, and a callback of an unmounted mutation is never called.
+        onClick={() =>
+          start.mutateAsync().then(
+            (detail) => onStarted?.(detail),
+            () => undefined, // shown below from the mutation's state
+          )
+        }
         pending={start.isPending}
         pendingLabel="Starting…"
       >

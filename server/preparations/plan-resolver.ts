@@ -1,6 +1,6 @@
 import { toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem, EquipmentKind } from '../../shared/contracts/library';
-import type { Override } from '../../shared/contracts/preparations';
+import { needsOverrideReason, type Override } from '../../shared/contracts/preparations';
 import type { UsedItem } from '../../shared/contracts/snapshot';
 import { PlanError, type PlanPathSegment } from '../../shared/uncertainty';
 import { AppError } from '../lib/errors';
@@ -71,7 +71,7 @@ export function resolvePlan(
         problems.push(
           new PlanError(path, `Step ${index + 1}: ${item.code} is retired and cannot be used in a new plan.`),
         );
-      else if ((item.calibration === 'overdue' || item.expiry === 'expired') && !reason) {
+      else if (needsOverrideReason(item) && !reason) {
         problems.push(
           new PlanError(
             path,

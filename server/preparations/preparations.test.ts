@@ -122,6 +122,17 @@ describe('saving a preparation computes and stores its snapshot', () => {
       .expect(201);
     expect(blocked.body.current.problem.message).toMatch(/BAL-04.*overdue.*reason/);
     const libraryId = String(library.get('BAL-04')!.id);
+    // The rule's words are the planner's own (shared/contracts overrideReasonSchema).
+    const tooShort = await analyst
+      .post(url('/preparations'), {
+        title: 'On the old balance',
+        plan: leadPlanWith({ balance: 'BAL-04' }),
+        overrides: [{ libraryId, reason: ' ok ' }],
+      })
+      .expect(400);
+    expect(tooShort.body.error.details).toEqual([
+      { path: 'overrides.0.reason', message: 'Say why this item may be used, in a few words (at least 3 characters).' },
+    ]);
     const allowed = await analyst
       .post(url('/preparations'), {
         title: 'On the old balance',

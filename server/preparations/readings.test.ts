@@ -85,6 +85,28 @@ describe('actual readings', () => {
     expect((await t.db('preparation_versions').first()).status).toBe('draft');
   });
 
+  it('refuses a gross not above the tare, and a missing net, with the readings form’s words at those fields', async () => {
+    // The rule and its words live once, in shared/contracts readingSchema; the form resolves with the same schema.
+    const refused = await analyst
+      .post(url(`/preparations/${id}/versions/1/readings`), {
+        readings: [{ stepIndex: 0, actualMassG: 0.5, tareG: 10, grossG: 9.5 }],
+      })
+      .expect(400);
+    expect(refused.body.error.details).toEqual([
+      { path: 'readings.0.grossG', message: 'The gross must be more than the tare.' },
+    ]);
+    const missing = await analyst
+      .post(url(`/preparations/${id}/versions/1/readings`), { readings: [{ stepIndex: 0, tareG: 'ten' }] })
+      .expect(400);
+    expect(missing.body.error.details).toEqual(
+      expect.arrayContaining([
+        { path: 'readings.0.actualMassG', message: 'Enter the net mass weighed, or the tare and gross.' },
+        { path: 'readings.0.tareG', message: 'Enter the mass as a number, e.g. 0.15990.' },
+      ]),
+    );
+    expect((await t.db('preparation_versions').first()).status).toBe('draft');
+  });
+
   it('lets only the owning analyst record readings', async () => {
     const other = await signIn(t.app, demo('analyst2'));
     await other

@@ -1,5 +1,6 @@
 import { policySettings, toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem } from '../../shared/contracts/library';
+import { needsOverrideReason } from '../../shared/contracts/preparations';
 import type { Computer } from '../compute/compute-pool';
 import {
   type RouteRequest,
@@ -16,8 +17,7 @@ import type { LibraryService } from '../library/library-service';
 import type { PolicyService } from '../policy/policy-service';
 
 /** Items a new plan may use without an override: active, calibrated, not expired. */
-const usable = (item: EquipmentItem) =>
-  item.status === 'active' && item.calibration !== 'overdue' && item.expiry !== 'expired';
+const usable = (item: EquipmentItem) => item.status === 'active' && !needsOverrideReason(item);
 
 /** Runs the engine's route finder over the lab's current library and policy, in the compute pool. */
 export function routeFinderService(deps: { items: LibraryService; policy: PolicyService; computer: Computer }) {

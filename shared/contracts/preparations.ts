@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { MAXIMUM_FORMULA_LENGTH, MAXIMUM_MONTE_CARLO_TRIALS } from '../uncertainty/plan-limits';
 import { concentrationUnitNames } from '../uncertainty/units';
+import type { EquipmentItem } from './library';
 import { approvedAsSchema, reviewSchema } from './reviews';
 import { snapshotSchema } from './snapshot';
 
@@ -22,10 +23,23 @@ export const titleSchema = z
   .min(1, 'Give the preparation a title.')
   .max(200, 'Use at most 200 characters.');
 
-/** Using an overdue or expired item needs a recorded reason. */
+/**
+ * An item whose calibration is overdue or whose material has expired is used only with a recorded reason.
+ * The server's plan resolver and the planner's checks both ask this.
+ */
+export const needsOverrideReason = (item: Pick<EquipmentItem, 'calibration' | 'expiry'>): boolean =>
+  item.calibration === 'overdue' || item.expiry === 'expired';
+
+/** The reason recorded for using such an item: the server stores it, the planner checks it with the same words. */
+export const overrideReasonSchema = z
+  .string()
+  .trim()
+  .min(3, 'Say why this item may be used, in a few words (at least 3 characters).')
+  .max(500, 'Use at most 500 characters.');
+
 export const overrideSchema = z.object({
   libraryId: z.string().min(1),
-  reason: z.string().trim().min(3, 'Say why this item may be used, in a few words.').max(500),
+  reason: overrideReasonSchema,
 });
 export type Override = z.infer<typeof overrideSchema>;
 
@@ -49,16 +63,34 @@ export const preparationListQuerySchema = z.object({
   q: z.string().trim().max(200).optional(),
 });
 
-/** A mass actually weighed at the bench for one step (the planned value stays in the record). */
-export const readingSchema = z.object({
-  stepIndex: z.number().int().min(0),
-  actualMassG: z
-    .number()
-    .positive('The mass weighed must be greater than zero.')
-    .refine(Number.isFinite, 'Enter the mass as a number.'),
-  tareG: z.number().nonnegative().optional(),
-  grossG: z.number().positive().optional(),
-});
+const MASS_NOT_A_NUMBER = 'Enter the mass as a number, e.g. 0.15990.';
+
+/**
+ * A mass actually weighed at the bench for one step (the planned value stays in the record). The server
+ * validates with it and the readings form resolves with it, so each rule and its words live here only.
+ */
+export const readingSchema = z
+  .object({
+    stepIndex: z.number().int().min(0),
+    actualMassG: z
+      .number({
+        error: (issue) =>
+          issue.input === undefined ? 'Enter the net mass weighed, or the tare and gross.' : MASS_NOT_A_NUMBER,
+      })
+      .positive('The mass weighed must be greater than zero.')
+      .refine(Number.isFinite, MASS_NOT_A_NUMBER),
+    tareG: z.number({ message: MASS_NOT_A_NUMBER }).nonnegative('The tare cannot be negative.').optional(),
+    grossG: z.number({ message: MASS_NOT_A_NUMBER }).positive('The gross must be greater than zero.').optional(),
+  })
+  .refine((reading) => reading.tareG === undefined || reading.grossG === undefined || reading.grossG > reading.tareG, {
+    path: ['grossG'],
+    message: 'The gross must be more than the tare.',
+    // Checked whenever both are numbers, even while the net is still missing.
+    when: ({ value }) => {
+      const { tareG, grossG } = (value ?? {}) as { tareG?: unknown; grossG?: unknown };
+      return typeof tareG === 'number' && typeof grossG === 'number' && tareG >= 0;
+    },
+  });
 
 export const readingsRequestSchema = z.object({
   readings: z.array(readingSchema).min(1, 'Enter at least one mass weighed.').max(20),
@@ -164,7 +196,9 @@ export type PreparationDetail = z.infer<typeof preparationDetailSchema>;
 
 export const routeFinderRequestSchema = z.object({
   target: z.object({
-    value: z.number().positive('The target must be greater than zero.'),
+    value: z
+      .number({ message: 'Enter the target concentration as a number.' })
+      .positive('The target must be greater than zero.'),
     unit: z.enum(concentrationUnitNames, { message: `Choose a unit: ${concentrationUnitNames.join(', ')}.` }),
   }),
   analyte: z

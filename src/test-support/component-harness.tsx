@@ -2,7 +2,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { Suspense, type ReactElement } from 'react';
+import { Suspense, type ReactElement, type ReactNode } from 'react';
 import { MemoryRouter, Route, Routes } from 'react-router';
 import { vi } from 'vitest';
 import { meSchema, type Me } from '../../shared/contracts/auth';
@@ -68,6 +68,19 @@ export function stubServer(answer: (request: SentRequest) => Answer | undefined)
     }),
   );
   return sent;
+}
+
+/** A fresh query cache whose data never goes stale by itself (only an invalidation re-reads it), for renderHook. */
+export function queryWrapper() {
+  const client = new QueryClient({
+    defaultOptions: { queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } },
+  });
+  const wrapper = ({ children }: { children: ReactNode }) => (
+    <QueryClientProvider client={client}>
+      <Suspense fallback={null}>{children}</Suspense>
+    </QueryClientProvider>
+  );
+  return { client, wrapper };
 }
 
 /** Renders `element` at `path` under `pattern` with a fresh query cache that `seed` may fill first. */

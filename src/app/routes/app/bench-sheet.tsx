@@ -1,13 +1,12 @@
-import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { QueryClient } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../components/ui/alert';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
-import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
-import { preparationQueryOptions, usePreparation } from '../../../features/preparations/api/get-preparation';
+import { activeEquipmentQueryOptions, useActiveEquipment } from '../../../lib/api/lab-equipment';
+import { preparationQueryOptions, usePreparation } from '../../../lib/api/preparation';
 import { BenchSheet } from '../../../features/preparations/components/bench-sheet';
 import { ReadingsForm } from '../../../features/preparations/components/readings-form';
-import { recordsKeys } from '../../../features/records/api/records-keys';
 import { activeMembership } from '../../../lib/authorization';
 
 const idFrom = (value: string | undefined) => {
@@ -24,7 +23,7 @@ export const clientLoader =
       await Promise.all([
         // The sheet prints what the server holds now, not a copy cached before the last autosave.
         queryClient.fetchQuery({ ...preparationQueryOptions(me.activeLabId, id), staleTime: 0 }),
-        queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)),
+        queryClient.ensureQueryData(activeEquipmentQueryOptions(me.activeLabId)),
       ]);
     }
     return null;
@@ -45,9 +44,8 @@ export function Component() {
 }
 
 function BenchSheetPage({ labId, preparationId }: { labId: number; preparationId: number }) {
-  const queryClient = useQueryClient();
   const detail = usePreparation(labId, preparationId);
-  const library = useLabEquipment(labId);
+  const library = useActiveEquipment(labId);
   const version = detail.current;
   const recordsReadings = version.allowedActions.recordReadings;
   return (
@@ -63,13 +61,7 @@ function BenchSheetPage({ labId, preparationId }: { labId: number; preparationId
       </p>
       <BenchSheet detail={detail} library={library} />
       {recordsReadings ? (
-        <ReadingsForm
-          labId={labId}
-          detail={detail}
-          recordHref={paths.app.record.href(detail.id, version.number)}
-          // The record page keeps its own copy of the preparation and its versions.
-          onRecorded={() => queryClient.invalidateQueries({ queryKey: recordsKeys.preparation(labId, detail.id) })}
-        />
+        <ReadingsForm labId={labId} detail={detail} recordHref={paths.app.record.href(detail.id, version.number)} />
       ) : null}
     </>
   );

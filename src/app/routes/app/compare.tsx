@@ -4,7 +4,7 @@ import { Alert } from '../../../components/ui/alert';
 import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
-import { preparationQueryOptions, usePreparationList } from '../../../features/preparations/api/get-preparation';
+import { preparationQueryOptions, usePreparationList } from '../../../lib/api/preparation';
 import { CompareView } from '../../../features/preparations/components/compare-view';
 import { activeMembership } from '../../../lib/authorization';
 

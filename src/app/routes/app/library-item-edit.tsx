@@ -6,7 +6,7 @@ import { Alert } from '../../../components/ui/alert';
 import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
-import { equipmentItemQueryOptions, useEquipmentItem } from '../../../features/library/api/get-equipment-item';
+import { equipmentItemQueryOptions, useEquipmentItem } from '../../../lib/api/lab-equipment';
 import { equipmentTemplatesQueryOptions } from '../../../features/library/api/get-equipment-templates';
 import { EquipmentForm } from '../../../features/library/components/equipment-form';
 import { singularOf } from '../../../features/library/utils/equipment-kinds';

@@ -5,7 +5,7 @@ import { Card } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
-import { equipmentItemQueryOptions, useEquipmentItem } from '../../../features/library/api/get-equipment-item';
+import { equipmentItemQueryOptions, useEquipmentItem } from '../../../lib/api/lab-equipment';
 import { CertificateList } from '../../../features/library/components/certificate-list';
 import { CertificateUpload } from '../../../features/library/components/certificate-upload';
 import { HazardCaution } from '../../../components/hazard-caution';

@@ -5,7 +5,7 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
 import { csvExportUrl } from '../../../features/library/api/get-csv-columns';
-import { equipmentListQueryOptions, useEquipmentList } from '../../../features/library/api/get-equipment-list';
+import { equipmentListQueryOptions, useEquipmentList } from '../../../lib/api/lab-equipment';
 import { EquipmentTable } from '../../../features/library/components/equipment-table';
 import { KindTabs } from '../../../features/library/components/kind-tabs';
 import { StatusFilter, statusFromSearch } from '../../../features/library/components/status-filter';
@@ -20,11 +20,10 @@ export const clientLoader =
     if (me?.activeLabId) {
       // fetchQuery, not ensureQueryData: a list marked stale by a change elsewhere is read again before showing.
       await queryClient.fetchQuery(
-        equipmentListQueryOptions(
-          me.activeLabId,
-          kindFromSearch(search.get('kind')),
-          statusFromSearch(search.get('status')),
-        ),
+        equipmentListQueryOptions(me.activeLabId, {
+          kind: kindFromSearch(search.get('kind')),
+          status: statusFromSearch(search.get('status')),
+        }),
       );
     }
     return null;
@@ -54,7 +53,7 @@ function LibraryPage({ labId, keeper }: { labId: number; keeper: boolean }) {
   const navigate = useNavigate();
   const kind = kindFromSearch(searchParams.get('kind'));
   const status = statusFromSearch(searchParams.get('status'));
-  const items = useEquipmentList(labId, kind, status);
+  const items = useEquipmentList(labId, { kind, status });
   const tab = KIND_TABS.find((each) => each.kind === kind) ?? KIND_TABS[0];
   const plural = tab.label.toLowerCase();
   const caption = { active: `${plural} in use`, retired: `retired ${plural}`, all: plural }[status];

@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Alert } from '../../../components/ui/alert';
 import { PageHeader } from '../../../components/ui/page-header';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
-import { policyQueryOptions, usePolicy } from '../../../features/policy/api/get-policy';
+import { labPolicyQueryOptions, useLabPolicy } from '../../../lib/api/lab-policy';
 import { PolicyForm } from '../../../features/policy/components/policy-form';
 import { PolicySummary } from '../../../features/policy/components/policy-summary';
 import { activeMembership, can } from '../../../lib/authorization';
@@ -10,7 +10,7 @@ import { formatDateTime } from '../../../lib/format-date';
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
-  if (me?.activeLabId) await queryClient.ensureQueryData(policyQueryOptions(me.activeLabId));
+  if (me?.activeLabId) await queryClient.ensureQueryData(labPolicyQueryOptions(me.activeLabId));
   return null;
 };
 
@@ -33,7 +33,7 @@ export function Component() {
 }
 
 function PolicyPage({ labId, labName, editable }: { labId: number; labName: string; editable: boolean }) {
-  const { updatedAt, updatedBy, ...policy } = usePolicy(labId);
+  const { updatedAt, updatedBy, ...policy } = useLabPolicy(labId);
   const updated = updatedAt
     ? `Last changed by ${updatedBy ?? 'a former member'} on ${formatDateTime(updatedAt)}.`
     : 'The defaults apply; nobody has changed the policy yet.';

@@ -6,8 +6,8 @@ import { NotPermitted } from '../../../components/errors/not-permitted';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
 import { useCreatePreparation } from '../../../features/preparations/api/create-preparation';
-import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
-import { labPolicyQueryOptions, useLabPolicy } from '../../../features/preparations/api/get-lab-policy';
+import { activeEquipmentQueryOptions, useActiveEquipment } from '../../../lib/api/lab-equipment';
+import { labPolicyQueryOptions, useLabPolicy } from '../../../lib/api/lab-policy';
 import { Workspace } from '../../../features/preparations/components/workspace';
 import { WorkspaceHeader } from '../../../features/preparations/components/workspace-header';
 import { emptyDraft } from '../../../features/preparations/utils/plan-draft';
@@ -17,7 +17,7 @@ export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
   if (me?.activeLabId) {
     await Promise.all([
-      queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)),
+      queryClient.ensureQueryData(activeEquipmentQueryOptions(me.activeLabId)),
       queryClient.ensureQueryData(labPolicyQueryOptions(me.activeLabId)),
     ]);
   }
@@ -40,7 +40,7 @@ export function Component() {
 
 /** A new plan: nothing is stored until it has a title and a material; the first autosave creates it and opens its own page. */
 function NewPreparation({ labId }: { labId: number }) {
-  const library = useLabEquipment(labId);
+  const library = useActiveEquipment(labId);
   const policy = useLabPolicy(labId);
   const create = useCreatePreparation(labId);
   const navigate = useNavigate();

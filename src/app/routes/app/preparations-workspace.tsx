@@ -1,4 +1,4 @@
-import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
@@ -8,17 +8,16 @@ import { Button } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
 import { useDuplicatePreparation } from '../../../features/preparations/api/duplicate-preparation';
-import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
-import { labPolicyQueryOptions, useLabPolicy } from '../../../features/preparations/api/get-lab-policy';
-import { preparationQueryOptions, usePreparation } from '../../../features/preparations/api/get-preparation';
-import { preparationsKeys } from '../../../features/preparations/api/preparations-keys';
+import { activeEquipmentQueryOptions, useActiveEquipment } from '../../../lib/api/lab-equipment';
+import { labPolicyQueryOptions, useLabPolicy } from '../../../lib/api/lab-policy';
 import { saveDraft } from '../../../features/preparations/api/save-draft';
-import { useStartNewVersion } from '../../../features/preparations/api/start-new-version';
 import { Workspace, writeOf } from '../../../features/preparations/components/workspace';
 import { WorkspaceHeader } from '../../../features/preparations/components/workspace-header';
 import { draftFromPlan, type PlanDraft } from '../../../features/preparations/utils/plan-draft';
 import { BenchReadings } from '../../../features/records/components/bench-readings';
+import { StartNewVersionButton } from '../../../features/records/components/start-new-version-button';
 import { stepNamer } from '../../../features/records/utils/step-names';
+import { preparationQueryOptions, usePreparation, usePreparationChanged } from '../../../lib/api/preparation';
 import { activeMembership, can } from '../../../lib/authorization';
 
 const idFrom = (value: string | undefined) => {
@@ -34,7 +33,7 @@ export const clientLoader =
     if (me?.activeLabId && id) {
       await Promise.all([
         queryClient.ensureQueryData(preparationQueryOptions(me.activeLabId, id)),
-        queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)),
+        queryClient.ensureQueryData(activeEquipmentQueryOptions(me.activeLabId)),
         queryClient.ensureQueryData(labPolicyQueryOptions(me.activeLabId)),
       ]);
     }
@@ -76,7 +75,7 @@ function PreparationPage({
   planner: boolean;
 }) {
   const detail = usePreparation(labId, preparationId);
-  const library = useLabEquipment(labId);
+  const library = useActiveEquipment(labId);
   const policy = useLabPolicy(labId);
   // A new version or another preparation starts the workspace afresh from the server's plan.
   return (
@@ -102,11 +101,10 @@ type PreparationWorkspaceProps = {
 function PreparationWorkspace({ labId, detail, library, policy, planner }: PreparationWorkspaceProps) {
   const location = useLocation();
   const navigate = useNavigate();
-  const queryClient = useQueryClient();
+  const preparationChanged = usePreparationChanged(labId);
   const [searchParams] = useSearchParams();
   const variantOf = idFrom(searchParams.get('variantOf') ?? undefined);
   const duplicate = useDuplicatePreparation(labId, detail.id);
-  const newVersion = useStartNewVersion(labId, detail.id);
   const version = detail.current;
   const allowed = version.allowedActions;
   const editable = allowed.edit;
@@ -126,9 +124,8 @@ function PreparationWorkspace({ labId, detail, library, policy, planner }: Prepa
   });
   const stored = !editable && version.snapshot ? version.snapshot : null;
 
-  const failure = duplicate.error ?? newVersion.error;
-  const note = failure ? (
-    <Alert tone="danger">{failure.message}</Alert>
+  const note = duplicate.error ? (
+    <Alert tone="danger">{duplicate.error.message}</Alert>
   ) : version.status === 'prepared' ? (
     <Alert tone="info" title={`Version ${version.number} has been prepared`}>
       <p>
@@ -175,8 +172,7 @@ function PreparationWorkspace({ labId, detail, library, policy, planner }: Prepa
         save={(write) => saveDraft(labId, detail.id, version.number, write)}
         onSaved={(saved) => {
           // Whoever opens this preparation next (the list, the bench sheet, this page again) reads what was saved.
-          queryClient.setQueryData(preparationsKeys.detail(labId, saved.id), saved);
-          void queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) });
+          void preparationChanged(saved);
         }}
         header={(saveLine, draft) => (
           <WorkspaceHeader
@@ -215,11 +211,7 @@ function PreparationWorkspace({ labId, detail, library, policy, planner }: Prepa
                     Duplicate as a variant
                   </Button>
                 ) : null}
-                {allowed.startNewVersion ? (
-                  <Button pending={newVersion.isPending} pendingLabel="Starting…" onClick={() => newVersion.mutate()}>
-                    Start a new version
-                  </Button>
-                ) : null}
+                {allowed.startNewVersion ? <StartNewVersionButton labId={labId} preparationId={detail.id} /> : null}
               </>
             }
           />

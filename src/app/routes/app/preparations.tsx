@@ -7,12 +7,9 @@ import { Button } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
-import { labEquipmentQueryOptions, useLabEquipment } from '../../../features/preparations/api/get-lab-equipment';
-import {
-  preparationsQueryOptions,
-  usePreparations,
-  type PreparationListFilter,
-} from '../../../features/preparations/api/get-preparations';
+import { activeEquipmentQueryOptions, useActiveEquipment } from '../../../lib/api/lab-equipment';
+import { preparationsQueryOptions, usePreparations } from '../../../features/preparations/api/get-preparations';
+import type { PreparationListFilter } from '../../../lib/api/preparation';
 import { PreparationsFilters } from '../../../features/preparations/components/preparations-filters';
 import { PreparationsTable } from '../../../features/preparations/components/preparations-table';
 import { activeMembership, can } from '../../../lib/authorization';
@@ -42,7 +39,7 @@ export const clientLoader =
       await Promise.all([
         queryClient.ensureQueryData(preparationsQueryOptions(me.activeLabId, filter)),
         queryClient.ensureQueryData(preparationsQueryOptions(me.activeLabId, {})),
-        queryClient.ensureQueryData(labEquipmentQueryOptions(me.activeLabId)),
+        queryClient.ensureQueryData(activeEquipmentQueryOptions(me.activeLabId)),
       ]);
     }
     return null;
@@ -71,7 +68,7 @@ function PreparationsPage({ labId, planner }: { labId: number; planner: boolean 
   const filter = filterFrom(searchParams);
   const preparations = usePreparations(labId, filter);
   const everyone = usePreparations(labId, {});
-  const library = useLabEquipment(labId);
+  const library = useActiveEquipment(labId);
   const [selected, setSelected] = useState<number[]>([]);
 
   const analysts = [...new Map(everyone.map((row) => [row.createdById, row.createdBy])).entries()].map(

@@ -7,8 +7,7 @@ import type { AllowedActions, PreparationDetail } from '../../../../shared/contr
 import type { Role } from '../../../../shared/contracts/roles';
 import { paths } from '../../../config/paths';
 import { authKeys } from '../../../features/auth/api/auth-keys';
-import { recordQueryOptions } from '../../../features/records/api/get-record';
-import { recordVersionQueryOptions } from '../../../features/records/api/get-record-version';
+import { preparationKeys } from '../../../lib/api/preparation';
 import {
   meOf,
   preparationAt,
@@ -59,8 +58,8 @@ async function showRecord(
     path: paths.app.record.href(detail.id, 1),
     seed: (client) => {
       client.setQueryData(authKeys.me(), me);
-      client.setQueryData(recordQueryOptions(1, detail.id).queryKey, detail);
-      client.setQueryData(recordVersionQueryOptions(1, detail.id, 1).queryKey, detail.current);
+      client.setQueryData(preparationKeys.detail(1, detail.id), detail);
+      client.setQueryData(preparationKeys.version(1, detail.id, 1), detail.current);
     },
   });
   await screen.findByRole('heading', { level: 1, name: detail.title });

@@ -9,10 +9,7 @@ import { auditKeys } from '../../../features/audit/api/audit-keys';
 import { auditEventsQueryOptions, preparationHistoryQuery } from '../../../features/audit/api/get-audit-events';
 import { RecordAuditHistory } from '../../../features/audit/components/record-audit-history';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
-import { preparationsKeys } from '../../../features/preparations/api/preparations-keys';
-import { recordQueryOptions, useRecord } from '../../../features/records/api/get-record';
-import { recordVersionQueryOptions, useRecordVersion } from '../../../features/records/api/get-record-version';
-import { useRecordRefresh } from '../../../features/records/api/use-record-refresh';
+import { recordsKeys } from '../../../features/records/api/records-keys';
 import { BenchReadings } from '../../../features/records/components/bench-readings';
 import { BudgetSummary } from '../../../features/records/components/budget-summary';
 import { EquipmentUsed } from '../../../features/records/components/equipment-used';
@@ -32,6 +29,13 @@ import { ApproveButton } from '../../../features/reviews/components/approve-butt
 import { ReturnButton } from '../../../features/reviews/components/return-button';
 import { SubmitForReviewButton } from '../../../features/reviews/components/submit-for-review-button';
 import { isApiError } from '../../../lib/api-error';
+import {
+  preparationQueryOptions,
+  usePreparation,
+  usePreparationChanged,
+  useVersion,
+  versionQueryOptions,
+} from '../../../lib/api/preparation';
 import { activeMembership, activeRoles, can } from '../../../lib/authorization';
 
 const idFrom = (value: string | undefined) => {
@@ -49,8 +53,8 @@ export const clientLoader =
       const labId = me.activeLabId;
       // fetchQuery: a record changed by someone else since it was last read is read again before showing.
       await Promise.all([
-        queryClient.fetchQuery(recordQueryOptions(labId, preparationId)),
-        queryClient.fetchQuery(recordVersionQueryOptions(labId, preparationId, versionNumber)),
+        queryClient.fetchQuery({ ...preparationQueryOptions(labId, preparationId), staleTime: 0 }),
+        queryClient.fetchQuery(versionQueryOptions(labId, preparationId, versionNumber)),
         can(activeRoles(me), 'readAuditTrail')
           ? queryClient.fetchQuery(auditEventsQueryOptions(labId, preparationHistoryQuery(preparationId)))
           : null,
@@ -109,8 +113,8 @@ type RecordPageProps = {
 };
 
 function RecordPage({ labId, preparationId, versionNumber, roles }: RecordPageProps) {
-  const preparation = useRecord(labId, preparationId);
-  const version = useRecordVersion(labId, preparationId, versionNumber);
+  const preparation = usePreparation(labId, preparationId);
+  const version = useVersion(labId, preparationId, versionNumber);
   const snapshot = version.snapshot;
   const stepName = snapshot ? stepNamer(snapshot.plan, snapshot.items) : (key: string) => key;
   const reference = { labId, preparationId, versionNumber };
@@ -207,17 +211,13 @@ type RecordActionsProps = {
 function RecordActions({ labId, preparation, version }: RecordActionsProps) {
   const queryClient = useQueryClient();
   const navigate = useNavigate();
-  const refreshRecord = useRecordRefresh(labId);
+  const preparationChanged = usePreparationChanged(labId);
   const reference = { labId, preparationId: preparation.id, versionNumber: version.number };
-  // The planner keeps its own copy of the preparation (it never refetches an open draft): hand it the new state.
-  const syncPlanner = async (detail: PreparationDetail) => {
-    queryClient.setQueryData(preparationsKeys.detail(labId, detail.id), detail);
-    await queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) });
-  };
+  // A review action changes the version's status and trail, the approved records and the audit trail.
   const onReviewed = async (detail: PreparationDetail) => {
     await Promise.all([
-      refreshRecord(detail),
-      syncPlanner(detail),
+      preparationChanged(detail),
+      queryClient.invalidateQueries({ queryKey: recordsKeys.approvedLists(labId) }),
       queryClient.invalidateQueries({ queryKey: auditKeys.lab(labId) }),
     ]);
   };
@@ -241,12 +241,13 @@ function RecordActions({ labId, preparation, version }: RecordActionsProps) {
     );
   }
   if (allowed.startNewVersion) {
-    const openPlanner = async (detail: PreparationDetail) => {
-      await syncPlanner(detail);
-      navigate(paths.app.preparation.href(preparation.id));
-    };
     actions.push(
-      <StartNewVersionButton key="new" labId={labId} preparationId={preparation.id} onStarted={openPlanner} />,
+      <StartNewVersionButton
+        key="new"
+        labId={labId}
+        preparationId={preparation.id}
+        onStarted={() => navigate(paths.app.preparation.href(preparation.id))}
+      />,
     );
   }
   return <>{actions}</>;

@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { useNavigate } from 'react-router';
+import type { EquipmentKind } from '../../../../shared/contracts/library';
 import { ROLE_LABELS } from '../../../../shared/contracts/roles';
 import { NotPermitted } from '../../../components/errors/not-permitted';
 import { Alert } from '../../../components/ui/alert';
@@ -13,14 +14,16 @@ import {
   type FoundRoute,
   type RouteFinderRequest,
 } from '../../../features/route-finder/api/find-routes';
-import { materialsQueryOptions, useMaterials } from '../../../features/route-finder/api/get-materials';
 import { RouteFinderForm } from '../../../features/route-finder/components/route-finder-form';
 import { RoutesTable } from '../../../features/route-finder/components/routes-table';
+import { activeEquipmentQueryOptions, useActiveEquipment } from '../../../lib/api/lab-equipment';
 import { activeMembership, can } from '../../../lib/authorization';
+
+const MATERIAL_KINDS: readonly EquipmentKind[] = ['solid-material', 'solution-material'];
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
-  if (me?.activeLabId) await queryClient.ensureQueryData(materialsQueryOptions(me.activeLabId));
+  if (me?.activeLabId) await queryClient.ensureQueryData(activeEquipmentQueryOptions(me.activeLabId));
   return null;
 };
 
@@ -39,7 +42,12 @@ export function Component() {
 }
 
 function RouteFinderPage({ labId, planner }: { labId: number; planner: boolean }) {
-  const materials = useMaterials(labId);
+  const library = useActiveEquipment(labId);
+  // The lab's active reference materials, solids first, then certified solutions (read from the planner's cache entry).
+  const materials = useMemo(
+    () => MATERIAL_KINDS.flatMap((kind) => library.filter((item) => item.kind === kind)),
+    [library],
+  );
   const find = useFindRoutes(labId);
   const create = useCreatePreparation(labId);
   const navigate = useNavigate();

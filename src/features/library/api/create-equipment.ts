@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { equipmentDetailSchema, type EquipmentDetail, type EquipmentKind } from '../../../../shared/contracts/library';
 import { api } from '../../../lib/api-client';
-import { libraryKeys } from './library-keys';
+import { equipmentKeys } from '../../../lib/api/lab-equipment';
 
 type CreateEquipmentInput = { labId: number; kind: EquipmentKind; data: Record<string, unknown>; reason?: string };
 
@@ -14,6 +14,6 @@ export function useCreateEquipment() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createEquipment,
-    onSuccess: (_detail, { labId }) => queryClient.invalidateQueries({ queryKey: libraryKeys.lists(labId) }),
+    onSuccess: (_detail, { labId }) => queryClient.invalidateQueries({ queryKey: equipmentKeys.lists(labId) }),
   });
 }

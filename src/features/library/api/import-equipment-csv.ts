@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { importResultSchema, type EquipmentKind, type ImportResult } from '../../../../shared/contracts/library';
 import { api } from '../../../lib/api-client';
-import { libraryKeys } from './library-keys';
+import { equipmentKeys } from '../../../lib/api/lab-equipment';
 
 type ImportInput = { labId: number; kind: EquipmentKind; csv: string; dryRun: boolean };
 
@@ -18,7 +18,7 @@ export function useImportEquipmentCsv() {
   return useMutation({
     mutationFn: importEquipmentCsv,
     onSuccess: async (result, { labId }) => {
-      if (result.written) await queryClient.invalidateQueries({ queryKey: libraryKeys.lab(labId) });
+      if (result.written) await queryClient.invalidateQueries({ queryKey: equipmentKeys.lab(labId) });
     },
   });
 }

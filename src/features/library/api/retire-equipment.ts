@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { equipmentDetailSchema, type EquipmentDetail } from '../../../../shared/contracts/library';
 import { api } from '../../../lib/api-client';
-import { equipmentItemQueryOptions } from './get-equipment-item';
-import { libraryKeys } from './library-keys';
+import { equipmentKeys } from '../../../lib/api/lab-equipment';
 
 type RetireEquipmentInput = { labId: number; itemId: number; reason: string };
 
@@ -16,8 +15,8 @@ export function useRetireEquipment() {
   return useMutation({
     mutationFn: retireEquipment,
     onSuccess: async (detail, { labId, itemId }) => {
-      queryClient.setQueryData(equipmentItemQueryOptions(labId, itemId).queryKey, detail);
-      await queryClient.invalidateQueries({ queryKey: libraryKeys.lists(labId) });
+      queryClient.setQueryData(equipmentKeys.detail(labId, itemId), detail);
+      await queryClient.invalidateQueries({ queryKey: equipmentKeys.lists(labId) });
     },
   });
 }

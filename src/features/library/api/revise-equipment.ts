@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { equipmentDetailSchema, type EquipmentDetail } from '../../../../shared/contracts/library';
 import { api } from '../../../lib/api-client';
-import { equipmentItemQueryOptions } from './get-equipment-item';
-import { libraryKeys } from './library-keys';
+import { equipmentKeys } from '../../../lib/api/lab-equipment';
 
 type ReviseEquipmentInput = { labId: number; itemId: number; data: Record<string, unknown>; reason: string };
 
@@ -16,8 +15,8 @@ export function useReviseEquipment() {
   return useMutation({
     mutationFn: reviseEquipment,
     onSuccess: async (detail, { labId, itemId }) => {
-      queryClient.setQueryData(equipmentItemQueryOptions(labId, itemId).queryKey, detail);
-      await queryClient.invalidateQueries({ queryKey: libraryKeys.lists(labId) });
+      queryClient.setQueryData(equipmentKeys.detail(labId, itemId), detail);
+      await queryClient.invalidateQueries({ queryKey: equipmentKeys.lists(labId) });
     },
   });
 }

@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { certificateSchema, type Certificate } from '../../../../shared/contracts/library';
 import { api } from '../../../lib/api-client';
-import { equipmentItemQueryOptions } from './get-equipment-item';
-import { libraryKeys } from './library-keys';
+import { equipmentKeys } from '../../../lib/api/lab-equipment';
 
 type UploadCertificateInput = { labId: number; itemId: number; revisionNumber: number; file: File };
 
@@ -28,8 +27,8 @@ export function useUploadCertificate() {
     mutationFn: uploadCertificate,
     onSuccess: (_certificate, { labId, itemId }) =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: equipmentItemQueryOptions(labId, itemId).queryKey }),
-        queryClient.invalidateQueries({ queryKey: libraryKeys.lists(labId) }),
+        queryClient.invalidateQueries({ queryKey: equipmentKeys.detail(labId, itemId) }),
+        queryClient.invalidateQueries({ queryKey: equipmentKeys.lists(labId) }),
       ]),
   });
 }

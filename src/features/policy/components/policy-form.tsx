@@ -7,7 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { applyApiError } from '../../../lib/form-errors';
-import { useUpdatePolicy } from '../api/update-policy';
+import { useUpdateLabPolicy } from '../../../lib/api/lab-policy';
 
 type CoverageErrors = { probability?: { message?: string }; k?: { message?: string } } | undefined;
 
@@ -28,7 +28,7 @@ const RADIO = 'size-4 accent-[var(--color-ink)]';
 
 /** QA's settings for every budget in the lab, each with what it does. */
 export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy }) {
-  const updatePolicy = useUpdatePolicy();
+  const updatePolicy = useUpdateLabPolicy();
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   const {

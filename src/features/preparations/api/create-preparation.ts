@@ -1,11 +1,11 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import {
   preparationDetailSchema,
   type PreparationDetail,
   type PreparationWrite,
 } from '../../../../shared/contracts/preparations';
 import { api } from '../../../lib/api-client';
-import { preparationsKeys } from './preparations-keys';
+import { usePreparationChanged } from '../../../lib/api/preparation';
 
 export function createPreparation(labId: number, write: PreparationWrite): Promise<PreparationDetail> {
   return api.post(`/api/labs/${labId}/preparations`, write, preparationDetailSchema);
@@ -13,12 +13,9 @@ export function createPreparation(labId: number, write: PreparationWrite): Promi
 
 /** Creates a preparation (its first draft version), puts it in the cache and refreshes the lists. */
 export function useCreatePreparation(labId: number) {
-  const queryClient = useQueryClient();
+  const preparationChanged = usePreparationChanged(labId);
   return useMutation({
     mutationFn: (write: PreparationWrite) => createPreparation(labId, write),
-    onSuccess: async (detail) => {
-      queryClient.setQueryData(preparationsKeys.detail(labId, detail.id), detail);
-      await queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) });
-    },
+    onSuccess: preparationChanged,
   });
 }

@@ -1,7 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { preparationDetailSchema, type PreparationDetail } from '../../../../shared/contracts/preparations';
 import { api } from '../../../lib/api-client';
-import { preparationsKeys } from './preparations-keys';
+import { usePreparationChanged } from '../../../lib/api/preparation';
 
 export function duplicatePreparation(labId: number, preparationId: number, title?: string): Promise<PreparationDetail> {
   return api.post(
@@ -13,12 +13,9 @@ export function duplicatePreparation(labId: number, preparationId: number, title
 
 /** Copies a preparation's latest plan into a new preparation (a variant to compare). */
 export function useDuplicatePreparation(labId: number, preparationId: number) {
-  const queryClient = useQueryClient();
+  const preparationChanged = usePreparationChanged(labId);
   return useMutation({
     mutationFn: (title?: string) => duplicatePreparation(labId, preparationId, title),
-    onSuccess: async (detail) => {
-      queryClient.setQueryData(preparationsKeys.detail(labId, detail.id), detail);
-      await queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) });
-    },
+    onSuccess: preparationChanged,
   });
 }

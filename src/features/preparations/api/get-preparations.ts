@@ -1,22 +1,8 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import {
-  preparationSummarySchema,
-  type PreparationStatus,
-  type PreparationSummary,
-} from '../../../../shared/contracts/preparations';
+import { preparationSummarySchema, type PreparationSummary } from '../../../../shared/contracts/preparations';
 import { api } from '../../../lib/api-client';
-import { preparationsKeys } from './preparations-keys';
-
-/** The list filters, as the API's query takes them (all optional). */
-export type PreparationListFilter = {
-  status?: PreparationStatus;
-  analyst?: number;
-  material?: string;
-  from?: string;
-  to?: string;
-  q?: string;
-};
+import { preparationKeys, type PreparationListFilter } from '../../../lib/api/preparation';
 
 const listSchema = z.array(preparationSummarySchema);
 
@@ -30,7 +16,7 @@ export function getPreparations(labId: number, filter: PreparationListFilter): P
 
 export const preparationsQueryOptions = (labId: number, filter: PreparationListFilter) =>
   queryOptions({
-    queryKey: preparationsKeys.list(labId, filter),
+    queryKey: preparationKeys.list(labId, filter),
     queryFn: () => getPreparations(labId, filter),
   });
 

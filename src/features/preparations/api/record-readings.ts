@@ -1,11 +1,11 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import {
   preparationDetailSchema,
   type PreparationDetail,
   type ReadingsRequest,
 } from '../../../../shared/contracts/preparations';
 import { api } from '../../../lib/api-client';
-import { preparationsKeys } from './preparations-keys';
+import { usePreparationChanged } from '../../../lib/api/preparation';
 
 type RecordReadingsInput = { versionNumber: number; request: ReadingsRequest };
 
@@ -22,21 +22,11 @@ export function recordReadings(
   );
 }
 
-/** `onRecorded` lets the page refresh what other features cache about the preparation (its record). */
-export function useRecordReadings(
-  labId: number,
-  preparationId: number,
-  onRecorded?: (detail: PreparationDetail) => Promise<unknown>,
-) {
-  const queryClient = useQueryClient();
+/** Stores the answer as the preparation's one detail entry; settles once its versions and the lists are read again. */
+export function useRecordReadings(labId: number, preparationId: number) {
+  const preparationChanged = usePreparationChanged(labId);
   return useMutation({
     mutationFn: (input: RecordReadingsInput) => recordReadings(labId, preparationId, input),
-    onSuccess: async (detail) => {
-      queryClient.setQueryData(preparationsKeys.detail(labId, preparationId), detail);
-      await Promise.all([
-        queryClient.invalidateQueries({ queryKey: preparationsKeys.lists(labId) }),
-        onRecorded?.(detail),
-      ]);
-    },
+    onSuccess: preparationChanged,
   });
 }

@@ -1,8 +1,8 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
+import { needsOverrideReason } from '../../../../shared/contracts/preparations';
 import { concentrationUnitNames } from '../../../../shared/uncertainty';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
-import { needsOverride } from '../utils/evaluate-draft';
 import { equipmentOptionLabel } from '../utils/equipment-labels';
 import type { PlanDraft } from '../utils/plan-draft';
 
@@ -67,7 +67,7 @@ export function PlanSettingsFields({
         options={UNIT_OPTIONS}
         error={errorAt('outputUnit')}
       />
-      {material && needsOverride(material) ? (
+      {material && needsOverrideReason(material) ? (
         <TextField
           label={`Reason for using ${material.code} (${material.flags.join('; ')})`}
           className="md:col-span-4"

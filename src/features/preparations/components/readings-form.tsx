@@ -1,6 +1,9 @@
-import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useEffect, useId, useRef, useState } from 'react';
+import { useForm, type UseFormRegisterReturn } from 'react-hook-form';
 import { Link } from 'react-router';
-import type { PreparationDetail } from '../../../../shared/contracts/preparations';
+import type { z } from 'zod';
+import type { PreparationDetail, ReadingsRequest } from '../../../../shared/contracts/preparations';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { describedBy, FieldMessages } from '../../../components/ui/field-message';
@@ -10,25 +13,21 @@ import { useRecordReadings } from '../api/record-readings';
 import {
   netFromGrossAndTare,
   placeServerIssues,
-  readingsRequest,
-  typedFromRecorded,
+  readingsFormSchema,
+  readingsFormValues,
   weighingRows,
-  type ReadingErrors,
-  type TypedReading,
-  type WeighingRow,
 } from '../utils/bench-readings';
 
 type ReadingInputProps = {
   id: string;
   label: string;
-  value: string;
   error?: string;
   hint?: string;
-  onChange: (value: string) => void;
+  field: UseFormRegisterReturn;
 };
 
 /** A mass box in the readings table: its label is read out ("Step 1 tare (g)") but the column header shows it. */
-function ReadingInput({ id, label, value, error, hint, onChange }: ReadingInputProps) {
+function ReadingInput({ id, label, error, hint, field }: ReadingInputProps) {
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="sr-only">
@@ -36,13 +35,11 @@ function ReadingInput({ id, label, value, error, hint, onChange }: ReadingInputP
       </label>
       <input
         id={id}
-        name={id}
         type="text"
         inputMode="decimal"
         autoComplete="off"
         spellCheck={false}
-        value={value}
-        onChange={(event) => onChange(event.target.value)}
+        {...field}
         aria-invalid={error ? true : undefined}
         aria-describedby={[describedBy(id, undefined, error), hint].filter(Boolean).join(' ') || undefined}
         className={`numeric w-32 rounded-md border bg-surface px-2 py-1.5 text-right text-base text-ink ${error ? 'border-danger' : 'border-line-strong'}`}
@@ -57,18 +54,17 @@ type ReadingsFormProps = {
   detail: PreparationDetail;
   /** Where the analyst submits the prepared version. */
   recordHref: string;
-  onRecorded?: (detail: PreparationDetail) => Promise<unknown>;
 };
 
 /**
  * The screen-only form under the bench sheet: the masses actually weighed (tare, gross, net) for each weighing
  * step and any deviation. The server recomputes the budget on them and the version becomes "prepared".
  */
-export function ReadingsForm({ labId, detail, recordHref, onRecorded }: ReadingsFormProps) {
+export function ReadingsForm({ labId, detail, recordHref }: ReadingsFormProps) {
   const version = detail.current;
   const [confirmation, setConfirmation] = useState<PreparationDetail | null>(null);
   const confirmationRef = useRef<HTMLDivElement>(null);
-  const record = useRecordReadings(labId, detail.id, onRecorded);
+  const record = useRecordReadings(labId, detail.id);
   const recordedAt = version.readings?.recordedAt;
   // Move focus to the confirmation once it is on screen, and again after the form below is rebuilt
   // for the recorded set (that rebuild removes the button that had focus).
@@ -121,27 +117,30 @@ export function ReadingsForm({ labId, detail, recordHref, onRecorded }: Readings
 type TypedReadingsProps = {
   detail: PreparationDetail;
   pending: boolean;
-  onSubmit: (
-    request: NonNullable<ReturnType<typeof readingsRequest>['request']>,
-    onError: (error: unknown) => void,
-  ) => void;
+  onSubmit: (request: ReadingsRequest, onError: (error: unknown) => void) => void;
 };
+
+const MASS_PARTS = ['tareG', 'grossG', 'actualMassG'] as const;
+const PART_WORDS = { tareG: 'tare', grossG: 'gross', actualMassG: 'net weighed' } as const;
 
 function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
   const version = detail.current;
   const formId = useId();
   const plan = version.snapshot?.plan ?? version.plan;
-  const [rows] = useState<WeighingRow[]>(() => weighingRows(plan, version.readings));
-  const [typed, setTyped] = useState<TypedReading[]>(() => rows.map(typedFromRecorded));
-  const [deviations, setDeviations] = useState(version.readings?.deviations ?? '');
-  const [errors, setErrors] = useState<ReadingErrors>({});
+  const [rows] = useState(() => weighingRows(plan, version.readings));
   const [formError, setFormError] = useState<string | null>(null);
-  const formRef = useRef<HTMLFormElement>(null);
-  // Bumped when errors are shown; the effect runs after they are on screen and focuses the first.
-  const [focusRequest, setFocusRequest] = useState(0);
-  useEffect(() => {
-    if (focusRequest > 0) formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]')?.focus();
-  }, [focusRequest]);
+  const {
+    register,
+    handleSubmit,
+    getValues,
+    setValue,
+    setError,
+    setFocus,
+    formState: { errors },
+  } = useForm<z.input<typeof readingsFormSchema>, unknown, z.output<typeof readingsFormSchema>>({
+    resolver: zodResolver(readingsFormSchema),
+    defaultValues: readingsFormValues(rows, version.readings),
+  });
   const fieldId = (path: string) => `${formId}-${path.replaceAll('.', '-')}`;
   const howNetHint = `${formId}-net-hint`;
 
@@ -161,50 +160,32 @@ function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
     );
   }
 
-  const clearError = (path: string) =>
-    setErrors((current) => {
-      if (!(path in current)) return current;
-      const { [path]: _cleared, ...rest } = current;
-      return rest;
-    });
-
-  const change = (index: number, part: keyof TypedReading, value: string) => {
-    const reading = { ...typed[index], [part]: value };
-    const net = part === 'net' ? null : netFromGrossAndTare(reading.tare, reading.gross);
-    if (net !== null) reading.net = net;
-    setTyped(typed.map((each, position) => (position === index ? reading : each)));
-    clearError(`readings.${index}.${part === 'net' ? 'actualMassG' : `${part}G`}`);
-    if (net !== null) clearError(`readings.${index}.actualMassG`);
+  /** Net fills in as gross − tare once both are typed. */
+  const fillNet = (index: number) => {
+    const net = netFromGrossAndTare(getValues(`readings.${index}.tareG`), getValues(`readings.${index}.grossG`));
+    if (net !== null) setValue(`readings.${index}.actualMassG`, net, { shouldValidate: Boolean(errors.readings) });
   };
 
-  const focusFirstError = (found: ReadingErrors) => {
-    setFocusRequest((count) => count + 1);
-    return found;
-  };
-
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
+  const submit = handleSubmit((request) => {
     setFormError(null);
-    const built = readingsRequest(rows, typed, deviations);
-    if (built.errors) {
-      setErrors(focusFirstError(built.errors));
-      return;
-    }
-    setErrors({});
-    onSubmit(built.request, (error) => {
+    onSubmit(request, (error) => {
       if (!isApiError(error)) {
         setFormError('The readings could not be recorded. Try again.');
         return;
       }
       const placed = placeServerIssues(rows, error.details);
-      setErrors(focusFirstError(placed.errors));
+      const paths = Object.keys(placed.errors) as (
+        `readings.${number}.${(typeof MASS_PARTS)[number]}` | 'deviations'
+      )[];
+      for (const path of paths) setError(path, { type: 'server', message: placed.errors[path] });
+      if (paths.length > 0) setFocus(paths[0]);
       const placedAll = error.details.length > 0 && placed.unplaced.length === 0;
       setFormError(placedAll && error.code !== 'plan_invalid' ? null : [error.message, ...placed.unplaced].join(' '));
     });
-  };
+  });
 
   return (
-    <form ref={formRef} noValidate onSubmit={submit} aria-labelledby="record-readings-heading" className="mt-2">
+    <form noValidate onSubmit={submit} aria-labelledby="record-readings-heading" className="mt-2">
       {version.readings ? (
         <p className="text-muted">
           Recorded by {version.readings.recordedBy},{' '}
@@ -251,17 +232,16 @@ function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
                     <span className="block text-sm text-muted">{row.what}</span>
                   </th>
                   <td className="numeric px-3 pt-4 pb-2 text-right">{row.plannedText}</td>
-                  {(['tare', 'gross', 'net'] as const).map((part) => {
-                    const path = `readings.${index}.${part === 'net' ? 'actualMassG' : `${part}G`}`;
+                  {MASS_PARTS.map((part) => {
+                    const path = `readings.${index}.${part}` as const;
                     return (
                       <td key={part} className="px-3 py-2">
                         <ReadingInput
                           id={fieldId(path)}
-                          label={`Step ${stepNumber} ${part === 'net' ? 'net weighed' : part} (g)`}
-                          value={typed[index][part]}
-                          error={errors[path]}
-                          hint={part === 'net' ? howNetHint : undefined}
-                          onChange={(value) => change(index, part, value)}
+                          label={`Step ${stepNumber} ${PART_WORDS[part]} (g)`}
+                          error={errors.readings?.[index]?.[part]?.message}
+                          hint={part === 'actualMassG' ? howNetHint : undefined}
+                          field={register(path, part === 'actualMassG' ? {} : { onChange: () => fillNet(index) })}
                         />
                       </td>
                     );
@@ -280,19 +260,15 @@ function TypedReadings({ detail, pending, onSubmit }: TypedReadingsProps) {
           id={fieldId('deviations')}
           rows={3}
           maxLength={2000}
-          value={deviations}
-          onChange={(event) => {
-            clearError('deviations');
-            setDeviations(event.target.value);
-          }}
+          {...register('deviations')}
           aria-invalid={errors.deviations ? true : undefined}
-          aria-describedby={describedBy(fieldId('deviations'), 'hint', errors.deviations)}
+          aria-describedby={describedBy(fieldId('deviations'), 'hint', errors.deviations?.message)}
           className={`rounded-md border bg-surface px-3 py-2 text-base text-ink ${errors.deviations ? 'border-danger' : 'border-line-strong'}`}
         />
         <FieldMessages
           id={fieldId('deviations')}
           hint="Anything done differently from the plan (another flask, a spill and restart). Leave it empty if there was none."
-          error={errors.deviations}
+          error={errors.deviations?.message}
         />
       </div>
       {formError ? (

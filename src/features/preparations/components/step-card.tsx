@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
 import type { EquipmentItem } from '../../../../shared/contracts/library';
+import { needsOverrideReason } from '../../../../shared/contracts/preparations';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
-import { needsOverride } from '../utils/evaluate-draft';
 import { equipmentOptionLabel } from '../utils/equipment-labels';
 import type { DraftStep } from '../utils/plan-draft';
 import { SLOT_KINDS, STEP_KINDS } from '../utils/step-kinds';
@@ -133,7 +133,7 @@ export function StepCard(props: StepCardProps) {
             }
           />
         ) : null}
-        {item && needsOverride(item) ? (
+        {item && needsOverrideReason(item) ? (
           <TextField
             label={`Reason for using ${item.code} (${item.flags.join('; ')})`}
             className="md:col-span-4"

@@ -4,8 +4,8 @@ import {
   netFromGrossAndTare,
   placeServerIssues,
   plannedPlan,
-  readingsRequest,
-  typedFromRecorded,
+  readingsFormSchema,
+  readingsFormValues,
   weighingRows,
 } from './bench-readings';
 
@@ -62,28 +62,44 @@ describe('weighingRows', () => {
       plannedText: '0.15990',
       recorded: { actualG: 0.1602 },
     });
-    expect(typedFromRecorded(weighingRows(weighed, readings)[0])).toEqual({
-      tare: '12.18577',
-      gross: '12.34597',
-      net: '0.16020',
+    expect(readingsFormValues(weighingRows(weighed, readings), readings).readings[0]).toEqual({
+      stepIndex: 0,
+      tareG: '12.18577',
+      grossG: '12.34597',
+      actualMassG: '0.16020',
     });
     expect((plannedPlan(weighed, readings).steps as { netMassG?: number }[])[0].netMassG).toBe(0.1599);
   });
 });
 
-describe('readingsRequest', () => {
-  const rows = weighingRows(plan, null);
+describe('readingsFormSchema', () => {
+  const typed = (rows: [string, string, string][], deviations = '') => ({
+    readings: rows.map(([tareG, grossG, actualMassG], index) => ({
+      stepIndex: [0, 2][index],
+      tareG,
+      grossG,
+      actualMassG,
+    })),
+    deviations,
+  });
+  /** The problems found, keyed by the path the form's boxes and the server share. */
+  const problems = (values: ReturnType<typeof typed>) => {
+    const parsed = readingsFormSchema.safeParse(values);
+    expect(parsed.success).toBe(false);
+    return Object.fromEntries((parsed.error?.issues ?? []).map((issue) => [issue.path.join('.'), issue.message]));
+  };
 
   it('builds the request in the order of the rows, with tare and gross when typed', () => {
-    const result = readingsRequest(
-      rows,
-      [
-        { tare: '12.18577', gross: '12.34567', net: '0.15990' },
-        { tare: '', gross: '', net: '2,4988' },
-      ],
-      ' Flask rinsed twice. ',
+    const parsed = readingsFormSchema.parse(
+      typed(
+        [
+          ['12.18577', '12.34567', '0.15990'],
+          ['', '', '2,4988'],
+        ],
+        ' Flask rinsed twice. ',
+      ),
     );
-    expect(result.request).toEqual({
+    expect(parsed).toEqual({
       readings: [
         { stepIndex: 0, actualMassG: 0.1599, tareG: 12.18577, grossG: 12.34567 },
         { stepIndex: 2, actualMassG: 2.4988 },
@@ -92,19 +108,25 @@ describe('readingsRequest', () => {
     });
   });
 
-  it('puts each problem on its field under the path the server uses', () => {
-    const result = readingsRequest(
-      rows,
-      [
-        { tare: '12.3', gross: '12.1', net: '' },
-        { tare: '', gross: '', net: '2.5g' },
-      ],
-      '',
-    );
-    expect(result.errors).toEqual({
+  it('puts each problem on its field under the path the server uses, in the shared schema’s words', () => {
+    expect(
+      problems(
+        typed([
+          ['12.3', '12.1', ''],
+          ['', '', '2.5g'],
+        ]),
+      ),
+    ).toEqual({
       'readings.0.grossG': 'The gross must be more than the tare.',
       'readings.0.actualMassG': 'Enter the net mass weighed, or the tare and gross.',
       'readings.1.actualMassG': 'Enter the mass as a number, e.g. 0.15990.',
+    });
+  });
+
+  it('words a negative tare and a mass of zero for the chemist', () => {
+    expect(problems(typed([['-1', '', '0']]))).toEqual({
+      'readings.0.tareG': 'The tare cannot be negative.',
+      'readings.0.actualMassG': 'The mass weighed must be greater than zero.',
     });
   });
 });

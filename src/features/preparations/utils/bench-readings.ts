@@ -1,8 +1,5 @@
-import {
-  readingsRequestSchema,
-  type ReadingsRequest,
-  type RecordedReadings,
-} from '../../../../shared/contracts/preparations';
+import { z } from 'zod';
+import { readingsRequestSchema, type RecordedReadings } from '../../../../shared/contracts/preparations';
 import { formatToReadability } from './format-number';
 import { parseDecimal } from './parse-decimal';
 
@@ -103,58 +100,53 @@ export function netFromGrossAndTare(tareText: string, grossText: string): string
   return (grossG - tareG).toFixed(Math.max(decimalsTyped(tareText), decimalsTyped(grossText)));
 }
 
-/** What the analyst typed for one weighing. */
-export type TypedReading = { tare: string; gross: string; net: string };
+/** What the form holds: the text typed into each box, under the request's own names and paths. */
+export type ReadingsFormValues = {
+  readings: { stepIndex: number; tareG: string; grossG: string; actualMassG: string }[];
+  deviations: string;
+};
 
-/** The typed values of a row: the recorded ones as the balance showed them when correcting, blanks otherwise. */
-export function typedFromRecorded(row: WeighingRow): TypedReading {
-  const recorded = row.recorded;
-  if (!recorded) return { tare: '', gross: '', net: '' };
-  const shown = (massG: number | null) => (massG === null ? '' : asShown(massG, row.readabilityG));
-  return { tare: shown(recorded.tareG), gross: shown(recorded.grossG), net: shown(recorded.actualG) };
-}
-
-/** Form errors keyed by the request's own paths ("readings.0.actualMassG", "deviations"), as the server names them too. */
-export type ReadingErrors = Record<string, string>;
-
-const NOT_A_NUMBER = 'Enter the mass as a number, e.g. 0.15990.';
-
-/**
- * The readings request for the typed rows (in the order of `rows`), checked with the shared schema,
- * or the errors to show on the fields.
- */
-export function readingsRequest(
-  rows: WeighingRow[],
-  typed: TypedReading[],
-  deviations: string,
-): { request: ReadingsRequest; errors: null } | { request: null; errors: ReadingErrors } {
-  const errors: ReadingErrors = {};
-  const readings = rows.map((row, index) => {
-    const tareG = parseDecimal(typed[index]?.tare ?? '');
-    const grossG = parseDecimal(typed[index]?.gross ?? '');
-    const netG = parseDecimal(typed[index]?.net ?? '');
-    if (Number.isNaN(tareG)) errors[`readings.${index}.tareG`] = NOT_A_NUMBER;
-    else if (tareG !== null && tareG < 0) errors[`readings.${index}.tareG`] = 'The tare cannot be negative.';
-    if (Number.isNaN(grossG)) errors[`readings.${index}.grossG`] = NOT_A_NUMBER;
-    else if (grossG !== null && tareG !== null && !Number.isNaN(tareG) && grossG <= tareG)
-      errors[`readings.${index}.grossG`] = 'The gross must be more than the tare.';
-    if (netG === null) errors[`readings.${index}.actualMassG`] = 'Enter the net mass weighed, or the tare and gross.';
-    else if (Number.isNaN(netG)) errors[`readings.${index}.actualMassG`] = NOT_A_NUMBER;
+/** The form's values for the rows: the recorded masses as the balance showed them when correcting, blanks otherwise. */
+export function readingsFormValues(rows: WeighingRow[], readings: RecordedReadings | null): ReadingsFormValues {
+  const values = rows.map((row) => {
+    const recorded = row.recorded;
+    const shown = (massG: number | null | undefined) =>
+      massG === null || massG === undefined ? '' : asShown(massG, row.readabilityG);
     return {
       stepIndex: row.stepIndex,
-      actualMassG: netG ?? Number.NaN,
-      ...(tareG === null ? {} : { tareG }),
-      ...(grossG === null ? {} : { grossG }),
+      tareG: shown(recorded?.tareG),
+      grossG: shown(recorded?.grossG),
+      actualMassG: shown(recorded?.actualG),
     };
   });
-  if (Object.keys(errors).length > 0) return { request: null, errors };
-  const parsed = readingsRequestSchema.safeParse({ readings, deviations });
-  if (!parsed.success) {
-    for (const issue of parsed.error.issues) errors[issue.path.join('.')] ??= issue.message;
-    return { request: null, errors };
-  }
-  return { request: parsed.data, errors: null };
+  return { readings: values, deviations: readings?.deviations ?? '' };
 }
+
+/** A box's text as a number: empty is "not given", text that is no number is NaN (the shared schema words both). */
+const massFromText = z.string().transform((text) => parseDecimal(text) ?? undefined);
+
+/**
+ * The readings form's schema: the typed text read as numbers, then the request schema the server validates with
+ * (shared/contracts), so its rules and words are the form's; an issue's path names the box it belongs to.
+ */
+export const readingsFormSchema = z
+  .object({
+    readings: z.array(
+      z.object({ stepIndex: z.number(), tareG: massFromText, grossG: massFromText, actualMassG: massFromText }),
+    ),
+    deviations: z.string(),
+  })
+  .transform((typed, context) => {
+    // Whatever the boxes gave (a missing net too) goes to the request schema, which words every problem itself.
+    const parsed = readingsRequestSchema.safeParse(typed);
+    if (parsed.success) return parsed.data;
+    for (const issue of parsed.error.issues)
+      context.addIssue({ code: 'custom', path: issue.path, message: issue.message });
+    return z.NEVER;
+  });
+
+/** Form errors keyed by the request's own paths ("readings.0.actualMassG", "deviations"), as the server names them too. */
+type ReadingErrors = Record<string, string>;
 
 /**
  * Where a refused request's problems go on the form: field issues by their path; a plan the readings made

@@ -1,6 +1,6 @@
 import { withPolicy } from '../../../../shared/contracts/engine-equipment';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
-import type { PlanProblem } from '../../../../shared/contracts/preparations';
+import { needsOverrideReason, overrideReasonSchema, type PlanProblem } from '../../../../shared/contracts/preparations';
 import { warningsUnderPolicy } from '../../../../shared/contracts/warning-policy';
 import { evaluatePlan, PlanError, type BudgetResult, type PlanInput } from '../../../../shared/uncertainty';
 import { enginePlan, type PlanDraft } from './plan-draft';
@@ -11,10 +11,12 @@ export type DraftEvaluation =
   | { ok: true; budget: BudgetResult; plan: PlanInput; problem: null }
   | { ok: false; budget: null; plan: null; problem: PlanProblem };
 
-/** True when an item may only be used with a recorded reason (overdue calibration, expired material). */
-export const needsOverride = (item: EquipmentItem) => item.calibration === 'overdue' || item.expiry === 'expired';
-
-const OVERRIDE_MESSAGE = 'Say why this item may be used, in a few words (at least 3 characters).';
+/** For an overdue or expired item without a reason the server would accept: the shared rule's words, naming the item. */
+function missingReason(item: EquipmentItem, reason: string | undefined): string | null {
+  if (!needsOverrideReason(item)) return null;
+  const parsed = overrideReasonSchema.safeParse(reason ?? '');
+  return parsed.success ? null : `${item.code}: ${item.flags.join('; ')}. ${parsed.error.issues[0].message}`;
+}
 
 /** Checks the editor can make before the engine: choices made, numbers readable, reasons for overdue items. */
 export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>): PlanProblem | null {
@@ -25,12 +27,8 @@ export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>
       path: ['material'],
       message: 'This material is no longer in the library (retired or removed). Choose another.',
     };
-  if (needsOverride(material) && (draft.overrides[material.id] ?? '').trim().length < 3) {
-    return {
-      path: ['material', 'override'],
-      message: `${material.code}: ${material.flags.join('; ')}. ${OVERRIDE_MESSAGE}`,
-    };
-  }
+  const materialReason = missingReason(material, draft.overrides[material.id]);
+  if (materialReason) return { path: ['material', 'override'], message: materialReason };
   if (!draft.analyte.trim())
     return { path: ['analyte', 'formula'], message: 'Enter the analyte as a formula, e.g. Pb.' };
   if (Number.isNaN(parseDecimal(draft.labTemperatureC)))
@@ -47,9 +45,8 @@ export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>
       if (!item)
         return { path, message: 'This item is no longer in the library (retired or removed). Choose another.' };
       if (!SLOT_KINDS[info.slot].includes(item.kind)) return { path, message: `${item.code} is not a ${info.slot}.` };
-      if (needsOverride(item) && (draft.overrides[item.id] ?? '').trim().length < 3) {
-        return { path: [...path, 'override'], message: `${item.code}: ${item.flags.join('; ')}. ${OVERRIDE_MESSAGE}` };
-      }
+      const itemReason = missingReason(item, draft.overrides[item.id]);
+      if (itemReason) return { path: [...path, 'override'], message: itemReason };
     }
     const glass = step.kind === 'pipetteAliquot' && library.get(step.equipmentId)?.kind === 'glass-pipette';
     if (info.quantity && !glass) {

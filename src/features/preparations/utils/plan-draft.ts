@@ -1,5 +1,6 @@
 import { toEngineEquipment } from '../../../../shared/contracts/engine-equipment';
 import type { EquipmentItem } from '../../../../shared/contracts/library';
+import { overrideReasonSchema } from '../../../../shared/contracts/preparations';
 import type { PlanInput } from '../../../../shared/uncertainty';
 import { isStartKind, STEP_KINDS, type StepKind } from './step-kinds';
 import { parseDecimal } from './parse-decimal';
@@ -192,10 +193,10 @@ export function storedPlan(draft: PlanDraft, library: Map<string, EquipmentItem>
   return buildPlan(draft, library, true);
 }
 
-/** The override reasons worth sending: items the plan uses, with a reason the server accepts (≥ 3 characters). */
+/** The override reasons worth sending: items the plan uses, with a reason the server accepts (the shared schema). */
 export function overridesToSave(draft: PlanDraft): { libraryId: string; reason: string }[] {
   const used = new Set([draft.materialId, ...draft.steps.map((step) => step.equipmentId)]);
   return Object.entries(draft.overrides)
-    .filter(([libraryId, reason]) => used.has(libraryId) && reason.trim().length >= 3)
+    .filter(([libraryId, reason]) => used.has(libraryId) && overrideReasonSchema.safeParse(reason).success)
     .map(([libraryId, reason]) => ({ libraryId, reason: reason.trim() }));
 }

@@ -4,7 +4,7 @@ import type { routeFinderRequestSchema } from '../../../../shared/contracts/prep
 import { engineWarningSchema } from '../../../../shared/contracts/warnings';
 import { api } from '../../../lib/api-client';
 
-export type RouteFinderRequest = z.input<typeof routeFinderRequestSchema>;
+export type RouteFinderRequest = z.output<typeof routeFinderRequestSchema>;
 
 /** The engine's Route (shared/uncertainty route-finder.ts) as JSON; its plan is checked again by the server when a route is planned. */
 const routeSchema = z.object({

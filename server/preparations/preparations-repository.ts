@@ -1,4 +1,4 @@
-import type { PreparationStatus } from '../../shared/contracts/preparations';
+import type { PreparationListFilter, PreparationStatus } from '../../shared/contracts/preparations';
 import { statesAllowing, VERSION_TRANSITIONS } from '../../shared/domain/version-lifecycle';
 import type { Db } from '../db/connection';
 import { insertedId } from '../db/inserted-id';
@@ -74,17 +74,7 @@ export function preparationsRepository(db: Db) {
       .select('v.*', 'u.name as created_by_name');
 
   return {
-    list(
-      labId: number,
-      filter: {
-        status?: PreparationStatus;
-        analyst?: number;
-        material?: string;
-        from?: string;
-        to?: string;
-        q?: string;
-      },
-    ): Promise<(PreparationRow & { latest_version_id: number })[]> {
+    list(labId: number, filter: PreparationListFilter): Promise<(PreparationRow & { latest_version_id: number })[]> {
       const latest = db('preparation_versions')
         .select('preparation_id')
         .max({ latest_number: 'number' })

@@ -62,6 +62,8 @@ export const preparationListQuerySchema = z.object({
   to: z.iso.date({ message: 'Give the date as YYYY-MM-DD.' }).optional(),
   q: z.string().trim().max(200).optional(),
 });
+/** The list filters, as the API's query takes them (all optional). */
+export type PreparationListFilter = z.output<typeof preparationListQuerySchema>;
 
 const MASS_NOT_A_NUMBER = 'Enter the mass as a number, e.g. 0.15990.';
 

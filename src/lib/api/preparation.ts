@@ -4,20 +4,10 @@ import {
   preparationDetailSchema,
   versionDetailSchema,
   type PreparationDetail,
-  type PreparationStatus,
+  type PreparationListFilter,
   type VersionDetail,
 } from '../../../shared/contracts/preparations';
 import { api } from '../api-client';
-
-/** The preparation list's filters, as the API's query takes them (all optional). */
-export type PreparationListFilter = {
-  status?: PreparationStatus;
-  analyst?: number;
-  material?: string;
-  from?: string;
-  to?: string;
-  q?: string;
-};
 
 /**
  * Query keys of a lab's preparations. A preparation's detail is one entry read by the planner, the bench sheet,

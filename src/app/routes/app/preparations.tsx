@@ -9,7 +9,7 @@ import { paths } from '../../../config/paths';
 import { meQueryOptions, useSignedInMe } from '../../../features/auth/api/get-me';
 import { activeEquipmentQueryOptions, useActiveEquipment } from '../../../lib/api/lab-equipment';
 import { preparationsQueryOptions, usePreparations } from '../../../features/preparations/api/get-preparations';
-import type { PreparationListFilter } from '../../../lib/api/preparation';
+import type { PreparationListFilter } from '../../../../shared/contracts/preparations';
 import { PreparationsFilters } from '../../../features/preparations/components/preparations-filters';
 import { PreparationsTable } from '../../../features/preparations/components/preparations-table';
 import { activeMembership, can } from '../../../lib/authorization';

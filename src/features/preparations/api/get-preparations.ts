@@ -2,7 +2,8 @@ import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { preparationSummarySchema, type PreparationSummary } from '../../../../shared/contracts/preparations';
 import { api } from '../../../lib/api-client';
-import { preparationKeys, type PreparationListFilter } from '../../../lib/api/preparation';
+import { preparationKeys } from '../../../lib/api/preparation';
+import type { PreparationListFilter } from '../../../../shared/contracts/preparations';
 
 const listSchema = z.array(preparationSummarySchema);
 

@@ -1,7 +1,7 @@
 import { PREPARATION_STATUSES, type PreparationStatus } from '../../../../shared/contracts/preparations';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
-import type { PreparationListFilter } from '../../../lib/api/preparation';
+import type { PreparationListFilter } from '../../../../shared/contracts/preparations';
 import { STATUS_WORDS } from '../utils/status-words';
 
 const STATUS_OPTIONS: { value: '' | PreparationStatus; label: string }[] = [

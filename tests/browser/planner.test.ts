@@ -244,10 +244,10 @@ describe('the analyst plans a lead standard', () => {
     const sheet = page.getByRole('article');
     await sheet.getByText('Bench sheet', { exact: true }).waitFor();
     await expect(sheet.innerText()).resolves.toContain(
-      'Weigh 0.15990 g of Lead(II) nitrate, certified reference material (RM-PBN-01) by difference on BAL-05.',
+      'Weigh 0.15990 g of Lead(II) nitrate, certified reference material — RM-PBN-01 — by difference on BAL-05.',
     );
     await expect(sheet.innerText()).resolves.toContain(
-      'Pipette 10 mL with GP-10-A (one mark, class A) from the solution of step 2.',
+      'Pipette 10 mL from the solution of step 2 with the one-mark pipette GP-10-A, class A.',
     );
     await expect(
       sheet.getByText('Follow the safety data sheet, your lab’s chemical hygiene plan and local regulations.').count(),

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
+import { snapshotStepNamer } from '../../../../shared/contracts/step-kinds';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
@@ -18,7 +19,6 @@ import { Workspace, writeOf } from '../../../features/preparations/components/wo
 import { WorkspaceHeader } from '../../../features/preparations/components/workspace-header';
 import { draftFromPlan, type PlanDraft } from '../../../features/preparations/utils/plan-draft';
 import { BenchReadings } from '../../../features/records/components/bench-readings';
-import { stepNamer } from '../../../features/records/utils/step-names';
 import { activeMembership, can } from '../../../lib/authorization';
 
 const idFrom = (value: string | undefined) => {
@@ -166,7 +166,7 @@ function PreparationWorkspace({ labId, detail, library, policy, userId, planner 
     version.readings && version.snapshot ? (
       <BenchReadings
         readings={version.readings}
-        stepName={stepNamer(version.snapshot.plan, version.snapshot.items)}
+        stepName={snapshotStepNamer(version.snapshot)}
         plan={version.snapshot.plan}
       />
     ) : null;

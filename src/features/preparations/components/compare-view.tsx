@@ -5,7 +5,7 @@ import type { BudgetResult } from '../../../../shared/uncertainty';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { formatPercent, formatSignificant } from '../utils/format-number';
 import { dilutionComparison, dominantStep, planFigures } from '../utils/plan-figures';
-import { STEP_KINDS, type StepKind } from '../utils/step-kinds';
+import { STEP_KINDS, type StepKind } from '../../../../shared/contracts/step-kinds';
 
 const CompareChart = lazy(() => import('./compare-chart'));
 
@@ -40,22 +40,20 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
     };
   });
   const computed = columns.filter((column) => column.budget && column.figures);
-  const sentences = computed
-    .slice(1)
-    .map((column) =>
-      dilutionComparison(
-        {
-          title: computed[0].detail.title,
-          dilutionSteps: computed[0].figures!.dilutionSteps,
-          relativeU: computed[0].budget!.relativeExpandedUncertainty,
-        },
-        {
-          title: column.detail.title,
-          dilutionSteps: column.figures!.dilutionSteps,
-          relativeU: column.budget!.relativeExpandedUncertainty,
-        },
-      ),
-    );
+  const sentences = computed.slice(1).map((column) =>
+    dilutionComparison(
+      {
+        title: computed[0].detail.title,
+        dilutionSteps: computed[0].figures!.dilutionSteps,
+        relativeU: computed[0].budget!.relativeExpandedUncertainty,
+      },
+      {
+        title: column.detail.title,
+        dilutionSteps: column.figures!.dilutionSteps,
+        relativeU: column.budget!.relativeExpandedUncertainty,
+      },
+    ),
+  );
 
   const rows: { label: string; cell: (column: Column) => string }[] = [
     {

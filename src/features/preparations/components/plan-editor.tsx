@@ -9,7 +9,8 @@ import { defaultAnalyteOf } from '../utils/equipment-labels';
 import { fieldMessage } from '../utils/evaluate-draft';
 import { emptyStep, newKey, type DraftStep, type PlanDraft } from '../utils/plan-draft';
 import { problemField } from '../utils/problem-field';
-import { ADDABLE_STEP_KINDS, isStartKind, startKindFor, STEP_KINDS, type StepKind } from '../utils/step-kinds';
+import { STEP_KINDS, type StepKind } from '../../../../shared/contracts/step-kinds';
+import { ADDABLE_STEP_KINDS, isStartKind, startKindFor } from '../utils/step-choices';
 import { ExtraSourcesEditor } from './extra-sources-editor';
 import { PlanSettingsFields } from './plan-settings-fields';
 import { StepCard } from './step-card';
@@ -105,7 +106,7 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
           const absoluteUnit =
             step.kind === 'startFromCertifiedSolution'
               ? String(material?.current.data.certifiedUnit ?? 'mg/L')
-              : (info.quantity?.unit ?? (info.slot === 'flask' ? 'mL' : 'g'));
+              : (info.quantity?.unit ?? (info.slot?.name === 'flask' ? 'mL' : 'g'));
           return (
             <StepCard
               key={step.key}

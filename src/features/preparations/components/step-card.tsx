@@ -6,7 +6,7 @@ import { TextField } from '../../../components/ui/text-field';
 import { needsOverride } from '../utils/evaluate-draft';
 import { equipmentOptionLabel } from '../utils/equipment-labels';
 import type { DraftStep } from '../utils/plan-draft';
-import { SLOT_KINDS, STEP_KINDS } from '../utils/step-kinds';
+import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 
 type StepCardProps = {
   step: DraftStep;
@@ -34,7 +34,8 @@ export function StepCard(props: StepCardProps) {
     props;
   const info = STEP_KINDS[step.kind];
   const number = index + 1;
-  const choices = info.slot ? library.filter((item) => SLOT_KINDS[info.slot!].includes(item.kind)) : [];
+  const slot = info.slot;
+  const choices = slot ? library.filter((item) => slot.libraryKinds.includes(item.kind)) : [];
   const item = library.find((candidate) => String(candidate.id) === step.equipmentId);
   const glassPipette = step.kind === 'pipetteAliquot' && item?.kind === 'glass-pipette';
   const stepError = errorAt(`step-${index}`);
@@ -94,7 +95,7 @@ export function StepCard(props: StepCardProps) {
         ) : null}
         {info.slot ? (
           <Select
-            label={info.slot === 'balance' ? 'Balance' : info.slot === 'flask' ? 'Volumetric flask' : 'Pipette'}
+            label={info.slot.label}
             className="md:col-span-4"
             value={step.equipmentId}
             onChange={(event) => {

@@ -15,19 +15,19 @@ export type StepKind = PlanStep['kind'];
 type StepOf<K extends StepKind> = Extract<PlanStep, { kind: K }>;
 
 /** The slot of a step filled from the library besides the material (which the plan's material fills). */
-export type EquipmentSlot = 'balance' | 'flask' | 'pipette';
+type EquipmentSlot = 'balance' | 'flask' | 'pipette';
 
 /** A step's number the analyst types (mass or volume), by its plan field name. */
-export type QuantityField = 'netMassG' | 'volumeMl' | 'finalMassG' | 'solventMassG';
+type QuantityField = 'netMassG' | 'volumeMl' | 'finalMassG' | 'solventMassG';
 
 /** The plan field a mass weighed at the bench replaces. */
-export type RecordedMassField = RecordedReadings['readings'][number]['field'];
+type RecordedMassField = RecordedReadings['readings'][number]['field'];
 
 /** Where a step holds a library item: the plan's material, or its balance, flask or pipette. */
-export type ItemSlot = 'material' | EquipmentSlot;
+type ItemSlot = 'material' | EquipmentSlot;
 
 /** What an instruction needs besides the step itself. */
-export type InstructionContext = {
+type InstructionContext = {
   /** The item in a slot of the step as the reader needs it: "BAL-05" at the bench, with revision and certificate in the record. */
   item: (slot: ItemSlot) => string;
   /** The step's position in the plan, from 0. */

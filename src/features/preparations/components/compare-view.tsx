@@ -2,10 +2,10 @@ import { lazy, Suspense } from 'react';
 import { Link } from 'react-router';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
 import type { BudgetResult } from '../../../../shared/uncertainty';
+import { STEP_KINDS, type StepKind } from '../../../../shared/contracts/step-kinds';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { formatPercent, formatSignificant } from '../utils/format-number';
 import { dilutionComparison, dominantStep, planFigures } from '../utils/plan-figures';
-import { STEP_KINDS, type StepKind } from '../../../../shared/contracts/step-kinds';
 
 const CompareChart = lazy(() => import('./compare-chart'));
 

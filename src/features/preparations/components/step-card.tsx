@@ -1,12 +1,13 @@
 import type { ReactNode } from 'react';
 import type { EquipmentItem } from '../../../../shared/contracts/library';
+import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { needsOverride } from '../utils/evaluate-draft';
 import { equipmentOptionLabel } from '../utils/equipment-labels';
 import type { DraftStep } from '../utils/plan-draft';
-import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
+import { isStartKind } from '../utils/step-choices';
 
 type StepCardProps = {
   step: DraftStep;
@@ -88,7 +89,7 @@ export function StepCard(props: StepCardProps) {
       </div>
 
       <div className="mt-3 grid gap-3 md:grid-cols-6">
-        {step.kind === 'weighSolid' || step.kind === 'startFromCertifiedSolution' ? (
+        {isStartKind(step.kind) ? (
           <p className="self-end pb-2 md:col-span-6">
             Material: <strong>{material ? material.code : 'choose the reference material above'}</strong>
           </p>

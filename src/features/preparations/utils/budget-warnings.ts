@@ -1,7 +1,7 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import type { BudgetResult } from '../../../../shared/uncertainty';
-import type { PlanDraft } from './plan-draft';
 import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
+import type { PlanDraft } from './plan-draft';
 
 /** A warning and the step it belongs to (null: the whole plan), so it can be shown in place. */
 export type PlacedWarning = { stepIndex: number | null; text: string };

@@ -2,9 +2,9 @@ import { withPolicy } from '../../../../shared/contracts/engine-equipment';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PlanProblem } from '../../../../shared/contracts/preparations';
 import { evaluatePlan, PlanError, type BudgetResult, type PlanInput } from '../../../../shared/uncertainty';
+import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import { enginePlan, type PlanDraft } from './plan-draft';
 import { parseDecimal } from './parse-decimal';
-import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import { isStartKind } from './step-choices';
 
 export type DraftEvaluation =

@@ -101,7 +101,7 @@ export function draftFromPlan(
 ): PlanDraft {
   const settings = isRecord(plan.settings) ? plan.settings : {};
   const steps = Array.isArray(plan.steps) ? plan.steps.filter(isRecord) : [];
-  const start = steps.find((step) => step.kind === 'weighSolid' || step.kind === 'startFromCertifiedSolution');
+  const start = steps.find((step) => isStepKind(step.kind) && isStartKind(step.kind));
   return {
     title: extras.title,
     materialId: libraryIdOf(start?.material),

@@ -10,7 +10,7 @@ let labId: number;
 let analyst: Client;
 let library: Map<string, EquipmentItem>;
 const url = (path: string) => `/api/labs/${labId}${path}`;
-const use = (code: string) => toEngineEquipment(library.get(code)!);
+const inline = (code: string) => toEngineEquipment(library.get(code)!);
 
 /** Selenium by mass from the demo certified solution: 2 g of it on BAL-04, diluted to 100 g (invented demo plan). */
 const gravimetricPlan = () => ({
@@ -18,9 +18,9 @@ const gravimetricPlan = () => ({
   analyte: { formula: 'Se' },
   settings: { outputUnit: 'mg/kg', labTemperatureC: 20 },
   steps: [
-    { kind: 'startFromCertifiedSolution', material: use('RM-SE-1000') },
-    { kind: 'weighAliquot', balance: use('BAL-04'), netMassG: 2 },
-    { kind: 'makeUpToMass', balance: use('BAL-04'), finalMassG: 100 },
+    { kind: 'startFromCertifiedSolution', material: inline('RM-SE-1000') },
+    { kind: 'weighAliquot', balance: inline('BAL-04'), netMassG: 2 },
+    { kind: 'makeUpToMass', balance: inline('BAL-04'), finalMassG: 100 },
   ],
 });
 
@@ -39,7 +39,7 @@ describe('the step-kind registry on the server', () => {
     const plan = leadPlan(library);
     expect(STEP_KINDS.weighSolid.slot?.libraryKinds).not.toContain('flask');
     // Balance data inline (so the plan is well formed) but naming a flask of the library.
-    Object.assign(plan.steps[0], { balance: { ...use('BAL-05'), libraryId: String(library.get('VF-100-A')!.id) } });
+    Object.assign(plan.steps[0], { balance: { ...inline('BAL-05'), libraryId: String(library.get('VF-100-A')!.id) } });
     const draft = (await analyst.post(url('/preparations'), { title: 'Flask on the pan', plan, seed: 1 }).expect(201))
       .body.current;
     expect(draft.snapshot).toBeNull();
@@ -48,7 +48,7 @@ describe('the step-kind registry on the server', () => {
     // A piston pipette fills the pipette slot as a glass one does.
     expect(STEP_KINDS.pipetteAliquot.slot?.libraryKinds).toContain('piston-pipette');
     const piston = leadPlan(library);
-    Object.assign(piston.steps[2], { pipette: use('PP-1000'), volumeMl: 1 });
+    Object.assign(piston.steps[2], { pipette: inline('PP-1000'), volumeMl: 1 });
     const computed = (
       await analyst.post(url('/preparations'), { title: 'Piston aliquot', plan: piston, seed: 1 }).expect(201)
     ).body.current;

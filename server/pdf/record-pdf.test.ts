@@ -3,7 +3,10 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { snapshotSchema } from '../../shared/contracts/snapshot';
+import { itemIn, snapshotStepNamer, stepInstruction } from '../../shared/contracts/step-kinds';
 import { leadPlan, libraryByCode } from '../test-support/demo-plans';
+import { itemReference } from './item-reference';
 import { buildTestApp, demo, DEMO_PASSWORD, signIn, type Client, type TestApp } from '../test-support/test-app';
 
 let t: TestApp;
@@ -104,13 +107,37 @@ describe('the PDF record', () => {
     expect(flat).toContain('safety data sheet');
     expect(flat).toMatch(/Lead compounds are toxic/);
     expect(flat).toMatch(/seed 77/);
-    expect(flat).toContain('Step 1: planned 0.1599 g, weighed 0.16011 g.');
+    expect(flat).toContain('Step 1 · Weigh the solid (BAL-05), net mass: planned 0.1599 g, weighed 0.16011 g.');
 
     const png = join(work, 'page');
     execFileSync('pdftoppm', ['-png', '-r', '40', '-f', '1', '-l', '1', join(work, 'approved.pdf'), png]);
     const image = readFileSync(`${png}-1.png`);
     // A blank A4 page at 40 dpi compresses to well under 1 kB; text, tables and lines make it several kB.
     expect(image.length).toBeGreaterThan(4000);
+  });
+
+  it('words the plan and names the budget subtotals as the step-kind registry does, items with revision and certificate', async () => {
+    const detail = (await analyst.get(url(`/preparations/${preparationId}`)).expect(200)).body;
+    const snapshot = snapshotSchema.parse(detail.current.snapshot);
+    // pdftotext breaks lines (even inside "NRM-PBN-24117"), so the text is compared without any white space.
+    const bare = (text: string) => text.replace(/\s+/g, '');
+    const text = bare(pdfText(await downloadPdf(analyst), 'plan'));
+    const sentences = snapshot.plan.steps.map((step, stepIndex) =>
+      stepInstruction(step, {
+        item: (slot) => itemReference(itemIn(step, slot), snapshot.items),
+        stepIndex,
+        labTemperatureC: snapshot.plan.settings.labTemperatureC,
+      }),
+    );
+    expect(sentences).toHaveLength(4);
+    for (const [index, sentence] of sentences.entries()) expect(text).toContain(bare(`${index + 1}. ${sentence}`));
+    expect(sentences[0]).toBe(
+      'Weigh 0.15990 g of Lead(II) nitrate, certified reference material — RM-PBN-01 (revision 1, certificate NRM-PBN-24117) — by difference on BAL-05 (revision 1, certificate WCS-26-0412).',
+    );
+    const stepName = snapshotStepNamer(snapshot);
+    expect(snapshot.budget.byStep.length).toBeGreaterThan(0);
+    for (const group of snapshot.budget.byStep) expect(text).toContain(bare(`Subtotal, ${stepName(group.key)}`));
+    expect(text).toContain(bare('Subtotal, Step 3 · Pipette an aliquot (GP-10-A)'));
   });
 
   it('prints ν_eff truncated to the integer the coverage factor was read at (8.7 → 8, never 9)', async () => {

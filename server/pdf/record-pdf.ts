@@ -2,12 +2,13 @@ import { RECORD_CAUTIONS } from '../../shared/contracts/safety-advice';
 import PDFDocument from 'pdfkit';
 import type { VersionDetail } from '../../shared/contracts/preparations';
 import { warningText } from '../../shared/contracts/warning-text';
+import { itemIn, readingWords, snapshotStepNamer, stepInstruction } from '../../shared/contracts/step-kinds';
 import { formatDegreesOfFreedom } from '../../shared/uncertainty';
 import { PDF_FONTS } from './fonts';
 import { percent, significant, utc } from './format';
 import { drawContributionBars, drawHistogram } from './pdf-charts';
 import { drawTable } from './pdf-table';
-import { stepText } from './step-text';
+import { itemReference } from './item-reference';
 
 export interface RecordPdfInput {
   labName: string;
@@ -21,23 +22,6 @@ const PAGE = { width: 595.28, height: 841.89 };
 const CONTENT_WIDTH = PAGE.width - 2 * MARGIN;
 const BOTTOM = PAGE.height - MARGIN - 24;
 const INK = '#17323b';
-
-const STEP_NAMES: Record<string, string> = {
-  weighSolid: 'weighing the solid',
-  startFromCertifiedSolution: 'certified solution',
-  makeUpToVolume: 'making up to volume',
-  pipetteAliquot: 'pipetting the aliquot',
-  weighAliquot: 'weighing the aliquot',
-  makeUpToMass: 'diluting by mass',
-  dissolveInSolvent: 'weighing the solvent',
-};
-
-/** 'step 2 (making up to volume)', or 'steps 2 and 4 (shared item)' for a source shared by steps. */
-function stepGroupLabel(key: string, steps: { kind: string }[]): string {
-  const indices = key.split('+').map(Number);
-  if (indices.length === 1) return `step ${indices[0] + 1} (${STEP_NAMES[steps[indices[0]]?.kind] ?? 'step'})`;
-  return `steps ${indices.map((i) => i + 1).join(', ')} (item used more than once)`;
-}
 
 /** A dimensionless quantity (unit '1') prints without a unit. */
 const withUnit = (text: string, unit: string) => (unit === '1' || unit === '' ? text : `${text} ${unit}`);
@@ -60,6 +44,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
   const snapshot = version.snapshot;
   if (!snapshot) return Promise.reject(new Error('A version without a computed snapshot has no record to print.'));
   const { budget, monteCarlo, validation, items } = snapshot;
+  const stepName = snapshotStepNamer(snapshot);
   const approved = version.status === 'approved';
 
   return new Promise((resolve, reject) => {
@@ -140,7 +125,12 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     steps.forEach((step, index) => {
       const checkpoint = budget.checkpoints.find((c) => c.stepIndex === index);
       const after = checkpoint ? ` → ${significant(checkpoint.value, 5)} ${checkpoint.unit}` : '';
-      paragraph(`${index + 1}. ${stepText(step, items)}${after}`);
+      const instruction = stepInstruction(step, {
+        item: (slot) => itemReference(itemIn(step, slot), items),
+        stepIndex: index,
+        labTemperatureC: settings.labTemperatureC,
+      });
+      paragraph(`${index + 1}. ${instruction}${after}`);
       doc.moveDown(0.15);
     });
     paragraph(
@@ -161,8 +151,9 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
         ]
           .filter(Boolean)
           .join(', ');
+        const step = steps.at(reading.stepIndex);
         paragraph(
-          `Step ${reading.stepIndex + 1}: planned ${reading.plannedG} g, weighed ${reading.actualG} g${parts ? ` (${parts})` : ''}.`,
+          `${stepName(String(reading.stepIndex))}, ${step ? readingWords(step.kind) : 'mass'}: planned ${reading.plannedG} g, weighed ${reading.actualG} g${parts ? ` (${parts})` : ''}.`,
         );
       }
       if (version.readings.deviations) paragraph(`Deviations: ${version.readings.deviations}`);
@@ -209,7 +200,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
       }
       budgetRows.push({
         cells: [
-          `Subtotal, ${stepGroupLabel(group.key, steps)}`,
+          `Subtotal, ${stepName(group.key)}`,
           '',
           significant(group.contribution, 3),
           percent(group.indexPercent),
@@ -237,7 +228,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     drawContributionBars(doc, {
       x: MARGIN,
       width: CONTENT_WIDTH,
-      groups: budget.byStep.map((g) => ({ label: stepGroupLabel(g.key, steps), indexPercent: g.indexPercent })),
+      groups: budget.byStep.map((g) => ({ label: stepName(g.key), indexPercent: g.indexPercent })),
     });
 
     // Monte Carlo

@@ -2,19 +2,18 @@ import { toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem, EquipmentKind } from '../../shared/contracts/library';
 import { needsOverrideReason, type Override } from '../../shared/contracts/preparations';
 import type { UsedItem } from '../../shared/contracts/snapshot';
+import { isStepKind, STEP_KINDS, type StepKind } from '../../shared/contracts/step-kinds';
 import { PlanError, type PlanPathSegment } from '../../shared/uncertainty';
 import { AppError } from '../lib/errors';
 
-/** Which library kinds each equipment slot of a step accepts. */
-const SLOTS: Record<string, Record<string, EquipmentKind[]>> = {
-  weighSolid: { material: ['solid-material'], balance: ['balance'] },
-  startFromCertifiedSolution: { material: ['solution-material'] },
-  makeUpToVolume: { flask: ['flask'] },
-  pipetteAliquot: { pipette: ['glass-pipette', 'piston-pipette'] },
-  weighAliquot: { balance: ['balance'] },
-  makeUpToMass: { balance: ['balance'] },
-  dissolveInSolvent: { balance: ['balance'] },
-};
+/** The library slots of a step (its material first, then its balance, flask or pipette) and the kinds that fill each. */
+function librarySlots(kind: StepKind): { slot: string; kinds: readonly EquipmentKind[] }[] {
+  const { materialKinds, slot } = STEP_KINDS[kind];
+  const slots: { slot: string; kinds: readonly EquipmentKind[] }[] = [];
+  if (materialKinds) slots.push({ slot: 'material', kinds: materialKinds });
+  if (slot) slots.push({ slot: slot.name, kinds: slot.libraryKinds });
+  return slots;
+}
 
 export interface ResolvedPlan {
   plan: Record<string, unknown>;
@@ -41,9 +40,9 @@ export function resolvePlan(
   const problems: PlanError[] = [];
 
   const resolvedSteps = steps.map((step: unknown, index: number) => {
-    if (!isRecord(step) || typeof step.kind !== 'string' || !SLOTS[step.kind]) return step;
+    if (!isRecord(step) || !isStepKind(step.kind)) return step;
     const out: Record<string, unknown> = { ...step };
-    for (const [slot, kinds] of Object.entries(SLOTS[step.kind])) {
+    for (const { slot, kinds } of librarySlots(step.kind)) {
       const given = step[slot];
       const path: PlanPathSegment[] = ['steps', index, slot];
       if (!isRecord(given)) continue; // the engine reports the missing slot

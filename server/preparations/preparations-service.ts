@@ -11,6 +11,7 @@ import type {
   VersionDetail,
   VersionSummary,
 } from '../../shared/contracts/preparations';
+import { isStepKind, STEP_KINDS } from '../../shared/contracts/step-kinds';
 import { parsePlan, PlanError } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { LabActor } from '../auth/authorize';
@@ -98,14 +99,6 @@ function preparationSummary(prep: PreparationRow, latest: VersionRow): Preparati
     relativeExpandedUncertainty: latest.relative_expanded_uncertainty,
   };
 }
-
-/** The mass a reading replaces, per kind of weighing step. */
-const MASS_FIELDS: Record<string, RecordedReadings['readings'][number]['field']> = {
-  weighSolid: 'netMassG',
-  weighAliquot: 'netMassG',
-  makeUpToMass: 'finalMassG',
-  dissolveInSolvent: 'solventMassG',
-};
 
 /** Why no new version can start while the latest one is still on its way. */
 function noNewVersionFrom(latest: VersionRow): AppError {
@@ -438,7 +431,7 @@ export function preparationsService(deps: {
       const issues: { path: string; message: string }[] = [];
       input.readings.forEach((reading, index) => {
         const step = steps[reading.stepIndex];
-        const field = step ? MASS_FIELDS[String(step.kind)] : undefined;
+        const field = step && isStepKind(step.kind) ? STEP_KINDS[step.kind].recordedMass : null;
         if (!step || !field) {
           issues.push({
             path: `readings.${index}.stepIndex`,

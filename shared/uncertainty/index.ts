@@ -1,7 +1,7 @@
 // Public entry point of the uncertainty engine, shared by the server and the client (and its Web Worker).
 export { ENGINE_VERSION } from './engine-version';
 export { PlanError, type PlanPathSegment } from './plan-error';
-export type { PlanInput, PlanStep } from './plan-schema';
+export { stepSchema, type Plan, type PlanInput } from './plan-schema';
 export type {
   Balance,
   VolumetricFlask,

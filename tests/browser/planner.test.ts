@@ -179,6 +179,10 @@ describe('the analyst plans a lead standard', () => {
     await expect(table.getByRole('row', { name: /^Material consumed/ }).innerText()).resolves.toMatch(
       /0\.1599 g of RM-PBN-01\s+0\.1599 g of RM-PBN-01/,
     );
+    // The dominant step is named as the record page and the PDF name budget groups (the step-kind registry).
+    await expect(table.getByRole('row', { name: /^Dominant step/ }).innerText()).resolves.toMatch(
+      /Step \d · (Weigh the solid|Make up to volume|Pipette an aliquot) \([A-Z0-9-]+\): \d+ %/,
+    );
     // Waste: the original throws away 90 mL of stock; the variant 75 mL of stock and 240 mL of the intermediate.
     await expect(table.getByRole('row', { name: /^Waste/ }).innerText()).resolves.toMatch(/90 mL\s+315 mL/);
     await screenshot(page, 'planner-compare');
@@ -244,10 +248,10 @@ describe('the analyst plans a lead standard', () => {
     const sheet = page.getByRole('article');
     await sheet.getByText('Bench sheet', { exact: true }).waitFor();
     await expect(sheet.innerText()).resolves.toContain(
-      'Weigh 0.15990 g of Lead(II) nitrate, certified reference material (RM-PBN-01) by difference on BAL-05.',
+      'Weigh 0.15990 g of Lead(II) nitrate, certified reference material — RM-PBN-01 — by difference on BAL-05.',
     );
     await expect(sheet.innerText()).resolves.toContain(
-      'Pipette 10 mL with GP-10-A (one mark, class A) from the solution of step 2.',
+      'Pipette 10 mL from the solution of step 2 with the one-mark pipette GP-10-A, class A.',
     );
     await expect(sheet.getByText(/Follow the safety data sheet/).count()).resolves.toBe(1);
     await expect(

@@ -169,7 +169,7 @@ describe('the analyst records what was weighed at the bench', () => {
     const cells = await table.locator('tbody tr').first().locator('td').allInnerTexts();
     // +0.30 mg on BAL-05 (0.01 mg readability); 0.30 / 159.90 = +0.19 %.
     expect(cells.slice(1)).toEqual(['0.15990', '0.16020', '+0.30', '+0.19', TARE, GROSS]);
-    expect(cells[0]).toMatch(/^Step 1 · Weighing the solid \(BAL-05\)\s+net mass$/);
+    expect(cells[0]).toMatch(/^Step 1 · Weigh the solid \(BAL-05\)\s+net mass$/);
     await expect(page.getByTestId('deviations').innerText()).resolves.toBe(`Deviations from the plan: ${DEVIATION}`);
     await expect(page.getByRole('region', { name: 'Planned and actual' }).innerText()).resolves.toContain(
       `Readings recorded by ${ANALYST.name}`,

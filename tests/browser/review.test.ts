@@ -128,7 +128,7 @@ describe('review and approval of a preparation record', () => {
     await expect(page.getByRole('link', { name: 'Download draft PDF' }).count()).resolves.toBe(1);
     const stepRows = page.getByRole('table', { name: /by step/ }).locator('tbody tr');
     await expect(stepRows.count()).resolves.toBe(4);
-    await expect(stepRows.nth(0).innerText()).resolves.toMatch(/^Step 1 · Weighing the solid \(BAL-05\)/);
+    await expect(stepRows.nth(0).innerText()).resolves.toMatch(/^Step 1 · Weigh the solid \(BAL-05\)/);
     await screenshot(page, 'record-draft');
 
     await page.getByRole('button', { name: 'Submit for review' }).click();

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
+import { snapshotStepNamer } from '../../../../shared/contracts/step-kinds';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
@@ -16,7 +17,6 @@ import { WorkspaceHeader } from '../../../features/preparations/components/works
 import { draftFromPlan, type PlanDraft } from '../../../features/preparations/utils/plan-draft';
 import { BenchReadings } from '../../../features/records/components/bench-readings';
 import { StartNewVersionButton } from '../../../features/records/components/start-new-version-button';
-import { stepNamer } from '../../../features/records/utils/step-names';
 import { preparationQueryOptions, usePreparation, usePreparationChanged } from '../../../lib/api/preparation';
 import { activeMembership, can } from '../../../lib/authorization';
 
@@ -153,7 +153,7 @@ function PreparationWorkspace({ labId, detail, library, policy, planner }: Prepa
     version.readings && version.snapshot ? (
       <BenchReadings
         readings={version.readings}
-        stepName={stepNamer(version.snapshot.plan, version.snapshot.items)}
+        stepName={snapshotStepNamer(version.snapshot)}
         plan={version.snapshot.plan}
       />
     ) : null;

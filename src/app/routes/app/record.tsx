@@ -3,6 +3,7 @@ import type { ReactNode } from 'react';
 import { Link, useNavigate, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router';
 import type { PreparationDetail, VersionDetail } from '../../../../shared/contracts/preparations';
 import type { Role } from '../../../../shared/contracts/roles';
+import { snapshotStepNamer } from '../../../../shared/contracts/step-kinds';
 import { Alert } from '../../../components/ui/alert';
 import { paths } from '../../../config/paths';
 import { auditKeys } from '../../../features/audit/api/audit-keys';
@@ -24,7 +25,6 @@ import { ReviewTrail } from '../../../features/records/components/review-trail';
 import { SnapshotHash } from '../../../features/records/components/snapshot-hash';
 import { StartNewVersionButton } from '../../../features/records/components/start-new-version-button';
 import { VersionSwitcher } from '../../../features/records/components/version-switcher';
-import { stepNamer } from '../../../features/records/utils/step-names';
 import { ApproveButton } from '../../../features/reviews/components/approve-button';
 import { ReturnButton } from '../../../features/reviews/components/return-button';
 import { SubmitForReviewButton } from '../../../features/reviews/components/submit-for-review-button';
@@ -116,7 +116,7 @@ function RecordPage({ labId, preparationId, versionNumber, roles }: RecordPagePr
   const preparation = usePreparation(labId, preparationId);
   const version = useVersion(labId, preparationId, versionNumber);
   const snapshot = version.snapshot;
-  const stepName = snapshot ? stepNamer(snapshot.plan, snapshot.items) : (key: string) => key;
+  const stepName = snapshot ? snapshotStepNamer(snapshot) : (key: string) => key;
   const reference = { labId, preparationId, versionNumber };
 
   return (

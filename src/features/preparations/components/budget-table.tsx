@@ -92,7 +92,7 @@ function PercentCell({ percent }: { percent: number }) {
   );
 }
 
-/** "Step 2 · Make up to volume", or "Shared by steps 2, 4" for an item used twice. */
+/** "Step 2 · Make up to volume (VF-100-A)", or "Shared by steps 2 and 4" for an item used twice (stepGroupName). */
 export type StepNamer = (key: string) => string;
 
 type BudgetTableProps = { budget: Budget; stepName: StepNamer };

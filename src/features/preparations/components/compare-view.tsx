@@ -2,10 +2,10 @@ import { lazy, Suspense } from 'react';
 import { Link } from 'react-router';
 import type { PreparationDetail } from '../../../../shared/contracts/preparations';
 import type { Budget } from '../../../../shared/contracts/snapshot';
+import { snapshotStepNamer } from '../../../../shared/contracts/step-kinds';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { formatPercent, formatSignificant } from '../utils/format-number';
 import { dilutionComparison, dominantStep, planFigures } from '../utils/plan-figures';
-import { STEP_KINDS, type StepKind } from '../utils/step-kinds';
 
 const CompareChart = lazy(() => import('./compare-chart'));
 
@@ -16,6 +16,8 @@ type Column = {
   budget: Budget | null;
   figures: ReturnType<typeof planFigures> | null;
   steps: { kind: string }[];
+  /** Budget group names, as the record page and the PDF give them. */
+  stepName: ((key: string) => string) | null;
 };
 
 const materialWords = (figures: Column['figures'], code: string | null) => {
@@ -37,6 +39,7 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
       budget,
       figures: snapshot ? planFigures(plan) : null,
       steps: (Array.isArray(plan.steps) ? plan.steps : []) as { kind: string }[],
+      stepName: snapshot ? snapshotStepNamer(snapshot) : null,
     };
   });
   const computed = columns.filter((column) => column.budget && column.figures);
@@ -77,9 +80,7 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
       cell: (column) => {
         const dominant = column.budget ? dominantStep(column.budget) : null;
         if (!dominant) return '—';
-        const index = Number(dominant.key);
-        const kind = column.steps[index]?.kind as StepKind | undefined;
-        return `${Number.isInteger(index) ? `Step ${index + 1}${kind ? ` (${STEP_KINDS[kind].label.toLowerCase()})` : ''}` : dominant.label}: ${dominant.indexPercent.toFixed(0)} %`;
+        return `${column.stepName?.(dominant.key) ?? dominant.label}: ${dominant.indexPercent.toFixed(0)} %`;
       },
     },
     { label: 'Material consumed', cell: (column) => materialWords(column.figures, column.detail.materialCode) },

@@ -5,13 +5,14 @@ import type { Budget } from '../../../../shared/contracts/snapshot';
 import { warningText } from '../../../../shared/contracts/warning-text';
 import type { Warning } from '../../../../shared/contracts/warnings';
 import { roundToUncertainty } from '../../../../shared/uncertainty';
+import { STEP_KINDS, type StepKind } from '../../../../shared/contracts/step-kinds';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
 import { defaultAnalyteOf } from '../utils/equipment-labels';
 import { fieldMessage } from '../utils/evaluate-draft';
 import { emptyStep, newKey, type DraftStep, type PlanDraft } from '../utils/plan-draft';
 import { problemField } from '../utils/problem-field';
-import { ADDABLE_STEP_KINDS, isStartKind, startKindFor, STEP_KINDS, type StepKind } from '../utils/step-kinds';
+import { ADDABLE_STEP_KINDS, isStartKind, startKindFor } from '../utils/step-choices';
 import { ExtraSourcesEditor } from './extra-sources-editor';
 import { PlanSettingsFields } from './plan-settings-fields';
 import { StepCard } from './step-card';
@@ -107,7 +108,7 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
           const absoluteUnit =
             step.kind === 'startFromCertifiedSolution'
               ? String(material?.current.data.certifiedUnit ?? 'mg/L')
-              : (info.quantity?.unit ?? (info.slot === 'flask' ? 'mL' : 'g'));
+              : (info.quantity?.unit ?? (info.slot?.name === 'flask' ? 'mL' : 'g'));
           return (
             <StepCard
               key={step.key}

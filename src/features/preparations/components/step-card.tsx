@@ -1,12 +1,13 @@
 import type { ReactNode } from 'react';
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import { needsOverrideReason } from '../../../../shared/contracts/preparations';
+import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { equipmentOptionLabel } from '../utils/equipment-labels';
 import type { DraftStep } from '../utils/plan-draft';
-import { SLOT_KINDS, STEP_KINDS } from '../utils/step-kinds';
+import { isStartKind } from '../utils/step-choices';
 
 type StepCardProps = {
   step: DraftStep;
@@ -34,7 +35,8 @@ export function StepCard(props: StepCardProps) {
     props;
   const info = STEP_KINDS[step.kind];
   const number = index + 1;
-  const choices = info.slot ? library.filter((item) => SLOT_KINDS[info.slot!].includes(item.kind)) : [];
+  const slot = info.slot;
+  const choices = slot ? library.filter((item) => slot.libraryKinds.includes(item.kind)) : [];
   const item = library.find((candidate) => String(candidate.id) === step.equipmentId);
   const glassPipette = step.kind === 'pipetteAliquot' && item?.kind === 'glass-pipette';
   const stepError = errorAt(`step-${index}`);
@@ -87,14 +89,14 @@ export function StepCard(props: StepCardProps) {
       </div>
 
       <div className="mt-3 grid gap-3 md:grid-cols-6">
-        {step.kind === 'weighSolid' || step.kind === 'startFromCertifiedSolution' ? (
+        {isStartKind(step.kind) ? (
           <p className="self-end pb-2 md:col-span-6">
             Material: <strong>{material ? material.code : 'choose the reference material above'}</strong>
           </p>
         ) : null}
         {info.slot ? (
           <Select
-            label={info.slot === 'balance' ? 'Balance' : info.slot === 'flask' ? 'Volumetric flask' : 'Pipette'}
+            label={info.slot.label}
             className="md:col-span-4"
             value={step.equipmentId}
             onChange={(event) => {

@@ -1,18 +1,11 @@
 import { z } from 'zod';
 import { readingsRequestSchema, type RecordedReadings } from '../../../../shared/contracts/preparations';
-import { formatToReadability } from './format-number';
+import { formatToReadability } from '../../../../shared/contracts/balance-reading';
+import { isStepKind, STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import { parseDecimal } from './parse-decimal';
 
 type Recorded = RecordedReadings['readings'][number];
 type Item = Record<string, unknown>;
-
-/** The mass a reading replaces, per kind of weighing step (the server's list: steps of other kinds take no reading). */
-const MASS_FIELDS: Record<string, Recorded['field']> = {
-  weighSolid: 'netMassG',
-  weighAliquot: 'netMassG',
-  makeUpToMass: 'finalMassG',
-  dissolveInSolvent: 'solventMassG',
-};
 
 /** One weighing of the plan as the readings form shows it. */
 export type WeighingRow = {
@@ -58,7 +51,7 @@ function whatIsWeighed(step: Item): string {
 export function weighingRows(plan: Record<string, unknown>, readings: RecordedReadings | null): WeighingRow[] {
   const steps = (Array.isArray(plan.steps) ? plan.steps : []) as Item[];
   return steps.flatMap((step, stepIndex) => {
-    const field = MASS_FIELDS[String(step.kind)];
+    const field = isStepKind(step.kind) ? STEP_KINDS[step.kind].recordedMass : null;
     if (!field) return [];
     const recorded = readings?.readings.find((reading) => reading.stepIndex === stepIndex) ?? null;
     const plannedG = recorded?.plannedG ?? Number(step[field]);

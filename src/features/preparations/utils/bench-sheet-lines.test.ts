@@ -1,30 +1,53 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { itemIn, stepInstruction } from '../../../../shared/contracts/step-kinds';
+import { parsePlan } from '../../../../shared/uncertainty';
 import { benchSheetLines } from './bench-sheet-lines';
 
+/** An invented plan from tests/fixtures/plans, as stored (inline equipment). */
+const storedPlan = (name: string): Record<string, unknown> =>
+  JSON.parse(readFileSync(new URL(`../../../../tests/fixtures/plans/${name}.json`, import.meta.url), 'utf8'));
+
 describe('benchSheetLines', () => {
-  it('gives masses to the balance readability and volumes as the glassware marks them', () => {
+  it('prints each step in the words of the step-kind registry, items by their code', () => {
+    const stored = storedPlan('lead-standard-from-nitrate');
+    const plan = parsePlan(stored);
+    const lines = benchSheetLines(stored, 20);
+    expect(lines).toHaveLength(plan.steps.length);
+    expect(lines.map((line) => line.action)).toEqual(
+      plan.steps.map((step, stepIndex) =>
+        stepInstruction(step, { item: (slot) => itemIn(step, slot)?.itemId ?? '—', stepIndex, labTemperatureC: 20 }),
+      ),
+    );
+    expect(lines[0].action).toBe(
+      'Weigh 0.1599 g of Lead(II) nitrate, analytical reagent (demo lot) — LOT-PBN-2291 — by difference on B-01.',
+    );
+  });
+
+  it('lists the equipment of each step and leaves blanks for weighings and volumes', () => {
+    const lines = benchSheetLines(storedPlan('lead-standard-from-nitrate'), 20);
+    expect(lines.map((line) => line.equipment)).toEqual([
+      ['B-01', 'LOT-PBN-2291'],
+      ['F-100-A'],
+      ['GP-10-A'],
+      ['F-100-B'],
+      ['PP-07'],
+      ['F-100-C'],
+    ]);
+    expect(lines.map((line) => line.readings)).toEqual(['weighing', 'volume', 'volume', 'volume', 'volume', 'volume']);
+    const certified = benchSheetLines(storedPlan('selenium-working-standard'), 20);
+    expect(certified[0]).toMatchObject({ equipment: ['CRM-SE-0415'], readings: 'none' });
+  });
+
+  it('names a step the planner has not finished instead of printing blanks', () => {
     const lines = benchSheetLines(
-      {
-        steps: [
-          {
-            kind: 'weighSolid',
-            netMassG: 0.1599,
-            balance: { itemId: 'BAL-05', readabilityG: 0.00001 },
-            material: { itemId: 'RM-PBN-01', name: 'Lead(II) nitrate' },
-          },
-          { kind: 'makeUpToVolume', flask: { itemId: 'VF-100-A', nominalMl: 100, toleranceClass: 'A' } },
-          { kind: 'pipetteAliquot', volumeMl: 0.25, pipette: { kind: 'pistonPipette', itemId: 'PP-1000' } },
-          { kind: 'weighAliquot', netMassG: 2.5, balance: { itemId: 'BAL-04', readabilityG: 0.0001 } },
-        ],
-      },
+      { steps: [{ kind: 'makeUpToVolume', flask: { libraryId: '4' } }, { kind: 'toString' }] },
       20,
     );
     expect(lines.map((line) => line.action)).toEqual([
-      'Weigh 0.15990 g of Lead(II) nitrate (RM-PBN-01) by difference on BAL-05.',
-      'Transfer quantitatively into flask VF-100-A (100 mL, class A) and make up to the mark at about 20 °C; stopper and mix.',
-      'Set piston pipette PP-1000 to 250 µL and deliver the aliquot.',
-      'Weigh 2.5000 g of the solution by difference on BAL-04.',
+      'Make up to volume: not complete in the plan.',
+      'Unknown step: not complete in the plan.',
     ]);
-    expect(lines.map((line) => line.readings)).toEqual(['weighing', 'volume', 'volume', 'weighing']);
+    expect(lines.map((line) => line.readings)).toEqual(['none', 'none']);
   });
 });

@@ -1,8 +1,8 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import type { Budget } from '../../../../shared/contracts/snapshot';
 import type { StoredWarning, Warning } from '../../../../shared/contracts/warnings';
+import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import type { PlanDraft } from './plan-draft';
-import { STEP_KINDS } from './step-kinds';
 
 /** Above this share of the variance one step dominates the budget. */
 const DOMINANT_STEP_PERCENT = 50;

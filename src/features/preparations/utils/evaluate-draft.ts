@@ -3,9 +3,10 @@ import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/libr
 import { needsOverrideReason, overrideReasonSchema, type PlanProblem } from '../../../../shared/contracts/preparations';
 import { warningsUnderPolicy } from '../../../../shared/contracts/warning-policy';
 import { evaluatePlan, PlanError, type BudgetResult, type PlanInput } from '../../../../shared/uncertainty';
+import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import { enginePlan, type PlanDraft } from './plan-draft';
 import { parseDecimal } from './parse-decimal';
-import { isStartKind, SLOT_KINDS, STEP_KINDS } from './step-kinds';
+import { isStartKind } from './step-choices';
 
 export type DraftEvaluation =
   | { ok: true; budget: BudgetResult; plan: PlanInput; problem: null }
@@ -39,12 +40,13 @@ export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>
     if (isStartKind(step.kind) && index !== 0)
       return { path: ['steps', index], message: 'The material is weighed or taken only in the first step.' };
     if (info.slot) {
-      const path = ['steps', index, info.slot];
+      const slot = info.slot.name;
+      const path = ['steps', index, slot];
       const item = library.get(step.equipmentId);
-      if (!step.equipmentId) return { path, message: `Choose the ${info.slot} from the library.` };
+      if (!step.equipmentId) return { path, message: `Choose the ${slot} from the library.` };
       if (!item)
         return { path, message: 'This item is no longer in the library (retired or removed). Choose another.' };
-      if (!SLOT_KINDS[info.slot].includes(item.kind)) return { path, message: `${item.code} is not a ${info.slot}.` };
+      if (!info.slot.libraryKinds.includes(item.kind)) return { path, message: `${item.code} is not a ${slot}.` };
       const itemReason = missingReason(item, draft.overrides[item.id]);
       if (itemReason) return { path: [...path, 'override'], message: itemReason };
     }

@@ -26,9 +26,3 @@ export function formatUncertainty(value: number, digits = 2): string {
 export function formatPercent(fraction: number, digits = 2): string {
   return `${formatSignificant(fraction * 100, digits)} %`;
 }
-
-/** A mass to the balance's readability d: 0.16 g on a 0.00001 g balance → "0.16000". */
-export function formatToReadability(massG: number, readabilityG: number): string {
-  const decimals = readabilityG > 0 ? Math.max(0, Math.round(-Math.log10(readabilityG))) : 4;
-  return massG.toFixed(decimals);
-}

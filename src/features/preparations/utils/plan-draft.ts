@@ -2,7 +2,8 @@ import { toEngineEquipment } from '../../../../shared/contracts/engine-equipment
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import { overrideReasonSchema } from '../../../../shared/contracts/preparations';
 import type { PlanInput } from '../../../../shared/uncertainty';
-import { isStartKind, STEP_KINDS, type StepKind } from './step-kinds';
+import { isStepKind, STEP_KINDS, type StepKind } from '../../../../shared/contracts/step-kinds';
+import { isStartKind } from './step-choices';
 import { parseDecimal } from './parse-decimal';
 
 export type ExtraSourceShape = 'normal' | 'rectangular' | 'triangular' | 'arcsine';
@@ -101,7 +102,7 @@ export function draftFromPlan(
 ): PlanDraft {
   const settings = isRecord(plan.settings) ? plan.settings : {};
   const steps = Array.isArray(plan.steps) ? plan.steps.filter(isRecord) : [];
-  const start = steps.find((step) => step.kind === 'weighSolid' || step.kind === 'startFromCertifiedSolution');
+  const start = steps.find((step) => isStepKind(step.kind) && isStartKind(step.kind));
   return {
     title: extras.title,
     materialId: libraryIdOf(start?.material),
@@ -111,16 +112,13 @@ export function draftFromPlan(
     overrides: Object.fromEntries(extras.overrides.map((override) => [override.libraryId, override.reason])),
     seed: extras.seed,
     steps: steps
-      .filter(
-        (step): step is Record<string, unknown> & { kind: StepKind } =>
-          typeof step.kind === 'string' && step.kind in STEP_KINDS,
-      )
+      .filter((step): step is Record<string, unknown> & { kind: StepKind } => isStepKind(step.kind))
       .map((step) => {
         const info = STEP_KINDS[step.kind];
         return {
           key: newKey('step'),
           kind: step.kind,
-          equipmentId: info.slot ? libraryIdOf(step[info.slot]) : '',
+          equipmentId: info.slot ? libraryIdOf(step[info.slot.name]) : '',
           quantity: info.quantity ? text(step[info.quantity.field]) : '',
           containerMassG:
             step.containerMassG === undefined || step.containerMassG === 0 ? '' : text(step.containerMassG),
@@ -152,7 +150,7 @@ function buildPlan(draft: PlanDraft, library: Map<string, EquipmentItem>, withTi
     const info = STEP_KINDS[step.kind];
     const out: Record<string, unknown> = { kind: step.kind };
     if (isStartKind(step.kind) && material) out.material = material;
-    if (info.slot && step.equipmentId) out[info.slot] = writeEquipment(step.equipmentId);
+    if (info.slot && step.equipmentId) out[info.slot.name] = writeEquipment(step.equipmentId);
     if (info.quantity) {
       const item = library.get(step.equipmentId);
       // A one-mark glass pipette delivers its nominal volume, whatever was typed.

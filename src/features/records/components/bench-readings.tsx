@@ -1,5 +1,8 @@
 import { createColumnHelper } from '@tanstack/react-table';
+import { formatToReadability } from '../../../../shared/contracts/balance-reading';
 import type { RecordedReadings } from '../../../../shared/contracts/preparations';
+import { readingWords } from '../../../../shared/contracts/step-kinds';
+import type { Plan } from '../../../../shared/uncertainty';
 import { formatDateTime } from '../../../lib/format-date';
 import { massDifference } from '../utils/reading-difference';
 import { RecordTable, type RecordTableFeatures } from './record-table';
@@ -7,42 +10,41 @@ import { RecordTable, type RecordTableFeatures } from './record-table';
 type Reading = RecordedReadings['readings'][number];
 const column = createColumnHelper<RecordTableFeatures, Reading>();
 const NUMERIC = new Set(['plannedG', 'actualG', 'differenceMg', 'differencePercent', 'tareG', 'grossG']);
-const FIELD_WORDS: Record<Reading['field'], string> = {
-  netMassG: 'net mass',
-  finalMassG: 'final solution mass',
-  solventMassG: 'solvent mass',
-};
 
-/** The readability d (g) of the balance each step of the computed plan weighs on, by step index. */
-function readabilities(plan: Record<string, unknown> | undefined): (stepIndex: number) => number | undefined {
-  const steps = Array.isArray(plan?.steps) ? (plan.steps as { balance?: { readabilityG?: unknown } }[]) : [];
-  return (stepIndex) => {
-    const readabilityG = steps[stepIndex]?.balance?.readabilityG;
-    return typeof readabilityG === 'number' && readabilityG > 0 ? readabilityG : undefined;
+/** The balance's readability d (g) and the words for the mass recorded, for each step of the computed plan, by index. */
+function stepFacts(plan: Plan | undefined) {
+  return (stepIndex: number) => {
+    const step = plan?.steps.at(stepIndex);
+    const balance = step && 'balance' in step ? step.balance : undefined;
+    return {
+      readabilityG: balance?.readabilityG,
+      massWords: step ? readingWords(step.kind) : '',
+    };
   };
 }
 
-/** A mass as the balance shows it: to its readability, or five decimals (0.01 mg) when it is not known. */
+/** A mass as the balance shows it: to its readability (four decimals when it is not known). */
 const grams = (value: number | null, readabilityG: number | undefined) =>
-  value === null ? '—' : value.toFixed(readabilityG ? Math.max(0, Math.round(-Math.log10(readabilityG))) : 5);
+  value === null ? '—' : formatToReadability(value, readabilityG ?? 0);
 
 type BenchReadingsProps = {
   readings: RecordedReadings;
   stepName: (key: string) => string;
-  /** The computed plan, for each balance's readability. */
-  plan?: Record<string, unknown>;
+  /** The computed plan, for each balance's readability and the words for each step's mass. */
+  plan?: Plan;
 };
 
 /** "Planned and actual": the masses weighed at the bench beside the planned ones; the result and budget use the masses weighed. */
 export function BenchReadings({ readings, stepName, plan }: BenchReadingsProps) {
-  const readabilityOf = readabilities(plan);
+  const factsOf = stepFacts(plan);
+  const readabilityOf = (stepIndex: number) => factsOf(stepIndex).readabilityG;
   const columns = column.columns([
     column.accessor('stepIndex', {
       header: 'Step',
       cell: (info) => (
         <>
           <span className="font-semibold">{stepName(String(info.getValue()))}</span>
-          <span className="block text-sm text-muted">{FIELD_WORDS[info.row.original.field]}</span>
+          <span className="block text-sm text-muted">{factsOf(info.getValue()).massWords}</span>
         </>
       ),
     }),

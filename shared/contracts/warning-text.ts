@@ -1,4 +1,5 @@
 import { itemLabel } from '../uncertainty/step-context';
+import { STEP_KINDS } from './step-kinds';
 import type { Warning } from './warnings';
 
 /**
@@ -11,8 +12,11 @@ export function warningText(warning: Warning): string {
       const { balanceItemId, netMassG, minimumWeightG } = warning.params;
       return `Step ${warning.stepIndex + 1}: ${netMassG} g is below the minimum weight of ${itemLabel('Balance', balanceItemId)} (${minimumWeightG.toPrecision(3)} g by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`;
     }
-    case 'dominantStep':
-      return `Step ${warning.stepIndex + 1} (${warning.params.stepLabel}) contributes ${Math.round(warning.params.indexPercent)} % of the variance: better equipment here lowers the uncertainty most.`;
+    case 'dominantStep': {
+      const { stepKind } = warning.params;
+      const label = stepKind ? STEP_KINDS[stepKind].label.toLowerCase() : 'this step';
+      return `Step ${warning.stepIndex + 1} (${label}) contributes ${Math.round(warning.params.indexPercent)} % of the variance: better equipment here lowers the uncertainty most.`;
+    }
     case 'flaggedItem':
       return `${warning.params.itemCode}: ${warning.params.flags.join('; ')}.`;
     case 'recordedText':

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { PlanStep } from '../uncertainty/plan-schema';
 
 /**
  * Warnings as data: `{ code, stepIndex?, params }`. The engine raises the engine codes; the planner adds its
@@ -41,7 +42,7 @@ type PlannerWarning =
       /** One step contributes more than the dominant share of the variance. */
       code: 'dominantStep';
       stepIndex: number;
-      params: { indexPercent: number; stepLabel: string };
+      params: { indexPercent: number; stepKind: PlanStep['kind'] | null };
     }
   | {
       /** A library item the plan uses is flagged (calibration due or overdue, material expiring or expired). */

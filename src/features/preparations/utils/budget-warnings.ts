@@ -1,7 +1,6 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import type { Budget } from '../../../../shared/contracts/snapshot';
 import type { StoredWarning, Warning } from '../../../../shared/contracts/warnings';
-import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import type { PlanDraft } from './plan-draft';
 
 /** Above this share of the variance one step dominates the budget. */
@@ -26,11 +25,11 @@ export function placedWarnings(
   for (const group of budget?.byStep ?? []) {
     if (group.indexPercent > DOMINANT_STEP_PERCENT && /^\d+$/.test(group.key)) {
       const index = Number(group.key);
-      const stepLabel = draft.steps[index] ? STEP_KINDS[draft.steps[index].kind].label.toLowerCase() : 'this step';
+      const stepKind = draft.steps[index]?.kind ?? null;
       warnings.push({
         code: 'dominantStep',
         stepIndex: index,
-        params: { indexPercent: group.indexPercent, stepLabel },
+        params: { indexPercent: group.indexPercent, stepKind },
       });
     }
   }

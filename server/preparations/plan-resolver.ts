@@ -2,7 +2,13 @@ import { toEngineEquipment } from '../../shared/contracts/engine-equipment';
 import type { EquipmentItem, EquipmentKind } from '../../shared/contracts/library';
 import { needsOverrideReason, type Override } from '../../shared/contracts/preparations';
 import type { UsedItem } from '../../shared/contracts/snapshot';
-import { isStepKind, STEP_KINDS, type StepKind } from '../../shared/contracts/step-kinds';
+import {
+  emptySlotWords,
+  isStepKind,
+  STEP_KINDS,
+  wrongItemWords,
+  type StepKind,
+} from '../../shared/contracts/step-kinds';
 import { PlanError, type PlanPathSegment } from '../../shared/uncertainty';
 import { AppError } from '../lib/errors';
 
@@ -48,7 +54,7 @@ export function resolvePlan(
       if (!isRecord(given)) continue; // the engine reports the missing slot
       const libraryId = typeof given.libraryId === 'string' ? given.libraryId : undefined;
       if (!libraryId) {
-        problems.push(new PlanError(path, `Step ${index + 1}: choose the ${slot} from the lab's library.`));
+        problems.push(new PlanError(path, `Step ${index + 1}: ${emptySlotWords(slot)}`));
         continue;
       }
       const item = library.get(libraryId);
@@ -61,7 +67,10 @@ export function resolvePlan(
         );
       if (!kinds.includes(item.kind)) {
         problems.push(
-          new PlanError(path, `Step ${index + 1}: ${item.code} is not a ${kinds.join(' or ').replace(/-/g, ' ')}.`),
+          new PlanError(
+            path,
+            `Step ${index + 1}: ${wrongItemWords(item.code, slot === 'material' ? kinds.join(' or ').replace(/-/g, ' ') : slot)}`,
+          ),
         );
         continue;
       }

@@ -161,6 +161,12 @@ export function stepInstruction(step: PlanStep, context: InstructionContext): st
   return instruction(step, context);
 }
 
+/** A slot left empty, in the words the planner shows at the field and the server puts after "Step n: ". */
+export const emptySlotWords = (slotName: string) => `Choose the ${slotName} from the lab’s library.`;
+
+/** An item of the wrong kind in a slot, in the planner's and the server's words alike. */
+export const wrongItemWords = (itemCode: string, slotNoun: string) => `${itemCode} is not a ${slotNoun}.`;
+
 /** An item as a computed plan holds it inline: its code (itemId) and the library entry it was resolved from. */
 type InlineItem = { itemId: string; libraryId?: string };
 

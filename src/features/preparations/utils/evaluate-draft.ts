@@ -3,7 +3,7 @@ import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/libr
 import { needsOverrideReason, overrideReasonSchema, type PlanProblem } from '../../../../shared/contracts/preparations';
 import { warningsUnderPolicy } from '../../../../shared/contracts/warning-policy';
 import { evaluatePlan, PlanError, type BudgetResult, type PlanInput } from '../../../../shared/uncertainty';
-import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
+import { emptySlotWords, STEP_KINDS, wrongItemWords } from '../../../../shared/contracts/step-kinds';
 import { enginePlan, type PlanDraft } from './plan-draft';
 import { parseDecimal } from './parse-decimal';
 import { isStartKind } from './step-choices';
@@ -43,10 +43,10 @@ export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>
       const slot = info.slot.name;
       const path = ['steps', index, slot];
       const item = library.get(step.equipmentId);
-      if (!step.equipmentId) return { path, message: `Choose the ${slot} from the library.` };
+      if (!step.equipmentId) return { path, message: emptySlotWords(slot) };
       if (!item)
         return { path, message: 'This item is no longer in the library (retired or removed). Choose another.' };
-      if (!info.slot.libraryKinds.includes(item.kind)) return { path, message: `${item.code} is not a ${slot}.` };
+      if (!info.slot.libraryKinds.includes(item.kind)) return { path, message: wrongItemWords(item.code, slot) };
       const itemReason = missingReason(item, draft.overrides[item.id]);
       if (itemReason) return { path: [...path, 'override'], message: itemReason };
     }

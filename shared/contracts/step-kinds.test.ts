@@ -81,7 +81,17 @@ describe('the step-kind registry', () => {
       // The reading replaces the very mass the analyst planned.
       expect(entry.quantity?.field, kind).toBe(entry.recordedMass);
       expect(entry.slot?.name, kind).toBe('balance');
+      // The readings form says what lies on the pan for every weighed step, and for no other.
+      expect(entry.onThePan?.('RM-PBN-01 lead nitrate'), kind).toMatch(/\w/);
     }
+    expect(
+      Object.entries(STEP_KINDS)
+        .filter(([, entry]) => entry.onThePan !== null)
+        .map(([kind]) => kind)
+        .sort(),
+    ).toEqual(weighed.map(([kind]) => kind).sort());
+    expect(STEP_KINDS.weighSolid.onThePan?.('lead(II) nitrate')).toBe('lead(II) nitrate');
+    expect(STEP_KINDS.weighAliquot.onThePan?.('')).toBe('aliquot of the solution');
     expect(readingWords('weighAliquot')).toBe('aliquot mass');
     expect(readingWords('makeUpToMass')).toBe('final solution mass');
   });

@@ -50,6 +50,8 @@ type StepKindEntry<K extends StepKind> = {
   recordedMass: (RecordedMassField & keyof StepOf<K>) | null;
   /** A weighing that may name the container on the pan (for the capacity check). */
   container: boolean;
+  /** What lies on the balance when the step is weighed, for the readings form ("aliquot of the solution"); null when nothing is weighed. */
+  onThePan: ((materialName: string) => string) | null;
   /** The instruction for the step, printed on the bench sheet and in the PDF record. */
   instruction: (step: StepOf<K>, context: InstructionContext) => string;
 };
@@ -72,6 +74,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     quantity: { field: 'netMassG', label: 'Net mass', unit: 'g' },
     recordedMass: 'netMassG',
     container: true,
+    onThePan: (materialName) => materialName || 'the solid',
     instruction: (step, { item }) =>
       `Weigh ${onBalance(step.netMassG, step.balance)} of ${step.material.name} — ${item('material')} — by difference on ${item('balance')}.`,
   },
@@ -83,6 +86,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     quantity: null,
     recordedMass: null,
     container: false,
+    onThePan: null,
     instruction: (step, { item }) =>
       `Let the certified solution ${step.material.name} (${step.material.certifiedValue} ${step.material.certifiedUnit}) — ${item('material')} — reach room temperature, and shake it.`,
   },
@@ -94,6 +98,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     quantity: null,
     recordedMass: null,
     container: false,
+    onThePan: null,
     instruction: (step, { item, labTemperatureC }) =>
       `Transfer quantitatively into the ${step.flask.nominalMl} mL flask ${item('flask')}, ${glassClass(step.flask.toleranceClass)}, and make up to the mark at about ${labTemperatureC} °C; stopper and mix.`,
   },
@@ -105,6 +110,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     quantity: { field: 'volumeMl', label: 'Volume', unit: 'mL' },
     recordedMass: null,
     container: false,
+    onThePan: null,
     instruction: (step, { item, stepIndex }) => {
       const from = stepIndex > 0 ? ` from the solution of step ${stepIndex}` : '';
       return step.pipette.kind === 'pistonPipette'
@@ -120,6 +126,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     quantity: { field: 'netMassG', label: 'Aliquot mass', unit: 'g' },
     recordedMass: 'netMassG',
     container: true,
+    onThePan: () => 'aliquot of the solution',
     instruction: (step, { item }) =>
       `Weigh ${onBalance(step.netMassG, step.balance)} of the solution by difference on ${item('balance')}.`,
   },
@@ -131,6 +138,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     quantity: { field: 'finalMassG', label: 'Final solution mass', unit: 'g' },
     recordedMass: 'finalMassG',
     container: true,
+    onThePan: () => 'solution made up to mass',
     instruction: (step, { item }) =>
       `Add solvent to a total solution mass of ${onBalance(step.finalMassG, step.balance)} on ${item('balance')}; mix.`,
   },
@@ -142,6 +150,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     quantity: { field: 'solventMassG', label: 'Solvent mass', unit: 'g' },
     recordedMass: 'solventMassG',
     container: true,
+    onThePan: () => 'solvent',
     instruction: (step, { item }) =>
       `Dissolve in ${onBalance(step.solventMassG, step.balance)} of solvent weighed on ${item('balance')}.`,
   },

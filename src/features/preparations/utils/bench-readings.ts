@@ -32,16 +32,8 @@ const text = (value: unknown) => (typeof value === 'string' ? value : '');
 function whatIsWeighed(step: Item): string {
   const balance = text((step.balance as Item | undefined)?.itemId) || 'the balance';
   const material = (step.material ?? {}) as Item;
-  switch (step.kind) {
-    case 'weighSolid':
-      return `On ${balance}: ${text(material.name) || 'the solid'}`;
-    case 'weighAliquot':
-      return `On ${balance}: aliquot of the solution`;
-    case 'makeUpToMass':
-      return `On ${balance}: solution made up to mass`;
-    default:
-      return `On ${balance}: solvent`;
-  }
+  const onThePan = isStepKind(step.kind) ? STEP_KINDS[step.kind].onThePan : null;
+  return `On ${balance}: ${onThePan ? onThePan(text(material.name)) : 'the weighed portion'}`;
 }
 
 /**

@@ -199,16 +199,31 @@ export function preparationsService(deps: {
     }
   }
 
+  /** The lab's preparation, or 404 (a preparation of another lab is not found either). */
+  async function preparationRow(labId: number, id: number): Promise<PreparationRow> {
+    const prep = await preparations.find(labId, id);
+    if (!prep) throw notFound('The preparation');
+    return prep;
+  }
+
+  /** The lab's preparation and one of its versions, or 404. */
+  async function preparationVersion(
+    labId: number,
+    id: number,
+    number: number,
+  ): Promise<{ prep: PreparationRow; current: VersionRow }> {
+    const prep = await preparationRow(labId, id);
+    const current = await preparations.version(id, number);
+    if (!current) throw notFound(`Version ${number}`);
+    return { prep, current };
+  }
+
   async function versionRow(labId: number, id: number, number: number): Promise<VersionRow> {
-    if (!(await preparations.find(labId, id))) throw notFound('The preparation');
-    const row = await preparations.version(id, number);
-    if (!row) throw notFound(`Version ${number}`);
-    return row;
+    return (await preparationVersion(labId, id, number)).current;
   }
 
   async function detail(labId: number, id: number, member: LabMember): Promise<PreparationDetail> {
-    const prep = await preparations.find(labId, id);
-    if (!prep) throw notFound('The preparation');
+    const prep = await preparationRow(labId, id);
     const versions = await preparations.versionsOf(id);
     const [latest] = versions;
     return {
@@ -254,8 +269,7 @@ export function preparationsService(deps: {
     },
 
     async version(labId: number, id: number, number: number, member: LabMember): Promise<VersionDetail> {
-      const prep = await preparations.find(labId, id);
-      if (!prep) throw notFound('The preparation');
+      const prep = await preparationRow(labId, id);
       const [latest] = await preparations.versionsOf(id);
       const row = await preparations.version(id, number);
       if (!row) throw notFound(`Version ${number}`);
@@ -325,10 +339,7 @@ export function preparationsService(deps: {
       input: PreparationWrite & { overrides: Override[] },
       signal?: AbortSignal,
     ): Promise<PreparationDetail> {
-      const prep = await preparations.find(labId, id);
-      if (!prep) throw notFound('The preparation');
-      const current = await preparations.version(id, number);
-      if (!current) throw notFound(`Version ${number}`);
+      const { prep, current } = await preparationVersion(labId, id, number);
       if (!allows('edit', current.status))
         throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
       if (!ownsPreparation(actor, { ownerId: prep.created_by }))
@@ -364,8 +375,7 @@ export function preparationsService(deps: {
 
     /** Starts a new draft version from the latest one, once it is approved (a returned one is edited instead). */
     async newVersion(labId: number, actor: LabActor, id: number, signal?: AbortSignal): Promise<PreparationDetail> {
-      const prep = await preparations.find(labId, id);
-      if (!prep) throw notFound('The preparation');
+      const prep = await preparationRow(labId, id);
       const [latest] = await preparations.versionsOf(id);
       if (!allows('startNewVersion', latest.status)) throw noNewVersionFrom(latest);
       const computed = await compute(
@@ -416,10 +426,7 @@ export function preparationsService(deps: {
       input: ReadingsRequest & { deviations: string },
       signal?: AbortSignal,
     ): Promise<PreparationDetail> {
-      const prep = await preparations.find(labId, id);
-      if (!prep) throw notFound('The preparation');
-      const current = await preparations.version(id, number);
-      if (!current) throw notFound(`Version ${number}`);
+      const { prep, current } = await preparationVersion(labId, id, number);
       if (!ownsPreparation(actor, { ownerId: prep.created_by }))
         throw forbidden('Only the analyst who owns this preparation records its readings.');
       if (!allows('recordReadings', current.status))
@@ -524,8 +531,7 @@ export function preparationsService(deps: {
       title?: string,
       signal?: AbortSignal,
     ): Promise<PreparationDetail> {
-      const prep = await preparations.find(labId, id);
-      if (!prep) throw notFound('The preparation');
+      const prep = await preparationRow(labId, id);
       const [latest] = await preparations.versionsOf(id);
       return this.create(
         labId,

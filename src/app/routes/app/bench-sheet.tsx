@@ -8,17 +8,13 @@ import { preparationQueryOptions, usePreparation } from '../../../lib/api/prepar
 import { BenchSheet } from '../../../features/preparations/components/bench-sheet';
 import { ReadingsForm } from '../../../features/preparations/components/readings-form';
 import { activeMembership } from '../../../lib/authorization';
-
-const idFrom = (value: string | undefined) => {
-  const id = Number(value);
-  return Number.isInteger(id) && id > 0 ? id : null;
-};
+import { idFromParam } from '../../../lib/route-params';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
-    const id = idFrom(params.preparationId);
+    const id = idFromParam(params.preparationId);
     if (me?.activeLabId && id) {
       await Promise.all([
         // The sheet prints what the server holds now, not a copy cached before the last autosave.
@@ -32,7 +28,7 @@ export const clientLoader =
 export function Component() {
   const me = useSignedInMe();
   const membership = activeMembership(me);
-  const id = idFrom(useParams().preparationId);
+  const id = idFromParam(useParams().preparationId);
   if (!membership || !id) {
     return (
       <Alert tone="info" title="No such preparation">

@@ -19,17 +19,13 @@ import { BenchReadings } from '../../../features/records/components/bench-readin
 import { StartNewVersionButton } from '../../../features/records/components/start-new-version-button';
 import { preparationQueryOptions, usePreparation, usePreparationChanged } from '../../../lib/api/preparation';
 import { activeMembership, can } from '../../../lib/authorization';
-
-const idFrom = (value: string | undefined) => {
-  const id = Number(value);
-  return Number.isInteger(id) && id > 0 ? id : null;
-};
+import { idFromParam } from '../../../lib/route-params';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
-    const id = idFrom(params.preparationId);
+    const id = idFromParam(params.preparationId);
     if (me?.activeLabId && id) {
       await Promise.all([
         queryClient.ensureQueryData(preparationQueryOptions(me.activeLabId, id)),
@@ -49,7 +45,7 @@ type HandOver = { preparationId: number; updatedAt: string; draft: PlanDraft; sa
 export function Component() {
   const me = useSignedInMe();
   const membership = activeMembership(me);
-  const id = idFrom(useParams().preparationId);
+  const id = idFromParam(useParams().preparationId);
   if (!membership || !id) {
     return (
       <>
@@ -103,7 +99,7 @@ function PreparationWorkspace({ labId, detail, library, policy, planner }: Prepa
   const navigate = useNavigate();
   const preparationChanged = usePreparationChanged(labId);
   const [searchParams] = useSearchParams();
-  const variantOf = idFrom(searchParams.get('variantOf') ?? undefined);
+  const variantOf = idFromParam(searchParams.get('variantOf') ?? undefined);
   const duplicate = useDuplicatePreparation(labId, detail.id);
   const version = detail.current;
   const allowed = version.allowedActions;

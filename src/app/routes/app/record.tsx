@@ -37,18 +37,14 @@ import {
   versionQueryOptions,
 } from '../../../lib/api/preparation';
 import { activeMembership, activeRoles, can } from '../../../lib/authorization';
-
-const idFrom = (value: string | undefined) => {
-  const id = Number(value);
-  return Number.isInteger(id) && id > 0 ? id : null;
-};
+import { idFromParam } from '../../../lib/route-params';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
-    const preparationId = idFrom(params.preparationId);
-    const versionNumber = idFrom(params.versionNumber);
+    const preparationId = idFromParam(params.preparationId);
+    const versionNumber = idFromParam(params.versionNumber);
     if (me?.activeLabId && preparationId && versionNumber) {
       const labId = me.activeLabId;
       // fetchQuery: a record changed by someone else since it was last read is read again before showing.
@@ -83,8 +79,8 @@ export function Component() {
   const me = useSignedInMe();
   const membership = activeMembership(me);
   const params = useParams();
-  const preparationId = idFrom(params.preparationId);
-  const versionNumber = idFrom(params.versionNumber);
+  const preparationId = idFromParam(params.preparationId);
+  const versionNumber = idFromParam(params.versionNumber);
   if (!membership || !preparationId || !versionNumber) {
     return (
       <>

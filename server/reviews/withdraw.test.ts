@@ -1,4 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { preparationsRepository } from '../preparations/preparations-repository';
 import { leadPlan, libraryByCode } from '../test-support/demo-plans';
 import {
   buildTestApp,
@@ -118,6 +119,14 @@ describe('the analyst withdraws a submitted version before QA decides', () => {
     const res = await analyst.post(v1('withdraw'), { comment: 'x'.repeat(2001) }).expect(400);
     expect(JSON.stringify(res.body.error)).toContain('Use at most 2000 characters.');
     expect(await statusInDb()).toBe('submitted');
+  });
+
+  it('moves the status only while the version is still submitted (the guard a withdrawal that loses a race meets)', async () => {
+    await analyst.post(v1('submit'), {}).expect(200);
+    await qa.post(v1('approve'), APPROVAL).expect(200);
+    const versionId = (await t.db('preparation_versions').where({ preparation_id: preparationId }).first()).id;
+    expect(await preparationsRepository(t.db).withdraw(versionId, 'draft', t.db)).toBe(0);
+    expect(await statusInDb()).toBe('approved');
   });
 
   it('lets exactly one of a withdrawal and an approval sent together win; the other gets a 409', async () => {

@@ -131,9 +131,10 @@ describe('the analyst withdraws a submitted version before QA decides', () => {
 
   it('lets exactly one of a withdrawal and an approval sent together win; the other gets a 409', async () => {
     await analyst.post(v1('submit'), {}).expect(200);
-    const [withdraw, approve] = await Promise.all([
-      analyst.post(v1('withdraw'), { comment: 'Wrong flask.' }),
+    // The approval is sent first: it reads the version, then checks the password while the withdrawal runs.
+    const [approve, withdraw] = await Promise.all([
       qa.post(v1('approve'), APPROVAL),
+      analyst.post(v1('withdraw'), { comment: 'Wrong flask.' }),
     ]);
     expect([withdraw.status, approve.status].sort()).toEqual([200, 409]);
     const loser = withdraw.status === 409 ? withdraw : approve;

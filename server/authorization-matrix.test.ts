@@ -71,6 +71,7 @@ const ACCESS: Record<string, Access> = {
   'POST /api/labs/:labId/route-finder': ['analyst', 'qa'],
   'POST /api/labs/:labId/compute': ['analyst', 'qa'],
   'POST /api/labs/:labId/preparations/:preparationId/versions/:number/submit': ['analyst'],
+  'POST /api/labs/:labId/preparations/:preparationId/versions/:number/withdraw': ['analyst'],
   'POST /api/labs/:labId/preparations/:preparationId/versions/:number/approve': ['qa'],
   'POST /api/labs/:labId/preparations/:preparationId/versions/:number/return': ['qa'],
   'GET /api/labs/:labId/preparations/:preparationId/versions/:number/verify': 'member',

@@ -140,6 +140,32 @@ describe('the PDF record', () => {
     expect(text).toContain(bare('Subtotal, Step 3 · Pipette an aliquot (GP-10-A)'));
   });
 
+  it('lists a withdrawal in the review history in plain words, and the approval after it still reads as signed', async () => {
+    const v1 = (action: string) => url(`/preparations/${preparationId}/versions/1/${action}`);
+    await analyst.post(v1('submit'), {}).expect(200);
+    await analyst.post(v1('withdraw'), { comment: 'Wrong flask entered.' }).expect(200);
+    await analyst.post(v1('submit'), { comment: 'Flask corrected.' }).expect(200);
+    const qa = await signIn(t.app, demo('qa'));
+    await qa.post(v1('approve'), { password: DEMO_PASSWORD, statement: 'Reviewed against SOP-CHEM-014.' }).expect(200);
+    const flat = pdfText(await downloadPdf(analyst), 'withdrawn').replace(/\s+/g, ' ');
+    const history = [
+      'Submitted for review by Dev Okonjo',
+      'Withdrawn from review by Dev Okonjo, ',
+      '“Wrong flask entered.”',
+      'Submitted for review by Dev Okonjo, ',
+      '“Flask corrected.”',
+      'Approved and signed (password confirmed) by Imogen Tasker',
+      '“Reviewed against SOP-CHEM-014.”',
+    ];
+    // Each line found after the one before it: the history is in order.
+    let from = 0;
+    for (const line of history) {
+      from = flat.indexOf(line, from);
+      expect(from, line).toBeGreaterThanOrEqual(0);
+    }
+    expect(flat).not.toContain('DRAFT');
+  });
+
   it('prints ν_eff truncated to the integer the coverage factor was read at (8.7 → 8, never 9)', async () => {
     const library = await libraryByCode(analyst, labId);
     const plan = leadPlan(library);

@@ -34,6 +34,14 @@ const DISTRIBUTION_NAMES: Record<string, string> = {
   studentT: 'Student t',
 };
 
+/** How the review history words each action, in plain words. */
+const REVIEW_VERBS: Record<VersionDetail['reviews'][number]['action'], string> = {
+  submitted: 'Submitted for review',
+  withdrawn: 'Withdrawn from review',
+  returned: 'Returned with comments',
+  approved: 'Approved and signed (password confirmed)',
+};
+
 /**
  * The PDF record of one preparation version: plan, inputs, budget, charts, Monte Carlo and its
  * validation, the GUM result statement, review and signatures, the snapshot's SHA-256, cautions.
@@ -259,12 +267,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     heading('Review and signatures');
     if (version.reviews.length === 0) paragraph('Not yet submitted for review.');
     for (const review of version.reviews) {
-      const verb =
-        review.action === 'approved'
-          ? 'Approved and signed (password confirmed)'
-          : review.action === 'returned'
-            ? 'Returned with comments'
-            : 'Submitted for review';
+      const verb = REVIEW_VERBS[review.action];
       paragraph(`${verb} by ${review.actor}, ${utc(review.at)}${review.comment ? ` — “${review.comment}”` : ''}`);
       doc.moveDown(0.15);
     }

@@ -1,5 +1,6 @@
 import type { PreparationListFilter, PreparationStatus } from '../../shared/contracts/preparations';
-import { statesAllowing, VERSION_TRANSITIONS } from '../../shared/domain/version-lifecycle';
+import type { Review } from '../../shared/contracts/reviews';
+import { statesAllowing, VERSION_TRANSITIONS, type WithdrawnStatus } from '../../shared/domain/version-lifecycle';
 import type { Db } from '../db/connection';
 import { insertedId } from '../db/inserted-id';
 import type { ApprovedAsColumns } from '../reviews/approved-record';
@@ -43,7 +44,7 @@ export interface VersionRow extends ApprovedAsColumns {
 export interface ReviewRow {
   id: number;
   version_id: number;
-  action: 'submitted' | 'returned' | 'approved';
+  action: Review['action'];
   actor_user_id: number;
   actor_name: string;
   at: string;
@@ -169,6 +170,12 @@ export function preparationsRepository(db: Db) {
         .where({ id: versionId, status: from })
         .whereIn('status', statesAllowing(transition))
         .update({ status: VERSION_TRANSITIONS[transition].to }),
+    /** Takes a submitted version back to `to`; 0 when it was not submitted any more (QA decided first). */
+    withdraw: (versionId: number, to: WithdrawnStatus, trx: Db) =>
+      trx('preparation_versions')
+        .where({ id: versionId })
+        .whereIn('status', statesAllowing('withdraw'))
+        .update({ status: to }),
     /** Approves a submitted version and freezes what it shows, in one update; 0 when it was not submitted any more. */
     approve: (versionId: number, frozen: ApprovedAsColumns & { record_sha256: string }, trx: Db) =>
       trx('preparation_versions')

@@ -5,6 +5,9 @@ import type { ReviewRow, VersionRow } from './preparations-repository';
 export const lastSubmitterId = (reviews: readonly ReviewRow[]): number | null =>
   reviews.findLast((review) => review.action === 'submitted')?.actor_user_id ?? null;
 
+/** Masses weighed at the bench were recorded on the version. */
+export const readingsRecorded = (version: Pick<VersionRow, 'readings_json'>) => version.readings_json !== null;
+
 /** The facts the version lifecycle decides on, read from the stored rows. */
 export function versionFacts(
   version: VersionRow,
@@ -17,5 +20,6 @@ export function versionFacts(
     submitterId: lastSubmitterId(reviews),
     computed: version.snapshot_json !== null,
     latest: version.number === preparation.latestNumber,
+    readingsRecorded: readingsRecorded(version),
   };
 }

@@ -1,7 +1,12 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { idParam } from '../../shared/contracts/auth';
-import { approveRequestSchema, returnRequestSchema, submitRequestSchema } from '../../shared/contracts/reviews';
+import {
+  approveRequestSchema,
+  returnRequestSchema,
+  submitRequestSchema,
+  withdrawRequestSchema,
+} from '../../shared/contracts/reviews';
 import type { AttemptLimits } from '../auth/attempt-limits';
 import { labActor, type Authorize, type LabContext, type SessionUser } from '../auth/authorize';
 import { valid, validate } from '../lib/validate';
@@ -11,7 +16,7 @@ import type { ReviewService } from './review-service';
 const versionParams = z.object({ labId: idParam, preparationId: idParam, number: idParam });
 const searchQuery = z.object({ q: z.string().trim().max(200).optional() });
 
-/** Submit (analyst), approve or return (QA), the review queue, approved records and hash verification. */
+/** Submit or withdraw (analyst), approve or return (QA), the review queue, approved records and hash verification. */
 export function reviewRouter(deps: {
   reviews: ReviewService;
   preparations: PreparationsService;
@@ -31,6 +36,17 @@ export function reviewRouter(deps: {
     async (req, res) => {
       const { params, body } = valid(req, { params: versionParams, body: submitRequestSchema });
       await reviews.submit(lab(req), actor(req), params.preparationId, params.number, body.comment);
+      res.json(await preparations.detail(lab(req), params.preparationId, labActor(req)));
+    },
+  );
+
+  router.post(
+    `${base}/withdraw`,
+    authorize.lab('planPreparations'),
+    validate({ params: versionParams, body: withdrawRequestSchema }),
+    async (req, res) => {
+      const { params, body } = valid(req, { params: versionParams, body: withdrawRequestSchema });
+      await reviews.withdraw(lab(req), actor(req), params.preparationId, params.number, body.comment);
       res.json(await preparations.detail(lab(req), params.preparationId, labActor(req)));
     },
   );

@@ -7,8 +7,9 @@ import {
   OWN_WORK_REVIEW_REFUSAL,
   ownsPreparation,
   statesAllowing,
+  statusAfterWithdrawal,
 } from '../../shared/domain/version-lifecycle';
-import { lastSubmitterId } from '../preparations/version-facts';
+import { lastSubmitterId, readingsRecorded } from '../preparations/version-facts';
 import { verifyPassword } from '../auth/password';
 import type { UsersRepository } from '../auth/users-repository';
 import type { LabsRepository } from '../labs/labs-repository';
@@ -33,7 +34,8 @@ function planTitle(planJson: string): string | null {
 
 /**
  * The review workflow of a computed version: draft or returned → submitted (its author) → approved
- * (signed with the reviewer's password) or returned with comments (QA, never the submitter).
+ * (signed with the reviewer's password) or returned with comments (QA, never the submitter), or
+ * withdrawn by its analyst before QA decides.
  */
 export function reviewService(deps: {
   transact: Transact;
@@ -135,6 +137,54 @@ export function reviewService(deps: {
           }),
         );
       }
+    },
+
+    /**
+     * The owner takes a submitted version back before QA decides: it returns to prepared or draft (the
+     * lifecycle says which) and leaves QA's queue. QA is not mailed; the audit event and the record's
+     * review history say it was withdrawn.
+     */
+    async withdraw(
+      labId: number,
+      actor: SessionUser,
+      preparationId: number,
+      number: number,
+      comment: string,
+    ): Promise<void> {
+      const { prep, version } = await load(labId, preparationId, number);
+      if (!ownsPreparation(actor, { ownerId: prep.created_by }))
+        throw forbidden('Only the analyst who owns this preparation can withdraw it from review.');
+      const decided = `Version ${number} is ${version.status}; only a submitted version can be withdrawn from review.`;
+      if (!allows('withdraw', version.status)) throw conflict('not_submitted', decided);
+      const to = statusAfterWithdrawal({ readingsRecorded: readingsRecorded(version) });
+      await transact(async (trx) => {
+        if ((await preparations.withdraw(version.id, to, trx)) === 0)
+          throw conflict('not_submitted', 'QA decided on this version meanwhile; it can no longer be withdrawn.');
+        await preparations.insertReview(
+          {
+            version_id: version.id,
+            action: 'withdrawn',
+            actor_user_id: actor.id,
+            at: now().toISOString(),
+            comment,
+            snapshot_sha256: version.snapshot_sha256,
+          },
+          trx,
+        );
+        await audit.record(
+          {
+            labId,
+            actorUserId: actor.id,
+            action: 'preparation.withdrawn',
+            entityType: 'preparation',
+            entityId: preparationId,
+            summary: `${actor.name} withdrew version ${number} of “${prep.title}” from review${comment ? `: ${comment}` : ''}`,
+            before: { status: 'submitted' },
+            after: { status: to },
+          },
+          trx,
+        );
+      });
     },
 
     async decide(

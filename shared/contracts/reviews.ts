@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-export const reviewActionSchema = z.enum(['submitted', 'returned', 'approved']);
+export const reviewActionSchema = z.enum(['submitted', 'returned', 'approved', 'withdrawn']);
 
 export const reviewSchema = z.object({
   id: z.number().int(),
@@ -23,6 +23,10 @@ export const approvedAsSchema = z.object({
 });
 
 export const submitRequestSchema = z.object({ comment: z.string().trim().max(2000).default('') });
+/** The analyst takes a submitted version back; the reason is optional. */
+export const withdrawRequestSchema = z.object({
+  comment: z.string().trim().max(2000, 'Use at most 2000 characters.').default(''),
+});
 export const returnRequestSchema = z.object({
   comment: z
     .string()

@@ -10,6 +10,7 @@ import {
   canWithdraw,
   mayReview,
   OWN_WORK_REVIEW_REFUSAL,
+  statusAfterWithdrawal,
   VERSION_TRANSITIONS,
   type LabMember,
   type VersionFacts,
@@ -28,6 +29,7 @@ const version = (status: PreparationStatus, facts: Partial<VersionFacts> = {}): 
   submitterId: ['submitted', 'approved', 'returned'].includes(status) ? OWNER : null,
   computed: true,
   latest: true,
+  readingsRecorded: false,
   ...facts,
 });
 
@@ -55,7 +57,7 @@ const EXPECTED: Record<PreparationStatus, Record<Predicate, LabMember[]>> = {
   submitted: {
     canEdit: [],
     canSubmit: [],
-    canWithdraw: [qa],
+    canWithdraw: [owner],
     canRecordReadings: [],
     mayReview: [qa],
     canStartNewVersion: [],
@@ -100,6 +102,22 @@ describe('version lifecycle table', () => {
     expect(allows('approve', 'returned')).toBe(false);
     expect(allows('recordReadings', 'submitted')).toBe(false);
     expect(VERSION_TRANSITIONS.return.to).toBe('returned');
+  });
+
+  it('withdraws a submitted version to prepared when bench readings were recorded on it, else to draft', () => {
+    expect(allows('withdraw', 'submitted')).toBe(true);
+    expect(statusAfterWithdrawal(version('submitted', { readingsRecorded: true }))).toBe('prepared');
+    expect(statusAfterWithdrawal(version('submitted', { readingsRecorded: false }))).toBe('draft');
+    expect(VERSION_TRANSITIONS.withdraw.to).toEqual(['draft', 'prepared']);
+  });
+
+  it('keeps withdrawal (the owner) apart from return (QA)', () => {
+    const submitted = version('submitted');
+    expect(canWithdraw(owner, submitted)).toBe(true);
+    expect(canWithdraw(qa, submitted)).toBe(false);
+    expect(mayReview(owner, submitted)).toBe(false);
+    // An owner who lost the planning permission no longer acts on the preparation.
+    expect(canWithdraw({ id: OWNER, roles: ['auditor'] }, submitted)).toBe(false);
   });
 
   it('offers no submission of a version without a computed budget', () => {
@@ -148,7 +166,8 @@ describe('mayReview: QA, and never on their own work', () => {
       submit: true,
       recordReadings: true,
     });
-    expect(allowedActions(qa, version('submitted'))).toEqual({ ...none, review: true, withdraw: true });
+    expect(allowedActions(qa, version('submitted'))).toEqual({ ...none, review: true });
+    expect(allowedActions(owner, version('submitted'))).toEqual({ ...none, withdraw: true });
     expect(allowedActions(auditor, version('approved'))).toEqual(none);
   });
 });

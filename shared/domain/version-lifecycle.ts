@@ -11,6 +11,7 @@ import type { Role } from '../contracts/roles';
  *   draft | returned | prepared ──recordReadings──▶ prepared
  *   draft | prepared | returned ──submit──▶ submitted
  *   submitted ──approve──▶ approved          submitted ──return──▶ returned
+ *   submitted ──withdraw──▶ prepared (bench readings recorded) or draft (none)
  *   approved (the latest version) ──startNewVersion──▶ a new draft version; the approved one never changes
  */
 export const VERSION_TRANSITIONS = {
@@ -22,9 +23,14 @@ export const VERSION_TRANSITIONS = {
   approve: { from: ['submitted'], to: 'approved' },
   /** QA sends a submitted version back to its analyst with comments. */
   return: { from: ['submitted'], to: 'returned' },
+  /** Its analyst takes a submitted version back before QA decides; `statusAfterWithdrawal` picks where to. */
+  withdraw: { from: ['submitted'], to: ['draft', 'prepared'] },
   /** Starts the next version (a draft); this one keeps its state. */
   startNewVersion: { from: ['approved'], to: null },
-} as const satisfies Record<string, { from: readonly PreparationStatus[]; to: PreparationStatus | null }>;
+} as const satisfies Record<
+  string,
+  { from: readonly PreparationStatus[]; to: PreparationStatus | readonly PreparationStatus[] | null }
+>;
 
 type VersionTransition = keyof typeof VERSION_TRANSITIONS;
 
@@ -48,6 +54,8 @@ export interface VersionFacts {
   computed: boolean;
   /** The version is the preparation's latest one. */
   latest: boolean;
+  /** Masses weighed at the bench were recorded on the version. */
+  readingsRecorded: boolean;
 }
 
 /** A signed-in member of the version's lab. */
@@ -79,11 +87,18 @@ export const canSubmit = (member: LabMember, version: VersionFacts) =>
   ownerPlanning(member, version) && version.computed && allows('submit', version.status);
 
 /**
- * A submitted version taken back out of review. There is no withdrawal by the analyst today: the one way
- * out of review is QA's return (submitted → returned), so this is true exactly when the member may return it.
+ * The owner may take a submitted version back out of review while QA has not decided (a submitted version
+ * has no decision since its last submission); QA's own way to send it back is `return`, through mayReview.
  */
 export const canWithdraw = (member: LabMember, version: VersionFacts) =>
-  allows('return', version.status) && mayReview(member, version);
+  ownerPlanning(member, version) && allows('withdraw', version.status);
+
+/** The states a withdrawn version may go back to. */
+export type WithdrawnStatus = (typeof VERSION_TRANSITIONS.withdraw.to)[number];
+
+/** Where a withdrawn version goes back to: prepared when bench readings were recorded on it, else draft. */
+export const statusAfterWithdrawal = (version: Pick<VersionFacts, 'readingsRecorded'>): WithdrawnStatus =>
+  version.readingsRecorded ? 'prepared' : 'draft';
 
 /** The owner may record (or correct) the masses weighed until the version is submitted. */
 export const canRecordReadings = (member: LabMember, version: VersionFacts) =>

@@ -145,6 +145,24 @@ describe('review and approval of a preparation record', () => {
     await page.getByRole('button', { name: 'Submit for review' }).click();
     await page.getByRole('dialog').getByRole('button', { name: 'Submit for review' }).click();
     await statusBadge(page).filter({ hasText: 'Waiting for review' }).waitFor();
+
+    // Submitted by mistake: the analyst takes it back before QA decides, then submits it again.
+    await page.getByRole('button', { name: 'Withdraw from review' }).click();
+    const withdraw = page.getByRole('dialog', { name: /Withdraw version 1 from review/ });
+    await withdraw.getByLabel('Reason (optional)').fill('Wrong flask entered.');
+    await withdraw.getByRole('button', { name: 'Withdraw from review' }).click();
+    await statusBadge(page).filter({ hasText: 'Draft' }).waitFor();
+    const trail = await page.getByRole('region', { name: 'Review trail' }).innerText();
+    expect(trail).toContain('Withdrawn from review by Dev Okonjo');
+    expect(trail).toContain('Wrong flask entered.');
+    await expect(page.getByRole('button', { name: 'Withdraw from review' }).count()).resolves.toBe(0);
+    await page.getByRole('button', { name: 'Submit for review' }).click();
+    await page.getByRole('dialog').getByRole('button', { name: 'Submit for review' }).click();
+    await statusBadge(page).filter({ hasText: 'Waiting for review' }).waitFor();
+    // The planner says how to take it back, and links to the record page.
+    await page.goto(`${server.baseUrl}/preparations/${returned.id}`);
+    await page.getByRole('link', { name: 'Withdraw it from review on the record page' }).click();
+    await page.getByRole('button', { name: 'Withdraw from review' }).waitFor();
     expectNoProblems(problems);
   });
 
@@ -244,7 +262,13 @@ describe('review and approval of a preparation record', () => {
       .getByRole('status')
       .filter({ hasText: 'The stored snapshot is exactly the one that was approved.' })
       .waitFor();
-    for (const name of ['Submit for review', 'Approve and sign', 'Return with comments', 'Start a new version']) {
+    for (const name of [
+      'Submit for review',
+      'Withdraw from review',
+      'Approve and sign',
+      'Return with comments',
+      'Start a new version',
+    ]) {
       await expect(page.getByRole('button', { name }).count()).resolves.toBe(0);
     }
     // The record's own audit history, for the auditor.

@@ -136,6 +136,12 @@ function PreparationWorkspace({ labId, detail, library, policy, planner }: Prepa
         </p>
       ) : null}
     </Alert>
+  ) : allowed.withdraw ? (
+    <Alert tone="info" title={`Version ${version.number} is waiting for review`}>
+      The plan cannot change while it waits for review.{' '}
+      <Link to={paths.app.record.href(detail.id, version.number)}>Withdraw it from review on the record page</Link> to
+      correct it before QA decides.
+    </Alert>
   ) : !editable ? (
     <Alert tone="info">
       {!version.editable

@@ -20,7 +20,13 @@ import { Component as RecordRoute } from './record';
 
 type Stage = Parameters<typeof preparationAt>[0];
 
-const ACTIONS = ['Submit for review', 'Approve and sign', 'Return with comments', 'Start a new version'] as const;
+const ACTIONS = [
+  'Submit for review',
+  'Withdraw from review',
+  'Approve and sign',
+  'Return with comments',
+  'Start a new version',
+] as const;
 const STATUS_WORDS: Record<Stage, string> = {
   draft: 'Draft',
   prepared: 'Prepared (readings recorded)',
@@ -84,7 +90,7 @@ describe('record actions by role and state', () => {
   it.each([
     ['draft', 'analyst', ['Submit for review']],
     ['prepared', 'analyst', ['Submit for review']],
-    ['submitted', 'analyst', []],
+    ['submitted', 'analyst', ['Withdraw from review']],
     ['approved', 'analyst', ['Start a new version']],
     ['draft', 'qa', []],
     ['submitted', 'qa', ['Approve and sign', 'Return with comments']],
@@ -109,13 +115,24 @@ describe('record actions by role and state', () => {
     const author = withRoles(meOf('analyst'), ['analyst', 'qa']);
     await showRecord(allowing(preparationAt('submitted', 'analyst'), { reviewRefusal: refusal }), author);
     expect(screen.getByText(refusal)).toHaveProperty('tagName', 'P');
+    expect(actionsShown()).toEqual(['Withdraw from review']); // as its owner, they may take it back
+  });
+
+  it('offers no withdrawal to another analyst reading a submitted version', async () => {
+    await showRecord(
+      allowing(preparationAt('submitted'), { withdraw: false }),
+      withRoles(meOf('analyst'), ['analyst'], 99),
+    );
     expect(actionsShown()).toEqual([]);
   });
 
   it('offers no approval to a QA member who submitted the version but does not own it (the server’s rule)', async () => {
     // The page used to check only the owner, so this reviewer was offered Approve and Return, which the server refused.
     const refusal = 'You submitted this version; another member of QA must review it.';
-    await showRecord(allowing(preparationAt('submitted', 'analyst'), { reviewRefusal: refusal }), meOf('qa'));
+    await showRecord(
+      allowing(preparationAt('submitted', 'analyst'), { reviewRefusal: refusal, withdraw: false }),
+      meOf('qa'),
+    );
     expect(screen.getByText(refusal)).toHaveProperty('tagName', 'P');
     expect(actionsShown()).toEqual([]);
   });
@@ -189,5 +206,47 @@ describe('approving a submitted version', () => {
         csrf: 'test-csrf-token',
       },
     ]);
+  });
+});
+
+describe('withdrawing a submitted version from review', () => {
+  const withdrawUrl = '/api/labs/1/preparations/1/versions/1/withdraw';
+  /** The server's answer: the version back as prepared (it has bench readings), its trail ending in the withdrawal. */
+  const withdrawn = (): PreparationDetail => {
+    const prepared = preparationAt('prepared');
+    const submission = preparationAt('submitted').current.reviews;
+    const reviews = [
+      ...submission,
+      { ...submission[0], id: 2, action: 'withdrawn' as const, comment: 'Wrong flask entered.' },
+    ];
+    return { ...prepared, current: { ...prepared.current, reviews } };
+  };
+
+  it('asks to confirm, sends the optional reason, then shows the version back as prepared with the withdrawal in its trail', async () => {
+    const answer = withdrawn();
+    const sent = await showRecord(preparationAt('submitted'), meOf('analyst'), (request) => {
+      if (request.method === 'POST' && request.url === withdrawUrl) return { status: 200, body: answer };
+      if (request.method === 'GET' && request.url === '/api/labs/1/preparations/1/versions/1')
+        return { status: 200, body: answer.current };
+      return emptyAuditPage(request);
+    });
+    expect(screen.getAllByText(STATUS_WORDS.submitted).length).toBeGreaterThan(0);
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: 'Withdraw from review' }));
+    const dialog = screen.getByRole('dialog', { name: 'Withdraw version 1 from review' });
+    expect(sent.filter((request) => request.method === 'POST')).toEqual([]); // nothing sent before confirming
+    await user.type(within(dialog).getByRole('textbox', { name: 'Reason (optional)' }), 'Wrong flask entered.');
+    await user.click(within(dialog).getByRole('button', { name: 'Withdraw from review' }));
+
+    await vi.waitFor(() => expect(dialog).toHaveProperty('open', false));
+    expect(sent.filter((request) => request.method === 'POST').map(({ url, body }) => ({ url, body }))).toEqual([
+      { url: withdrawUrl, body: { comment: 'Wrong flask entered.' } },
+    ]);
+    const trail = screen.getByRole('region', { name: 'Review trail' });
+    await within(trail).findByText('Withdrawn from review');
+    expect(within(trail).getByText('Wrong flask entered.')).toBeTruthy();
+    expect(within(screen.getByRole('banner')).getByText('Withdrawn from review')).toHaveProperty('tagName', 'DT');
+    expect(screen.getAllByText(STATUS_WORDS.prepared).length).toBeGreaterThan(0);
+    expect(actionsShown()).toEqual(['Submit for review']);
   });
 });

@@ -28,6 +28,7 @@ import { VersionSwitcher } from '../../../features/records/components/version-sw
 import { ApproveButton } from '../../../features/reviews/components/approve-button';
 import { ReturnButton } from '../../../features/reviews/components/return-button';
 import { SubmitForReviewButton } from '../../../features/reviews/components/submit-for-review-button';
+import { WithdrawFromReviewButton } from '../../../features/reviews/components/withdraw-from-review-button';
 import { isApiError } from '../../../lib/api-error';
 import {
   preparationQueryOptions,
@@ -222,6 +223,9 @@ function RecordActions({ labId, preparation, version }: RecordActionsProps) {
 
   if (allowed.submit) {
     actions.push(<SubmitForReviewButton key="submit" version={reference} onReviewed={onReviewed} />);
+  }
+  if (allowed.withdraw) {
+    actions.push(<WithdrawFromReviewButton key="withdraw" version={reference} onReviewed={onReviewed} />);
   }
   if (allowed.reviewRefusal) {
     actions.push(

@@ -10,6 +10,7 @@ export const ACTION_OPTIONS = [
   { value: 'preparation.computed', label: 'Preparations: computed' },
   { value: 'preparation.submitted', label: 'Preparations: submitted' },
   { value: 'preparation.returned', label: 'Preparations: returned' },
+  { value: 'preparation.withdrawn', label: 'Preparations: withdrawn from review' },
   { value: 'preparation.approved', label: 'Preparations: approved' },
   { value: 'preparation.approval_refused', label: 'Preparations: approval refused' },
   { value: 'lab.', label: 'Lab set-up' },

@@ -16,7 +16,10 @@ function When({ at }: { at: string }) {
 export function RecordHeader({ preparation, version, actions }: RecordHeaderProps) {
   const title = version.approvedAs?.title ?? preparation.title;
   const analyte = version.approvedAs?.analyte ?? preparation.analyte;
-  const submitted = version.reviews.findLast((review) => review.action === 'submitted');
+  // The last submission, or the analyst's withdrawal of it.
+  const submitted = version.reviews.findLast(
+    (review) => review.action === 'submitted' || review.action === 'withdrawn',
+  );
   const approved = version.reviews.find((review) => review.action === 'approved');
   const facts: [string, ReactNode][] = [
     ['Analyst', preparation.createdBy],
@@ -24,7 +27,14 @@ export function RecordHeader({ preparation, version, actions }: RecordHeaderProp
     ...(version.approvedAs ? ([['Laboratory', version.approvedAs.labName]] as [string, ReactNode][]) : []),
     ['Version started', <When key="started" at={version.createdAt} />],
     ['Last computed', version.snapshot ? <When key="computed" at={version.snapshot.computedAt} /> : 'Not computed'],
-    ...(submitted ? ([['Submitted', <When key="submitted" at={submitted.at} />]] as [string, ReactNode][]) : []),
+    ...(submitted
+      ? ([
+          [
+            submitted.action === 'withdrawn' ? 'Withdrawn from review' : 'Submitted',
+            <When key="submitted" at={submitted.at} />,
+          ],
+        ] as [string, ReactNode][])
+      : []),
     ...(approved
       ? ([
           [

@@ -5,9 +5,10 @@ const ACTION_WORDS: Record<Review['action'], { verb: string; mark: string; comme
   submitted: { verb: 'Submitted for review', mark: 'border-accent', commentLabel: 'Note to the reviewer' },
   returned: { verb: 'Returned with comments', mark: 'border-caution', commentLabel: 'Comments' },
   approved: { verb: 'Approved and signed', mark: 'border-ok', commentLabel: 'Approval statement' },
+  withdrawn: { verb: 'Withdrawn from review', mark: 'border-line-strong', commentLabel: 'Reason' },
 };
 
-/** Submissions, returns with their comments and the signed approval of one version, oldest first. */
+/** Submissions, withdrawals, returns with their comments and the signed approval of one version, oldest first. */
 export function ReviewTrail({ reviews }: { reviews: Review[] }) {
   return (
     <section aria-labelledby="trail-heading">

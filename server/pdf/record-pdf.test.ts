@@ -107,7 +107,7 @@ describe('the PDF record', () => {
     expect(flat).toContain('safety data sheet');
     expect(flat).toMatch(/Lead compounds are toxic/);
     expect(flat).toMatch(/seed 77/);
-    expect(flat).toContain('Step 1 · Weigh the solid (BAL-05), net mass: planned 0.1599 g, weighed 0.16011 g.');
+    expect(flat).toContain('Step 1 · Weigh the solid (BAL-05), net mass: planned 0.15990 g, weighed 0.16011 g.');
 
     const png = join(work, 'page');
     execFileSync('pdftoppm', ['-png', '-r', '40', '-f', '1', '-l', '1', join(work, 'approved.pdf'), png]);

@@ -1,3 +1,4 @@
+import { stepMassText } from '../../shared/contracts/balance-reading';
 import { RECORD_CAUTIONS } from '../../shared/contracts/safety-advice';
 import PDFDocument from 'pdfkit';
 import type { VersionDetail } from '../../shared/contracts/preparations';
@@ -153,15 +154,16 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
         { size: 8.5 },
       );
       for (const reading of version.readings.readings) {
+        const step = steps.at(reading.stepIndex);
+        const grams = (massG: number) => `${stepMassText(massG, step)} g`;
         const parts = [
-          reading.tareG !== null ? `tare ${reading.tareG} g` : '',
-          reading.grossG !== null ? `gross ${reading.grossG} g` : '',
+          reading.tareG !== null ? `tare ${grams(reading.tareG)}` : '',
+          reading.grossG !== null ? `gross ${grams(reading.grossG)}` : '',
         ]
           .filter(Boolean)
           .join(', ');
-        const step = steps.at(reading.stepIndex);
         paragraph(
-          `${stepName(String(reading.stepIndex))}, ${step ? readingWords(step.kind) : 'mass'}: planned ${reading.plannedG} g, weighed ${reading.actualG} g${parts ? ` (${parts})` : ''}.`,
+          `${stepName(String(reading.stepIndex))}, ${step ? readingWords(step.kind) : 'mass'}: planned ${grams(reading.plannedG)}, weighed ${grams(reading.actualG)}${parts ? ` (${parts})` : ''}.`,
         );
       }
       if (version.readings.deviations) paragraph(`Deviations: ${version.readings.deviations}`);

@@ -1,5 +1,5 @@
 import { createColumnHelper } from '@tanstack/react-table';
-import { formatToReadability } from '../../../../shared/contracts/balance-reading';
+import { stepMassText, stepReadabilityG } from '../../../../shared/contracts/balance-reading';
 import type { RecordedReadings } from '../../../../shared/contracts/preparations';
 import { readingWords } from '../../../../shared/contracts/step-kinds';
 import type { Plan } from '../../../../shared/uncertainty';
@@ -11,21 +11,16 @@ type Reading = RecordedReadings['readings'][number];
 const column = createColumnHelper<RecordTableFeatures, Reading>();
 const NUMERIC = new Set(['plannedG', 'actualG', 'differenceMg', 'differencePercent', 'tareG', 'grossG']);
 
-/** The balance's readability d (g) and the words for the mass recorded, for each step of the computed plan, by index. */
+/** The step of the computed plan and the words for the mass recorded, for each step by index. */
 function stepFacts(plan: Plan | undefined) {
   return (stepIndex: number) => {
     const step = plan?.steps.at(stepIndex);
-    const balance = step && 'balance' in step ? step.balance : undefined;
-    return {
-      readabilityG: balance?.readabilityG,
-      massWords: step ? readingWords(step.kind) : '',
-    };
+    return { step, massWords: step ? readingWords(step.kind) : '' };
   };
 }
 
-/** A mass as the balance shows it: to its readability (four decimals when it is not known). */
-const grams = (value: number | null, readabilityG: number | undefined) =>
-  value === null ? '—' : formatToReadability(value, readabilityG ?? 0);
+/** A mass as the step's balance shows it (the PDF prints it through the same function). */
+const grams = (value: number | null, step: object | undefined) => (value === null ? '—' : stepMassText(value, step));
 
 type BenchReadingsProps = {
   readings: RecordedReadings;
@@ -37,7 +32,8 @@ type BenchReadingsProps = {
 /** "Planned and actual": the masses weighed at the bench beside the planned ones; the result and budget use the masses weighed. */
 export function BenchReadings({ readings, stepName, plan }: BenchReadingsProps) {
   const factsOf = stepFacts(plan);
-  const readabilityOf = (stepIndex: number) => factsOf(stepIndex).readabilityG;
+  const readabilityOf = (stepIndex: number) => stepReadabilityG(factsOf(stepIndex).step);
+  const stepOf = (stepIndex: number) => factsOf(stepIndex).step;
   const columns = column.columns([
     column.accessor('stepIndex', {
       header: 'Step',
@@ -50,12 +46,12 @@ export function BenchReadings({ readings, stepName, plan }: BenchReadingsProps) 
     }),
     column.accessor('plannedG', {
       header: () => <span className="whitespace-nowrap">Planned (g)</span>,
-      cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)),
+      cell: (info) => grams(info.getValue(), stepOf(info.row.original.stepIndex)),
     }),
     column.accessor('actualG', {
       header: () => <span className="whitespace-nowrap">Weighed (g)</span>,
       cell: (info) => (
-        <span className="font-semibold">{grams(info.getValue(), readabilityOf(info.row.original.stepIndex))}</span>
+        <span className="font-semibold">{grams(info.getValue(), stepOf(info.row.original.stepIndex))}</span>
       ),
     }),
     column.display({
@@ -78,11 +74,11 @@ export function BenchReadings({ readings, stepName, plan }: BenchReadingsProps) 
     }),
     column.accessor('tareG', {
       header: 'Tare (g)',
-      cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)),
+      cell: (info) => grams(info.getValue(), stepOf(info.row.original.stepIndex)),
     }),
     column.accessor('grossG', {
       header: 'Gross (g)',
-      cell: (info) => grams(info.getValue(), readabilityOf(info.row.original.stepIndex)),
+      cell: (info) => grams(info.getValue(), stepOf(info.row.original.stepIndex)),
     }),
   ]);
   return (

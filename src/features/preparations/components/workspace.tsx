@@ -8,7 +8,14 @@ import { LoadingLine } from '../../../components/ui/loading-line';
 import { useAutosave } from '../hooks/use-autosave';
 import { placedWarnings, type ShownResult } from '../utils/budget-warnings';
 import { hazardNotesOf } from '../utils/equipment-labels';
-import { evaluateDraft, fieldMessage, type DraftEvaluation } from '../utils/evaluate-draft';
+import {
+  checkDraft,
+  evaluateDraft,
+  evaluationKey,
+  fieldMessage,
+  problemLine,
+  type DraftEvaluation,
+} from '../utils/evaluate-draft';
 import { overridesToSave, storedPlan, type PlanDraft } from '../utils/plan-draft';
 import { stepNamer } from '../utils/step-names';
 import { BudgetTable } from './budget-table';
@@ -52,8 +59,14 @@ export function writeOf(
   try {
     parsePlan(plan);
   } catch (error) {
-    if (error instanceof PlanError)
-      return { write: null, blocked: `complete the plan first (${fieldMessage(error.message)})` };
+    if (error instanceof PlanError) {
+      // The planner's own check names the field in the words shown beside it; the engine's message is the fallback.
+      const own = checkDraft(draft, library);
+      return {
+        write: null,
+        blocked: `complete the plan first (${own ? problemLine(own) : fieldMessage(error.message)})`,
+      };
+    }
     throw error;
   }
   return {
@@ -89,7 +102,7 @@ export function Workspace({
   const previous = useRef<{ key: string; evaluation: DraftEvaluation } | null>(null);
   const evaluation = useMemo(() => {
     const next = evaluateDraft(draft, libraryById, policy);
-    const key = next.ok ? JSON.stringify(next.plan) : JSON.stringify(next.problem);
+    const key = evaluationKey(next);
     if (previous.current?.key === key) return previous.current.evaluation;
     previous.current = { key, evaluation: next };
     return next;

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { warningText } from '../../../../shared/contracts/warning-text';
 import { DEMO_LIBRARY_BY_ID, DEMO_POLICY } from '../test-support/demo-library';
 import { placedWarnings } from './budget-warnings';
-import { evaluateDraft } from './evaluate-draft';
+import { checkDraft, evaluateDraft, evaluationKey, problemLine } from './evaluate-draft';
 import { emptyStep, type PlanDraft } from './plan-draft';
 
 /** The demo lead standard weighed on the four-place BAL-04 (calibration overdue, used with a reason). */
@@ -83,5 +83,30 @@ describe('the planner’s live warnings', () => {
     expect(budget.warnings.map((warning) => warning.code)).toEqual(['belowMinimumWeight']);
     const codes = placedWarnings({ budget, warnings: [] }, draft, DEMO_LIBRARY_BY_ID).map((warning) => warning.code);
     expect(codes).toEqual(['flaggedItem']);
+  });
+});
+
+describe('a policy change in an open planner', () => {
+  it('changes what the planner shows even though the plan it computes is the same', () => {
+    const draft = leadOnFourPlaceBalance('0.1599');
+    const on = evaluateDraft(draft, DEMO_LIBRARY_BY_ID, { ...DEMO_POLICY, minimumWeightRule: true });
+    const off = evaluateDraft(draft, DEMO_LIBRARY_BY_ID, { ...DEMO_POLICY, minimumWeightRule: false });
+    if (!on.ok || !off.ok) throw new Error('the demo plan computes');
+    expect(on.plan).toEqual(off.plan);
+    // The workspace reuses an evaluation whose key is unchanged: a key of the plan alone kept the old warning.
+    expect(evaluationKey(on)).not.toBe(evaluationKey(off));
+    expect(evaluationKey(on)).toBe(
+      evaluationKey(evaluateDraft(draft, DEMO_LIBRARY_BY_ID, { ...DEMO_POLICY, minimumWeightRule: true })),
+    );
+  });
+});
+
+describe('the save line of a draft that is not a plan yet', () => {
+  it('names the step and the field in the planner’s words, never a field path', () => {
+    const draft = leadOnFourPlaceBalance('0.1599');
+    const withoutPipette = { ...draft, steps: draft.steps.map((s, i) => (i === 2 ? { ...s, equipmentId: '' } : s)) };
+    const problem = checkDraft(withoutPipette, DEMO_LIBRARY_BY_ID);
+    expect(problem).not.toBeNull();
+    expect(problemLine(problem!)).toBe('step 3: Choose the pipette from the lab’s library.');
   });
 });

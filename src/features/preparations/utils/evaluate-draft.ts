@@ -111,3 +111,19 @@ export function evaluateDraft(
     throw error;
   }
 }
+
+/**
+ * What makes two evaluations show the same thing: the plan computed and the warnings the policy kept (a policy
+ * change such as the minimum-weight rule leaves the plan as it was but changes the warnings), or the problem.
+ */
+export function evaluationKey(evaluation: DraftEvaluation): string {
+  return evaluation.ok
+    ? JSON.stringify({ plan: evaluation.plan, warnings: evaluation.budget.warnings })
+    : JSON.stringify(evaluation.problem);
+}
+
+/** A draft's first problem as the save line says it: "step 3: Choose the pipette from the lab’s library." */
+export function problemLine(problem: PlanProblem): string {
+  const [where, index] = problem.path;
+  return where === 'steps' && typeof index === 'number' ? `step ${index + 1}: ${problem.message}` : problem.message;
+}

@@ -249,4 +249,42 @@ describe('withdrawing a submitted version from review', () => {
     expect(screen.getAllByText(STATUS_WORDS.prepared).length).toBeGreaterThan(0);
     expect(actionsShown()).toEqual(['Submit for review']);
   });
+
+  it('re-reads the version when QA signs one the analyst has just withdrawn, and stops offering the approval', async () => {
+    const answer = withdrawn();
+    // What QA is told about the version once it is back with its analyst.
+    const forQa = allowing(answer, { review: false, withdraw: false, submit: false, recordReadings: false });
+    let withdrawnNow = false;
+    await showRecord(preparationAt('submitted', 'qa'), meOf('qa'), (request) => {
+      if (request.method === 'POST' && request.url === approveUrl) {
+        withdrawnNow = true;
+        return {
+          status: 409,
+          body: {
+            error: {
+              code: 'not_submitted',
+              message: 'Version 1 is prepared; only a submitted version can be reviewed.',
+            },
+          },
+        };
+      }
+      if (request.method === 'GET' && request.url === '/api/labs/1/preparations/1' && withdrawnNow)
+        return { status: 200, body: forQa };
+      if (request.method === 'GET' && request.url === '/api/labs/1/preparations/1/versions/1' && withdrawnNow)
+        return { status: 200, body: forQa.current };
+      if (request.method === 'GET' && request.url.startsWith('/api/labs/1/review-queue'))
+        return { status: 200, body: [] };
+      return emptyAuditPage(request);
+    });
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: 'Approve and sign' }));
+    const dialog = screen.getByRole('dialog', { name: 'Approve and sign version 1' });
+    await user.type(within(dialog).getByRole('textbox', { name: 'What you approve' }), 'Budget reviewed.');
+    await user.type(within(dialog).getByLabelText('Your password'), 'the-right-password');
+    await user.click(within(dialog).getByRole('button', { name: 'Approve and sign' }));
+
+    await within(dialog).findByText(/only a submitted version can be reviewed/);
+    await vi.waitFor(() => expect(screen.getAllByText(STATUS_WORDS.prepared).length).toBeGreaterThan(0));
+    expect(actionsShown()).toEqual([]);
+  });
 });

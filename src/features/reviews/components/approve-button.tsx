@@ -7,7 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
 import { applyApiError } from '../../../lib/form-errors';
-import { useApproveVersion } from '../api/approve-version';
+import { useReviewAction } from '../api/review-action';
 import type { OnReviewed, VersionReference } from '../api/review-version-input';
 import { FormDialog } from './form-dialog';
 import { TextAreaField } from '../../../components/ui/text-area-field';
@@ -16,7 +16,7 @@ type ApproveValues = z.input<typeof approveRequestSchema>;
 
 /** QA's "Approve and sign": a statement of what is approved and the reviewer's password, which is the signature. */
 export function ApproveButton({ version, onReviewed }: { version: VersionReference; onReviewed: OnReviewed }) {
-  const approve = useApproveVersion(onReviewed);
+  const approve = useReviewAction<z.output<typeof approveRequestSchema>>('approve', onReviewed);
   const [open, setOpen] = useState(false);
   const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, reset, resetField, setError, formState } = useForm<

@@ -1,11 +1,12 @@
+import type { z } from 'zod';
 import { returnRequestSchema } from '../../../../shared/contracts/reviews';
 import type { OnReviewed, VersionReference } from '../api/review-version-input';
-import { useReturnVersion } from '../api/return-version';
+import { useReviewAction } from '../api/review-action';
 import { CommentDialogButton } from './comment-dialog-button';
 
 /** QA's "Return with comments": the version goes back to its analyst, who sees the comments on the record. */
 export function ReturnButton({ version, onReviewed }: { version: VersionReference; onReviewed: OnReviewed }) {
-  const returnVersion = useReturnVersion(onReviewed);
+  const returnVersion = useReviewAction<z.output<typeof returnRequestSchema>>('return', onReviewed);
   return (
     <CommentDialogButton
       version={version}

@@ -1,11 +1,12 @@
+import type { z } from 'zod';
 import { submitRequestSchema } from '../../../../shared/contracts/reviews';
 import type { OnReviewed, VersionReference } from '../api/review-version-input';
-import { useSubmitVersion } from '../api/submit-version';
+import { useReviewAction } from '../api/review-action';
 import { CommentDialogButton } from './comment-dialog-button';
 
 /** The analyst's "Submit for review", with an optional note to the reviewer. */
 export function SubmitForReviewButton({ version, onReviewed }: { version: VersionReference; onReviewed: OnReviewed }) {
-  const submit = useSubmitVersion(onReviewed);
+  const submit = useReviewAction<z.output<typeof submitRequestSchema>>('submit', onReviewed);
   return (
     <CommentDialogButton
       version={version}

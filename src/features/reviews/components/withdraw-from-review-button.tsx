@@ -1,6 +1,7 @@
+import type { z } from 'zod';
 import { withdrawRequestSchema } from '../../../../shared/contracts/reviews';
 import type { OnReviewed, VersionReference } from '../api/review-version-input';
-import { useWithdrawVersion } from '../api/withdraw-version';
+import { useReviewAction } from '../api/review-action';
 import { CommentDialogButton } from './comment-dialog-button';
 
 /** The analyst's "Withdraw from review": the submitted version comes back before QA decides. */
@@ -11,7 +12,7 @@ export function WithdrawFromReviewButton({
   version: VersionReference;
   onReviewed: OnReviewed;
 }) {
-  const withdraw = useWithdrawVersion(onReviewed);
+  const withdraw = useReviewAction<z.output<typeof withdrawRequestSchema>>('withdraw', onReviewed);
   return (
     <CommentDialogButton
       version={version}

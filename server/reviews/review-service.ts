@@ -196,12 +196,17 @@ export function reviewService(deps: {
     ): Promise<void> {
       const { prep, version } = await load(labId, preparationId, number);
       const transition = decision.kind === 'approved' ? 'approve' : 'return';
-      if (!allows(transition, version.status))
+      const reviews = await preparations.reviewsOf(version.id);
+      if (!allows(transition, version.status)) {
+        const withdrawn = version.status !== 'approved' && reviews.at(-1)?.action === 'withdrawn';
         throw conflict(
           'not_submitted',
-          `Version ${number} is ${version.status}; only a submitted version can be reviewed.`,
+          withdrawn
+            ? `Version ${number} was withdrawn from review by its analyst and is back with them; there is nothing to review until it is submitted again.`
+            : `Version ${number} is ${version.status}; only a submitted version can be reviewed.`,
         );
-      const submitterId = lastSubmitterId(await preparations.reviewsOf(version.id));
+      }
+      const submitterId = lastSubmitterId(reviews);
       if (isOwnWork(actor, { ownerId: prep.created_by, submitterId })) throw forbidden(OWN_WORK_REVIEW_REFUSAL);
       if (decision.kind === 'approved') {
         const account = await users.findById(actor.id);

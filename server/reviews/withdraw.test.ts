@@ -70,7 +70,9 @@ describe('the analyst withdraws a submitted version before QA decides', () => {
     ]);
 
     // QA can no longer decide on it; the analyst can submit it again and it is back in the queue.
-    await qa.post(v1('approve'), APPROVAL).expect(409);
+    const late = await qa.post(v1('approve'), APPROVAL).expect(409);
+    // QA is told why, not just the state: the analyst took it back.
+    expect(late.body.error.message).toMatch(/withdrawn from review by its analyst/);
     await analyst.post(v1('submit'), {}).expect(200);
     const queue = (await qa.get(url('/review-queue')).expect(200)).body;
     expect(queue).toEqual([expect.objectContaining({ preparationId, versionNumber: 1 })]);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatToReadability, stepMassText, stepReadabilityG } from './balance-reading';
+import { formatToReadability, minimumWeightText, stepMassText, stepReadabilityG } from './balance-reading';
 
 // A balance shows a mass to its actual scale interval d (OIML R 76-1:2006, terminology T.3.2.2; clause from memory).
 describe('masses as the balance shows them', () => {
@@ -17,5 +17,13 @@ describe('masses as the balance shows them', () => {
     expect(stepReadabilityG(pipetting)).toBeUndefined();
     expect(stepMassText(0.1599, pipetting)).toBe('0.1599');
     expect(stepMassText(0.1599, undefined)).toBe('0.1599');
+  });
+});
+
+describe('minimum weight in print', () => {
+  // USP <41>: m_min = 2000·max(s, 0.41·d); s = 0.08 mg, d = 0.1 mg gives 0.160 g (worked here, not a published value).
+  it('keeps three significant figures with their trailing zeros', () => {
+    expect(minimumWeightText(2000 * Math.max(0.00008, 0.41 * 0.0001))).toBe('0.160 g');
+    expect(minimumWeightText(0.0082)).toBe('0.00820 g');
   });
 });

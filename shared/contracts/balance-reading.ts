@@ -22,3 +22,11 @@ export function stepReadabilityG(step: object | undefined): number | undefined {
   const balance = step && 'balance' in step ? (step.balance as { readabilityG?: unknown }) : undefined;
   return typeof balance?.readabilityG === 'number' ? balance.readabilityG : undefined;
 }
+
+/**
+ * A balance's USP <41> minimum weight as every screen, warning and PDF prints it: three significant figures,
+ * trailing zeros kept ("0.160 g"), so the library and the warning beside a step state the same number.
+ */
+export function minimumWeightText(minimumWeightG: number): string {
+  return `${minimumWeightG.toPrecision(3)} g`;
+}

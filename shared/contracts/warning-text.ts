@@ -1,3 +1,4 @@
+import { minimumWeightText } from './balance-reading';
 import { itemLabel } from '../uncertainty/step-context';
 import { STEP_KINDS } from './step-kinds';
 import type { Warning } from './warnings';
@@ -10,7 +11,7 @@ export function warningText(warning: Warning): string {
   switch (warning.code) {
     case 'belowMinimumWeight': {
       const { balanceItemId, netMassG, minimumWeightG } = warning.params;
-      return `Step ${warning.stepIndex + 1}: ${netMassG} g is below the minimum weight of ${itemLabel('Balance', balanceItemId)} (${minimumWeightG.toPrecision(3)} g by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`;
+      return `Step ${warning.stepIndex + 1}: ${netMassG} g is below the minimum weight of ${itemLabel('Balance', balanceItemId)} (${minimumWeightText(minimumWeightG)} by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`;
     }
     case 'dominantStep': {
       const { stepKind } = warning.params;

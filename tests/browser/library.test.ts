@@ -133,12 +133,12 @@ describe('the tolerance library, kept by QA', () => {
     const { page, problems } = await openPage();
     await signIn(page, 'qa');
     await openLibraryTab(page, 'Balances');
-    // BAL-05: s = 0.015 mg, d = 0.01 mg, so m_min = 2000 · max(s, 0.41·d) = 0.03 g (demo data, USP <41> Weights and Balances rule, read).
+    // BAL-05: s = 0.015 mg, d = 0.01 mg, so m_min = 2000 · max(s, 0.41·d) = 0.0300 g, printed to three significant figures as the warnings print it (demo data, USP <41> Weights and Balances rule, read).
     const row = page.locator('tbody tr', { has: page.getByRole('link', { name: 'BAL-05' }) });
     await expect(row.innerText()).resolves.toContain('0.03');
     await screenshot(page, 'library-balances');
     await page.getByRole('link', { name: 'BAL-05' }).click();
-    await page.getByRole('heading', { name: /Minimum weight: 0\.03 g/ }).waitFor();
+    await page.getByRole('heading', { name: /Minimum weight: 0\.0300 g/ }).waitFor();
     await screenshot(page, 'library-item-balance');
 
     await openLibraryTab(page, 'Solid materials');

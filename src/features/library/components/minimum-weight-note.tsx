@@ -1,3 +1,4 @@
+import { minimumWeightText } from '../../../../shared/contracts/balance-reading';
 import { formatQuantity } from '../utils/format-quantity';
 
 /** A balance's USP <41> minimum net weight, with the rule it comes from. */
@@ -5,7 +6,7 @@ export function MinimumWeightNote({ minimumWeightG }: { minimumWeightG: number }
   return (
     <section aria-labelledby="minimum-weight-heading" className="rounded-md border border-line bg-paper px-4 py-3">
       <h2 id="minimum-weight-heading" className="font-bold">
-        Minimum weight: <span className="numeric">{formatQuantity(Number(minimumWeightG.toPrecision(3)))} g</span> (
+        Minimum weight: <span className="numeric">{minimumWeightText(minimumWeightG)}</span> (
         {formatQuantity(Number((minimumWeightG * 1000).toPrecision(3)))} mg)
       </h2>
       <p className="text-sm text-muted">

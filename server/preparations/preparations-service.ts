@@ -37,6 +37,19 @@ import type { Transact } from '../db/transaction';
 
 const parse = <T>(json: string | null): T | null => (json === null ? null : (JSON.parse(json) as T));
 
+/** The code of the library material a plan's steps name, before any computation (null when none is chosen yet). */
+function plannedMaterialCode(plan: Record<string, unknown>, library: Map<string, EquipmentItem>): string | null {
+  const steps = Array.isArray(plan.steps) ? (plan.steps as unknown[]) : [];
+  for (const step of steps) {
+    const material = typeof step === 'object' && step !== null ? (step as { material?: unknown }).material : undefined;
+    const libraryId =
+      typeof material === 'object' && material !== null ? (material as { libraryId?: unknown }).libraryId : undefined;
+    const item = typeof libraryId === 'string' ? library.get(libraryId) : undefined;
+    if (item?.kind.endsWith('-material')) return item.code;
+  }
+  return null;
+}
+
 function toSummary(row: VersionRow): VersionSummary {
   return {
     id: row.id,
@@ -194,7 +207,8 @@ export function preparationsService(deps: {
         value: null,
         unit: null,
         relative_expanded_uncertainty: null,
-        materialCode: null,
+        // The list still names the material the analyst chose, though the plan cannot be computed yet.
+        materialCode: plannedMaterialCode(plan, library),
       };
     }
   }

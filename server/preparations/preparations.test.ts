@@ -109,6 +109,10 @@ describe('saving a preparation computes and stores its snapshot', () => {
     expect(res.body.current.snapshot).toBeNull();
     expect(res.body.current.problem.path.slice(0, 2)).toEqual(['steps', 2]);
     expect(res.body.current.problem.message).toMatch(/25 mL|larger/);
+    // The list still names the material chosen, though nothing could be computed.
+    expect(res.body.materialCode).toBe('RM-PBN-01');
+    const listed = (await analyst.get(url('/preparations?q=Aliquot')).expect(200)).body;
+    expect(listed).toEqual([expect.objectContaining({ title: 'Aliquot too big', materialCode: 'RM-PBN-01' })]);
   });
 
   it('needs a recorded reason to use an overdue balance', async () => {

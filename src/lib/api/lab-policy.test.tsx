@@ -50,3 +50,25 @@ describe('the lab policy is one cache entry', () => {
     ]);
   });
 });
+
+describe('an open planner and a policy saved in another browser', () => {
+  it('reads the policy again every 30 s, so the change reaches it without a reload', async () => {
+    vi.useFakeTimers({ shouldAdvanceTime: true });
+    try {
+      let stored: LabPolicy = DEFAULT_LAB_POLICY;
+      stubServer((request) =>
+        request.url === policyUrl ? { status: 200, body: { ...stored, updatedAt: null, updatedBy: null } } : undefined,
+      );
+      const { wrapper } = queryWrapper();
+      const { result } = renderHook(() => useLabPolicy(1, { live: true }), { wrapper });
+      await waitFor(() => expect(result.current?.minimumWeightRule).toBe(DEFAULT_LAB_POLICY.minimumWeightRule));
+
+      // QA switches the rule in another browser: nothing in this one invalidates the entry.
+      stored = { ...DEFAULT_LAB_POLICY, minimumWeightRule: !DEFAULT_LAB_POLICY.minimumWeightRule };
+      await act(() => vi.advanceTimersByTimeAsync(30_000));
+      await waitFor(() => expect(result.current.minimumWeightRule).toBe(!DEFAULT_LAB_POLICY.minimumWeightRule));
+    } finally {
+      vi.useRealTimers();
+    }
+  });
+});

@@ -19,8 +19,18 @@ function getLabPolicy(labId: number): Promise<StoredLabPolicy> {
 export const labPolicyQueryOptions = (labId: number) =>
   queryOptions({ queryKey: policyKeys.detail(labId), queryFn: () => getLabPolicy(labId) });
 
-export function useLabPolicy(labId: number): StoredLabPolicy {
-  return useSuspenseQuery(labPolicyQueryOptions(labId)).data;
+/** How often an open planner asks for the policy again, so QA's change in another browser reaches it. */
+const PLANNER_POLICY_REFRESH_MS = 30_000;
+
+/**
+ * The lab policy. `live`: re-read it every 30 s while the page is open (the planner, which computes with it);
+ * a change saved in this browser reaches every reader at once through the invalidation of the save.
+ */
+export function useLabPolicy(labId: number, { live = false }: { live?: boolean } = {}): StoredLabPolicy {
+  return useSuspenseQuery({
+    ...labPolicyQueryOptions(labId),
+    refetchInterval: live ? PLANNER_POLICY_REFRESH_MS : false,
+  }).data;
 }
 
 type UpdateLabPolicyInput = { labId: number; policy: LabPolicy };

@@ -72,7 +72,7 @@ function PreparationPage({
 }) {
   const detail = usePreparation(labId, preparationId);
   const library = useActiveEquipment(labId);
-  const policy = useLabPolicy(labId);
+  const policy = useLabPolicy(labId, { live: true });
   // A new version or another preparation starts the workspace afresh from the server's plan.
   return (
     <PreparationWorkspace

@@ -1,4 +1,5 @@
 import { randomInt } from 'node:crypto';
+import { findPreparation, findVersion } from './find-version';
 import type { EquipmentItem } from '../../shared/contracts/library';
 import type {
   Override,
@@ -213,31 +214,12 @@ export function preparationsService(deps: {
     }
   }
 
-  /** The lab's preparation, or 404 (a preparation of another lab is not found either). */
-  async function preparationRow(labId: number, id: number): Promise<PreparationRow> {
-    const prep = await preparations.find(labId, id);
-    if (!prep) throw notFound('The preparation');
-    return prep;
-  }
-
-  /** The lab's preparation and one of its versions, or 404. */
-  async function preparationVersion(
-    labId: number,
-    id: number,
-    number: number,
-  ): Promise<{ prep: PreparationRow; current: VersionRow }> {
-    const prep = await preparationRow(labId, id);
-    const current = await preparations.version(id, number);
-    if (!current) throw notFound(`Version ${number}`);
-    return { prep, current };
-  }
-
   async function versionRow(labId: number, id: number, number: number): Promise<VersionRow> {
-    return (await preparationVersion(labId, id, number)).current;
+    return (await findVersion(preparations, labId, id, number)).version;
   }
 
   async function detail(labId: number, id: number, member: LabMember): Promise<PreparationDetail> {
-    const prep = await preparationRow(labId, id);
+    const prep = await findPreparation(preparations, labId, id);
     const versions = await preparations.versionsOf(id);
     const [latest] = versions;
     return {
@@ -283,7 +265,7 @@ export function preparationsService(deps: {
     },
 
     async version(labId: number, id: number, number: number, member: LabMember): Promise<VersionDetail> {
-      const prep = await preparationRow(labId, id);
+      const prep = await findPreparation(preparations, labId, id);
       const [latest] = await preparations.versionsOf(id);
       const row = await preparations.version(id, number);
       if (!row) throw notFound(`Version ${number}`);
@@ -353,7 +335,7 @@ export function preparationsService(deps: {
       input: PreparationWrite & { overrides: Override[] },
       signal?: AbortSignal,
     ): Promise<PreparationDetail> {
-      const { prep, current } = await preparationVersion(labId, id, number);
+      const { prep, version: current } = await findVersion(preparations, labId, id, number);
       if (!allows('edit', current.status))
         throw conflict('not_draft', `Version ${number} is ${current.status}; changes go into a new version.`);
       if (!ownsPreparation(actor, { ownerId: prep.created_by }))
@@ -389,7 +371,7 @@ export function preparationsService(deps: {
 
     /** Starts a new draft version from the latest one, once it is approved (a returned one is edited instead). */
     async newVersion(labId: number, actor: LabActor, id: number, signal?: AbortSignal): Promise<PreparationDetail> {
-      const prep = await preparationRow(labId, id);
+      const prep = await findPreparation(preparations, labId, id);
       const [latest] = await preparations.versionsOf(id);
       if (!allows('startNewVersion', latest.status)) throw noNewVersionFrom(latest);
       const computed = await compute(
@@ -440,7 +422,7 @@ export function preparationsService(deps: {
       input: ReadingsRequest & { deviations: string },
       signal?: AbortSignal,
     ): Promise<PreparationDetail> {
-      const { prep, current } = await preparationVersion(labId, id, number);
+      const { prep, version: current } = await findVersion(preparations, labId, id, number);
       if (!ownsPreparation(actor, { ownerId: prep.created_by }))
         throw forbidden('Only the analyst who owns this preparation records its readings.');
       if (!allows('recordReadings', current.status))
@@ -545,7 +527,7 @@ export function preparationsService(deps: {
       title?: string,
       signal?: AbortSignal,
     ): Promise<PreparationDetail> {
-      const prep = await preparationRow(labId, id);
+      const prep = await findPreparation(preparations, labId, id);
       const [latest] = await preparations.versionsOf(id);
       return this.create(
         labId,

@@ -1,4 +1,8 @@
 import type { ApprovedRecord, ReviewQueueItem, SnapshotVerification } from '../../shared/contracts/reviews';
+import type { Review } from '../../shared/contracts/reviews';
+import type { Db } from '../db/connection';
+import type { VersionRow } from '../preparations/preparations-repository';
+import { findVersion } from '../preparations/find-version';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
 import {
@@ -14,7 +18,7 @@ import { verifyPassword } from '../auth/password';
 import type { UsersRepository } from '../auth/users-repository';
 import type { LabsRepository } from '../labs/labs-repository';
 import { sha256Hex } from '../lib/canonical-json';
-import { conflict, forbidden, notFound, validationError } from '../lib/errors';
+import { conflict, forbidden, validationError } from '../lib/errors';
 import type { Mailer } from '../mail/mailer';
 import { decisionMessage, submittedMessage } from '../mail/messages';
 import type { PreparationsRepository } from '../preparations/preparations-repository';
@@ -51,12 +55,51 @@ export function reviewService(deps: {
 }) {
   const { transact, preparations, reviews, users, labs, audit, mailer, now } = deps;
 
-  async function load(labId: number, preparationId: number, number: number) {
-    const prep = await preparations.find(labId, preparationId);
-    if (!prep) throw notFound('The preparation');
-    const version = await preparations.version(preparationId, number);
-    if (!version) throw notFound(`Version ${number}`);
-    return { prep, version };
+  const load = (labId: number, preparationId: number, number: number) =>
+    findVersion(preparations, labId, preparationId, number);
+
+  /** A step of the review (submitted, withdrawn, approved, returned): its append-only review row and its audit event, in one transaction. */
+  async function recordReviewStep(
+    trx: Db,
+    step: {
+      labId: number;
+      actor: SessionUser;
+      preparationId: number;
+      version: VersionRow;
+      action: Review['action'];
+      at: string;
+      comment: string;
+      recordSha256?: string | null;
+      summary: string;
+      before: unknown;
+      after: unknown;
+    },
+  ): Promise<void> {
+    await preparations.insertReview(
+      {
+        version_id: step.version.id,
+        action: step.action,
+        actor_user_id: step.actor.id,
+        at: step.at,
+        comment: step.comment,
+        snapshot_sha256: step.version.snapshot_sha256,
+        ...(step.recordSha256 === undefined ? {} : { record_sha256: step.recordSha256 }),
+      },
+      trx,
+    );
+    await audit.record(
+      {
+        labId: step.labId,
+        actorUserId: step.actor.id,
+        action: `preparation.${step.action}`,
+        entityType: 'preparation',
+        entityId: step.preparationId,
+        summary: step.summary,
+        before: step.before,
+        after: step.after,
+      },
+      trx,
+    );
   }
 
   /** Mail goes out after the change is committed; a mail failure is logged, never undoes a decision. */
@@ -92,30 +135,18 @@ export function reviewService(deps: {
       await transact(async (trx) => {
         if ((await preparations.transition(version.id, version.status, 'submit', trx)) === 0)
           throw conflict('not_draft', 'The version changed meanwhile; reload it.');
-        await preparations.insertReview(
-          {
-            version_id: version.id,
-            action: 'submitted',
-            actor_user_id: actor.id,
-            at,
-            comment,
-            snapshot_sha256: version.snapshot_sha256,
-          },
-          trx,
-        );
-        await audit.record(
-          {
-            labId,
-            actorUserId: actor.id,
-            action: 'preparation.submitted',
-            entityType: 'preparation',
-            entityId: preparationId,
-            summary: `${actor.name} submitted version ${number} of “${prep.title}”`,
-            before: { status: version.status },
-            after: { status: 'submitted' },
-          },
-          trx,
-        );
+        await recordReviewStep(trx, {
+          labId,
+          actor,
+          preparationId,
+          version,
+          action: 'submitted',
+          at,
+          comment,
+          summary: `${actor.name} submitted version ${number} of “${prep.title}”`,
+          before: { status: version.status },
+          after: { status: 'submitted' },
+        });
       });
       const reviewers = (await labs.members(labId)).filter(
         (m) => m.role === 'qa' && m.active && m.user_id !== actor.id,
@@ -160,30 +191,18 @@ export function reviewService(deps: {
       await transact(async (trx) => {
         if ((await preparations.withdraw(version.id, to, trx)) === 0)
           throw conflict('not_submitted', 'QA decided on this version meanwhile; it can no longer be withdrawn.');
-        await preparations.insertReview(
-          {
-            version_id: version.id,
-            action: 'withdrawn',
-            actor_user_id: actor.id,
-            at: now().toISOString(),
-            comment,
-            snapshot_sha256: version.snapshot_sha256,
-          },
-          trx,
-        );
-        await audit.record(
-          {
-            labId,
-            actorUserId: actor.id,
-            action: 'preparation.withdrawn',
-            entityType: 'preparation',
-            entityId: preparationId,
-            summary: `${actor.name} withdrew version ${number} of “${prep.title}” from review${comment ? `: ${comment}` : ''}`,
-            before: { status: 'submitted' },
-            after: { status: to },
-          },
-          trx,
-        );
+        await recordReviewStep(trx, {
+          labId,
+          actor,
+          preparationId,
+          version,
+          action: 'withdrawn',
+          at: now().toISOString(),
+          comment,
+          summary: `${actor.name} withdrew version ${number} of “${prep.title}” from review${comment ? `: ${comment}` : ''}`,
+          before: { status: 'submitted' },
+          after: { status: to },
+        });
       });
     },
 
@@ -253,35 +272,23 @@ export function reviewService(deps: {
               )
             : await preparations.transition(version.id, version.status, 'return', trx);
         if (changed === 0) throw conflict('not_submitted', 'The version changed meanwhile; reload it.');
-        await preparations.insertReview(
-          {
-            version_id: version.id,
-            action: decision.kind,
-            actor_user_id: actor.id,
-            at,
-            comment,
-            snapshot_sha256: version.snapshot_sha256,
-            record_sha256: recordSha256,
+        await recordReviewStep(trx, {
+          labId,
+          actor,
+          preparationId,
+          version,
+          action: decision.kind,
+          at,
+          comment,
+          recordSha256,
+          summary: `${actor.name} ${decision.kind} version ${number} of “${prep.title}”: ${comment}`,
+          before: { status: 'submitted' },
+          after: {
+            status: decision.kind,
+            snapshotSha256: version.snapshot_sha256,
+            ...(recordSha256 ? { recordSha256, approvedAs } : {}),
           },
-          trx,
-        );
-        await audit.record(
-          {
-            labId,
-            actorUserId: actor.id,
-            action: decision.kind === 'approved' ? 'preparation.approved' : 'preparation.returned',
-            entityType: 'preparation',
-            entityId: preparationId,
-            summary: `${actor.name} ${decision.kind} version ${number} of “${prep.title}”: ${comment}`,
-            before: { status: 'submitted' },
-            after: {
-              status: decision.kind,
-              snapshotSha256: version.snapshot_sha256,
-              ...(recordSha256 ? { recordSha256, approvedAs } : {}),
-            },
-          },
-          trx,
-        );
+        });
       });
       const analyst = await users.findById(prep.created_by);
       if (analyst?.active) {

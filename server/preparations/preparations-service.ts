@@ -449,7 +449,8 @@ export function preparationsService(deps: {
         ) {
           issues.push({
             path: `readings.${index}.actualMassG`,
-            message: `Gross − tare is ${(reading.grossG - reading.tareG).toPrecision(6)} g, not ${reading.actualMassG} g.`,
+            // The difference as typed, without binary remainders (12.34597 − 12.18577 is 0.1602, not 0.160200000000001).
+            message: `Gross − tare is ${Number((reading.grossG - reading.tareG).toPrecision(12))} g, not ${reading.actualMassG} g.`,
           });
           return;
         }

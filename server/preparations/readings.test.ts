@@ -81,7 +81,11 @@ describe('actual readings', () => {
         readings: [{ stepIndex: 0, actualMassG: 0.16, tareG: 10, grossG: 10.2 }],
       })
       .expect(400);
-    expect(sums.body.error.details[0].path).toBe('readings.0.actualMassG');
+    // 10.2 − 10 is 0.1999999999999993 in binary; the chemist reads the difference as typed.
+    expect(sums.body.error.details[0]).toEqual({
+      path: 'readings.0.actualMassG',
+      message: 'Gross − tare is 0.2 g, not 0.16 g.',
+    });
     expect((await t.db('preparation_versions').first()).status).toBe('draft');
   });
 

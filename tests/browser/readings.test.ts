@@ -106,7 +106,7 @@ describe('the analyst records what was weighed at the bench', () => {
     await expect.poll(() => net.getAttribute('aria-invalid')).toBe('true');
     const errorId = (await net.getAttribute('aria-describedby'))?.split(' ')[0] ?? '';
     await expect(page.locator(`[id="${errorId}"]`).innerText()).resolves.toMatch(
-      /^Gross − tare is 0\.160200 g, not 0\.17 g\.$/,
+      /^Gross − tare is 0\.1602 g, not 0\.17 g\.$/,
     );
     await expect.poll(() => net.evaluate((element) => element === document.activeElement)).toBe(true);
     await screenshot(page, 'readings-error');

@@ -1,7 +1,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type { Mailer } from '../mail/mailer';
-import { leadPlan, libraryByCode } from '../test-support/demo-plans';
+import { plannedLeadStandard } from '../test-support/demo-plans';
 import {
   agentFor,
   buildTestApp,
@@ -111,12 +111,7 @@ describe('the approval signature', () => {
     const labId = (await t.db('labs').first()).id as number;
     const analyst = await signIn(t.app, demo('analyst'));
     const qa = await signIn(t.app, demo('qa'));
-    const library = await libraryByCode(analyst, labId);
-    const preparationId = (
-      await analyst
-        .post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) })
-        .expect(201)
-    ).body.id;
+    const preparationId = await plannedLeadStandard(analyst, labId);
     const v1 = (action: string) => `/api/labs/${labId}/preparations/${preparationId}/versions/1/${action}`;
     await analyst.post(v1('submit'), {}).expect(200);
     for (let i = 0; i < 3; i += 1)
@@ -138,12 +133,7 @@ describe('the approval signature', () => {
     const labId = (await t.db('labs').first()).id as number;
     const analyst = await signIn(t.app, demo('analyst'));
     const qa = await signIn(t.app, demo('qa'));
-    const library = await libraryByCode(analyst, labId);
-    const preparationId = (
-      await analyst
-        .post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) })
-        .expect(201)
-    ).body.id;
+    const preparationId = await plannedLeadStandard(analyst, labId);
     await analyst.post(`/api/labs/${labId}/preparations/${preparationId}/versions/1/submit`, {}).expect(200);
     await qa
       .post(`/api/labs/${labId}/preparations/${preparationId}/versions/1/approve`, {

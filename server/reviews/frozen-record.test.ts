@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { leadPlan, libraryByCode } from '../test-support/demo-plans';
+import { approvedLeadStandard, leadPlan, libraryByCode } from '../test-support/demo-plans';
 import {
   buildTestApp,
   demo,
@@ -25,12 +25,7 @@ beforeEach(async () => {
   labId = (await t.db('labs').first()).id;
   analyst = await signIn(t.app, demo('analyst'));
   qa = await signIn(t.app, demo('qa'));
-  const library = await libraryByCode(analyst, labId);
-  preparationId = (
-    await analyst.post(url('/preparations'), { title: 'Pb check standard', plan: leadPlan(library) }).expect(201)
-  ).body.id;
-  await analyst.post(version(1, 'submit'), {}).expect(200);
-  await qa.post(version(1, 'approve'), { password: DEMO_PASSWORD, statement: 'Approved for use.' }).expect(200);
+  preparationId = await approvedLeadStandard(analyst, qa, labId, DEMO_PASSWORD);
 });
 afterEach(async () => {
   await t.close();

@@ -1,6 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { createHash } from 'node:crypto';
-import { leadPlan, libraryByCode } from '../test-support/demo-plans';
+import { leadPlan, libraryByCode, plannedLeadStandard } from '../test-support/demo-plans';
 import {
   buildTestApp,
   demo,
@@ -25,10 +25,7 @@ beforeEach(async () => {
   labId = (await t.db('labs').first()).id;
   analyst = await signIn(t.app, demo('analyst'));
   qa = await signIn(t.app, demo('qa'));
-  const library = await libraryByCode(analyst, labId);
-  preparationId = (
-    await analyst.post(url('/preparations'), { title: 'Pb check standard', plan: leadPlan(library) }).expect(201)
-  ).body.id;
+  preparationId = await plannedLeadStandard(analyst, labId);
 });
 afterEach(async () => {
   await t.close();

@@ -28,6 +28,16 @@ export function leadPlan(
   };
 }
 
+/** The demo lead standard planned by the analyst as version 1, a draft; returns the preparation id. */
+export async function plannedLeadStandard(analyst: Client, labId: number): Promise<number> {
+  const library = await libraryByCode(analyst, labId);
+  return (
+    await analyst
+      .post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) })
+      .expect(201)
+  ).body.id as number;
+}
+
 /** A demo lead standard planned by the analyst, submitted, and approved by QA; returns the preparation id. */
 export async function approvedLeadStandard(
   analyst: Client,
@@ -35,12 +45,7 @@ export async function approvedLeadStandard(
   labId: number,
   password: string,
 ): Promise<number> {
-  const library = await libraryByCode(analyst, labId);
-  const id = (
-    await analyst
-      .post(`/api/labs/${labId}/preparations`, { title: 'Pb check standard', plan: leadPlan(library) })
-      .expect(201)
-  ).body.id as number;
+  const id = await plannedLeadStandard(analyst, labId);
   await analyst.post(`/api/labs/${labId}/preparations/${id}/versions/1/submit`, {}).expect(200);
   await qa
     .post(`/api/labs/${labId}/preparations/${id}/versions/1/approve`, { password, statement: 'Approved for use.' })

@@ -1,23 +1,12 @@
-import {
-  createColumnHelper,
-  createSortedRowModel,
-  rowSortingFeature,
-  sortFn_alphanumeric,
-  sortFn_basic,
-  tableFeatures,
-  useTable,
-} from '@tanstack/react-table';
+import { sortableFeatures } from '../../../components/ui/sortable-table';
+import { createColumnHelper, useTable } from '@tanstack/react-table';
 import { Fragment, memo, useState } from 'react';
 import type { Budget } from '../../../../shared/contracts/snapshot';
 import type { BudgetRow } from '../../../../shared/uncertainty';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { formatSignificant, formatUncertainty } from '../utils/format-number';
 
-const features = tableFeatures({
-  rowSortingFeature,
-  sortedRowModel: createSortedRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic },
-});
+const features = sortableFeatures;
 const column = createColumnHelper<typeof features, BudgetRow>();
 
 const DISTRIBUTION_WORDS: Record<BudgetRow['distribution'], string> = {

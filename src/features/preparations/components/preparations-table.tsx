@@ -1,12 +1,5 @@
-import {
-  createColumnHelper,
-  createSortedRowModel,
-  rowSortingFeature,
-  sortFn_alphanumeric,
-  sortFn_basic,
-  tableFeatures,
-  useTable,
-} from '@tanstack/react-table';
+import { sortableFeatures } from '../../../components/ui/sortable-table';
+import { createColumnHelper, useTable } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import type { PreparationSummary } from '../../../../shared/contracts/preparations';
 import { DataTable, SortButton } from '../../../components/ui/data-table';
@@ -14,11 +7,7 @@ import { formatDateTime } from '../../../lib/format-date';
 import { formatPercent, formatSignificant } from '../utils/format-number';
 import { StatusBadge } from './status-badge';
 
-const features = tableFeatures({
-  rowSortingFeature,
-  sortedRowModel: createSortedRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic },
-});
+const features = sortableFeatures;
 const column = createColumnHelper<typeof features, PreparationSummary>();
 
 type PreparationsTableProps = {

@@ -1,12 +1,5 @@
-import {
-  createColumnHelper,
-  createSortedRowModel,
-  rowSortingFeature,
-  sortFn_alphanumeric,
-  sortFn_basic,
-  tableFeatures,
-  useTable,
-} from '@tanstack/react-table';
+import { sortableFeatures } from '../../../components/ui/sortable-table';
+import { createColumnHelper, useTable } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import type { ApprovedRecord } from '../../../../shared/contracts/reviews';
 import { DataTable, SortButton } from '../../../components/ui/data-table';
@@ -15,11 +8,7 @@ import { formatDate, formatDateTime } from '../../../lib/format-date';
 import { recordPdfUrl, snapshotJsonUrl } from '../api/record-downloads';
 import { shortHash } from '../utils/format-figures';
 
-const features = tableFeatures({
-  rowSortingFeature,
-  sortedRowModel: createSortedRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric, basic: sortFn_basic },
-});
+const features = sortableFeatures;
 const column = createColumnHelper<typeof features, ApprovedRecord>();
 
 const columnsFor = (labId: number) =>

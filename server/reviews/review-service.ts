@@ -55,9 +55,6 @@ export function reviewService(deps: {
 }) {
   const { transact, preparations, reviews, users, labs, audit, mailer, now } = deps;
 
-  const load = (labId: number, preparationId: number, number: number) =>
-    findVersion(preparations, labId, preparationId, number);
-
   /** A step of the review (submitted, withdrawn, approved, returned): its append-only review row and its audit event, in one transaction. */
   async function recordReviewStep(
     trx: Db,
@@ -119,7 +116,7 @@ export function reviewService(deps: {
       number: number,
       comment: string,
     ): Promise<void> {
-      const { prep, version } = await load(labId, preparationId, number);
+      const { prep, version } = await findVersion(preparations, labId, preparationId, number);
       if (!ownsPreparation(actor, { ownerId: prep.created_by }))
         throw forbidden('Only the analyst who owns this preparation can submit it.');
       if (!allows('submit', version.status))
@@ -182,7 +179,7 @@ export function reviewService(deps: {
       number: number,
       comment: string,
     ): Promise<void> {
-      const { prep, version } = await load(labId, preparationId, number);
+      const { prep, version } = await findVersion(preparations, labId, preparationId, number);
       if (!ownsPreparation(actor, { ownerId: prep.created_by }))
         throw forbidden('Only the analyst who owns this preparation can withdraw it from review.');
       const decided = `Version ${number} is ${version.status}; only a submitted version can be withdrawn from review.`;
@@ -213,7 +210,7 @@ export function reviewService(deps: {
       number: number,
       decision: { kind: 'approved'; password: string; statement: string } | { kind: 'returned'; comment: string },
     ): Promise<void> {
-      const { prep, version } = await load(labId, preparationId, number);
+      const { prep, version } = await findVersion(preparations, labId, preparationId, number);
       const transition = decision.kind === 'approved' ? 'approve' : 'return';
       const reviews = await preparations.reviewsOf(version.id);
       if (!allows(transition, version.status)) {
@@ -348,7 +345,7 @@ export function reviewService(deps: {
      * signed; for a version approved with frozen fields, also the record hash that covers them.
      */
     async verify(labId: number, preparationId: number, number: number): Promise<SnapshotVerification> {
-      const { version } = await load(labId, preparationId, number);
+      const { version } = await findVersion(preparations, labId, preparationId, number);
       if (!version.snapshot_json) throw validationError('This version has no computed snapshot to verify.');
       const computedSha256 = sha256Hex(version.snapshot_json);
       const approval = (await preparations.reviewsOf(version.id)).find((r) => r.action === 'approved');

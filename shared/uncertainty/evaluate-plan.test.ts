@@ -145,6 +145,18 @@ describe('invalid plans are refused with a path and a chemist-readable message',
     if (pipette) pipette.nominalMl = 200;
     expectPlanError(plan, ['steps', 2, 'volumeMl'], /not smaller than the solution/);
   });
+  it('aliquot larger than the flask it is made up in (a 25 mL aliquot into a 10 mL flask)', () => {
+    // Common practice: a flask cannot be made up to a mark below the liquid already in it.
+    const plan = clone(leadPlan) as {
+      steps: { pipette?: { nominalMl: number }; flask?: { nominalMl: number }; volumeMl?: number }[];
+    };
+    plan.steps[2].volumeMl = 25;
+    const pipette = plan.steps[2].pipette;
+    if (pipette) pipette.nominalMl = 25;
+    const flask = plan.steps[3].flask;
+    if (flask) flask.nominalMl = 10;
+    expectPlanError(plan, ['steps', 3, 'flask'], /aliquot \(25 mL\) does not fit in the 10 mL flask/);
+  });
   it('purity above 1', () => {
     const plan = clone(leadPlan) as { steps: { material?: { purity: { massFraction: number } } }[] };
     const material = plan.steps[0].material;

@@ -17,7 +17,8 @@ import { waterDensityKgPerM3 } from './water-density';
 type ChainState =
   | { kind: 'nothing' }
   /** A quantity of analyte in hand (mg), e.g. a weighed solid or an aliquot not yet diluted. */
-  | { kind: 'portion'; amountMg: NodeReference; fromSolid: boolean }
+  /** `volumeMl`: the volume of an aliquot taken by pipette, which the next flask must hold. */
+  | { kind: 'portion'; amountMg: NodeReference; fromSolid: boolean; volumeMl?: number }
   /**
    * A solution: mass concentration (mg/L), mass fraction (mg/kg) or molality (mol/kg);
    * `densityGPerMl` converts between the first two; `containedMl` is the flask's volume, when known.
@@ -197,6 +198,13 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         'makes up a weighed solid or an aliquot to volume; put a weighing or an aliquot before it',
       );
       if (state.kind !== 'portion') throw new Error('unreachable');
+      // A flask cannot be made up to a mark below the liquid already in it (common practice: a dilution dilutes).
+      if (state.volumeMl !== undefined && state.volumeMl > step.flask.nominalMl) {
+        throw new PlanError(
+          [...path, 'flask'],
+          `The aliquot (${state.volumeMl} mL) does not fit in the ${step.flask.nominalMl} mL flask it is to be made up in; choose a larger flask or a smaller aliquot.`,
+        );
+      }
       const volume = addAbsoluteExtraSources(
         context,
         glasswareVolume(context, step.flask, 'flask'),
@@ -245,6 +253,7 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'portion',
         amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
         fromSolid: false,
+        volumeMl: step.volumeMl,
       };
     }
     case 'weighAliquot': {

@@ -160,6 +160,32 @@ describe('revisions, not overwrites', () => {
     expect(res.expiry).toBe('expired');
     expect(res.flags).toContain('Expired on 2026-11-30');
   });
+
+  it('refuses a mistyped formula where it is typed, in the words the planner would use, and stores nothing', async () => {
+    const material = {
+      code: 'T-RM-TYPO',
+      name: 'Lead(II) nitrate',
+      lot: 'L-2292',
+      supplier: 'Invented supplier',
+      expiresOn: '2027-11-30',
+      hazardNotes: '',
+      analyte: 'Pb',
+      purity: 0.9998,
+      purityUncertainty: { shape: 'normal', expandedUncertainty: 0.0002, coverageFactor: 2 },
+    };
+    const before = await t.db('equipment_items').count({ n: '*' }).first();
+    for (const [formula, words] of [
+      ['Pb(NO3', /unclosed parenthesis/],
+      ['Xx2O', /"Xx" is not an element/],
+    ] as const) {
+      const res = await qa
+        .post(url('/equipment'), { kind: 'solid-material', data: { ...material, formula } })
+        .expect(400);
+      expect(res.body.error.details).toEqual([expect.objectContaining({ path: 'data.formula' })]);
+      expect(res.body.error.details[0].message).toMatch(words);
+    }
+    expect(await t.db('equipment_items').count({ n: '*' }).first()).toEqual(before);
+  });
 });
 
 describe('certificates', () => {

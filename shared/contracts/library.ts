@@ -1,5 +1,7 @@
 import { z } from 'zod';
+import { molarMass } from '../uncertainty/chemical-formula';
 import { MAXIMUM_COVERAGE_FACTOR } from '../uncertainty/coverage-factor';
+import { PlanError } from '../uncertainty/plan-error';
 
 /**
  * The lab's tolerance library: what QA records for each kind of item. Every number carries its
@@ -171,7 +173,20 @@ export const purityUncertaintySchema = z.discriminatedUnion('shape', [
 export const solidMaterialDataSchema = z
   .object({
     ...materialCommon,
-    formula: z.string().trim().min(1, 'Enter the chemical formula, e.g. Pb(NO3)2.').max(80),
+    formula: z
+      .string()
+      .trim()
+      .min(1, 'Enter the chemical formula, e.g. Pb(NO3)2.')
+      .max(80)
+      // Refused where it is typed: the engine reads the formula the same way when a plan uses the material.
+      .superRefine((formula, context) => {
+        try {
+          molarMass(formula);
+        } catch (error) {
+          if (!(error instanceof PlanError)) throw error;
+          context.addIssue({ code: 'custom', message: error.message });
+        }
+      }),
     /** Element or ion reported, e.g. 'Pb'; the stoichiometric factor comes from the formulas. */
     analyte: z.string().trim().min(1, 'Enter the analyte, e.g. Pb.').max(40),
     purity: finite('the purity').refine(

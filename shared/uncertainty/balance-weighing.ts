@@ -28,6 +28,13 @@ export function weighByDifference(
       `${name} holds at most ${balance.capacityG} g; container ${containerMassG} g plus ${netMassG} g is more.`,
     );
   }
+  // A net mass below one scale interval d is not a reading the balance can give (common practice).
+  if (netMassG < balance.readabilityG) {
+    throw new PlanError(
+      [...path, massField],
+      `${netMassG} g is less than ${name} can read (its scale interval is ${balance.readabilityG} g); weigh more, or use a finer balance.`,
+    );
+  }
   const minimum = minimumWeightG(balance.repeatabilityG, balance.readabilityG);
   if (netMassG < minimum) {
     builder.warn({

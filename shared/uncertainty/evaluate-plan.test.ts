@@ -157,6 +157,12 @@ describe('invalid plans are refused with a path and a chemist-readable message',
     if (flask) flask.nominalMl = 10;
     expectPlanError(plan, ['steps', 3, 'flask'], /aliquot \(25 mL\) does not fit in the 10 mL flask/);
   });
+  it('a net mass below the scale interval of its balance (1e-7 g)', () => {
+    // Common practice: a balance cannot read a mass smaller than one scale interval d.
+    const plan = clone(leadPlan) as { steps: { netMassG?: number }[] };
+    plan.steps[0].netMassG = 1e-7;
+    expectPlanError(plan, ['steps', 0, 'netMassG'], /less than .* can read/);
+  });
   it('purity above 1', () => {
     const plan = clone(leadPlan) as { steps: { material?: { purity: { massFraction: number } } }[] };
     const material = plan.steps[0].material;

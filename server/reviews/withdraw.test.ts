@@ -137,7 +137,7 @@ describe('the analyst withdraws a submitted version before QA decides', () => {
     ]);
     expect([withdraw.status, approve.status].sort()).toEqual([200, 409]);
     const loser = withdraw.status === 409 ? withdraw : approve;
-    expect(loser.body.error.message).toMatch(/meanwhile|only a submitted version/);
+    expect(loser.body.error.message).toMatch(/meanwhile|only a submitted version|withdrawn from review by its analyst/);
     const reviews = (await t.db('version_reviews').orderBy('id')).map((r: { action: string }) => r.action);
     if (withdraw.status === 200) {
       expect(await statusInDb()).toBe('draft');

@@ -13,6 +13,10 @@ export function warningText(warning: Warning): string {
       const { balanceItemId, netMassG, minimumWeightG } = warning.params;
       return `Step ${warning.stepIndex + 1}: ${netMassG} g is below the minimum weight of ${itemLabel('Balance', balanceItemId)} (${minimumWeightText(minimumWeightG)} by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`;
     }
+    case 'infiniteMonteCarloVariance': {
+      const { sourceLabels } = warning.params;
+      return `Step ${warning.stepIndex + 1}: ${sourceLabels.join('; ')} ${sourceLabels.length === 1 ? 'rests' : 'rest'} on 3 or fewer readings (2 or fewer degrees of freedom), so Monte Carlo draws ${sourceLabels.length === 1 ? 'it' : 'them'} from a Student t whose variance is infinite: the Monte Carlo standard deviation means nothing. Its coverage interval and the GUM result stand; more readings remove this.`;
+    }
     case 'dominantStep': {
       const { stepKind } = warning.params;
       const label = stepKind ? STEP_KINDS[stepKind].label.toLowerCase() : 'this step';

@@ -16,6 +16,11 @@ export const engineWarningSchema = z.discriminatedUnion('code', [
     stepIndex,
     params: z.object({ balanceItemId: z.string(), netMassG: z.number(), minimumWeightG: z.number() }),
   }),
+  z.object({
+    code: z.literal('infiniteMonteCarloVariance'),
+    stepIndex,
+    params: z.object({ sourceLabels: z.array(z.string()), degreesOfFreedom: z.number() }),
+  }),
 ]);
 
 /** A warning stored as an English sentence, before warnings had codes: its words are the stored text. */

@@ -2,9 +2,20 @@
  * A warning the engine raises while it builds a model: what happened (`code`), the plan step it belongs to,
  * and the figures its words need. The engine writes no words; shared/contracts/warning-text.ts does.
  */
-export type EngineWarning = {
-  /** A net mass below the balance's USP <41> minimum weight (2·s/m ≤ 0.10 %, s not below 0.41·d). */
-  code: 'belowMinimumWeight';
-  stepIndex: number;
-  params: { balanceItemId: string; netMassG: number; minimumWeightG: number };
-};
+export type EngineWarning =
+  | {
+      /** A net mass below the balance's USP <41> minimum weight (2·s/m ≤ 0.10 %, s not below 0.41·d). */
+      code: 'belowMinimumWeight';
+      stepIndex: number;
+      params: { balanceItemId: string; netMassG: number; minimumWeightG: number };
+    }
+  | {
+      /**
+       * Sources of a step that Monte Carlo draws from a Student t with ν ≤ 2 (a Type A evaluation from 3 or fewer
+       * readings, or a stated ν ≤ 2): their variance is infinite (JCGM 101:2008 6.4.9, from memory), so the Monte Carlo
+       * standard deviation means nothing, while its coverage interval does. `degreesOfFreedom` is the smallest ν.
+       */
+      code: 'infiniteMonteCarloVariance';
+      stepIndex: number;
+      params: { sourceLabels: string[]; degreesOfFreedom: number };
+    };

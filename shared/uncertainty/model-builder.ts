@@ -128,8 +128,33 @@ export class ModelBuilder {
       outputUnit,
       measurand,
       checkpoints: [...this.checkpoints],
-      warnings: [...this.warnings],
+      warnings: [...this.warnings, ...this.infiniteVarianceWarnings()],
     };
+  }
+
+  /**
+   * One warning per step whose sources Monte Carlo draws from a Student t with ν ≤ 2: the variance of t_ν is
+   * ν/(ν − 2)·scale² only for ν > 2 (JCGM 101:2008 6.4.9, from memory), infinite or undefined below. Such inputs
+   * are kept, not refused: the t distribution still has finite quantiles, so the coverage interval (JCGM 101:2008
+   * 7.7) and the GUM result stand; only the Monte Carlo standard deviation is meaningless.
+   */
+  private infiniteVarianceWarnings(): EngineWarning[] {
+    const byStep = new Map<number, SourceDefinition[]>();
+    for (const source of this.sources) {
+      if (!(source.degreesOfFreedom <= 2)) continue;
+      const step = source.stepIndices[0];
+      byStep.set(step, [...(byStep.get(step) ?? []), source]);
+    }
+    return [...byStep]
+      .sort(([left], [right]) => left - right)
+      .map(([stepIndex, sources]) => ({
+        code: 'infiniteMonteCarloVariance',
+        stepIndex,
+        params: {
+          sourceLabels: sources.map((source) => source.label),
+          degreesOfFreedom: Math.min(...sources.map((source) => source.degreesOfFreedom)),
+        },
+      }));
   }
 
   private binary(

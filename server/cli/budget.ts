@@ -1,7 +1,8 @@
 /**
- * Batch CLI: the full uncertainty budget of one plan document as JSON on stdout.
+ * Batch CLI: the full uncertainty budget of one plan document as JSON on stdout, with the Monte Carlo
+ * validation a stored version gets for the same seed (checkGumByMonteCarlo: the adaptive run and its verdict).
  *
- *   npm run budget -- <plan.json> [--trials N] [--seed S]
+ *   npm run budget -- <plan.json> [--seed S] [--no-monte-carlo]
  *   npm run budget -- --schema        (prints the plan JSON Schema, as committed in docs/plan.schema.json)
  *
  * Exit codes: 0 success; 1 invalid plan (message and field path on stderr); 2 usage or unreadable file.
@@ -11,23 +12,22 @@ import { readFileSync } from 'node:fs';
 import { nonFiniteNumberReplacer } from '../../shared/contracts/json-number';
 import { warningText } from '../../shared/contracts/warning-text';
 import {
+  checkGumByMonteCarlo,
   evaluatePlan,
   parsePlan,
   PlanError,
   planJsonSchema,
-  runMonteCarlo,
-  validateAgainstGum,
 } from '../../shared/uncertainty/index';
 
-const usage = 'usage: npm run budget -- <plan.json> [--trials N] [--seed S]   |   npm run budget -- --schema';
+const usage = 'usage: npm run budget -- <plan.json> [--seed S] [--no-monte-carlo]   |   npm run budget -- --schema';
 
 function fail(code: number, message: string): never {
   process.stderr.write(`${message}\n`);
   process.exit(code);
 }
 
-function parseArguments(argv: string[]): { file?: string; trials: number; seed: number; schema: boolean } {
-  const options = { file: undefined as string | undefined, trials: 1_000_000, seed: 1, schema: false };
+function parseArguments(argv: string[]): { file?: string; monteCarlo: boolean; seed: number; schema: boolean } {
+  const options = { file: undefined as string | undefined, monteCarlo: true, seed: 1, schema: false };
   for (let index = 0; index < argv.length; index += 1) {
     const argument = argv[index];
     const numberAfter = (name: string) => {
@@ -36,7 +36,7 @@ function parseArguments(argv: string[]): { file?: string; trials: number; seed: 
       if (!Number.isInteger(value) || value < 0) fail(2, `${name} needs a whole number.\n${usage}`);
       return value;
     };
-    if (argument === '--trials') options.trials = numberAfter('--trials');
+    if (argument === '--no-monte-carlo') options.monteCarlo = false;
     else if (argument === '--seed') options.seed = numberAfter('--seed');
     else if (argument === '--schema') options.schema = true;
     else if (argument.startsWith('--')) fail(2, `Unknown option ${argument}.\n${usage}`);
@@ -63,8 +63,7 @@ try {
 try {
   const plan = parsePlan(document);
   const budget = evaluatePlan(plan);
-  const monteCarlo =
-    options.trials >= 2 ? runMonteCarlo(plan, { trials: options.trials, seed: options.seed }) : undefined;
+  const check = options.monteCarlo ? checkGumByMonteCarlo(plan, budget, { seed: options.seed }) : undefined;
   const output = {
     engineVersion: budget.engineVersion,
     title: plan.title,
@@ -84,8 +83,8 @@ try {
     byStep: budget.byStep,
     byCategory: budget.byCategory,
     checkpoints: budget.checkpoints,
-    monteCarlo: monteCarlo ?? null,
-    validation: monteCarlo ? validateAgainstGum(budget, monteCarlo) : null,
+    monteCarlo: check?.monteCarlo ?? null,
+    validation: check?.validation ?? null,
     warnings: budget.warnings.map((warning) => ({ ...warning, message: warningText(warning) })),
   };
   process.stdout.write(`${JSON.stringify(output, nonFiniteNumberReplacer, 2)}\n`);

@@ -2,14 +2,22 @@ import { withPolicy } from '../../shared/contracts/engine-equipment';
 import type { LabPolicy } from '../../shared/contracts/library';
 import { warningsUnderPolicy } from '../../shared/contracts/warning-policy';
 import type { Snapshot, UsedItem } from '../../shared/contracts/snapshot';
-import { ENGINE_VERSION, evaluatePlan, parsePlan, runMonteCarlo, validateAgainstGum } from '../../shared/uncertainty';
-
-/** Monte Carlo trials for a stored budget: enough for two significant digits of u in typical chains. */
-export const SERVER_TRIALS = 200_000;
+import {
+  checkGumByMonteCarlo,
+  ENGINE_VERSION,
+  evaluatePlan,
+  parsePlan,
+  runMonteCarlo,
+  validateAgainstGum,
+  type BudgetResult,
+  type Plan,
+} from '../../shared/uncertainty';
 
 /**
- * Runs the engine on a resolved plan: GUM budget, Monte Carlo with the given seed, and the JCGM 101:2008 §8
- * validation of one against the other. Throws the engine's PlanError for a plan it cannot compute.
+ * Runs the engine on a resolved plan: the GUM budget, then its JCGM 101:2008 §8 validation by the adaptive Monte
+ * Carlo run with the given seed (checkGumByMonteCarlo: the same verdict the planner and the CLI reach). `trials`,
+ * for integrations and load tests only (POST …/compute), runs that many trials instead and compares once.
+ * Throws the engine's PlanError for a plan it cannot compute.
  */
 export function computeSnapshot(input: {
   plan: Record<string, unknown>;
@@ -21,8 +29,10 @@ export function computeSnapshot(input: {
 }): Snapshot {
   const plan = parsePlan(withPolicy(input.plan, input.policy));
   const budget = evaluatePlan(plan);
-  const monteCarlo = runMonteCarlo(plan, { seed: input.seed, trials: input.trials ?? SERVER_TRIALS });
-  const validation = validateAgainstGum(budget, monteCarlo);
+  const { monteCarlo, validation } =
+    input.trials === undefined
+      ? checkGumByMonteCarlo(plan, budget, { seed: input.seed })
+      : fixedRun(plan, budget, input.seed, input.trials);
   return {
     engineVersion: ENGINE_VERSION,
     computedAt: input.computedAt,
@@ -35,4 +45,9 @@ export function computeSnapshot(input: {
     validation,
     warnings: warningsUnderPolicy(budget.warnings, input.policy),
   };
+}
+
+function fixedRun(plan: Plan, budget: BudgetResult, seed: number, trials: number) {
+  const monteCarlo = runMonteCarlo(plan, { seed, trials });
+  return { monteCarlo, validation: validateAgainstGum(budget, monteCarlo) };
 }

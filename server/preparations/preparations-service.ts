@@ -240,7 +240,7 @@ export function preparationsService(deps: {
     /** Computes a plan against the lab's library without saving anything (for integrations and load tests). */
     async computeOnly(
       labId: number,
-      input: { plan: Record<string, unknown>; overrides: Override[]; seed: number; trials: number },
+      input: { plan: Record<string, unknown>; overrides: Override[]; seed: number; trials?: number },
       signal?: AbortSignal,
     ) {
       assertWellFormed(input.plan);

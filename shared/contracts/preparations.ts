@@ -213,7 +213,10 @@ export const routeFinderRequestSchema = z.object({
   limit: z.number().int().min(1).max(50).default(10),
 });
 
-/** POST /compute: a budget for a plan, nothing stored. */
+/**
+ * POST /compute: a budget for a plan, nothing stored. Without `trials` Monte Carlo is the adaptive verdict run a stored
+ * version gets; with it, a fixed run of that many trials (load tests).
+ */
 export const computeRequestSchema = z.object({
   plan: z.record(z.string(), z.unknown()),
   overrides: z.array(overrideSchema).max(50).default([]),
@@ -223,5 +226,5 @@ export const computeRequestSchema = z.object({
     .int()
     .min(1000, 'Use at least 1000 trials.')
     .max(MAXIMUM_MONTE_CARLO_TRIALS, 'Use at most 10⁶ trials.')
-    .default(100_000),
+    .optional(),
 });

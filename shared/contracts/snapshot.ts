@@ -106,6 +106,7 @@ export const monteCarloSchema = z.object({
       batches: z.number().int(),
       batchSize: z.number().int(),
       numericalTolerance: number,
+      reachedTolerance: number.optional(),
     })
     .optional(),
 });
@@ -117,6 +118,9 @@ export const validationSchema = z.object({
   highEndDifference: number,
   passed: z.boolean(),
   significantDigits: z.number().int(),
+  /** Absent in validations stored before the adaptive verdict: they read as decided. */
+  decided: z.boolean().optional(),
+  intervalEndTolerance: number.optional(),
 });
 
 export const snapshotSchema = z.object({

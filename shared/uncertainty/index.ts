@@ -20,7 +20,7 @@ export { formatDegreesOfFreedom } from './effective-degrees';
 export { roundToUncertainty } from './result-rounding';
 export { concentrationUnitNames } from './units';
 export { runMonteCarlo, startMonteCarlo, type MonteCarloResult } from './monte-carlo';
-export { validateAgainstGum, type GumValidation } from './validation';
+export { checkGumByMonteCarlo, validateAgainstGum, type GumValidation } from './validation';
 export { RandomGenerator } from './random-generator';
 export { findRoutes, type RouteRequest, type RouteResult } from './route-finder';
 export { planJsonSchema } from './plan-json-schema';

@@ -26,8 +26,18 @@ export interface MonteCarloOptions {
   seed: number;
   /** Fixed number of trials M, at most MAXIMUM_MONTE_CARLO_TRIALS. Give this or `adaptive`. */
   trials?: number;
-  /** The adaptive procedure of JCGM 101:2008 7.9.4, stopped at `maximumTrials` (at most, and by default, MAXIMUM_MONTE_CARLO_TRIALS). */
-  adaptive?: { significantDigits?: 1 | 2; maximumTrials?: number };
+  /**
+   * The adaptive procedure of JCGM 101:2008 7.9.4, stopped at `maximumTrials` (at most, and by default,
+   * MAXIMUM_MONTE_CARLO_TRIALS). With `intervalEndTolerance` it stops on the interval ends alone, when twice the
+   * standard deviation of their batch means is at most that tolerance (the rule the validation of JCGM 101:2008 §8
+   * needs, see gum-check.ts); `minimumBatches` (default 2) batches are always run.
+   */
+  adaptive?: {
+    significantDigits?: 1 | 2;
+    maximumTrials?: number;
+    intervalEndTolerance?: number;
+    minimumBatches?: number;
+  };
   /** Defaults to the plan's coverage setting, or 2Φ(2) − 1 for a compiled model. */
   coverageProbability?: number;
   histogramBins?: number;
@@ -47,8 +57,17 @@ export interface MonteCarloResult {
   symmetricInterval: Interval;
   shortestInterval: Interval;
   histogram: Histogram;
-  /** Present for the adaptive procedure. */
-  adaptive?: { converged: boolean; batches: number; batchSize: number; numericalTolerance: number };
+  /**
+   * Present for the adaptive procedure: `numericalTolerance` is the tolerance it aimed at; `reachedTolerance`
+   * (absent in results stored before it existed) the largest 2s of the quantities it watched when it stopped.
+   */
+  adaptive?: {
+    converged: boolean;
+    batches: number;
+    batchSize: number;
+    numericalTolerance: number;
+    reachedTolerance?: number;
+  };
 }
 
 export interface MonteCarloProgress {
@@ -56,6 +75,8 @@ export interface MonteCarloProgress {
   /** Planned trials; for the adaptive procedure, the trials of the batches decided so far. */
   trialsPlanned: number;
   finished: boolean;
+  /** For the adaptive procedure: batches finished, the fewest it runs and the most its trial limit allows. */
+  batches?: { done: number; minimum: number; maximum: number };
 }
 
 /** A Monte Carlo calculation that runs piece by piece, so a Web Worker can report progress and stop. */
@@ -174,9 +195,19 @@ function assertTrialsWithinCap(trials: number, path: string[]): void {
 }
 
 /**
- * JCGM 101:2008 7.9.4: batches of M = max(⌈100/(1 − p)⌉, 10⁴) trials; after each batch h ≥ 2 the standard deviations
- * s = √(Σ(x⁽ʳ⁾ − x̄)²/(h(h − 1))) of the batch means, standard uncertainties and interval ends are compared with
- * the numerical tolerance δ of u(y) from all trials; stop when 2s ≤ δ for all four.
+ * Trials per batch of the adaptive procedure (JCGM 101:2008 7.9.4): M = max(⌈100/(1 − p)⌉, 10⁴), so that each
+ * batch has at least 100 trials outside its coverage interval.
+ * @example adaptiveBatchSize(0.95) // 10000
+ */
+export function adaptiveBatchSize(coverageProbability: number): number {
+  return Math.max(Math.ceil(100 / (1 - coverageProbability)), 10_000);
+}
+
+/**
+ * JCGM 101:2008 7.9.4: batches of M = adaptiveBatchSize(p) trials; after each batch h ≥ 2 (and h ≥ minimumBatches)
+ * the standard deviations s = √(Σ(x⁽ʳ⁾ − x̄)²/(h(h − 1))) of the batch means, standard uncertainties and interval
+ * ends are compared with the numerical tolerance δ of u(y) from all trials; stop when 2s ≤ δ for all four. With
+ * `intervalEndTolerance` only the two interval ends are watched, against that tolerance.
  */
 function startAdaptive(
   settings: NonNullable<MonteCarloOptions['adaptive']>,
@@ -186,20 +217,25 @@ function startAdaptive(
   chunkSize: number,
 ): MonteCarloRun {
   const significantDigits = settings.significantDigits ?? 2;
-  const batchSize = Math.max(Math.ceil(100 / (1 - probability)), 10_000);
+  const batchSize = adaptiveBatchSize(probability);
   const maximumTrials = settings.maximumTrials ?? MAXIMUM_MONTE_CARLO_TRIALS;
+  const minimumBatches = Math.max(2, settings.minimumBatches ?? 2);
+  const maximumBatches = Math.floor(maximumTrials / batchSize);
+  const endsOnly = settings.intervalEndTolerance !== undefined;
+  const watched = endsOnly ? [2, 3] : [0, 1, 2, 3];
   assertTrialsWithinCap(maximumTrials, ['adaptive', 'maximumTrials']);
-  if (2 * batchSize > maximumTrials) {
+  if (minimumBatches * batchSize > maximumTrials) {
     throw new PlanError(
       ['adaptive'],
-      `At this coverage probability the adaptive procedure needs batches of ${groupedDigits(batchSize)} trials, more than its limit allows; give a fixed number of trials.`,
+      `At this coverage probability the adaptive procedure needs ${minimumBatches} batches of ${groupedDigits(batchSize)} trials, more than its limit allows; give a fixed number of trials.`,
     );
   }
   let outputs = new Float64Array(4 * batchSize);
   let done = 0;
   const batchStatistics: number[][] = [];
   let summary: MonteCarloResult | undefined;
-  let tolerance = Infinity;
+  let tolerance = settings.intervalEndTolerance ?? Infinity;
+  let reached = Infinity;
 
   const finishBatch = () => {
     const batch = outputs.slice(done - batchSize, done);
@@ -209,13 +245,16 @@ function startAdaptive(
     batchStatistics.push([mean, standardDeviation, interval.low, interval.high]);
     const h = batchStatistics.length;
     if (h < 2) return false;
-    tolerance = numericalTolerance(meanAndStandardDeviation(outputs, done).standardDeviation, significantDigits);
-    return [0, 1, 2, 3].every((column) => {
-      const values = batchStatistics.map((row) => row[column]);
-      const average = values.reduce((sum, value) => sum + value, 0) / h;
-      const spread = Math.sqrt(values.reduce((sum, value) => sum + (value - average) ** 2, 0) / (h * (h - 1)));
-      return 2 * spread <= tolerance;
-    });
+    if (!endsOnly)
+      tolerance = numericalTolerance(meanAndStandardDeviation(outputs, done).standardDeviation, significantDigits);
+    reached = Math.max(
+      ...watched.map((column) => {
+        const values = batchStatistics.map((row) => row[column]);
+        const average = values.reduce((sum, value) => sum + value, 0) / h;
+        return 2 * Math.sqrt(values.reduce((sum, value) => sum + (value - average) ** 2, 0) / (h * (h - 1)));
+      }),
+    );
+    return h >= minimumBatches && reached <= tolerance;
   };
 
   return {
@@ -240,6 +279,7 @@ function startAdaptive(
               batches: batchStatistics.length,
               batchSize,
               numericalTolerance: tolerance,
+              reachedTolerance: reached,
             });
           }
         }
@@ -248,6 +288,7 @@ function startAdaptive(
         trialsDone: done,
         trialsPlanned: (batchStatistics.length + (summary ? 0 : 1)) * batchSize,
         finished: summary !== undefined,
+        batches: { done: batchStatistics.length, minimum: minimumBatches, maximum: maximumBatches },
       };
     },
     result() {

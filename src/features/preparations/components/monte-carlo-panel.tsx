@@ -1,6 +1,10 @@
 import { lazy, memo, Suspense } from 'react';
 import type { Budget } from '../../../../shared/contracts/snapshot';
-import { validateAgainstGum } from '../../../../shared/uncertainty';
+import {
+  VALIDATION_HEADLINES,
+  validationOutcome,
+  validationWords,
+} from '../../../../shared/contracts/validation-words';
 import { Button } from '../../../components/ui/button';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { TextField } from '../../../components/ui/text-field';
@@ -8,7 +12,6 @@ import { useMonteCarlo } from '../hooks/use-monte-carlo';
 import type { PlanInput } from '../../../../shared/uncertainty';
 import { formatSignificant } from '../utils/format-number';
 import { randomSeed } from '../utils/plan-draft';
-import { validationVerdict } from '../utils/validation-verdict';
 
 const MonteCarloHistogram = lazy(() => import('./monte-carlo-histogram'));
 
@@ -22,8 +25,9 @@ type MonteCarloPanelProps = {
 };
 
 /**
- * Monte Carlo (JCGM 101:2008) for the plan on screen: progress, cancel, the seed, the histogram and the verdict
- * against GUM. The run's state lives here, so progress repaints only this panel, never the editor.
+ * Monte Carlo (JCGM 101:2008) for the plan on screen: the verdict run the stored record makes (adaptive, by batches),
+ * its progress, cancel, the seed, the histogram and the verdict against GUM in the record's words. The run's state
+ * lives here, so progress repaints only this panel, never the editor.
  */
 export const MonteCarloPanel = memo(function MonteCarloPanel({
   plan,
@@ -36,8 +40,9 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({
   const running = state.phase === 'running';
   const result = state.phase === 'done' ? state.result : null;
   const outOfDate = state.phase === 'done' && state.planKey !== planKey;
-  const validation = result && budget && !outOfDate ? validateAgainstGum(budget, result) : null;
-  const percent = running ? Math.round((100 * state.trialsDone) / state.trialsPlanned) : 0;
+  const validation = state.phase === 'done' && budget && !outOfDate ? state.validation : null;
+  const planned = running ? Math.max(state.trialsPlanned, state.trialsDone, 1) : 1;
+  const percent = running ? Math.round((100 * state.trialsDone) / planned) : 0;
   const unit = budget?.unit ?? '';
 
   return (
@@ -78,11 +83,13 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({
         {running ? (
           <div>
             <label htmlFor="monte-carlo-progress" className="text-sm font-semibold">
-              {state.trialsDone.toLocaleString('en-GB')} of {state.trialsPlanned.toLocaleString('en-GB')} trials
+              {state.batches
+                ? `Batch ${Math.min(state.batches.done + 1, state.batches.maximum)} of at least ${state.batches.minimum} (at most ${state.batches.maximum}): ${state.trialsDone.toLocaleString('en-GB')} trials`
+                : 'Starting the Monte Carlo run…'}
             </label>
             <progress
               id="monte-carlo-progress"
-              max={state.trialsPlanned}
+              max={planned}
               value={state.trialsDone}
               className="block h-3 w-full accent-[var(--color-ink)]"
             >
@@ -95,6 +102,11 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({
         ) : null}
         {state.phase === 'failed' ? <p className="font-semibold text-danger">{state.message}</p> : null}
         {state.phase === 'idle' && !budget ? <p className="text-muted">Monte Carlo needs a valid plan.</p> : null}
+        {running ? (
+          <p className="mt-1 text-sm text-muted">
+            Batches run until the ends of the Monte Carlo interval are known well enough to judge the GUM interval.
+          </p>
+        ) : null}
       </div>
 
       {result ? (
@@ -105,12 +117,13 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({
             </p>
           ) : null}
           {validation ? (
-            <p
-              className={`mb-3 rounded-md border-l-4 px-4 py-3 font-semibold ${validation.passed ? 'border-ok bg-ok-tint text-ok' : 'border-caution bg-caution-tint text-caution'}`}
+            <div
+              className={`mb-3 rounded-md border-l-4 px-4 py-3 ${validation.passed ? 'border-ok bg-ok-tint text-ok' : 'border-caution bg-caution-tint text-caution'}`}
               data-testid="validation-verdict"
             >
-              {validationVerdict(validation, unit)}
-            </p>
+              <p className="font-semibold">{VALIDATION_HEADLINES[validationOutcome(validation)]}</p>
+              <p>{validationWords(validation, unit)}</p>
+            </div>
           ) : null}
           <dl className="mb-3 grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">
             <div>
@@ -141,7 +154,8 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({
             </div>
           </dl>
           <p className="mb-2 text-sm text-muted">
-            Seed {result.seed}, {result.trials.toLocaleString('en-GB')} trials.
+            Seed {result.seed}, {result.trials.toLocaleString('en-GB')} trials
+            {result.adaptive ? ` in ${result.adaptive.batches} batches` : ''}.
           </p>
           {budget ? (
             <Suspense fallback={<LoadingLine label="Drawing the histogram…" />}>

@@ -1,22 +1,20 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import type { MonteCarloResult, PlanInput } from '../../../../shared/uncertainty';
-import type { MonteCarloReply, MonteCarloRequest } from '../worker/monte-carlo-messages';
-
-/** Trials of a browser run: JCGM 101:2008 7.2.2 suggests M = 10⁶ for a 95 % interval good to one or two digits. */
-export const BROWSER_TRIALS = 1_000_000;
+import type { GumValidation, MonteCarloResult, PlanInput } from '../../../../shared/uncertainty';
+import type { MonteCarloReply, MonteCarloRequest, MonteCarloRunProgress } from '../worker/monte-carlo-messages';
 
 /** How long edits must rest before Monte Carlo starts by itself. */
 export const AUTO_START_DELAY_MS = 1000;
 
 export type MonteCarloState =
   | { phase: 'idle' }
-  | { phase: 'running'; trialsDone: number; trialsPlanned: number }
-  | { phase: 'done'; result: MonteCarloResult; planKey: string }
+  | ({ phase: 'running' } & MonteCarloRunProgress)
+  | { phase: 'done'; result: MonteCarloResult; validation: GumValidation; planKey: string }
   | { phase: 'cancelled' }
   | { phase: 'failed'; message: string };
 
 /**
- * Monte Carlo for the live plan in a Web Worker, so typing never waits for it: starts on demand and
+ * The Monte Carlo verdict run (checkGumByMonteCarlo, as the stored record takes it) for the live plan in a Web Worker,
+ * so typing never waits for it: starts on demand and
  * AUTO_START_DELAY_MS after the plan stops changing; cancelling terminates the worker. A result
  * remembers the plan and seed it was computed for (`planKey`), so the page can tell when it is out of date.
  */
@@ -41,10 +39,11 @@ export function useMonteCarlo(plan: PlanInput | null, seed: number, options: { a
     worker.onmessage = (event: MessageEvent<MonteCarloReply>) => {
       const reply = event.data;
       if (reply.runId !== runIdRef.current) return;
-      if (reply.type === 'progress')
-        setState({ phase: 'running', trialsDone: reply.trialsDone, trialsPlanned: reply.trialsPlanned });
-      else if (reply.type === 'done') {
-        setState({ phase: 'done', result: reply.result, planKey: key });
+      if (reply.type === 'progress') {
+        const { trialsDone, trialsPlanned, batches } = reply;
+        setState({ phase: 'running', trialsDone, trialsPlanned, batches });
+      } else if (reply.type === 'done') {
+        setState({ phase: 'done', result: reply.result, validation: reply.validation, planKey: key });
         stopWorker();
       } else {
         setState({ phase: 'failed', message: reply.message });
@@ -53,8 +52,8 @@ export function useMonteCarlo(plan: PlanInput | null, seed: number, options: { a
     };
     worker.onerror = () =>
       setState({ phase: 'failed', message: 'The Monte Carlo worker stopped unexpectedly. Start it again.' });
-    setState({ phase: 'running', trialsDone: 0, trialsPlanned: BROWSER_TRIALS });
-    const request: MonteCarloRequest = { type: 'start', runId, plan, seed, trials: BROWSER_TRIALS };
+    setState({ phase: 'running', trialsDone: 0, trialsPlanned: 0 });
+    const request: MonteCarloRequest = { type: 'start', runId, plan, seed };
     worker.postMessage(request);
   }, [plan, seed, stopWorker]);
 

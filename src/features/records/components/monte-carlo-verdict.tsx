@@ -1,7 +1,11 @@
+import {
+  VALIDATION_HEADLINES,
+  validationOutcome,
+  validationWords,
+} from '../../../../shared/contracts/validation-words';
 import type { GumValidation, MonteCarloResult } from '../../../../shared/uncertainty';
 import { Badge } from '../../../components/ui/badge';
 import { formatSignificant } from '../utils/format-figures';
-import { validationWords } from '../utils/validation-words';
 
 type MonteCarloVerdictProps = { monteCarlo: MonteCarloResult; validation: GumValidation; unit: string };
 
@@ -13,13 +17,12 @@ export function MonteCarloVerdict({ monteCarlo, validation, unit }: MonteCarloVe
         <h2 id="monte-carlo-heading" className="text-lg font-bold">
           Monte Carlo check
         </h2>
-        <Badge tone={validation.passed ? 'ok' : 'caution'}>
-          {validation.passed ? 'GUM result confirmed' : 'GUM result not confirmed'}
-        </Badge>
+        <Badge tone={validation.passed ? 'ok' : 'caution'}>{VALIDATION_HEADLINES[validationOutcome(validation)]}</Badge>
       </div>
       <p>{validationWords(validation, unit)}</p>
       <p className="mt-2 text-sm text-muted">
-        <span className="numeric">{monteCarlo.trials.toLocaleString('en-GB')}</span> trials, seed{' '}
+        <span className="numeric">{monteCarlo.trials.toLocaleString('en-GB')}</span> trials
+        {monteCarlo.adaptive ? ` in ${monteCarlo.adaptive.batches} batches` : ''}, seed{' '}
         <span className="numeric">{monteCarlo.seed}</span>; symmetric{' '}
         {(monteCarlo.coverageProbability * 100).toFixed(2)} % interval{' '}
         <span className="numeric whitespace-nowrap">

@@ -1,0 +1,49 @@
+import { groupedDigits, MAXIMUM_MONTE_CARLO_TRIALS } from '../uncertainty/plan-limits';
+import type { GumValidation } from '../uncertainty/validation';
+
+/** The three verdicts of the JCGM 101:2008 §8 validation; a validation stored before `decided` existed is decided. */
+export type ValidationOutcome = 'confirmed' | 'notConfirmed' | 'notDecided';
+
+export function validationOutcome(validation: GumValidation): ValidationOutcome {
+  if (validation.decided === false) return 'notDecided';
+  return validation.passed ? 'confirmed' : 'notConfirmed';
+}
+
+/** The verdict in three words, for a badge: the same on the record page and in the planner. */
+export const VALIDATION_HEADLINES: Record<ValidationOutcome, string> = {
+  confirmed: 'GUM result confirmed',
+  notConfirmed: 'GUM result not confirmed',
+  notDecided: 'GUM result not decided',
+};
+
+/** A figure to two significant digits, without exponent for everyday magnitudes ("0.0012", "3.4"). */
+function figure(value: number): string {
+  if (!Number.isFinite(value)) return String(value);
+  if (value === 0) return '0';
+  const magnitude = Math.abs(value);
+  if (magnitude >= 1e-4 && magnitude < 1e6) return Number(value.toPrecision(2)).toString();
+  return value.toExponential(1).replace('e', ' × 10^');
+}
+
+/**
+ * The JCGM 101:2008 §8 comparison of the GUM interval with the Monte Carlo interval, in words, with the numbers that
+ * decide it: one voice for the record page and the planner's Monte Carlo panel.
+ */
+export function validationWords(validation: GumValidation, unit: string): string {
+  const tolerance = `δ = ${figure(validation.numericalTolerance)} ${unit}`;
+  const ends = `the interval ends differ by ${figure(validation.lowEndDifference)} ${unit} and ${figure(validation.highEndDifference)} ${unit}`;
+  switch (validationOutcome(validation)) {
+    case 'confirmed':
+      return `Confirmed: ${ends}, both within the numerical tolerance ${tolerance}.`;
+    case 'notConfirmed':
+      return `Not confirmed: ${ends}, more than the numerical tolerance ${tolerance}. State the Monte Carlo interval instead.`;
+    case 'notDecided': {
+      const limit = `${groupedDigits(MAXIMUM_MONTE_CARLO_TRIALS)} trials`;
+      const known =
+        validation.intervalEndTolerance === undefined
+          ? `at this coverage probability Monte Carlo cannot place its interval ends closely enough within ${limit}`
+          : `after ${limit} Monte Carlo still knows its interval ends only to within ${figure(validation.intervalEndTolerance)} ${unit}`;
+      return `Not decided: ${known}, too coarse to judge the GUM interval against the numerical tolerance ${tolerance}; ${ends}. State the Monte Carlo interval instead.`;
+    }
+  }
+}

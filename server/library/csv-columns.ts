@@ -71,6 +71,12 @@ export const CSV_COLUMNS: Record<EquipmentKind, CsvColumn[]> = {
     num('capacity_g', 'maximum load, g'),
     num('readability_g', 'scale interval d, g'),
     num('repeatability_g', 'standard deviation s from the lab’s check, g'),
+    {
+      column: 'repeatability_readings',
+      path: ['repeatabilityReadings'],
+      type: 'optional-number',
+      help: 'number of readings s comes from (Type A, ν = n − 1); empty if not known',
+    },
     num('linearity_g', '± linearity from the certificate, g'),
     num('sensitivity_relative_expanded', 'relative expanded calibration uncertainty, e.g. 0.00002'),
     num('sensitivity_coverage_factor', 'k of that uncertainty'),

@@ -301,6 +301,37 @@ describe('CSV import and export', () => {
     );
   });
 
+  // A balance's repeatability s may say how many readings it came from (Type A, ν = n − 1, JCGM 100:2008 4.2.6).
+  it('keeps the readings behind a balance’s repeatability, from the form and from a CSV, and refuses fewer than 2', async () => {
+    const plain = (await qa.post(url('/equipment'), { kind: 'balance', data: balance }).expect(201)).body;
+    expect(plain.current.data.repeatabilityReadings).toBeNull();
+    const counted = (
+      await qa
+        .post(url('/equipment'), { kind: 'balance', data: { ...balance, code: 'T-BAL-2', repeatabilityReadings: 10 } })
+        .expect(201)
+    ).body;
+    expect(counted.current.data.repeatabilityReadings).toBe(10);
+    const refused = await qa
+      .post(url('/equipment'), { kind: 'balance', data: { ...balance, code: 'T-BAL-3', repeatabilityReadings: 1 } })
+      .expect(400);
+    expect(JSON.stringify(refused.body.error)).toMatch(/at least 2 readings/);
+
+    const template = (await qa.get(url('/equipment-csv/template?kind=balance')).expect(200)).text;
+    expect(template.trim().split(',')).toContain('repeatability_readings');
+    const csv =
+      'code,capacity_g,readability_g,repeatability_g,repeatability_readings,linearity_g,sensitivity_relative_expanded,sensitivity_coverage_factor\n' +
+      'T-BAL-4,220,0.00001,0.00002,6,0.00005,0.000002,2\n' +
+      'T-BAL-5,220,0.00001,0.00002,,0.00005,0.000002,2\n';
+    await qa.post(url('/equipment-csv/import'), { kind: 'balance', csv, dryRun: false }).expect(200);
+    const list = (await qa.get(url('/equipment')).expect(200)).body as {
+      code: string;
+      current: { data: { repeatabilityReadings: number | null } };
+    }[];
+    const readingsOf = (code: string) => list.find((item) => item.code === code)?.current.data.repeatabilityReadings;
+    expect(readingsOf('T-BAL-4')).toBe(6);
+    expect(readingsOf('T-BAL-5')).toBeNull();
+  });
+
   it('offers a template with the documented columns', async () => {
     const res = await qa.get(url('/equipment-csv/template?kind=piston-pipette')).expect(200);
     expect(res.headers['content-disposition']).toMatch(/attachment/);

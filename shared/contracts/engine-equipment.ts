@@ -38,6 +38,7 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         capacityG: d.capacityG,
         readabilityG: d.readabilityG,
         repeatabilityG: d.repeatabilityG,
+        repeatabilityReadings: d.repeatabilityReadings ?? undefined,
         linearityG: d.linearityG,
         sensitivity: {
           relativeExpandedUncertainty: d.sensitivityRelativeExpanded,

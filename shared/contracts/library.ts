@@ -77,6 +77,14 @@ export const balanceDataSchema = z
     capacityG: positive('the capacity'),
     readabilityG: positive('the readability d'),
     repeatabilityG: nonNegative('the repeatability s'),
+    /** Number of readings behind s (Type A, ν = n − 1); null when not known (s taken as exact). */
+    repeatabilityReadings: z
+      .number({ error: 'Give the number of readings behind s as a whole number, or leave it empty.' })
+      .int('Give the number of readings behind s as a whole number, or leave it empty.')
+      .min(2, 'The repeatability s needs at least 2 readings.')
+      .max(10_000, 'Give at most 10 000 readings.')
+      .nullable()
+      .default(null),
     linearityG: nonNegative('the linearity'),
     /** Relative expanded uncertainty of the calibration (sensitivity), e.g. 0.00002 for 20 ppm, with its k. */
     sensitivityRelativeExpanded: nonNegative('the relative calibration uncertainty'),

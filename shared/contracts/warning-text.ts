@@ -14,8 +14,12 @@ export function warningText(warning: Warning): string {
       return `Step ${warning.stepIndex + 1}: ${netMassG} g is below the minimum weight of ${itemLabel('Balance', balanceItemId)} (${minimumWeightText(minimumWeightG)} by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`;
     }
     case 'infiniteMonteCarloVariance': {
-      const { sourceLabels } = warning.params;
-      return `Step ${warning.stepIndex + 1}: ${sourceLabels.join('; ')} ${sourceLabels.length === 1 ? 'rests' : 'rest'} on 3 or fewer readings (2 or fewer degrees of freedom), so Monte Carlo draws ${sourceLabels.length === 1 ? 'it' : 'them'} from a Student t whose variance is infinite: the Monte Carlo standard deviation means nothing. Its coverage interval and the GUM result stand; more readings remove this.`;
+      const step = `Step ${warning.stepIndex + 1}: `;
+      // Per-use sources are labelled "Step n: …" already; the warning says the step once.
+      const sourceLabels = warning.params.sourceLabels.map((label) =>
+        label.startsWith(step) ? label.slice(step.length) : label,
+      );
+      return `${step}${sourceLabels.join('; ')} ${sourceLabels.length === 1 ? 'rests' : 'rest'} on 3 or fewer readings (2 or fewer degrees of freedom), so Monte Carlo draws ${sourceLabels.length === 1 ? 'it' : 'them'} from a Student t whose variance is infinite: the Monte Carlo standard deviation means nothing. Its coverage interval and the GUM result stand; more readings remove this.`;
     }
     case 'dominantStep': {
       const { stepKind } = warning.params;

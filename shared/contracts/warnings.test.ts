@@ -92,3 +92,27 @@ describe('the lab policy over warnings', () => {
     expect(warningsUnderPolicy([belowMinimum, recorded], { minimumWeightRule: false })).toEqual([recorded]);
   });
 });
+
+// JCGM 101:2008 6.4.9 (from memory): a t input's variance ν/(ν − 2)·s² exists only for ν > 2.
+describe('the infinite Monte Carlo variance warning', () => {
+  it('names the sources of the step and says what still holds, in a chemist’s words', () => {
+    const plan = JSON.parse(
+      readFileSync(new URL('../../tests/fixtures/plans/lead-standard-from-nitrate.json', import.meta.url), 'utf8'),
+    ) as { steps: { balance?: Record<string, unknown>; extraSources?: unknown[] }[] };
+    (plan.steps[0].balance as Record<string, unknown>).repeatabilityReadings = 3;
+    const warnings = evaluatePlan(plan as never).warnings;
+    expect(warnings).toHaveLength(1);
+    const [warning] = warnings;
+    expect(warning).toMatchObject({
+      code: 'infiniteMonteCarloVariance',
+      stepIndex: 0,
+      params: { degreesOfFreedom: 2 },
+    });
+    const words = warningText(warning);
+    expect(words).toMatch(
+      /^Step 1: Balance B-01 repeatability \(gross reading\); Balance B-01 repeatability \(tare reading\) rest on 3 or fewer readings/,
+    );
+    expect(words).toMatch(/Student t whose variance is infinite: the Monte Carlo standard deviation means nothing/);
+    expect(storedWarningSchema.parse(warning)).toEqual(warning);
+  });
+});

@@ -9,7 +9,8 @@ import { itemLabel, type StepContext } from './step-context';
 /**
  * Net mass weighed by difference on a balance, in g:
  * m = (m₀ + Σ e_gross − Σ e_tare)·(1 + δ_sensitivity), where each reading carries repeatability
- * (normal, s), readability (rectangular, d/2) and linearity (rectangular, a), drawn afresh per reading,
+ * (normal, s; or Type A, Student t with ν = n − 1 when the balance gives the n readings behind s), readability
+ * (rectangular, d/2) and linearity (rectangular, a), drawn afresh per reading,
  * and δ_sensitivity (normal, U_rel/k) is one source for the balance, shared by all its weighings.
  * Warns when m is below the USP <41> minimum weight; @throws PlanError when the load exceeds the capacity.
  */
@@ -45,12 +46,7 @@ export function weighByDifference(
   }
   const readingErrors = (reading: 'gross' | 'tare') => {
     const parts: [string, SourceCategory, Distribution, number][] = [
-      [
-        'repeatability',
-        'balanceRepeatability',
-        { shape: 'normal', standardUncertainty: balance.repeatabilityG },
-        balance.repeatabilityG,
-      ],
+      ['repeatability', 'balanceRepeatability', repeatabilityDistribution(balance), balance.repeatabilityG],
       [
         'readability',
         'balanceReadability',
@@ -100,4 +96,19 @@ export function weighByDifference(
     net = builder.multiply(net, builder.add(builder.constant(1), deviation));
   }
   return net;
+}
+
+/**
+ * The repeatability s of one reading: Type A from the n readings it was computed from, a single new reading
+ * (u = s, ν = n − 1, JCGM 100:2008 4.2.6), when the balance gives n; otherwise normal with u = s, taken as exact.
+ */
+function repeatabilityDistribution(balance: Balance): Distribution {
+  return balance.repeatabilityReadings === undefined
+    ? { shape: 'normal', standardUncertainty: balance.repeatabilityG }
+    : {
+        shape: 'studentT',
+        standardDeviation: balance.repeatabilityG,
+        observations: balance.repeatabilityReadings,
+        meanOfReadings: false,
+      };
 }

@@ -33,6 +33,16 @@ export const balanceSchema = z
     readabilityG: nonNegative('The readability d'),
     /** Standard deviation s of repeated readings. */
     repeatabilityG: nonNegative('The repeatability s'),
+    /**
+     * Number n of readings s was computed from: when given, each reading's repeatability is a Type A source with
+     * ν = n − 1 (JCGM 100:2008 4.2), so Welch–Satterthwaite counts it and Monte Carlo draws it from t_ν; when absent,
+     * s is taken as exactly known (normal, ν = ∞).
+     */
+    repeatabilityReadings: z
+      .number()
+      .int('The number of readings behind s must be a whole number.')
+      .min(2, 'The number of readings behind s must be at least 2.')
+      .optional(),
     /** Linearity ± a, per reading, rectangular. */
     linearityG: nonNegative('The linearity'),
     /** Relative expanded uncertainty of the sensitivity (calibration) with its k, shared by every weighing on this balance. */

@@ -36,6 +36,12 @@ export function BalanceFields() {
         registration={register('data.repeatabilityG', AS_NUMBER)}
       />
       <QuantityField
+        label="Readings behind s (optional)"
+        hint="How many weighings s comes from; counted as a Type A evaluation with n − 1 degrees of freedom. Leave empty if not known."
+        error={error?.repeatabilityReadings?.message}
+        registration={register('data.repeatabilityReadings', AS_NUMBER)}
+      />
+      <QuantityField
         label="Linearity (±)"
         unit="g"
         hint="From the calibration certificate"

@@ -21,7 +21,7 @@ const material = { ...identity, name: '', lot: '', supplier: '', hazardNotes: ''
 
 /** What a new item's form starts with: empty boxes, and the usual choices (k = 2, class A, 20 °C). */
 const NEW_ITEM_DATA: Record<EquipmentKind, Record<string, unknown>> = {
-  balance: { ...identity, ...undated, sensitivityCoverageFactor: 2 },
+  balance: { ...identity, ...undated, repeatabilityReadings: null, sensitivityCoverageFactor: 2 },
   flask: { ...identity, ...undated, glassClass: 'A', toleranceDistribution: null, calibrationTemperatureC: 20 },
   'glass-pipette': {
     ...identity,

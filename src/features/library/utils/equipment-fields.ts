@@ -80,6 +80,7 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
     { key: 'capacityG', label: 'Capacity', unit: 'g' },
     { key: 'readabilityG', label: 'Readability d', format: gramsAndMilligrams },
     { key: 'repeatabilityG', label: 'Repeatability s', format: gramsAndMilligrams },
+    { key: 'repeatabilityReadings', label: 'Readings behind s', emptyText: 'Not given (s taken as exact)' },
     { key: 'linearityG', label: 'Linearity (±)', format: gramsAndMilligrams },
     {
       key: 'sensitivityRelativeExpanded',

@@ -36,6 +36,12 @@ const calibration: CsvColumn[] = [
   { column: 'calibrated_on', path: ['calibratedOn'], type: 'optional-date', help: 'YYYY-MM-DD' },
   { column: 'calibration_due_on', path: ['calibrationDueOn'], type: 'optional-date', help: 'YYYY-MM-DD' },
 ];
+const optionalNumber = (column: string, help: string, path = [camel(column)]): CsvColumn => ({
+  column,
+  path,
+  type: 'optional-number',
+  help,
+});
 const glassware: CsvColumn[] = [
   ...common,
   num('nominal_ml', 'nominal volume, mL'),
@@ -54,6 +60,12 @@ const glassware: CsvColumn[] = [
     type: 'optional-number',
     help: '°C, default 20',
   },
+  optionalNumber(
+    'calibration_correction_ml',
+    'calibration correction at the nominal volume, mL; empty: the tolerance applies',
+  ),
+  optionalNumber('calibration_expanded_uncertainty_ml', 'U of that correction, mL'),
+  optionalNumber('calibration_coverage_factor', 'k of that U'),
   ...calibration,
 ];
 const material: CsvColumn[] = [
@@ -80,6 +92,10 @@ export const CSV_COLUMNS: Record<EquipmentKind, CsvColumn[]> = {
     num('linearity_g', '± linearity from the certificate, g'),
     num('sensitivity_relative_expanded', 'relative expanded calibration uncertainty, e.g. 0.00002'),
     num('sensitivity_coverage_factor', 'k of that uncertainty'),
+    optionalNumber(
+      'calibration_correction_relative',
+      'relative correction of the indication from the certificate, e.g. 0.00001',
+    ),
     ...calibration,
   ],
   flask: glassware,
@@ -109,7 +125,18 @@ export const CSV_COLUMNS: Record<EquipmentKind, CsvColumn[]> = {
         type: n === 1 ? 'number' : 'optional-number',
         help: `random error (standard deviation) at volume ${n}, µL`,
       },
+      optionalNumber(`correction_ul_${n}`, `calibration correction at volume ${n}, µL`, [
+        'points',
+        n - 1,
+        'correctionUl',
+      ]),
+      optionalNumber(`correction_expanded_ul_${n}`, `U of that correction, µL`, [
+        'points',
+        n - 1,
+        'correctionExpandedUl',
+      ]),
     ]),
+    optionalNumber('calibration_coverage_factor', 'k of the corrections’ U'),
     ...calibration,
   ],
   'solid-material': [

@@ -43,6 +43,10 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         sensitivity: {
           relativeExpandedUncertainty: d.sensitivityRelativeExpanded,
           coverageFactor: d.sensitivityCoverageFactor,
+          // An older revision has no correction field at all: read it as none.
+          ...((d.calibrationCorrectionRelative ?? null) === null
+            ? {}
+            : { relativeCorrection: d.calibrationCorrectionRelative as number, ...calibrationOrigin(d) }),
         },
       };
     }
@@ -59,6 +63,7 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         toleranceDistribution: d.toleranceDistribution ?? undefined,
         fillRepeatabilityMl: d.fillRepeatabilityMl,
         calibrationTemperatureC: d.calibrationTemperatureC,
+        ...glasswareCalibration(d),
       };
     }
     case 'piston-pipette': {
@@ -75,6 +80,7 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         })),
         systematicErrorDistribution: 'rectangular',
         calibrationTemperatureC: 20,
+        ...pistonCalibration(d),
       };
     }
     case 'solid-material': {
@@ -110,15 +116,65 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
   }
 }
 
+/** The certificate and date a calibration result names in the budget. */
+function calibrationOrigin(d: { certificateReference: string; calibratedOn: string | null }) {
+  return {
+    ...(d.certificateReference ? { certificate: d.certificateReference } : {}),
+    ...(d.calibratedOn ? { date: d.calibratedOn } : {}),
+  };
+}
+
+/** A flask's or glass pipette's calibration result, when all of it is entered (older revisions have none). */
+function glasswareCalibration(d: GlasswareData): Pick<VolumetricFlask, 'calibration'> {
+  const correctionMl = d.calibrationCorrectionMl ?? null;
+  const expandedUncertaintyMl = d.calibrationExpandedUncertaintyMl ?? null;
+  const coverageFactor = d.calibrationCoverageFactor ?? null;
+  if (correctionMl === null || expandedUncertaintyMl === null || coverageFactor === null) return {};
+  return { calibration: { correctionMl, expandedUncertaintyMl, coverageFactor, ...calibrationOrigin(d) } };
+}
+
+/** A piston pipette's calibration corrections, at the volumes where they were entered. */
+function pistonCalibration(d: PistonPipetteData): Pick<PistonPipette, 'calibration'> {
+  const coverageFactor = d.calibrationCoverageFactor ?? null;
+  const points = d.points.flatMap((p) =>
+    p.correctionUl == null || p.correctionExpandedUl == null || coverageFactor === null
+      ? []
+      : [
+          {
+            volumeUl: p.volumeUl,
+            correctionUl: p.correctionUl,
+            expandedUncertaintyUl: p.correctionExpandedUl,
+            coverageFactor,
+          },
+        ],
+  );
+  return points.length === 0 ? {} : { calibration: { points, ...calibrationOrigin(d) } };
+}
+
 /** The plan settings a lab's policy sets; the plan keeps its own output unit and lab temperature. */
 export function policySettings(
   policy: LabPolicy,
-): Pick<PlanInput['settings'], 'coverage' | 'defaultGlasswareDistribution' | 'temperatureHalfRangeC'> {
+): Pick<
+  PlanInput['settings'],
+  | 'coverage'
+  | 'defaultGlasswareDistribution'
+  | 'temperatureHalfRangeC'
+  | 'referenceTemperatureC'
+  | 'temperatureTreatment'
+  | 'operationTemperatureHalfRangeC'
+  | 'linearityCorrelation'
+  | 'linearityCorrelationNetFraction'
+> {
   return {
     coverage:
       policy.coverage.mode === 'probability' ? { probability: policy.coverage.probability } : { k: policy.coverage.k },
     defaultGlasswareDistribution: policy.glasswareDistribution,
     temperatureHalfRangeC: policy.temperatureHalfRangeC,
+    referenceTemperatureC: policy.referenceTemperatureC,
+    temperatureTreatment: policy.temperatureTreatment,
+    operationTemperatureHalfRangeC: policy.operationTemperatureHalfRangeC,
+    linearityCorrelation: policy.linearityCorrelation,
+    linearityCorrelationNetFraction: policy.linearityCorrelationNetFraction,
   };
 }
 

@@ -67,6 +67,16 @@ const DATES_ORDER_MESSAGE = {
   path: ['calibrationDueOn'],
 };
 
+/**
+ * A calibration result, when entered, is complete: the correction with its U, its k and the calibration date
+ * (the engine applies the correction and uses U/k in place of the tolerance; the budget names the certificate
+ * and date).
+ */
+const CALIBRATION_INCOMPLETE =
+  'Give the calibration correction with its U, its k and the calibration date, or leave all of them empty.';
+const calibrationComplete = (parts: unknown[], calibratedOn: string | null) =>
+  parts.every((part) => part === null) || (parts.every((part) => part !== null) && calibratedOn !== null);
+
 export const toleranceDistributionSchema = z.enum(['triangular', 'rectangular'], {
   message: 'Choose triangular or rectangular.',
 });
@@ -89,11 +99,17 @@ export const balanceDataSchema = z
     /** Relative expanded uncertainty of the calibration (sensitivity), e.g. 0.00002 for 20 ppm, with its k. */
     sensitivityRelativeExpanded: nonNegative('the relative calibration uncertainty'),
     sensitivityCoverageFactor: positive('the coverage factor k'),
+    /** Relative correction of the indication from the calibration certificate (e.g. 0.00001); its U and k are the two above. */
+    calibrationCorrectionRelative: finite('the relative calibration correction').nullable().default(null),
     ...calibrationDates,
   })
   .refine((v) => v.readabilityG < v.capacityG, {
     message: 'The readability must be smaller than the capacity.',
     path: ['readabilityG'],
+  })
+  .refine((v) => calibrationComplete([v.calibrationCorrectionRelative], v.calibratedOn), {
+    message: 'Give the date of the calibration that found this correction.',
+    path: ['calibratedOn'],
   })
   .refine(datesInOrder, DATES_ORDER_MESSAGE);
 export type BalanceData = z.infer<typeof balanceDataSchema>;
@@ -113,18 +129,35 @@ const glasswareShape = {
   calibrationTemperatureC: finite('the calibration temperature')
     .refine((v) => v >= 0 && v <= 40, 'Give a calibration temperature between 0 and 40 °C.')
     .default(20),
+  /** The item's calibration result at its nominal volume; null: the tolerance applies. */
+  calibrationCorrectionMl: finite('the calibration correction').nullable().default(null),
+  calibrationExpandedUncertaintyMl: nonNegative('the calibration uncertainty U').nullable().default(null),
+  calibrationCoverageFactor: positive('the coverage factor k').nullable().default(null),
   ...calibrationDates,
 };
+const glasswareCalibrationComplete = (v: {
+  calibrationCorrectionMl: number | null;
+  calibrationExpandedUncertaintyMl: number | null;
+  calibrationCoverageFactor: number | null;
+  calibratedOn: string | null;
+}) =>
+  calibrationComplete(
+    [v.calibrationCorrectionMl, v.calibrationExpandedUncertaintyMl, v.calibrationCoverageFactor],
+    v.calibratedOn,
+  );
+const GLASSWARE_CALIBRATION_MESSAGE = { message: CALIBRATION_INCOMPLETE, path: ['calibrationCorrectionMl'] };
 const toleranceBelowNominal = (v: { toleranceMl: number; nominalMl: number }) => v.toleranceMl < v.nominalMl;
 const TOLERANCE_MESSAGE = { message: 'The tolerance must be smaller than the nominal volume.', path: ['toleranceMl'] };
 
 export const flaskDataSchema = z
   .object(glasswareShape)
   .refine(toleranceBelowNominal, TOLERANCE_MESSAGE)
+  .refine(glasswareCalibrationComplete, GLASSWARE_CALIBRATION_MESSAGE)
   .refine(datesInOrder, DATES_ORDER_MESSAGE);
 export const glassPipetteDataSchema = z
   .object(glasswareShape)
   .refine(toleranceBelowNominal, TOLERANCE_MESSAGE)
+  .refine(glasswareCalibrationComplete, GLASSWARE_CALIBRATION_MESSAGE)
   .refine(datesInOrder, DATES_ORDER_MESSAGE);
 export type GlasswareData = z.infer<typeof flaskDataSchema>;
 
@@ -133,6 +166,9 @@ export const pistonPointSchema = z.object({
   volumeUl: positive('the set volume'),
   systematicErrorUl: nonNegative('the systematic error'),
   randomErrorUl: nonNegative('the random error'),
+  /** Calibration result at this volume: the correction (µL) with its U; k is the pipette's calibrationCoverageFactor. */
+  correctionUl: finite('the calibration correction').nullable().default(null),
+  correctionExpandedUl: nonNegative('the calibration uncertainty U').nullable().default(null),
 });
 
 export const pistonPipetteDataSchema = z
@@ -143,6 +179,8 @@ export const pistonPipetteDataSchema = z
     maxVolumeUl: positive('the nominal (largest) volume'),
     errorBasis: z.enum(['iso-8655', 'own'], { message: 'Choose ISO 8655-2 limits or own calibration.' }),
     points: z.array(pistonPointSchema).min(1, 'Give the errors at one volume at least.').max(10),
+    /** k of the calibration corrections' U; null when no correction is entered. */
+    calibrationCoverageFactor: positive('the coverage factor k').nullable().default(null),
     ...calibrationDates,
   })
   .refine((v) => v.minVolumeUl <= v.maxVolumeUl, {
@@ -157,6 +195,19 @@ export const pistonPipetteDataSchema = z
     message: 'Every calibration volume must lie within the pipette’s range.',
     path: ['points'],
   })
+  .refine(
+    (v) => {
+      const corrected = v.points.filter((p) => p.correctionUl !== null || p.correctionExpandedUl !== null);
+      return (
+        corrected.length === 0 ||
+        calibrationComplete(
+          [...corrected.flatMap((p) => [p.correctionUl, p.correctionExpandedUl]), v.calibrationCoverageFactor],
+          v.calibratedOn,
+        )
+      );
+    },
+    { message: CALIBRATION_INCOMPLETE, path: ['points'] },
+  )
   .refine(datesInOrder, DATES_ORDER_MESSAGE);
 export type PistonPipetteData = z.infer<typeof pistonPipetteDataSchema>;
 
@@ -339,6 +390,26 @@ export const labPolicySchema = z.object({
     'Give a half-range of at most 20 °C.',
   ),
   minimumWeightRule: z.boolean(),
+  // Fields added later carry defaults, so a policy stored before them still reads (as today's treatment).
+  /** Temperature the concentrations are stated at; volumes are corrected to it. */
+  referenceTemperatureC: finite('the reference temperature')
+    .refine((v) => v >= 0 && v <= 40, 'Give a reference temperature between 0 and 40 °C.')
+    .default(20),
+  /** 'perUse': an independent temperature effect per use; 'sharedLab': one shared lab deviation plus a per-use difference. */
+  temperatureTreatment: z
+    .enum(['perUse', 'sharedLab'], { message: 'Choose independent per use, or one shared lab temperature.' })
+    .default('perUse'),
+  operationTemperatureHalfRangeC: nonNegative('the per-operation half-range')
+    .refine((v) => v <= 20, 'Give a half-range of at most 20 °C.')
+    .default(0.5),
+  /** Correlation of the linearity errors of the tare and gross readings of one weighing; 0 = independent. */
+  linearityCorrelation: finite('the linearity correlation')
+    .refine((v) => v >= 0 && v <= 1, 'Give a correlation between 0 and 1.')
+    .default(0),
+  /** The correlation applies when the net mass is at most this fraction of the balance's capacity. */
+  linearityCorrelationNetFraction: finite('the fraction of the capacity')
+    .refine((v) => v > 0 && v <= 1, 'Give a fraction of the capacity above 0 and at most 1 (e.g. 0.1 for 10 %).')
+    .default(0.1),
 });
 export type LabPolicy = z.infer<typeof labPolicySchema>;
 
@@ -353,6 +424,11 @@ export const DEFAULT_LAB_POLICY: LabPolicy = {
   glasswareDistribution: 'triangular',
   temperatureHalfRangeC: 4,
   minimumWeightRule: true,
+  referenceTemperatureC: 20,
+  temperatureTreatment: 'perUse',
+  operationTemperatureHalfRangeC: 0.5,
+  linearityCorrelation: 0,
+  linearityCorrelationNetFraction: 0.1,
 };
 
 export const importRequestSchema = z.object({

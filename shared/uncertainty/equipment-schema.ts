@@ -24,6 +24,13 @@ const itemFields = {
   revisionId: z.string().optional(),
 };
 
+/** Where a calibration result comes from, for its budget label. */
+const calibrationSourceFields = {
+  certificate: z.string().optional(),
+  /** Calibration date, YYYY-MM-DD. */
+  date: z.string().optional(),
+};
+
 export const balanceSchema = z
   .object({
     kind: z.literal('balance'),
@@ -50,6 +57,12 @@ export const balanceSchema = z
       .object({
         relativeExpandedUncertainty: nonNegative('The relative sensitivity uncertainty'),
         coverageFactor: positive('The coverage factor k'),
+        /**
+         * Relative correction of the indication from the calibration certificate (true = indication·(1 + c)).
+         * When given, the sensitivity source is this calibration result: estimate c, normal with the U and k above.
+         */
+        relativeCorrection: z.number().finite().optional(),
+        ...calibrationSourceFields,
       })
       .strict()
       .optional(),
@@ -67,6 +80,16 @@ const glasswareFields = {
   /** Standard deviation of filling to the mark, per use. */
   fillRepeatabilityMl: nonNegative('The fill repeatability').default(0),
   calibrationTemperatureC: z.number().default(20),
+  /** The item's calibration result; when given it replaces the tolerance: V = V₀ + correction, u = U/k (normal). */
+  calibration: z
+    .object({
+      correctionMl: z.number().finite(),
+      expandedUncertaintyMl: nonNegative('The calibration uncertainty'),
+      coverageFactor: positive('The coverage factor k'),
+      ...calibrationSourceFields,
+    })
+    .strict()
+    .optional(),
 };
 
 export const volumetricFlaskSchema = z.object({ kind: z.literal('volumetricFlask'), ...glasswareFields }).strict();
@@ -103,6 +126,29 @@ export const pistonPipetteSchema = z
       .min(1, 'Give the maximum permissible errors for at least one volume.'),
     systematicErrorDistribution: z.enum(['rectangular', 'triangular']).default('rectangular'),
     calibrationTemperatureC: z.number().default(20),
+    /**
+     * Calibration results: the correction (µL) at each calibrated volume with its U and k. At a set volume within
+     * the calibrated volumes (interpolated linearly between them) the correction replaces the systematic error;
+     * outside them the maximum permissible systematic error applies.
+     */
+    calibration: z
+      .object({
+        points: z
+          .array(
+            z
+              .object({
+                volumeUl: positive('The calibrated volume'),
+                correctionUl: z.number().finite(),
+                expandedUncertaintyUl: nonNegative('The calibration uncertainty'),
+                coverageFactor: positive('The coverage factor k'),
+              })
+              .strict(),
+          )
+          .min(1, 'Give the correction at one volume at least.'),
+        ...calibrationSourceFields,
+      })
+      .strict()
+      .optional(),
   })
   .strict();
 

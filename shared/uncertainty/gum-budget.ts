@@ -162,6 +162,7 @@ export function propagate(model: CompiledModel, coverage: CoverageSetting): Budg
       unit: model.outputUnit,
       coverageFactor,
       coverageProbability,
+      referenceTemperatureC: model.referenceTemperatureC,
     }),
     warnings: model.warnings,
   };

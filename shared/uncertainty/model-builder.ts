@@ -119,9 +119,15 @@ export class ModelBuilder {
     return entry.operation === 'constant' ? entry.value : undefined;
   }
 
-  build(outputNode: NodeReference, outputUnit: string, measurand: string): CompiledModel {
+  build(
+    outputNode: NodeReference,
+    outputUnit: string,
+    measurand: string,
+    referenceTemperatureC?: number,
+  ): CompiledModel {
     return {
       modelFormat: 'dilutrace-model/1',
+      ...(referenceTemperatureC === undefined ? {} : { referenceTemperatureC }),
       sources: this.sources.map((source) => ({ ...source, stepIndices: [...source.stepIndices] })),
       nodes: [...this.nodes],
       outputNode,

@@ -17,6 +17,7 @@ export const SOURCE_CATEGORIES = [
   'atomicWeight',
   'density',
   'userDefined',
+  'calibrationCorrection',
 ] as const;
 export type SourceCategory = (typeof SOURCE_CATEGORIES)[number];
 
@@ -71,6 +72,8 @@ export interface CompiledModel {
   outputUnit: string;
   /** What the output is, e.g. 'c(Pb)'. */
   measurand: string;
+  /** Temperature (°C) the output is stated at, for a quantity per volume; absent for a mass fraction or molality. */
+  referenceTemperatureC?: number;
   checkpoints: Checkpoint[];
   warnings: EngineWarning[];
 }

@@ -7,7 +7,7 @@ import { ModelBuilder, type NodeReference } from './model-builder';
 import type { CompiledModel } from './model-types';
 import { parsePlan } from './parse-plan';
 import { PlanError } from './plan-error';
-import type { Plan, PlanInput, PlanStep } from './plan-schema';
+import { settingsWithDefaults, type Plan, type PlanInput, type PlanStep } from './plan-schema';
 import type { StepContext } from './step-context';
 import { unitOf } from './units';
 import { glasswareVolume, pistonVolume } from './volume-delivery';
@@ -58,11 +58,12 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
   };
   const solutionDensity = solutionDensityNode(builder, plan);
 
+  const settings = settingsWithDefaults(plan.settings);
   let state = { kind: 'nothing' } as ChainState;
   plan.steps.forEach((step, stepIndex) => {
     const context: StepContext = {
       builder,
-      settings: plan.settings,
+      settings,
       atomicWeights,
       stepIndex,
       path: ['steps', stepIndex],
@@ -90,7 +91,10 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
   const symbol = { massConcentration: 'c', amountConcentration: 'c', massFraction: 'w', molality: 'b' }[
     output.dimension
   ];
-  return builder.build(outputNode, output.name, `${symbol}(${analyteSymbol})`);
+  // A quantity per volume is stated at the reference temperature its volumes were corrected to.
+  const perVolume = output.dimension === 'massConcentration' || output.dimension === 'amountConcentration';
+  const referenceTemperatureC = perVolume ? settings.referenceTemperatureC : undefined;
+  return builder.build(outputNode, output.name, `${symbol}(${analyteSymbol})`, referenceTemperatureC);
 }
 
 interface SharedNodes {

@@ -126,10 +126,34 @@ export const settingsSchema = z
   .object({
     /** Used for the density of water (Tanaka et al. 2001). */
     labTemperatureC: z.number().min(0).max(40).default(20),
-    /** Half-range of the lab temperature about the glassware's calibration temperature; rectangular. */
+    /** Half-range of the actual temperature about labTemperatureC; rectangular. */
     temperatureHalfRangeC: nonNegative('The temperature half-range').default(3),
     /** Volumetric expansion coefficient of the (aqueous) solution. */
     solutionExpansionPerC: nonNegative('The expansion coefficient').default(2.1e-4),
+    /** Temperature at which the concentration is stated (lab policy; default 20 °C); volumes are corrected to it. */
+    referenceTemperatureC: z.number().min(0).max(40).optional(),
+    /** Cubic expansion coefficient of the glassware (default 1×10⁻⁵ K⁻¹, borosilicate 3.3). */
+    glassExpansionPerC: nonNegative('The glass expansion coefficient').optional(),
+    /**
+     * 'perUse' (default): each volume has its own temperature deviation over ± temperatureHalfRangeC.
+     * 'sharedLab': one lab-temperature deviation over ± temperatureHalfRangeC shared by every volume, plus a
+     * per-use difference over ± operationTemperatureHalfRangeC.
+     */
+    temperatureTreatment: z.enum(['perUse', 'sharedLab']).optional(),
+    /** Half-range of one operation's temperature about the lab's, rectangular, with 'sharedLab' (default 0.5 °C). */
+    operationTemperatureHalfRangeC: nonNegative('The per-operation temperature half-range').optional(),
+    /** Correlation r (0–1, default 0) of the linearity errors of the tare and gross readings of one weighing. */
+    linearityCorrelation: z
+      .number()
+      .min(0, 'The linearity correlation lies between 0 and 1.')
+      .max(1, 'The linearity correlation lies between 0 and 1.')
+      .optional(),
+    /** The correlation applies when the net mass is at most this fraction of the balance's capacity (default 0.1). */
+    linearityCorrelationNetFraction: z
+      .number()
+      .gt(0, 'The fraction of the capacity lies above 0 and at most 1.')
+      .max(1, 'The fraction of the capacity lies above 0 and at most 1.')
+      .optional(),
     coverage: coverageSchema.default({ probability: 0.9545 }),
     defaultGlasswareDistribution: z.enum(['triangular', 'rectangular']).default('triangular'),
     outputUnit: z.enum(concentrationUnitNames, {
@@ -167,3 +191,35 @@ export const planSchema = z
 export type Plan = z.infer<typeof planSchema>;
 export type PlanInput = z.input<typeof planSchema>;
 export type PlanStep = Plan['steps'][number];
+
+/**
+ * Defaults of the settings added after plans were first stored. They are filled in where the engine reads the
+ * settings (settingsWithDefaults), not by the schema, so a stored plan decodes to exactly what was stored.
+ */
+const LATER_SETTING_DEFAULTS = {
+  referenceTemperatureC: 20,
+  glassExpansionPerC: 1e-5,
+  temperatureTreatment: 'perUse',
+  operationTemperatureHalfRangeC: 0.5,
+  linearityCorrelation: 0,
+  linearityCorrelationNetFraction: 0.1,
+} as const;
+
+export type EngineSettings = Plan['settings'] & {
+  [Key in keyof typeof LATER_SETTING_DEFAULTS]-?: NonNullable<Plan['settings'][Key]>;
+};
+
+/** The plan's settings with every later setting filled in from its default. */
+export function settingsWithDefaults(settings: Plan['settings']): EngineSettings {
+  return {
+    ...settings,
+    referenceTemperatureC: settings.referenceTemperatureC ?? LATER_SETTING_DEFAULTS.referenceTemperatureC,
+    glassExpansionPerC: settings.glassExpansionPerC ?? LATER_SETTING_DEFAULTS.glassExpansionPerC,
+    temperatureTreatment: settings.temperatureTreatment ?? LATER_SETTING_DEFAULTS.temperatureTreatment,
+    operationTemperatureHalfRangeC:
+      settings.operationTemperatureHalfRangeC ?? LATER_SETTING_DEFAULTS.operationTemperatureHalfRangeC,
+    linearityCorrelation: settings.linearityCorrelation ?? LATER_SETTING_DEFAULTS.linearityCorrelation,
+    linearityCorrelationNetFraction:
+      settings.linearityCorrelationNetFraction ?? LATER_SETTING_DEFAULTS.linearityCorrelationNetFraction,
+  };
+}

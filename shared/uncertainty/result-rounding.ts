@@ -46,8 +46,9 @@ function roundToDecimals(value: number, decimals: number): number {
 
 /**
  * The sentence that states a result, e.g.
- * "c(Pb) = (10.012 ± 0.054) mg/L, k = 2.00, coverage probability ≈ 95.45 %".
- * The expanded uncertainty is rounded to two significant digits and the value to match.
+ * "c(Pb) = (10.012 ± 0.054) mg/L at 20 °C, k = 2.00, coverage probability ≈ 95.45 %".
+ * The expanded uncertainty is rounded to two significant digits and the value to match; a quantity per volume
+ * names the reference temperature it is stated at.
  */
 export function formatResultStatement(input: {
   measurand: string;
@@ -56,8 +57,10 @@ export function formatResultStatement(input: {
   unit: string;
   coverageFactor: number;
   coverageProbability: number;
+  referenceTemperatureC?: number;
 }): string {
   const rounded = roundToUncertainty(input.value, input.expandedUncertainty);
   const percent = (input.coverageProbability * 100).toFixed(2);
-  return `${input.measurand} = (${rounded.valueText} ± ${rounded.uncertaintyText}) ${input.unit}, k = ${input.coverageFactor.toFixed(2)}, coverage probability ≈ ${percent} %`;
+  const temperature = input.referenceTemperatureC === undefined ? '' : ` at ${input.referenceTemperatureC} °C`;
+  return `${input.measurand} = (${rounded.valueText} ± ${rounded.uncertaintyText}) ${input.unit}${temperature}, k = ${input.coverageFactor.toFixed(2)}, coverage probability ≈ ${percent} %`;
 }

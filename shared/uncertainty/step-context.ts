@@ -1,12 +1,12 @@
 import type { AtomicWeightTable } from './atomic-weights';
 import type { ModelBuilder } from './model-builder';
 import type { PlanPathSegment } from './plan-error';
-import type { Plan } from './plan-schema';
+import type { EngineSettings } from './plan-schema';
 
 /** What every step builder needs: the model being recorded, the plan's settings, and where the step sits. */
 export interface StepContext {
   builder: ModelBuilder;
-  settings: Plan['settings'];
+  settings: EngineSettings;
   atomicWeights: AtomicWeightTable;
   stepIndex: number;
   path: PlanPathSegment[];

@@ -1,32 +1,94 @@
+import { calibrationCorrectionLabel } from './calibration-label';
 import type { GlassPipette, PistonPipette, VolumetricFlask } from './equipment-schema';
 import type { NodeReference } from './model-builder';
 import { PlanError } from './plan-error';
 import { itemLabel, type StepContext } from './step-context';
 
 /**
- * Temperature effect on a delivered or contained volume V (mL): δ_T = V·γ·ΔT with ΔT rectangular
- * over ± the lab's half-range, drawn afresh for each use (JCGM 100:2008 4.3.7; EURACHEM/CITAC CG4 3rd ed. A1).
+ * Factor from a volume measured at the lab temperature t_lab to the volume the same liquid occupies at the
+ * reference temperature t_ref: f = (1 + γ_container·(t_lab − t_cal))·(1 − γ_liquid·(t_lab − t_ref)).
+ * The container term is the glassware's cubic expansion since its calibration at t_cal (γ_container = 0 for a
+ * piston pipette, whose displacement does not follow the glass); the liquid term takes the liquid from t_lab to
+ * t_ref (first order in γ·Δt, EURACHEM/CITAC CG4 3rd ed. A1; JCGM 100:2008 4.3.7). f = 1 when all three agree.
+ * @example referenceVolumeFactor({ labTemperatureC: 25, referenceTemperatureC: 20, solutionExpansionPerC: 2.1e-4 }, 1e-5, 20) // 0.9990498…
  */
-function temperatureEffect(context: StepContext, volumeMl: number, label: string): NodeReference | undefined {
-  const halfWidth = volumeMl * context.settings.solutionExpansionPerC * context.settings.temperatureHalfRangeC;
-  if (halfWidth === 0) return undefined;
-  return context.builder.source({
-    id: `step:${context.stepIndex}:temperature`,
-    label: `Step ${context.stepIndex + 1}: ${label} temperature (±${context.settings.temperatureHalfRangeC} °C)`,
-    category: 'temperature',
-    estimate: 0,
-    unit: 'mL',
-    distribution: { shape: 'rectangular', halfWidth },
-    sharing: 'use',
-    stepIndex: context.stepIndex,
-    path: [...context.path, 'settings'],
-  });
+export function referenceVolumeFactor(
+  settings: Pick<StepContext['settings'], 'labTemperatureC' | 'referenceTemperatureC' | 'solutionExpansionPerC'>,
+  containerExpansionPerC: number,
+  calibrationTemperatureC: number,
+): number {
+  const { labTemperatureC: lab, referenceTemperatureC: reference, solutionExpansionPerC: liquid } = settings;
+  return (1 + containerExpansionPerC * (lab - calibrationTemperatureC)) * (1 - liquid * (lab - reference));
 }
 
 /**
- * Volume of a one-mark flask or glass pipette, in mL: V = V₀ + δ_tolerance + δ_fill + δ_T.
- * δ_tolerance (triangular or rectangular over ± the class tolerance, ISO 1042:1998 / ISO 648:2008) belongs to the item
- * and is shared by every use; δ_fill (normal, fill repeatability) and δ_T are per use.
+ * Temperature effect on a volume V (mL): V·γ·δt, δt the liquid's deviation from the lab temperature
+ * (JCGM 100:2008 4.3.7; EURACHEM/CITAC CG4 3rd ed. A1, which leaves out the glass's much smaller expansion here).
+ * 'perUse': δt rectangular over ± temperatureHalfRangeC, drawn afresh for each use.
+ * 'sharedLab': δt = δt_lab + δt_use, one lab deviation (rectangular ± temperatureHalfRangeC, source
+ * 'lab:temperature') shared by every volume of the plan, plus a per-use difference (rectangular
+ * ± operationTemperatureHalfRangeC); the shared part cancels in a ratio of volumes such as c₀·V_pipette/V_flask.
+ */
+function temperatureTerms(context: StepContext, volumeMl: number, name: string): NodeReference[] {
+  const { builder, settings, stepIndex } = context;
+  const expansion = volumeMl * settings.solutionExpansionPerC;
+  const terms: NodeReference[] = [];
+  const perUse = (halfRangeC: number, words: string) => {
+    if (expansion * halfRangeC === 0) return;
+    terms.push(
+      builder.source({
+        id: `step:${stepIndex}:temperature`,
+        label: `Step ${stepIndex + 1}: ${name} ${words} (±${halfRangeC} °C)`,
+        category: 'temperature',
+        estimate: 0,
+        unit: 'mL',
+        distribution: { shape: 'rectangular', halfWidth: expansion * halfRangeC },
+        sharing: 'use',
+        stepIndex,
+        path: [...context.path, 'settings'],
+      }),
+    );
+  };
+  if (settings.temperatureTreatment === 'perUse') {
+    perUse(settings.temperatureHalfRangeC, 'temperature');
+    return terms;
+  }
+  if (expansion * settings.temperatureHalfRangeC > 0) {
+    const labDeviation = builder.source({
+      id: 'lab:temperature',
+      label: `Lab temperature (±${settings.temperatureHalfRangeC} °C about ${settings.labTemperatureC} °C), shared by every volume`,
+      category: 'temperature',
+      estimate: 0,
+      unit: '°C',
+      distribution: { shape: 'rectangular', halfWidth: settings.temperatureHalfRangeC },
+      sharing: 'item',
+      stepIndex,
+      path: ['settings', 'temperatureHalfRangeC'],
+    });
+    terms.push(builder.scale(labDeviation, expansion));
+  }
+  perUse(settings.operationTemperatureHalfRangeC, 'temperature difference from the lab');
+  return terms;
+}
+
+/** V = (V₀ + Σ item and per-use deviations)·f + Σ V·γ·δt, with f from referenceVolumeFactor. */
+function referenceVolume(
+  context: StepContext,
+  terms: NodeReference[],
+  volumeMl: number,
+  factor: number,
+  name: string,
+): NodeReference {
+  const { builder } = context;
+  return builder.sum([builder.scale(builder.sum(terms), factor), ...temperatureTerms(context, volumeMl, name)]);
+}
+
+/**
+ * Volume of a one-mark flask or glass pipette at the reference temperature, in mL:
+ * V = (V₀ + δ_item + δ_fill)·f + δ_T (f and δ_T: referenceVolumeFactor and temperatureTerms).
+ * δ_item belongs to the item and is shared by every use: its calibration result when one is entered (estimate the
+ * certificate's correction, normal with u = U/k, JCGM 100:2008 4.3.3), otherwise its class tolerance (triangular
+ * or rectangular over ± the tolerance, ISO 1042:1998 / ISO 648:2008). δ_fill (normal, fill repeatability) is per use.
  */
 export function glasswareVolume(
   context: StepContext,
@@ -36,7 +98,27 @@ export function glasswareVolume(
   const { builder, stepIndex, path } = context;
   const name = itemLabel(item.kind === 'volumetricFlask' ? 'Flask' : 'Pipette', item.itemId, `${item.nominalMl} mL`);
   const terms: NodeReference[] = [builder.constant(item.nominalMl)];
-  if (item.toleranceMl > 0) {
+  const calibration = item.calibration;
+  if (calibration !== undefined) {
+    terms.push(
+      builder.source({
+        id: `item:${item.itemId}:calibration`,
+        label: calibrationCorrectionLabel(name, calibration.correctionMl, 'mL', calibration),
+        category: 'calibrationCorrection',
+        estimate: calibration.correctionMl,
+        unit: 'mL',
+        distribution: {
+          shape: 'normal',
+          expandedUncertainty: calibration.expandedUncertaintyMl,
+          coverageFactor: calibration.coverageFactor,
+        },
+        sharing: 'item',
+        itemId: item.itemId,
+        stepIndex,
+        path: [...path, field, 'calibration'],
+      }),
+    );
+  } else if (item.toleranceMl > 0) {
     const shape = item.toleranceDistribution ?? context.settings.defaultGlasswareDistribution;
     terms.push(
       builder.source({
@@ -69,9 +151,25 @@ export function glasswareVolume(
       }),
     );
   }
-  const temperature = temperatureEffect(context, item.nominalMl, name);
-  if (temperature !== undefined) terms.push(temperature);
-  return builder.sum(terms);
+  const { settings } = context;
+  const factor = referenceVolumeFactor(settings, settings.glassExpansionPerC, item.calibrationTemperatureC);
+  return referenceVolume(context, terms, item.nominalMl, factor, name);
+}
+
+/**
+ * Values listed at volumes, at the given volume: interpolated linearly between neighbours and held at the
+ * nearest entry beyond the listed range. `points` must be sorted by volume.
+ */
+function interpolateAtVolume(points: { volumeUl: number; values: number[] }[], volumeUl: number): number[] {
+  const first = points[0];
+  const last = points[points.length - 1];
+  if (volumeUl <= first.volumeUl) return first.values;
+  if (volumeUl >= last.volumeUl) return last.values;
+  const upperIndex = points.findIndex((point) => point.volumeUl >= volumeUl);
+  const lower = points[upperIndex - 1];
+  const upper = points[upperIndex];
+  const fraction = (volumeUl - lower.volumeUl) / (upper.volumeUl - lower.volumeUl);
+  return lower.values.map((value, index) => value + fraction * (upper.values[index] - value));
 }
 
 /**
@@ -80,38 +178,52 @@ export function glasswareVolume(
  * entry beyond the listed range.
  */
 export function pistonErrorsUl(pipette: PistonPipette, volumeUl: number): { systematicUl: number; randomUl: number } {
-  const entries = pipette.errorSpecifications
+  const points = pipette.errorSpecifications
     .map((entry) => ({
       volumeUl: entry.volumeUl,
-      systematicUl:
+      values: [
         'absoluteUl' in entry.systematicError
           ? entry.systematicError.absoluteUl
           : (entry.systematicError.percent / 100) * entry.volumeUl,
-      randomUl:
         'absoluteUl' in entry.randomError
           ? entry.randomError.absoluteUl
           : (entry.randomError.percent / 100) * entry.volumeUl,
+      ],
     }))
     .sort((left, right) => left.volumeUl - right.volumeUl);
-  const first = entries[0];
-  const last = entries[entries.length - 1];
-  if (volumeUl <= first.volumeUl) return first;
-  if (volumeUl >= last.volumeUl) return last;
-  const upperIndex = entries.findIndex((entry) => entry.volumeUl >= volumeUl);
-  const lower = entries[upperIndex - 1];
-  const upper = entries[upperIndex];
-  const fraction = (volumeUl - lower.volumeUl) / (upper.volumeUl - lower.volumeUl);
-  return {
-    systematicUl: lower.systematicUl + fraction * (upper.systematicUl - lower.systematicUl),
-    randomUl: lower.randomUl + fraction * (upper.randomUl - lower.randomUl),
-  };
+  const [systematicUl, randomUl] = interpolateAtVolume(points, volumeUl);
+  return { systematicUl, randomUl };
 }
 
 /**
- * Volume delivered by a piston pipette at its set volume, in mL: V = V_set + δ_systematic + δ_random + δ_T.
- * δ_systematic (rectangular by default over ± the maximum permissible systematic error) belongs to the
- * pipette at that set volume and is shared by every use; δ_random (normal, the permissible random error
- * as a standard deviation) and δ_T are per use.
+ * The calibration correction of a piston pipette at a set volume, in µL, with its standard uncertainty U/k:
+ * interpolated linearly between calibrated volumes; undefined outside them (no calibration there).
+ */
+export function pistonCalibrationUl(
+  pipette: PistonPipette,
+  volumeUl: number,
+): { correctionUl: number; standardUncertaintyUl: number } | undefined {
+  const points = (pipette.calibration?.points ?? [])
+    .map((point) => ({
+      volumeUl: point.volumeUl,
+      values: [point.correctionUl, point.expandedUncertaintyUl / point.coverageFactor],
+    }))
+    .sort((left, right) => left.volumeUl - right.volumeUl);
+  if (points.length === 0) return undefined;
+  const margin = 1e-9 * volumeUl;
+  if (volumeUl < points[0].volumeUl - margin || volumeUl > points[points.length - 1].volumeUl + margin)
+    return undefined;
+  const [correctionUl, standardUncertaintyUl] = interpolateAtVolume(points, volumeUl);
+  return { correctionUl, standardUncertaintyUl };
+}
+
+/**
+ * Volume delivered by a piston pipette at its set volume, at the reference temperature, in mL:
+ * V = (V_set + δ_systematic + δ_random)·f + δ_T (f and δ_T: referenceVolumeFactor with no container term,
+ * and temperatureTerms). δ_systematic belongs to the pipette at that set volume and is shared by every use: the
+ * calibration correction at that volume when the pipette was calibrated there (normal, u = U/k), otherwise the
+ * maximum permissible systematic error (rectangular by default, ISO 8655-2:2002). δ_random (normal, the
+ * permissible random error as a standard deviation) is per use.
  * @throws PlanError when the set volume is outside the pipette's range
  */
 export function pistonVolume(context: StepContext, pipette: PistonPipette, volumeMl: number): NodeReference {
@@ -126,8 +238,24 @@ export function pistonVolume(context: StepContext, pipette: PistonPipette, volum
   }
   const name = itemLabel('Piston pipette', pipette.itemId, `${volumeUl} µL`);
   const errors = pistonErrorsUl(pipette, volumeUl);
+  const calibration = pistonCalibrationUl(pipette, volumeUl);
   const terms: NodeReference[] = [builder.constant(volumeMl)];
-  if (errors.systematicUl > 0) {
+  if (calibration !== undefined) {
+    terms.push(
+      builder.source({
+        id: `item:${pipette.itemId}:calibration@${volumeUl}uL`,
+        label: calibrationCorrectionLabel(name, calibration.correctionUl, 'µL', pipette.calibration ?? {}),
+        category: 'calibrationCorrection',
+        estimate: calibration.correctionUl / 1000,
+        unit: 'mL',
+        distribution: { shape: 'normal', standardUncertainty: calibration.standardUncertaintyUl / 1000 },
+        sharing: 'item',
+        itemId: pipette.itemId,
+        stepIndex,
+        path: [...path, 'pipette', 'calibration'],
+      }),
+    );
+  } else if (errors.systematicUl > 0) {
     terms.push(
       builder.source({
         id: `item:${pipette.itemId}:systematic@${volumeUl}uL`,
@@ -159,9 +287,8 @@ export function pistonVolume(context: StepContext, pipette: PistonPipette, volum
       }),
     );
   }
-  const temperature = temperatureEffect(context, volumeMl, name);
-  if (temperature !== undefined) terms.push(temperature);
-  return builder.sum(terms);
+  const factor = referenceVolumeFactor(context.settings, 0, pipette.calibrationTemperatureC);
+  return referenceVolume(context, terms, volumeMl, factor, name);
 }
 
 function round(value: number): number {

@@ -261,10 +261,10 @@ describe('the tolerance library, kept by QA', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Lab policy' }).click();
     await page.getByRole('heading', { level: 1, name: 'Lab policy' }).waitFor();
     await page.getByText('The defaults apply; nobody has changed the policy yet.').waitFor();
-    await page.getByLabel('Half-range around the calibration temperature').fill('3');
+    await page.getByLabel('Half-range around the lab temperature').fill('3');
     await page.getByRole('button', { name: 'Save lab policy' }).click();
     await page.getByText(/^Last changed by .+ on /).waitFor();
-    await expect(page.getByLabel('Half-range around the calibration temperature').inputValue()).resolves.toBe('3');
+    await expect(page.getByLabel('Half-range around the lab temperature').inputValue()).resolves.toBe('3');
     await screenshot(page, 'policy-qa');
     expect(problems).toEqual([]);
   });
@@ -292,7 +292,7 @@ describe('the tolerance library, read by an analyst', () => {
     await expect(page.getByText(REVISION_REASON).count()).resolves.toBe(1);
 
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Lab policy' }).click();
-    await page.getByText('± 3 °C around the calibration temperature (rectangular)').waitFor();
+    await page.getByText('± 3 °C around the lab temperature (rectangular), independent for each use').waitFor();
     await expect(page.getByRole('button', { name: 'Save lab policy' }).count()).resolves.toBe(0);
     await screenshot(page, 'policy-analyst');
     expect(problems).toEqual([]);

@@ -59,6 +59,12 @@ export function BalanceFields() {
         error={error?.sensitivityCoverageFactor?.message}
         registration={register('data.sensitivityCoverageFactor', AS_NUMBER)}
       />
+      <QuantityField
+        label="Calibration correction of the indication, relative (optional)"
+        hint="From the certificate, e.g. 0.00001 when the balance reads 10 ppm low; its U and k are the two above"
+        error={error?.calibrationCorrectionRelative?.message}
+        registration={register('data.calibrationCorrectionRelative', AS_NUMBER)}
+      />
     </fieldset>
   );
 }

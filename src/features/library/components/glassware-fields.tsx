@@ -114,6 +114,33 @@ export function GlasswareFields({ labId, kind }: { labId: number; kind: 'flask' 
           registration={register('data.calibrationTemperatureC', AS_NUMBER)}
         />
       </div>
+      <fieldset className="rounded-md border border-line p-4">
+        <legend className="px-1 font-bold">Calibration result (optional)</legend>
+        <p className="mb-3 text-sm text-muted">
+          From a calibration certificate: the correction at the nominal volume with its expanded uncertainty. When
+          entered, budgets apply the correction and use U/k in place of the tolerance; give the calibration date below.
+        </p>
+        <div className="grid gap-4 md:grid-cols-3">
+          <QuantityField
+            label="Calibration correction"
+            unit="mL"
+            hint="True volume minus nominal, e.g. 0.03 or −0.012"
+            error={error?.calibrationCorrectionMl?.message}
+            registration={register('data.calibrationCorrectionMl', AS_NUMBER)}
+          />
+          <QuantityField
+            label="Its expanded uncertainty U"
+            unit="mL"
+            error={error?.calibrationExpandedUncertaintyMl?.message}
+            registration={register('data.calibrationExpandedUncertaintyMl', AS_NUMBER)}
+          />
+          <QuantityField
+            label="Coverage factor k of that U"
+            error={error?.calibrationCoverageFactor?.message}
+            registration={register('data.calibrationCoverageFactor', AS_NUMBER)}
+          />
+        </div>
+      </fieldset>
     </fieldset>
   );
 }

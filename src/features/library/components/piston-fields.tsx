@@ -12,7 +12,13 @@ import { QuantityField } from './quantity-field';
 import { TemplateNote } from './template-note';
 
 /** A point being typed may still have empty boxes (null); the schema asks for each number on saving. */
-type PointInput = { volumeUl: number | null; systematicErrorUl: number | null; randomErrorUl: number | null };
+type PointInput = {
+  volumeUl: number | null;
+  systematicErrorUl: number | null;
+  randomErrorUl: number | null;
+  correctionUl?: number | null;
+  correctionExpandedUl?: number | null;
+};
 type PistonValues = { data: Omit<z.input<typeof pistonPipetteDataSchema>, 'points'> & { points: PointInput[] } };
 
 /** The schema's limit on calibration points per pipette. */
@@ -109,7 +115,7 @@ export function PistonFields({ labId }: { labId: number }) {
         ) : null}
         <ol className="flex flex-col gap-3">
           {points.fields.map((point, index) => (
-            <li key={point.id} className="grid items-end gap-4 md:grid-cols-[auto_1fr_1fr_1fr_auto]">
+            <li key={point.id} className="grid items-end gap-4 md:grid-cols-[auto_1fr_1fr_1fr_1fr_1fr_auto]">
               <span className="pb-2 font-semibold">{index + 1}.</span>
               <QuantityField
                 label="Set volume"
@@ -128,6 +134,18 @@ export function PistonFields({ labId }: { labId: number }) {
                 unit="µL"
                 error={error?.points?.[index]?.randomErrorUl?.message}
                 registration={register(`data.points.${index}.randomErrorUl`, AS_NUMBER)}
+              />
+              <QuantityField
+                label="Calibration correction"
+                unit="µL"
+                error={error?.points?.[index]?.correctionUl?.message}
+                registration={register(`data.points.${index}.correctionUl`, AS_NUMBER)}
+              />
+              <QuantityField
+                label="Its U"
+                unit="µL"
+                error={error?.points?.[index]?.correctionExpandedUl?.message}
+                registration={register(`data.points.${index}.correctionExpandedUl`, AS_NUMBER)}
               />
               <Button
                 variant="quiet"
@@ -151,6 +169,17 @@ export function PistonFields({ labId }: { labId: number }) {
           Add a point
         </Button>
         {points.fields.length >= MAX_POINTS ? <p className="mt-1 text-sm text-muted">Ten points at most.</p> : null}
+        <p className="mt-4 text-sm text-muted">
+          A calibration correction (optional) is applied at set volumes between the corrected points, with u = U/k, in
+          place of the systematic error; elsewhere the systematic error applies. Give the calibration date below.
+        </p>
+        <div className="mt-2 max-w-xs">
+          <QuantityField
+            label="Coverage factor k of the corrections’ U"
+            error={error?.calibrationCoverageFactor?.message}
+            registration={register('data.calibrationCoverageFactor', AS_NUMBER)}
+          />
+        </div>
       </fieldset>
     </fieldset>
   );

@@ -24,12 +24,21 @@ const gramsAndMilligrams = (value: unknown) =>
     ? `${formatQuantity(value)} g (${formatQuantity(Number((value * 1000).toPrecision(6)))} mg)`
     : `${number(value)} g`;
 
-type PistonPoint = { volumeUl: number; systematicErrorUl: number; randomErrorUl: number };
+type PistonPoint = {
+  volumeUl: number;
+  systematicErrorUl: number;
+  randomErrorUl: number;
+  correctionUl?: number | null;
+  correctionExpandedUl?: number | null;
+};
 const formatPoints = (value: unknown) =>
   (value as PistonPoint[])
     .map(
       (point) =>
-        `at ${number(point.volumeUl)} µL: ± ${number(point.systematicErrorUl)} µL systematic, ${number(point.randomErrorUl)} µL random (s)`,
+        `at ${number(point.volumeUl)} µL: ± ${number(point.systematicErrorUl)} µL systematic, ${number(point.randomErrorUl)} µL random (s)` +
+        (point.correctionUl == null
+          ? ''
+          : `, calibration correction ${number(point.correctionUl)} µL (U ${number(point.correctionExpandedUl)} µL)`),
     )
     .join('; ');
 
@@ -60,6 +69,14 @@ const GLASSWARE: EquipmentField[] = [
   { key: 'toleranceDistribution', label: 'Tolerance distribution', emptyText: 'as the lab policy says' },
   { key: 'fillRepeatabilityMl', label: 'Fill repeatability s', unit: 'mL' },
   { key: 'calibrationTemperatureC', label: 'Calibration temperature', unit: '°C' },
+  {
+    key: 'calibrationCorrectionMl',
+    label: 'Calibration correction',
+    unit: 'mL',
+    emptyText: 'none: the tolerance applies',
+  },
+  { key: 'calibrationExpandedUncertaintyMl', label: 'Calibration correction U', unit: 'mL', emptyText: '—' },
+  { key: 'calibrationCoverageFactor', label: 'Coverage factor k of that U', emptyText: '—' },
   ...CALIBRATION,
 ];
 const MATERIAL: EquipmentField[] = [
@@ -88,6 +105,11 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
       format: (value) => `${number(value)} (${number(Number(value) * 1e6)} ppm)`,
     },
     { key: 'sensitivityCoverageFactor', label: 'Coverage factor k of U' },
+    {
+      key: 'calibrationCorrectionRelative',
+      label: 'Calibration correction of the indication, relative',
+      emptyText: 'none',
+    },
     ...CALIBRATION,
   ],
   flask: GLASSWARE,
@@ -99,6 +121,7 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
     { key: 'maxVolumeUl', label: 'Nominal (largest) volume', unit: 'µL' },
     { key: 'errorBasis', label: 'Error basis', format: (value) => BASIS_WORDS[String(value)] ?? String(value) },
     { key: 'points', label: 'Calibration points', format: formatPoints },
+    { key: 'calibrationCoverageFactor', label: 'Coverage factor k of the corrections’ U', emptyText: '—' },
     ...CALIBRATION,
   ],
   'solid-material': [

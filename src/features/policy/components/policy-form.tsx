@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
+import { useForm, useWatch, type UseFormRegisterReturn } from 'react-hook-form';
 import type { z } from 'zod';
 import { labPolicySchema, type LabPolicy } from '../../../../shared/contracts/library';
 import { Alert } from '../../../components/ui/alert';
@@ -43,6 +43,7 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
     defaultValues: { ...policy, coverage: withBothModes(policy.coverage) },
   });
   const mode = useWatch({ control, name: 'coverage.mode' });
+  const treatment = useWatch({ control, name: 'temperatureTreatment' });
   // The error object follows the union of both modes; each box reads its own part.
   const coverageErrors = errors.coverage as CoverageErrors;
 
@@ -62,6 +63,11 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
               'glasswareDistribution',
               'temperatureHalfRangeC',
               'minimumWeightRule',
+              'referenceTemperatureC',
+              'temperatureTreatment',
+              'operationTemperatureHalfRangeC',
+              'linearityCorrelation',
+              'linearityCorrelationNetFraction',
             ]),
           ),
       },
@@ -159,31 +165,82 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
         </label>
       </fieldset>
 
-      <fieldset className="flex flex-col gap-1">
-        <legend className="mb-1 text-lg font-bold">Lab temperature</legend>
-        <label htmlFor="temperature-half-range" className="font-semibold">
-          Half-range around the calibration temperature
+      <fieldset className="flex flex-col gap-3">
+        <legend className="mb-1 text-lg font-bold">Temperature</legend>
+        <NumberBox
+          id="reference-temperature"
+          label="Reference temperature"
+          unit="°C"
+          hint="Every concentration per volume is stated at this temperature; a volume used at another lab temperature, or calibrated at another temperature, is corrected to it."
+          error={errors.referenceTemperatureC?.message}
+          registration={register('referenceTemperatureC', AS_NUMBER)}
+        />
+        <NumberBox
+          id="temperature-half-range"
+          label="Half-range around the lab temperature"
+          unit="°C"
+          prefix="±"
+          hint="The volume effect V·γ·ΔT of water (γ ≈ 2.1 × 10⁻⁴ K⁻¹) is taken as rectangular over this range; ± 4 °C for a lab kept at 20 ± 4 °C."
+          error={errors.temperatureHalfRangeC?.message}
+          registration={register('temperatureHalfRangeC', AS_NUMBER)}
+        />
+        <p className="font-semibold">Temperature effects of the volumes in one preparation</p>
+        <label className="flex items-start gap-2">
+          <input type="radio" value="perUse" className={`${RADIO} mt-1.5`} {...register('temperatureTreatment')} />
+          <span>
+            <span className="font-semibold">Independent per use</span>
+            <span className="block text-sm text-muted">
+              Each flask and pipette has its own temperature deviation over the half-range (as in the EURACHEM/CITAC CG4
+              worked examples).
+            </span>
+          </span>
         </label>
-        <div className="flex items-center gap-2">
-          <span aria-hidden="true">±</span>
-          <input
-            id="temperature-half-range"
-            type="text"
-            inputMode="decimal"
-            className="numeric w-24 rounded-md border border-line-strong bg-surface px-3 py-2 text-right"
-            aria-invalid={errors.temperatureHalfRangeC ? true : undefined}
-            aria-describedby="temperature-half-range-hint"
-            {...register('temperatureHalfRangeC', AS_NUMBER)}
-          />
-          <span>°C</span>
-        </div>
-        <p id="temperature-half-range-hint" className="text-sm text-muted">
-          The volume effect V·γ·ΔT of water (γ ≈ 2.1 × 10⁻⁴ K⁻¹) is taken as rectangular over this range; ± 4 °C for a
-          lab kept at 20 ± 4 °C.
-        </p>
-        {errors.temperatureHalfRangeC?.message ? (
-          <p className="text-sm font-semibold text-danger">{errors.temperatureHalfRangeC.message}</p>
+        <label className="flex items-start gap-2">
+          <input type="radio" value="sharedLab" className={`${RADIO} mt-1.5`} {...register('temperatureTreatment')} />
+          <span>
+            <span className="font-semibold">One shared lab temperature</span>
+            <span className="block text-sm text-muted">
+              One deviation of the lab over the half-range, shared by every volume, plus a smaller difference per
+              operation. Right when the flasks and pipettes of a preparation are used at the same temperature: in a
+              dilution c₀·V<sub>pipette</sub>/V<sub>flask</sub> the shared part cancels.
+            </span>
+          </span>
+        </label>
+        {treatment === 'sharedLab' ? (
+          <div className="ml-6">
+            <NumberBox
+              id="operation-temperature-half-range"
+              label="Half-range of one operation around the lab temperature"
+              unit="°C"
+              prefix="±"
+              error={errors.operationTemperatureHalfRangeC?.message}
+              registration={register('operationTemperatureHalfRangeC', AS_NUMBER)}
+            />
+          </div>
         ) : null}
+      </fieldset>
+
+      <fieldset className="flex flex-col gap-3">
+        <legend className="mb-1 text-lg font-bold">Balance linearity</legend>
+        <p className="text-muted">
+          By default the linearity errors of the tare and gross readings of a weighing are independent (as in the
+          EURACHEM/CITAC CG4 worked examples). When the two loads are close, their errors are alike: with a correlation
+          r the linearity of the net mass falls to u²(net) = 2·u²·(1 − r).
+        </p>
+        <NumberBox
+          id="linearity-correlation"
+          label="Correlation of tare and gross linearity"
+          hint="0 keeps the readings independent; 1 cancels the linearity in the net mass."
+          error={errors.linearityCorrelation?.message}
+          registration={register('linearityCorrelation', AS_NUMBER)}
+        />
+        <NumberBox
+          id="linearity-net-fraction"
+          label="Applies when the net mass is at most this fraction of the capacity"
+          hint="For example 0.1: net masses up to 10 % of the balance's capacity."
+          error={errors.linearityCorrelationNetFraction?.message}
+          registration={register('linearityCorrelationNetFraction', AS_NUMBER)}
+        />
       </fieldset>
 
       <fieldset className="flex flex-col gap-1">
@@ -199,5 +256,56 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
         Save lab policy
       </Button>
     </form>
+  );
+}
+
+/** A number box with its label, unit, hint and error. */
+function NumberBox({
+  id,
+  label,
+  unit,
+  prefix,
+  hint,
+  error,
+  registration,
+}: {
+  id: string;
+  label: string;
+  unit?: string;
+  prefix?: string;
+  hint?: string;
+  error?: string;
+  registration: UseFormRegisterReturn;
+}) {
+  const described = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ');
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="font-semibold">
+        {label}
+      </label>
+      <div className="flex items-center gap-2">
+        {prefix ? <span aria-hidden="true">{prefix}</span> : null}
+        <input
+          id={id}
+          type="text"
+          inputMode="decimal"
+          className="numeric w-24 rounded-md border border-line-strong bg-surface px-3 py-2 text-right"
+          aria-invalid={error ? true : undefined}
+          aria-describedby={described || undefined}
+          {...registration}
+        />
+        {unit ? <span>{unit}</span> : null}
+      </div>
+      {hint ? (
+        <p id={`${id}-hint`} className="text-sm text-muted">
+          {hint}
+        </p>
+      ) : null}
+      {error ? (
+        <p id={`${id}-error`} className="text-sm font-semibold text-danger">
+          {error}
+        </p>
+      ) : null}
+    </div>
   );
 }

@@ -14,8 +14,21 @@ export function PolicySummary({ policy }: { policy: LabPolicy }) {
       <dd>{coverage}</dd>
       <dt className="font-semibold">Glassware tolerance distribution</dt>
       <dd>{DISTRIBUTION_WORDS[policy.glasswareDistribution]}, unless an item says otherwise</dd>
+      <dt className="font-semibold">Reference temperature</dt>
+      <dd className="numeric">Concentrations stated at {policy.referenceTemperatureC} °C</dd>
       <dt className="font-semibold">Lab temperature</dt>
-      <dd className="numeric">± {policy.temperatureHalfRangeC} °C around the calibration temperature (rectangular)</dd>
+      <dd className="numeric">
+        ± {policy.temperatureHalfRangeC} °C around the lab temperature (rectangular),{' '}
+        {policy.temperatureTreatment === 'perUse'
+          ? 'independent for each use'
+          : `shared by every volume of a preparation, plus ± ${policy.operationTemperatureHalfRangeC} °C per operation`}
+      </dd>
+      <dt className="font-semibold">Balance linearity</dt>
+      <dd className="numeric">
+        {policy.linearityCorrelation === 0
+          ? 'Tare and gross readings independent'
+          : `Tare and gross readings correlated, r = ${policy.linearityCorrelation}, when the net mass is at most ${policy.linearityCorrelationNetFraction} of the capacity`}
+      </dd>
       <dt className="font-semibold">Minimum weight</dt>
       <dd>{policy.minimumWeightRule ? 'USP <41> rule applied: 2·s/m ≤ 0.10 %, s not below 0.41·d' : 'Not checked'}</dd>
     </dl>

@@ -1,4 +1,4 @@
-import type { EquipmentItem, EquipmentKind } from '../../../../shared/contracts/library';
+import { labPolicySchema, type EquipmentItem, type EquipmentKind } from '../../../../shared/contracts/library';
 
 /**
  * A few items of the invented demo lab library (as the server's seed writes them), as the
@@ -108,9 +108,10 @@ export const DEMO_LIBRARY: EquipmentItem[] = [
 
 export const DEMO_LIBRARY_BY_ID = new Map(DEMO_LIBRARY.map((each) => [String(each.id), each]));
 
-export const DEMO_POLICY = {
+/** A policy as stored before the temperature and linearity options: it reads with their defaults. */
+export const DEMO_POLICY = labPolicySchema.parse({
   coverage: { mode: 'probability', probability: 0.9545 },
   glasswareDistribution: 'triangular',
   temperatureHalfRangeC: 4,
   minimumWeightRule: true,
-} as const;
+});

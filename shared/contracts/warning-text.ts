@@ -13,6 +13,12 @@ export function warningText(warning: Warning): string {
       const { balanceItemId, netMassG, minimumWeightG } = warning.params;
       return `Step ${warning.stepIndex + 1}: ${netMassG} g is below the minimum weight of ${itemLabel('Balance', balanceItemId)} (${minimumWeightText(minimumWeightG)} by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`;
     }
+    case 'assumedWaterDensity': {
+      const { materialItemId, materialName, certifiedUnit, densityGPerMl, standardUncertaintyGPerMl } = warning.params;
+      const uncertainty =
+        standardUncertaintyGPerMl > 0 ? ` with a standard uncertainty of ${standardUncertaintyGPerMl} g/mL` : '';
+      return `Step ${warning.stepIndex + 1}: ${materialName} (${materialItemId}) is certified in ${certifiedUnit} and its density is not known, so water's density (${densityGPerMl.toFixed(4)} g/mL) was used${uncertainty}. Enter the density from its certificate, or add its matrix to the lab's density table.`;
+    }
     case 'dominantStep': {
       const { stepKind } = warning.params;
       const label = stepKind ? STEP_KINDS[stepKind].label.toLowerCase() : 'this step';

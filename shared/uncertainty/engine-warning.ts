@@ -2,9 +2,25 @@
  * A warning the engine raises while it builds a model: what happened (`code`), the plan step it belongs to,
  * and the figures its words need. The engine writes no words; shared/contracts/warning-text.ts does.
  */
-export type EngineWarning = {
-  /** A net mass below the balance's USP <41> minimum weight (2·s/m ≤ 0.10 %, s not below 0.41·d). */
-  code: 'belowMinimumWeight';
-  stepIndex: number;
-  params: { balanceItemId: string; netMassG: number; minimumWeightG: number };
-};
+export type EngineWarning =
+  | {
+      /** A net mass below the balance's USP <41> minimum weight (2·s/m ≤ 0.10 %, s not below 0.41·d). */
+      code: 'belowMinimumWeight';
+      stepIndex: number;
+      params: { balanceItemId: string; netMassG: number; minimumWeightG: number };
+    }
+  | {
+      /**
+       * A certified solution with no density (none on its certificate, its matrix not in the lab's table) was
+       * converted between mass fraction and mass concentration with water's density at the lab temperature.
+       */
+      code: 'assumedWaterDensity';
+      stepIndex: number;
+      params: {
+        materialItemId: string;
+        materialName: string;
+        certifiedUnit: string;
+        densityGPerMl: number;
+        standardUncertaintyGPerMl: number;
+      };
+    };

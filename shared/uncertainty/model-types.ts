@@ -17,6 +17,7 @@ export const SOURCE_CATEGORIES = [
   'atomicWeight',
   'density',
   'userDefined',
+  'airBuoyancy',
 ] as const;
 export type SourceCategory = (typeof SOURCE_CATEGORIES)[number];
 

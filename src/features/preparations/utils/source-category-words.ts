@@ -16,6 +16,7 @@ export const SOURCE_CATEGORY_WORDS: Record<SourceCategory, string> = {
   atomicWeight: 'Atomic weights',
   density: 'Density',
   userDefined: 'Extra sources',
+  airBuoyancy: 'Air buoyancy',
 };
 
 export const categoryWords = (key: string) => SOURCE_CATEGORY_WORDS[key as SourceCategory] ?? key;

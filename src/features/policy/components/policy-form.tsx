@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
+import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { labPolicySchema, type LabPolicy } from '../../../../shared/contracts/library';
 import { Alert } from '../../../components/ui/alert';
@@ -8,15 +8,11 @@ import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { applyApiError } from '../../../lib/form-errors';
 import { useUpdateLabPolicy } from '../../../lib/api/lab-policy';
+import { AirBuoyancyFields } from './air-buoyancy-fields';
+import { AS_NUMBER, RADIO } from './policy-form-values';
+import { SolutionDensityFields } from './solution-density-fields';
 
 type CoverageErrors = { probability?: { message?: string }; k?: { message?: string } } | undefined;
-
-const parseNumber = (value: unknown) => {
-  if (typeof value !== 'string') return value;
-  const text = value.trim().replace(/^([+-]?\d*),(\d+)$/, '$1.$2');
-  return text === '' ? null : Number(text);
-};
-const AS_NUMBER = { setValueAs: parseNumber } as const;
 
 /** The stored coverage with the other mode's box filled too (95.45 %, or k = 2). */
 function withBothModes(coverage: LabPolicy['coverage']): LabPolicy['coverage'] {
@@ -24,24 +20,23 @@ function withBothModes(coverage: LabPolicy['coverage']): LabPolicy['coverage'] {
   return filled;
 }
 
-const RADIO = 'size-4 accent-[var(--color-ink)]';
-
 /** QA's settings for every budget in the lab, each with what it does. */
 export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy }) {
   const updatePolicy = useUpdateLabPolicy();
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
+  const form = useForm<z.input<typeof labPolicySchema>, unknown, z.output<typeof labPolicySchema>>({
+    resolver: zodResolver(labPolicySchema),
+    // Both modes' boxes start filled, so switching mode shows a sensible value; the schema keeps only the chosen one.
+    defaultValues: { ...policy, coverage: withBothModes(policy.coverage) },
+  });
   const {
     register,
     handleSubmit,
     control,
     setError,
     formState: { errors },
-  } = useForm<z.input<typeof labPolicySchema>, unknown, z.output<typeof labPolicySchema>>({
-    resolver: zodResolver(labPolicySchema),
-    // Both modes' boxes start filled, so switching mode shows a sensible value; the schema keeps only the chosen one.
-    defaultValues: { ...policy, coverage: withBothModes(policy.coverage) },
-  });
+  } = form;
   const mode = useWatch({ control, name: 'coverage.mode' });
   // The error object follows the union of both modes; each box reads its own part.
   const coverageErrors = errors.coverage as CoverageErrors;
@@ -62,6 +57,12 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
               'glasswareDistribution',
               'temperatureHalfRangeC',
               'minimumWeightRule',
+              'airBuoyancy.treatment',
+              'airBuoyancy.airDensityKgPerM3',
+              'airBuoyancy.airDensityHalfRangeKgPerM3',
+              'solutionDensity.matrixDensities',
+              'solutionDensity.otherwise',
+              'solutionDensity.waterStandardUncertaintyGPerMl',
             ]),
           ),
       },
@@ -69,135 +70,140 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex max-w-3xl flex-col gap-8" aria-label="Lab policy">
-      {formError ? <Alert tone="danger">{formError}</Alert> : null}
-      <fieldset className="flex flex-col gap-2">
-        <legend className="mb-1 text-lg font-bold">Coverage</legend>
-        <p className="text-muted">
-          How the expanded uncertainty U = k·u<sub>c</sub> is stated on every budget.
-        </p>
-        <label className="flex items-start gap-2">
-          <input type="radio" value="probability" className={`${RADIO} mt-1.5`} {...register('coverage.mode')} />
-          <span>
-            <span className="font-semibold">Coverage probability</span>
-            <span className="block text-sm text-muted">
-              k comes from the t-distribution at the effective degrees of freedom (Welch–Satterthwaite); with many
-              degrees of freedom 95.45 % gives k = 2.
+    <FormProvider {...form}>
+      <form onSubmit={onSubmit} noValidate className="flex max-w-3xl flex-col gap-8" aria-label="Lab policy">
+        {formError ? <Alert tone="danger">{formError}</Alert> : null}
+        <fieldset className="flex flex-col gap-2">
+          <legend className="mb-1 text-lg font-bold">Coverage</legend>
+          <p className="text-muted">
+            How the expanded uncertainty U = k·u<sub>c</sub> is stated on every budget.
+          </p>
+          <label className="flex items-start gap-2">
+            <input type="radio" value="probability" className={`${RADIO} mt-1.5`} {...register('coverage.mode')} />
+            <span>
+              <span className="font-semibold">Coverage probability</span>
+              <span className="block text-sm text-muted">
+                k comes from the t-distribution at the effective degrees of freedom (Welch–Satterthwaite); with many
+                degrees of freedom 95.45 % gives k = 2.
+              </span>
             </span>
-          </span>
-        </label>
-        {mode === 'probability' ? (
-          <div className="ml-6 flex flex-col gap-1">
-            <label htmlFor="coverage-probability" className="font-semibold">
-              Probability
-            </label>
-            <select
-              id="coverage-probability"
-              className="w-40 rounded-md border border-line-strong bg-surface px-3 py-2"
-              aria-invalid={coverageErrors?.probability ? true : undefined}
-              {...register('coverage.probability', { setValueAs: (value: string) => Number(value) })}
-            >
-              <option value="0.9545">95.45 %</option>
-              <option value="0.95">95 %</option>
-            </select>
-            {coverageErrors?.probability?.message ? (
-              <p className="text-sm font-semibold text-danger">{coverageErrors.probability.message}</p>
-            ) : null}
-          </div>
-        ) : null}
-        <label className="flex items-start gap-2">
-          <input type="radio" value="fixed-k" className={`${RADIO} mt-1.5`} {...register('coverage.mode')} />
-          <span>
-            <span className="font-semibold">Fixed coverage factor k</span>
-            <span className="block text-sm text-muted">
-              The same k on every budget, whatever its degrees of freedom (k = 2 is common practice).
+          </label>
+          {mode === 'probability' ? (
+            <div className="ml-6 flex flex-col gap-1">
+              <label htmlFor="coverage-probability" className="font-semibold">
+                Probability
+              </label>
+              <select
+                id="coverage-probability"
+                className="w-40 rounded-md border border-line-strong bg-surface px-3 py-2"
+                aria-invalid={coverageErrors?.probability ? true : undefined}
+                {...register('coverage.probability', { setValueAs: (value: string) => Number(value) })}
+              >
+                <option value="0.9545">95.45 %</option>
+                <option value="0.95">95 %</option>
+              </select>
+              {coverageErrors?.probability?.message ? (
+                <p className="text-sm font-semibold text-danger">{coverageErrors.probability.message}</p>
+              ) : null}
+            </div>
+          ) : null}
+          <label className="flex items-start gap-2">
+            <input type="radio" value="fixed-k" className={`${RADIO} mt-1.5`} {...register('coverage.mode')} />
+            <span>
+              <span className="font-semibold">Fixed coverage factor k</span>
+              <span className="block text-sm text-muted">
+                The same k on every budget, whatever its degrees of freedom (k = 2 is common practice).
+              </span>
             </span>
-          </span>
-        </label>
-        {mode === 'fixed-k' ? (
-          <div className="ml-6 flex flex-col gap-1">
-            <label htmlFor="coverage-k" className="font-semibold">
-              k
-            </label>
+          </label>
+          {mode === 'fixed-k' ? (
+            <div className="ml-6 flex flex-col gap-1">
+              <label htmlFor="coverage-k" className="font-semibold">
+                k
+              </label>
+              <input
+                id="coverage-k"
+                type="text"
+                inputMode="decimal"
+                className="numeric w-24 rounded-md border border-line-strong bg-surface px-3 py-2 text-right"
+                aria-invalid={coverageErrors?.k ? true : undefined}
+                aria-describedby={coverageErrors?.k ? 'coverage-k-error' : undefined}
+                {...register('coverage.k', AS_NUMBER)}
+              />
+              {coverageErrors?.k?.message ? (
+                <p id="coverage-k-error" className="text-sm font-semibold text-danger">
+                  {coverageErrors.k.message}
+                </p>
+              ) : null}
+            </div>
+          ) : null}
+        </fieldset>
+
+        <fieldset className="flex flex-col gap-2">
+          <legend className="mb-1 text-lg font-bold">Glassware tolerance distribution</legend>
+          <p className="text-muted">
+            How a flask's or pipette's ± tolerance a becomes a standard uncertainty, unless the item itself says
+            otherwise.
+          </p>
+          <label className="flex items-center gap-2">
+            <input type="radio" value="triangular" className={RADIO} {...register('glasswareDistribution')} />
+            <span>
+              <span className="font-semibold">Triangular</span>, u = a/√6: values near nominal are likelier (as in the
+              EURACHEM/CITAC CG4 worked examples)
+            </span>
+          </label>
+          <label className="flex items-center gap-2">
+            <input type="radio" value="rectangular" className={RADIO} {...register('glasswareDistribution')} />
+            <span>
+              <span className="font-semibold">Rectangular</span>, u = a/√3: any value within the tolerance equally
+              likely (the cautious choice)
+            </span>
+          </label>
+        </fieldset>
+
+        <fieldset className="flex flex-col gap-1">
+          <legend className="mb-1 text-lg font-bold">Lab temperature</legend>
+          <label htmlFor="temperature-half-range" className="font-semibold">
+            Half-range around the calibration temperature
+          </label>
+          <div className="flex items-center gap-2">
+            <span aria-hidden="true">±</span>
             <input
-              id="coverage-k"
+              id="temperature-half-range"
               type="text"
               inputMode="decimal"
               className="numeric w-24 rounded-md border border-line-strong bg-surface px-3 py-2 text-right"
-              aria-invalid={coverageErrors?.k ? true : undefined}
-              aria-describedby={coverageErrors?.k ? 'coverage-k-error' : undefined}
-              {...register('coverage.k', AS_NUMBER)}
+              aria-invalid={errors.temperatureHalfRangeC ? true : undefined}
+              aria-describedby="temperature-half-range-hint"
+              {...register('temperatureHalfRangeC', AS_NUMBER)}
             />
-            {coverageErrors?.k?.message ? (
-              <p id="coverage-k-error" className="text-sm font-semibold text-danger">
-                {coverageErrors.k.message}
-              </p>
-            ) : null}
+            <span>°C</span>
           </div>
-        ) : null}
-      </fieldset>
+          <p id="temperature-half-range-hint" className="text-sm text-muted">
+            The volume effect V·γ·ΔT of water (γ ≈ 2.1 × 10⁻⁴ K⁻¹) is taken as rectangular over this range; ± 4 °C for a
+            lab kept at 20 ± 4 °C.
+          </p>
+          {errors.temperatureHalfRangeC?.message ? (
+            <p className="text-sm font-semibold text-danger">{errors.temperatureHalfRangeC.message}</p>
+          ) : null}
+        </fieldset>
 
-      <fieldset className="flex flex-col gap-2">
-        <legend className="mb-1 text-lg font-bold">Glassware tolerance distribution</legend>
-        <p className="text-muted">
-          How a flask's or pipette's ± tolerance a becomes a standard uncertainty, unless the item itself says
-          otherwise.
-        </p>
-        <label className="flex items-center gap-2">
-          <input type="radio" value="triangular" className={RADIO} {...register('glasswareDistribution')} />
-          <span>
-            <span className="font-semibold">Triangular</span>, u = a/√6: values near nominal are likelier (as in the
-            EURACHEM/CITAC CG4 worked examples)
-          </span>
-        </label>
-        <label className="flex items-center gap-2">
-          <input type="radio" value="rectangular" className={RADIO} {...register('glasswareDistribution')} />
-          <span>
-            <span className="font-semibold">Rectangular</span>, u = a/√3: any value within the tolerance equally likely
-            (the cautious choice)
-          </span>
-        </label>
-      </fieldset>
+        <fieldset className="flex flex-col gap-1">
+          <legend className="mb-1 text-lg font-bold">Minimum weight</legend>
+          <Checkbox label="Apply the USP <41> minimum-weight rule" {...register('minimumWeightRule')} />
+          <p className="text-sm text-muted">
+            Flags a net mass m below a balance's minimum weight: 2·s/m ≤ 0.10 %, with s not below 0.41·d.
+          </p>
+        </fieldset>
 
-      <fieldset className="flex flex-col gap-1">
-        <legend className="mb-1 text-lg font-bold">Lab temperature</legend>
-        <label htmlFor="temperature-half-range" className="font-semibold">
-          Half-range around the calibration temperature
-        </label>
-        <div className="flex items-center gap-2">
-          <span aria-hidden="true">±</span>
-          <input
-            id="temperature-half-range"
-            type="text"
-            inputMode="decimal"
-            className="numeric w-24 rounded-md border border-line-strong bg-surface px-3 py-2 text-right"
-            aria-invalid={errors.temperatureHalfRangeC ? true : undefined}
-            aria-describedby="temperature-half-range-hint"
-            {...register('temperatureHalfRangeC', AS_NUMBER)}
-          />
-          <span>°C</span>
-        </div>
-        <p id="temperature-half-range-hint" className="text-sm text-muted">
-          The volume effect V·γ·ΔT of water (γ ≈ 2.1 × 10⁻⁴ K⁻¹) is taken as rectangular over this range; ± 4 °C for a
-          lab kept at 20 ± 4 °C.
-        </p>
-        {errors.temperatureHalfRangeC?.message ? (
-          <p className="text-sm font-semibold text-danger">{errors.temperatureHalfRangeC.message}</p>
-        ) : null}
-      </fieldset>
+        <AirBuoyancyFields />
+        <SolutionDensityFields />
 
-      <fieldset className="flex flex-col gap-1">
-        <legend className="mb-1 text-lg font-bold">Minimum weight</legend>
-        <Checkbox label="Apply the USP <41> minimum-weight rule" {...register('minimumWeightRule')} />
-        <p className="text-sm text-muted">
-          Flags a net mass m below a balance's minimum weight: 2·s/m ≤ 0.10 %, with s not below 0.41·d.
-        </p>
-      </fieldset>
-
-      {saved ? <Alert tone="ok">The lab policy is saved. Budgets computed from now on use it.</Alert> : null}
-      <Button type="submit" pending={updatePolicy.isPending} pendingLabel="Saving…" className="self-start">
-        Save lab policy
-      </Button>
-    </form>
+        {saved ? <Alert tone="ok">The lab policy is saved. Budgets computed from now on use it.</Alert> : null}
+        <Button type="submit" pending={updatePolicy.isPending} pendingLabel="Saving…" className="self-start">
+          Save lab policy
+        </Button>
+      </form>
+    </FormProvider>
   );
 }

@@ -37,7 +37,6 @@ export const certifiedSolutionDensitySettingSchema = z
     waterStandardUncertaintyGPerMl: nonNegative('The uncertainty of the assumed density').default(0),
   })
   .strict();
-export type CertifiedSolutionDensitySetting = z.output<typeof certifiedSolutionDensitySettingSchema>;
 
 /** A density in the model (g/mL): its node and its estimate. */
 export interface DensityValue {

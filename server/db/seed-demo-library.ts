@@ -152,6 +152,8 @@ export function demoLibrary(
         analyte: 'Pb',
         purity: 0.9998,
         purityUncertainty: { shape: 'normal', expandedUncertainty: 0.0002, coverageFactor: 2 },
+        // Lead(II) nitrate 4.53 g/cm³ (from memory; a safety data sheet gives it), for air buoyancy.
+        densityGPerCm3: 4.53,
       },
       certificate: {
         title: 'Certificate of analysis — lead(II) nitrate',
@@ -161,6 +163,7 @@ export function demoLibrary(
         lines: [
           ['Lot', 'PBN-24117'],
           ['Purity (mass fraction)', '0.9998 ± 0.0002 (k = 2)'],
+          ['Density', '4.53 g/cm³'],
           ['Expiry', dateOffset(now, 420)],
         ],
       },

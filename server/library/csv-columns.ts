@@ -168,6 +168,12 @@ export const CSV_COLUMNS: Record<EquipmentKind, CsvColumn[]> = {
       type: 'optional-number',
       help: '± half-width, for rectangular',
     },
+    {
+      column: 'density_g_per_cm3',
+      path: ['densityGPerCm3'],
+      type: 'optional-number',
+      help: 'g/cm³ (safety data sheet), for air buoyancy',
+    },
   ],
   'solution-material': [
     ...material,

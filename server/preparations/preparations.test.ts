@@ -37,9 +37,12 @@ describe('saving a preparation computes and stores its snapshot', () => {
     const snapshot = version.snapshot;
     // c = m·P·(M_Pb/M_Pb(NO3)2)/V₀ · V_a/V_f with the CIAAW 2021 interval midpoints the engine uses
     // (Pb [206.14, 207.94] → 207.04, N [14.00643, 14.00728] → 14.006855, O [15.99903, 15.99977] → 15.9994; CIAAW 2021 standard atomic weights, read):
-    // 0.1599 g · 0.9998 · 207.04/331.048110 / 0.1 L · 10/100 = 99.982 mg/L. Relative 1e-9: same arithmetic.
+    // 0.1599 g · 0.9998 · 207.04/331.048110 / 0.1 L · 10/100 = 99.982 mg/L, times the air-buoyancy factor of the
+    // default lab policy B = (1 − 1.2/8000)/(1 − 1.2/4530) for lead nitrate 4.53 g/cm³ (OIML R 111; density from
+    // memory) = 1.000115 → 99.994 mg/L. Relative 1e-9: same arithmetic.
     const molarMassLeadNitrate = 207.04 + 2 * (14.006855 + 3 * 15.9994);
-    const expected = ((0.1599 * 0.9998 * (207.04 / molarMassLeadNitrate)) / 0.1) * 1000 * (10 / 100);
+    const buoyancy = (1 - 1.2 / 8000) / (1 - 1.2 / 4530);
+    const expected = ((0.1599 * 0.9998 * (207.04 / molarMassLeadNitrate)) / 0.1) * 1000 * (10 / 100) * buoyancy;
     expect(Math.abs(snapshot.budget.value / expected - 1)).toBeLessThan(1e-9);
     expect(snapshot.engineVersion).toMatch(/^\d+\.\d+\.\d+$/);
     expect(snapshot.seed).toBe(20261202);

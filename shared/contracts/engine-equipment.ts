@@ -98,6 +98,9 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
               ? { shape: 'normal', expandedUncertainty: u.expandedUncertainty, coverageFactor: u.coverageFactor }
               : { shape: 'rectangular', halfWidth: u.halfWidth },
         },
+        // The library keeps g/cm³ as chemists write it; the engine reads kg/m³ (1 g/cm³ = 1000 kg/m³).
+        densityKgPerM3:
+          d.densityGPerCm3 === null || d.densityGPerCm3 === undefined ? undefined : d.densityGPerCm3 * 1000,
       };
     }
     case 'solution-material': {
@@ -111,6 +114,7 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         uncertainty: { shape: 'normal', expandedUncertainty: d.expandedUncertainty, coverageFactor: d.coverageFactor },
         densityGPerMl: d.densityGPerMl ?? undefined,
         densityStandardUncertaintyGPerMl: d.densityUncertaintyGPerMl ?? undefined,
+        matrix: d.matrix || undefined,
       };
     }
   }
@@ -164,8 +168,13 @@ export function policySettings(
   | 'operationTemperatureHalfRangeC'
   | 'linearityCorrelation'
   | 'linearityCorrelationNetFraction'
+  | 'airBuoyancy'
+  | 'certifiedSolutionDensity'
 > {
   return {
+    // Weights of conventional density 8000 kg/m³ (OIML R 111-1).
+    airBuoyancy: { ...policy.airBuoyancy, weightDensityKgPerM3: 8000 },
+    certifiedSolutionDensity: policy.solutionDensity,
     coverage:
       policy.coverage.mode === 'probability' ? { probability: policy.coverage.probability } : { k: policy.coverage.k },
     defaultGlasswareDistribution: policy.glasswareDistribution,

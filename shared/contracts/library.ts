@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { matrixKey } from '../uncertainty/certified-solution-density';
 import { molarMass } from '../uncertainty/chemical-formula';
 import { MAXIMUM_COVERAGE_FACTOR } from '../uncertainty/coverage-factor';
 import { PlanError } from '../uncertainty/plan-error';
@@ -253,6 +254,11 @@ export const solidMaterialDataSchema = z
       'Give the purity as a mass fraction between 0 and 1, e.g. 0.9998.',
     ),
     purityUncertainty: purityUncertaintySchema,
+    /** Density in g/cm³ as chemists write it (safety data sheet or certificate), for air buoyancy; stored as given. */
+    densityGPerCm3: positive('the density')
+      .refine((v) => v <= 25, 'Give the density in g/cm³, e.g. 2.165 for sodium chloride.')
+      .nullable()
+      .default(null),
   })
   .refine(
     (v) =>
@@ -370,6 +376,67 @@ export const equipmentListQuerySchema = z.object({
   status: z.enum(['active', 'retired', 'all']).default('active'),
 });
 
+/**
+ * Air buoyancy on every weighing (OIML R 111-1 / D 28): correct each (the default: GUM 3.2.4 asks for a
+ * correction of every recognised significant systematic effect), or leave it and bound it as an uncertainty.
+ * The air density of the weighing room: mean and half-range (rectangular); 1.2 kg/m³ is OIML R 111's
+ * reference, ± 0.05 kg/m³ common practice for a lab near sea level.
+ */
+export const airBuoyancyPolicySchema = z
+  .object({
+    treatment: z.enum(['correct', 'boundAsUncertainty'], {
+      message: 'Choose whether weighings are corrected for air buoyancy or the effect is an uncertainty.',
+    }),
+    airDensityKgPerM3: positive('the air density').refine((v) => v <= 2, 'Give the air density in kg/m³, e.g. 1.2.'),
+    airDensityHalfRangeKgPerM3: nonNegative('the half-range of the air density'),
+  })
+  .refine((v) => v.airDensityHalfRangeKgPerM3 < v.airDensityKgPerM3, {
+    message: 'The half-range must be smaller than the air density.',
+    path: ['airDensityHalfRangeKgPerM3'],
+  });
+const DEFAULT_AIR_BUOYANCY_POLICY = {
+  treatment: 'correct',
+  airDensityKgPerM3: 1.2,
+  airDensityHalfRangeKgPerM3: 0.05,
+} as const satisfies z.input<typeof airBuoyancyPolicySchema>;
+
+/** One row of the lab's table of matrix densities (matched to a certified solution's matrix). */
+export const matrixDensityRowSchema = z.object({
+  matrix: z.string().trim().min(1, 'Name the matrix, e.g. 2 % HNO3.').max(120, 'Use at most 120 characters.'),
+  densityGPerMl: positive('the density').refine((v) => v <= 3, 'Give the density in g/mL, e.g. 1.0098.'),
+  standardUncertaintyGPerMl: nonNegative('the standard uncertainty'),
+});
+
+/**
+ * The density of a certified solution whose certificate gives none, when a plan converts between per mass
+ * and per volume: the lab's matrix table, else refuse (the default: a 1 % bias must not pass unseen), or take
+ * water's density at the lab temperature with the standard uncertainty set here, and warn.
+ */
+export const solutionDensityPolicySchema = z
+  .object({
+    matrixDensities: z.array(matrixDensityRowSchema).max(50, 'The table can hold at most 50 matrices.'),
+    otherwise: z.enum(['refuse', 'assumeWater'], {
+      message: 'Choose whether a solution of unknown density is refused or taken as water.',
+    }),
+    waterStandardUncertaintyGPerMl: nonNegative('the uncertainty of the assumed density').refine(
+      (v) => v <= 0.5,
+      'Give the uncertainty in g/mL, e.g. 0.006.',
+    ),
+  })
+  .refine(
+    (v) => {
+      const keys = v.matrixDensities.map((row) => matrixKey(row.matrix));
+      return new Set(keys).size === keys.length;
+    },
+    { message: 'Each matrix appears once in the table.', path: ['matrixDensities'] },
+  );
+const DEFAULT_SOLUTION_DENSITY_POLICY = {
+  matrixDensities: [],
+  otherwise: 'refuse',
+  // ± 0.01 g/mL rectangular (dilute acid matrices up to a few %; common practice) → u ≈ 0.006 g/mL.
+  waterStandardUncertaintyGPerMl: 0.006,
+} as const satisfies z.input<typeof solutionDensityPolicySchema>;
+
 export const labPolicySchema = z.object({
   coverage: z.discriminatedUnion('mode', [
     z.object({
@@ -410,6 +477,9 @@ export const labPolicySchema = z.object({
   linearityCorrelationNetFraction: finite('the fraction of the capacity')
     .refine((v) => v > 0 && v <= 1, 'Give a fraction of the capacity above 0 and at most 1 (e.g. 0.1 for 10 %).')
     .default(0.1),
+  // Policies stored before these fields read with the defaults (docs/plan-format.md says why these).
+  airBuoyancy: airBuoyancyPolicySchema.default(DEFAULT_AIR_BUOYANCY_POLICY),
+  solutionDensity: solutionDensityPolicySchema.default(DEFAULT_SOLUTION_DENSITY_POLICY),
 });
 export type LabPolicy = z.infer<typeof labPolicySchema>;
 
@@ -429,6 +499,8 @@ export const DEFAULT_LAB_POLICY: LabPolicy = {
   operationTemperatureHalfRangeC: 0.5,
   linearityCorrelation: 0,
   linearityCorrelationNetFraction: 0.1,
+  airBuoyancy: DEFAULT_AIR_BUOYANCY_POLICY,
+  solutionDensity: DEFAULT_SOLUTION_DENSITY_POLICY,
 };
 
 export const importRequestSchema = z.object({

@@ -21,6 +21,12 @@ export function warningText(warning: Warning): string {
       );
       return `${step}${sourceLabels.join('; ')} ${sourceLabels.length === 1 ? 'rests' : 'rest'} on 3 or fewer readings (2 or fewer degrees of freedom), so Monte Carlo draws ${sourceLabels.length === 1 ? 'it' : 'them'} from a Student t whose variance is infinite: the Monte Carlo standard deviation means nothing. Its coverage interval and the GUM result stand; more readings remove this.`;
     }
+    case 'assumedWaterDensity': {
+      const { materialItemId, materialName, certifiedUnit, densityGPerMl, standardUncertaintyGPerMl } = warning.params;
+      const uncertainty =
+        standardUncertaintyGPerMl > 0 ? ` with a standard uncertainty of ${standardUncertaintyGPerMl} g/mL` : '';
+      return `Step ${warning.stepIndex + 1}: ${materialName} (${materialItemId}) is certified in ${certifiedUnit} and its density is not known, so water's density (${densityGPerMl.toFixed(4)} g/mL) was used${uncertainty}. Enter the density from its certificate, or add its matrix to the lab's density table.`;
+    }
     case 'dominantStep': {
       const { stepKind } = warning.params;
       const label = stepKind ? STEP_KINDS[stepKind].label.toLowerCase() : 'this step';

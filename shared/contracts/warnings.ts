@@ -21,6 +21,17 @@ export const engineWarningSchema = z.discriminatedUnion('code', [
     stepIndex,
     params: z.object({ sourceLabels: z.array(z.string()), degreesOfFreedom: z.number() }),
   }),
+  z.object({
+    code: z.literal('assumedWaterDensity'),
+    stepIndex,
+    params: z.object({
+      materialItemId: z.string(),
+      materialName: z.string(),
+      certifiedUnit: z.string(),
+      densityGPerMl: z.number(),
+      standardUncertaintyGPerMl: z.number(),
+    }),
+  }),
 ]);
 
 /** A warning stored as an English sentence, before warnings had codes: its words are the stored text. */

@@ -18,4 +18,19 @@ export type EngineWarning =
       code: 'infiniteMonteCarloVariance';
       stepIndex: number;
       params: { sourceLabels: string[]; degreesOfFreedom: number };
+    }
+  | {
+      /**
+       * A certified solution with no density (none on its certificate, its matrix not in the lab's table) was
+       * converted between mass fraction and mass concentration with water's density at the lab temperature.
+       */
+      code: 'assumedWaterDensity';
+      stepIndex: number;
+      params: {
+        materialItemId: string;
+        materialName: string;
+        certifiedUnit: string;
+        densityGPerMl: number;
+        standardUncertaintyGPerMl: number;
+      };
     };

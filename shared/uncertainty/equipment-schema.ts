@@ -169,7 +169,7 @@ export const solidMaterialSchema = z
       .strict(),
     /** Analyte units per formula unit; inferred from the formulas when left out. */
     analyteCount: z.number().int().positive().optional(),
-    /** For the air-buoyancy correction. */
+    /** For air buoyancy (settings.airBuoyancy): the solid's density, kg/m³ (the library keeps g/cm³). */
     densityKgPerM3: positive('The density').optional(),
   })
   .strict();
@@ -189,6 +189,8 @@ export const certifiedSolutionSchema = z
     uncertainty: distributionSchema,
     densityGPerMl: positive('The density').optional(),
     densityStandardUncertaintyGPerMl: nonNegative('The density uncertainty').optional(),
+    /** The solution's matrix as the certificate names it ("2 % HNO3"), matched in the lab's density table. */
+    matrix: z.string().max(120).optional(),
   })
   .strict();
 

@@ -18,6 +18,7 @@ export const SOURCE_CATEGORIES = [
   'density',
   'userDefined',
   'calibrationCorrection',
+  'airBuoyancy',
 ] as const;
 export type SourceCategory = (typeof SOURCE_CATEGORIES)[number];
 

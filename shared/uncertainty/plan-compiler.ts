@@ -1,5 +1,11 @@
+import { massOnThePan, type AirBuoyancySetting } from './air-buoyancy';
 import { standardAtomicWeights, type AtomicWeightTable } from './atomic-weights';
 import { weighByDifference } from './balance-weighing';
+import {
+  certifiedSolutionDensity,
+  knownCertifiedSolutionDensity,
+  type DensityValue,
+} from './certified-solution-density';
 import { parseFormula, type Composition } from './chemical-formula';
 import { analyteCountIn, molarMassNode } from './composition-nodes';
 import { addAbsoluteExtraSources, applyRelativeExtraSources } from './extra-sources';
@@ -21,13 +27,16 @@ type ChainState =
   | { kind: 'portion'; amountMg: NodeReference; fromSolid: boolean; volumeMl?: number }
   /**
    * A solution: mass concentration (mg/L), mass fraction (mg/kg) or molality (mol/kg);
-   * `densityGPerMl` converts between the first two; `containedMl` is the flask's volume, when known.
+   * `density` converts between the first two, asked only when a conversion needs it (`purpose` says which, for
+   * a refusal's words); `buoyancyDensity` is what an air-buoyancy correction of a weighing of it uses;
+   * `containedMl` is the flask's volume, when known.
    */
   | {
       kind: 'solution';
       basis: 'massConcentration' | 'massFraction' | 'molality';
       value: NodeReference;
-      densityGPerMl: NodeReference;
+      density: (purpose: string) => DensityValue;
+      buoyancyDensity: () => DensityValue;
       containedMl?: number;
     };
 
@@ -57,6 +66,8 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
     return analyteMolarMass;
   };
   const solutionDensity = solutionDensityNode(builder, plan);
+  const waterGPerMl = waterDensityKgPerM3(plan.settings.labTemperatureC) / 1000;
+  const airBuoyancy = effectiveAirBuoyancy(plan);
 
   const settings = settingsWithDefaults(plan.settings);
   let state = { kind: 'nothing' } as ChainState;
@@ -68,7 +79,13 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
       stepIndex,
       path: ['steps', stepIndex],
     };
-    state = applyStep(context, step, state, { analyte, analyteMolarMassNode, solutionDensity });
+    state = applyStep(context, step, state, {
+      analyte,
+      analyteMolarMassNode,
+      solutionDensity,
+      waterGPerMl,
+      airBuoyancy,
+    });
     if (state.kind === 'solution') {
       builder.checkpoint({
         stepIndex,
@@ -100,7 +117,30 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
 interface SharedNodes {
   analyte: Composition;
   analyteMolarMassNode: (stepIndex: number) => NodeReference;
-  solutionDensity: NodeReference;
+  /** Density of the solutions the plan prepares: the plan's stated one, or water at the lab temperature. */
+  solutionDensity: DensityValue;
+  /** Water at the lab temperature (Tanaka et al. 2001), g/mL. */
+  waterGPerMl: number;
+  airBuoyancy: AirBuoyancySetting | undefined;
+}
+
+/**
+ * The plan's air-buoyancy setting; a plan written before it, whose weighSolid step carries its own
+ * `airBuoyancy`, reads as "correct every weighing with these densities" (the air density without uncertainty).
+ */
+function effectiveAirBuoyancy(plan: Plan): AirBuoyancySetting | undefined {
+  if (plan.settings.airBuoyancy !== undefined) return plan.settings.airBuoyancy;
+  for (const step of plan.steps) {
+    if (step.kind === 'weighSolid' && step.airBuoyancy !== undefined) {
+      return { treatment: 'correct', airDensityHalfRangeKgPerM3: 0, ...step.airBuoyancy };
+    }
+  }
+  return undefined;
+}
+
+/** A density in kg/m³, as air buoyancy reads it. */
+function inKgPerM3(builder: ModelBuilder, density: DensityValue) {
+  return { densityKgPerM3: builder.scale(density.node, 1000), densityEstimateKgPerM3: density.estimateGPerMl * 1000 };
 }
 
 function applyStep(context: StepContext, step: PlanStep, state: ChainState, shared: SharedNodes): ChainState {
@@ -114,15 +154,20 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
       requireState('nothing', 'must be the first step: a plan starts from one weighed solid or one certified solution');
       let mass = weighByDifference(context, step.balance, step.netMassG, step.containerMassG, 'netMassG');
       mass = addAbsoluteExtraSources(context, mass, step.extraSources, 'g');
-      if (step.airBuoyancy !== undefined) {
+      if (shared.airBuoyancy !== undefined) {
         const density = step.material.densityKgPerM3;
         if (density === undefined)
           throw new PlanError(
             [...path, 'material', 'densityKgPerM3'],
-            'The air-buoyancy correction needs the density of the material.',
+            `Enter the density of ${step.material.name} (${step.material.itemId}) in the library, from its safety data sheet or certificate: every weighing is ${shared.airBuoyancy.treatment === 'correct' ? 'corrected' : 'allowed an uncertainty'} for air buoyancy, which depends on the density of what is weighed.`,
           );
-        const { airDensityKgPerM3: air, weightDensityKgPerM3: weights } = step.airBuoyancy;
-        mass = builder.scale(mass, (1 - air / weights) / (1 - air / density));
+        mass = massOnThePan(
+          context,
+          mass,
+          { densityKgPerM3: builder.constant(density), densityEstimateKgPerM3: density },
+          shared.airBuoyancy,
+          shared.waterGPerMl * 1000,
+        );
       }
       const purity = builder.source({
         id: `item:${step.material.itemId}:purity`,
@@ -171,29 +216,14 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
       );
       value = addAbsoluteExtraSources(context, value, step.extraSources, unit.name);
       value = applyRelativeExtraSources(context, builder.scale(value, unit.factorToBase), step.extraSources);
-      const density =
-        material.densityGPerMl === undefined
-          ? shared.solutionDensity
-          : builder.add(
-              builder.constant(material.densityGPerMl),
-              builder.source({
-                id: `item:${material.itemId}:density`,
-                label: `${material.name} (${material.itemId}): density`,
-                category: 'density',
-                estimate: 0,
-                unit: 'g/mL',
-                distribution: { shape: 'normal', standardUncertainty: material.densityStandardUncertaintyGPerMl ?? 0 },
-                sharing: 'item',
-                itemId: material.itemId,
-                stepIndex: context.stepIndex,
-                path: [...path, 'material', 'densityStandardUncertaintyGPerMl'],
-              }),
-            );
+      // The certificate's density enters the model at once (as it always has); any other only when a conversion asks.
+      let density = material.densityGPerMl === undefined ? undefined : knownCertifiedSolutionDensity(context, material);
       return {
         kind: 'solution',
         basis: unit.dimension === 'massFraction' ? 'massFraction' : 'massConcentration',
         value,
-        densityGPerMl: density,
+        density: (purpose) => (density ??= certifiedSolutionDensity(context, material, shared.waterGPerMl, purpose)),
+        buoyancyDensity: () => density ?? knownCertifiedSolutionDensity(context, material) ?? shared.solutionDensity,
       };
     }
     case 'makeUpToVolume': {
@@ -220,7 +250,7 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'solution',
         basis: 'massConcentration',
         value: applyRelativeExtraSources(context, concentration, step.extraSources),
-        densityGPerMl: shared.solutionDensity,
+        ...preparedSolutionDensity(shared),
         containedMl: step.flask.nominalMl,
       };
     }
@@ -251,7 +281,9 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
           : pistonVolume(context, pipette, step.volumeMl);
       volume = addAbsoluteExtraSources(context, volume, step.extraSources, 'mL');
       const massConcentration =
-        state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, state.densityGPerMl);
+        state.basis === 'massConcentration'
+          ? state.value
+          : builder.multiply(state.value, state.density(`is taken by volume in step ${context.stepIndex + 1}`).node);
       const amountMg = builder.scale(builder.multiply(massConcentration, volume), 1e-3);
       return {
         kind: 'portion',
@@ -268,14 +300,22 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
           [...path, 'kind'],
           'Diluting a molality solution is not supported; prepare the molality directly.',
         );
-      const mass = addAbsoluteExtraSources(
+      const mass = massOnThePan(
         context,
-        weighByDifference(context, step.balance, step.netMassG, step.containerMassG, 'netMassG'),
-        step.extraSources,
-        'g',
+        addAbsoluteExtraSources(
+          context,
+          weighByDifference(context, step.balance, step.netMassG, step.containerMassG, 'netMassG'),
+          step.extraSources,
+          'g',
+        ),
+        inKgPerM3(builder, state.buoyancyDensity()),
+        shared.airBuoyancy,
+        shared.waterGPerMl * 1000,
       );
       const massFraction =
-        state.basis === 'massFraction' ? state.value : builder.divide(state.value, state.densityGPerMl);
+        state.basis === 'massFraction'
+          ? state.value
+          : builder.divide(state.value, state.density(`is weighed in step ${context.stepIndex + 1}`).node);
       const amountMg = builder.scale(builder.multiply(massFraction, mass), 1e-3);
       return {
         kind: 'portion',
@@ -289,18 +329,24 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         'makes up a weighed solid or an aliquot to a final mass; put a weighing or an aliquot before it',
       );
       if (state.kind !== 'portion') throw new Error('unreachable');
-      const mass = addAbsoluteExtraSources(
+      const mass = massOnThePan(
         context,
-        weighByDifference(context, step.balance, step.finalMassG, step.containerMassG, 'finalMassG'),
-        step.extraSources,
-        'g',
+        addAbsoluteExtraSources(
+          context,
+          weighByDifference(context, step.balance, step.finalMassG, step.containerMassG, 'finalMassG'),
+          step.extraSources,
+          'g',
+        ),
+        inKgPerM3(builder, shared.solutionDensity),
+        shared.airBuoyancy,
+        shared.waterGPerMl * 1000,
       );
       const massFraction = builder.scale(builder.divide(state.amountMg, mass), 1000);
       return {
         kind: 'solution',
         basis: 'massFraction',
         value: applyRelativeExtraSources(context, massFraction, step.extraSources),
-        densityGPerMl: shared.solutionDensity,
+        ...preparedSolutionDensity(shared),
       };
     }
     case 'dissolveInSolvent': {
@@ -311,11 +357,19 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
           'A molality is prepared by dissolving the weighed solid itself; an aliquot of a solution already contains solvent.',
         );
       }
-      const solvent = addAbsoluteExtraSources(
+      // The solvent is water at the lab temperature (the design's aqueous solutions).
+      const water = shared.waterGPerMl * 1000;
+      const solvent = massOnThePan(
         context,
-        weighByDifference(context, step.balance, step.solventMassG, step.containerMassG, 'solventMassG'),
-        step.extraSources,
-        'g',
+        addAbsoluteExtraSources(
+          context,
+          weighByDifference(context, step.balance, step.solventMassG, step.containerMassG, 'solventMassG'),
+          step.extraSources,
+          'g',
+        ),
+        { densityKgPerM3: builder.constant(water), densityEstimateKgPerM3: water },
+        shared.airBuoyancy,
+        water,
       );
       const molality = builder.divide(
         state.amountMg,
@@ -325,17 +379,25 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'solution',
         basis: 'molality',
         value: applyRelativeExtraSources(context, molality, step.extraSources),
-        densityGPerMl: shared.solutionDensity,
+        ...preparedSolutionDensity(shared),
       };
     }
   }
 }
 
+/** A solution the plan prepared: its density is the plan's one density of prepared solutions. */
+function preparedSolutionDensity(shared: SharedNodes) {
+  return { density: () => shared.solutionDensity, buoyancyDensity: () => shared.solutionDensity };
+}
+
 /** Density of prepared solutions (g/mL): the plan's stated value with its uncertainty, or water at the lab temperature (Tanaka 2001). */
-function solutionDensityNode(builder: ModelBuilder, plan: Plan): NodeReference {
+function solutionDensityNode(builder: ModelBuilder, plan: Plan): DensityValue {
   const stated = plan.settings.solutionDensity;
-  if (stated === undefined) return builder.constant(waterDensityKgPerM3(plan.settings.labTemperatureC) / 1000);
-  return builder.add(
+  if (stated === undefined) {
+    const water = waterDensityKgPerM3(plan.settings.labTemperatureC) / 1000;
+    return { node: builder.constant(water), estimateGPerMl: water };
+  }
+  const node = builder.add(
     builder.constant(stated.densityGPerMl),
     builder.source({
       id: 'plan:solution-density',
@@ -349,6 +411,7 @@ function solutionDensityNode(builder: ModelBuilder, plan: Plan): NodeReference {
       path: ['settings', 'solutionDensity'],
     }),
   );
+  return { node, estimateGPerMl: stated.densityGPerMl };
 }
 
 function convertToUnit(
@@ -367,8 +430,9 @@ function convertToUnit(
     return builder.scale(state.value, 1 / unit.factorToBase);
   }
   if (unit.dimension === 'molality') throw mismatch();
+  const density = () => state.density(`is stated in ${unit.name}`).node;
   const massConcentration = () =>
-    state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, state.densityGPerMl);
+    state.basis === 'massConcentration' ? state.value : builder.multiply(state.value, density());
   switch (unit.dimension) {
     case 'massConcentration':
       return builder.scale(massConcentration(), 1 / unit.factorToBase);
@@ -376,8 +440,7 @@ function convertToUnit(
       // c[mol/L] = c[mg/L] / (1000 mg/g · M[g/mol])
       return builder.scale(builder.divide(massConcentration(), analyteMolarMass()), 1e-3 / unit.factorToBase);
     case 'massFraction': {
-      const massFraction =
-        state.basis === 'massFraction' ? state.value : builder.divide(state.value, state.densityGPerMl);
+      const massFraction = state.basis === 'massFraction' ? state.value : builder.divide(state.value, density());
       return builder.scale(massFraction, 1 / unit.factorToBase);
     }
   }

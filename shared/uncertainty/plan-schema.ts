@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { airBuoyancySettingSchema } from './air-buoyancy';
+import { certifiedSolutionDensitySettingSchema } from './certified-solution-density';
 import { MAXIMUM_COVERAGE_FACTOR } from './coverage-factor';
 import { extraSourceSchema } from './distribution-schema';
 import {
@@ -32,7 +34,11 @@ const weighSolidStep = z
     netMassG: positive('The net mass'),
     /** Container on the pan, for the capacity check. */
     containerMassG: nonNegative('The container mass').default(0),
-    /** Air-buoyancy correction m = W·(1 − ρ_air/ρ_weights)/(1 − ρ_air/ρ_material); needs material.densityKgPerM3. */
+    /**
+     * Before settings.airBuoyancy existed: the air and weights densities for the buoyancy correction. Read now
+     * as "correct every weighing of the plan with these densities" (air density without uncertainty) when
+     * settings.airBuoyancy is left out; settings.airBuoyancy, when given, governs instead.
+     */
     airBuoyancy: z
       .object({
         airDensityKgPerM3: positive('The air density').default(1.2),
@@ -167,6 +173,10 @@ export const settingsSchema = z
       })
       .strict()
       .optional(),
+    /** Air buoyancy on every weighing (OIML R 111-1 / D 28); left out: weighings are not corrected, as before. */
+    airBuoyancy: airBuoyancySettingSchema.optional(),
+    /** Density of a certified solution whose certificate gives none; left out: water's, with a warning. */
+    certifiedSolutionDensity: certifiedSolutionDensitySettingSchema.optional(),
   })
   .strict();
 

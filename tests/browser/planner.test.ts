@@ -77,11 +77,12 @@ describe('the analyst plans a lead standard', () => {
     await addStep('Make up to volume');
     await chooseItem(steps().nth(3).getByLabel('Volumetric flask'), 'VF-100-B');
 
-    // 0.1599 g · 0.9998 · 207.04/331.2 (the CIAAW 2021 interval midpoint for Pb) / 0.1 L / 10 ≈ 99.98 mg/L.
+    // 0.1599 g · 0.9998 · 207.04/331.2 (the CIAAW 2021 interval midpoint for Pb) / 0.1 L / 10 ≈ 99.98 mg/L, times the
+    // default policy's air-buoyancy factor for lead nitrate (1 − 1.2/8000)/(1 − 1.2/4530) = 1.000115 (OIML R 111) ≈ 99.99.
     await expect(statement().innerText()).resolves.toMatch(
-      /^c\(Pb\) = \(99\.98 ± 0\.\d\d\) mg\/L, k = 2\.00, coverage probability ≈ 95\.45 %$/,
+      /^c\(Pb\) = \(99\.99 ± 0\.\d\d\) mg\/L, k = 2\.00, coverage probability ≈ 95\.45 %$/,
     );
-    await expect(steps().nth(1).innerText()).resolves.toMatch(/after step 2\s+999\.8 mg\/L/i);
+    await expect(steps().nth(1).innerText()).resolves.toMatch(/after step 2\s+999\.9 mg\/L/i);
     const table = page.getByRole('table', { name: /Uncertainty budget of c\(Pb\)/ });
     await expect(
       table.getByRole('rowheader', { name: /^Step 3 · Pipette an aliquot \(GP-10-A\)$/ }).count(),
@@ -168,7 +169,8 @@ describe('the analyst plans a lead standard', () => {
     await chooseItem(steps().nth(4).getByLabel('Pipette'), 'GP-10-A');
     await addStep('Make up to volume');
     await chooseItem(steps().nth(5).getByLabel('Volumetric flask'), 'VF-100-B');
-    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(9\.998 ± 0\.0\d+\) mg\/L/);
+    // One tenth of the 99.99 mg/L above (air buoyancy corrected by the default policy): 9.999 mg/L.
+    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(9\.999 ± 0\.0\d+\) mg\/L/);
     await saveState()
       .filter({ hasText: /Saved at/ })
       .waitFor({ timeout: 15_000 });

@@ -42,6 +42,7 @@ const NEW_ITEM_DATA: Record<EquipmentKind, Record<string, unknown>> = {
     formula: '',
     analyte: '',
     purityUncertainty: { shape: 'normal', coverageFactor: 2 },
+    densityGPerCm3: null,
   },
   'solution-material': {
     ...material,

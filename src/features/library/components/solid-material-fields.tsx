@@ -24,7 +24,7 @@ const SHAPE_OPTIONS = [
   { value: 'rectangular', label: 'Rectangular: ± half-width' },
 ];
 
-/** A weighed solid: formula, analyte, and the certificate's purity with its uncertainty. */
+/** A weighed solid: formula, analyte, density, and the certificate's purity with its uncertainty. */
 export function SolidMaterialFields() {
   const {
     register,
@@ -37,7 +37,7 @@ export function SolidMaterialFields() {
   return (
     <fieldset className="flex flex-col gap-4">
       <legend className="mb-2 text-lg font-bold">Composition and purity</legend>
-      <div className="grid gap-4 md:grid-cols-3">
+      <div className="grid gap-4 md:grid-cols-4">
         <TextField
           label="Formula"
           hint="As written on the certificate, e.g. Pb(NO3)2"
@@ -58,6 +58,13 @@ export function SolidMaterialFields() {
           hint="Mass fraction, e.g. 0.9998"
           error={error?.purity?.message}
           registration={register('data.purity', AS_NUMBER)}
+        />
+        <QuantityField
+          label="Density"
+          unit="g/cm³"
+          hint="From the safety data sheet, e.g. 4.53; every weighing is corrected for air buoyancy"
+          error={error?.densityGPerCm3?.message}
+          registration={register('data.densityGPerCm3', AS_NUMBER)}
         />
       </div>
       <div className="grid items-start gap-4 md:grid-cols-3">

@@ -31,6 +31,24 @@ export function PolicySummary({ policy }: { policy: LabPolicy }) {
       </dd>
       <dt className="font-semibold">Minimum weight</dt>
       <dd>{policy.minimumWeightRule ? 'USP <41> rule applied: 2·s/m ≤ 0.10 %, s not below 0.41·d' : 'Not checked'}</dd>
+      <dt className="font-semibold">Air buoyancy</dt>
+      <dd className="numeric">
+        {policy.airBuoyancy.treatment === 'correct'
+          ? 'Every weighing corrected'
+          : 'Not corrected; counted as an uncertainty of half-width |B − 1|'}
+        ; air {policy.airBuoyancy.airDensityKgPerM3} ± {policy.airBuoyancy.airDensityHalfRangeKgPerM3} kg/m³
+        (rectangular), weights 8000 kg/m³
+      </dd>
+      <dt className="font-semibold">Density of certified solutions</dt>
+      <dd>
+        {policy.solutionDensity.matrixDensities.length === 0
+          ? 'No matrix table'
+          : `Matrix table: ${policy.solutionDensity.matrixDensities.map((row) => `${row.matrix} ${row.densityGPerMl} ± ${row.standardUncertaintyGPerMl} g/mL`).join('; ')}`}
+        ;{' '}
+        {policy.solutionDensity.otherwise === 'refuse'
+          ? 'otherwise the plan is refused'
+          : `otherwise water's density with u = ${policy.solutionDensity.waterStandardUncertaintyGPerMl} g/mL, and a warning`}
+      </dd>
     </dl>
   );
 }

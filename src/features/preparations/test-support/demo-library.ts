@@ -100,6 +100,7 @@ export const DEMO_LIBRARY: EquipmentItem[] = [
       analyte: 'Pb',
       purity: 0.9998,
       purityUncertainty: { shape: 'normal', expandedUncertainty: 0.0002, coverageFactor: 2 },
+      densityGPerCm3: 4.53,
       hazardNotes: 'Lead compounds are toxic.',
     },
     { expiry: 'ok' },
@@ -108,7 +109,7 @@ export const DEMO_LIBRARY: EquipmentItem[] = [
 
 export const DEMO_LIBRARY_BY_ID = new Map(DEMO_LIBRARY.map((each) => [String(each.id), each]));
 
-/** A policy as stored before the temperature and linearity options: it reads with their defaults. */
+/** The demo lab's policy: the fields a lab sets, the newer ones at their defaults (as a stored policy reads). */
 export const DEMO_POLICY = labPolicySchema.parse({
   coverage: { mode: 'probability', probability: 0.9545 },
   glasswareDistribution: 'triangular',

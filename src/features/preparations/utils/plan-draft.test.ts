@@ -34,9 +34,17 @@ describe('the live budget of a draft', () => {
     if (!evaluation.ok) throw new Error(evaluation.problem.message);
     // c = m·P·M(Pb)/M(Pb(NO3)2) / V₁ · V_a / V₂ with M(Pb) = 207.04 (midpoint of the CIAAW 2021 interval
     // [206.14, 207.94]), N 14.0069, O 15.9994 (CIAAW 2021 abridged values, from memory):
-    // 0.1599 g · 0.9998 · 207.04 / 331.2141 / 0.1 L · 10/100 · 1000 mg/g = 99.9821 mg/L. Tolerance 0.001 mg/L: rounding of the hand value.
-    expect(evaluation.budget.value).toBeCloseTo(99.9821, 3);
-    expect(evaluation.budget.rounded.valueText).toBe('99.98');
+    // 0.1599 g · 0.9998 · 207.04 / 331.2141 / 0.1 L · 10/100 · 1000 mg/g = 99.9821 mg/L, times the policy's air-buoyancy
+    // correction of the weighed nitrate, (1 − 1.2/8000)/(1 − 1.2/4530) = 1.000115 (OIML R 111; 4.53 g/cm³ from memory):
+    // 99.9936 mg/L. Tolerance 0.001 mg/L: rounding of the hand value.
+    expect(evaluation.budget.value).toBeCloseTo(99.9936, 3);
+    expect(evaluation.budget.rounded.valueText).toBe('99.99');
+    expect(evaluation.plan.settings.airBuoyancy).toEqual({
+      treatment: 'correct',
+      airDensityKgPerM3: 1.2,
+      airDensityHalfRangeKgPerM3: 0.05,
+      weightDensityKgPerM3: 8000,
+    });
     // The policy's ±4 °C half-range reaches the engine (withPolicy), so each volume carries a temperature source.
     expect(evaluation.plan.settings.temperatureHalfRangeC).toBe(4);
     expect(evaluation.budget.checkpoints.map((checkpoint) => checkpoint.stepIndex)).toEqual([1, 3]);

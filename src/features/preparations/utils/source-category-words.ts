@@ -17,6 +17,7 @@ export const SOURCE_CATEGORY_WORDS: Record<SourceCategory, string> = {
   density: 'Density',
   userDefined: 'Extra sources',
   calibrationCorrection: 'Calibration corrections',
+  airBuoyancy: 'Air buoyancy',
 };
 
 export const categoryWords = (key: string) => SOURCE_CATEGORY_WORDS[key as SourceCategory] ?? key;

@@ -13,6 +13,18 @@ export function warningText(warning: Warning): string {
       const { balanceItemId, netMassG, minimumWeightG } = warning.params;
       return `Step ${warning.stepIndex + 1}: ${netMassG} g is below the minimum weight of ${itemLabel('Balance', balanceItemId)} (${minimumWeightText(minimumWeightG)} by USP <41>: 2·s/m ≤ 0.10 %, s ≥ 0.41·d).`;
     }
+    case 'dominantAtomicWeight': {
+      const { element, itemId, indexPercent } = warning.params;
+      const what =
+        itemId === null
+          ? `The standard atomic weight of ${element ?? 'the analyte'}`
+          : `The certificate's ${element === null ? 'molar mass' : `atomic weight of ${element}`} for ${itemId}`;
+      const remedy =
+        itemId === null
+          ? "the lot's atomic weight or molar mass from its certificate would lower it"
+          : 'a certificate with a smaller uncertainty would lower it';
+      return `${what} contributes ${Math.round(indexPercent)} % of the variance: ${remedy}; better glassware or a better balance would not.`;
+    }
     case 'dominantStep': {
       const { stepKind } = warning.params;
       const label = stepKind ? STEP_KINDS[stepKind].label.toLowerCase() : 'this step';

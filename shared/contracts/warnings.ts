@@ -16,6 +16,11 @@ export const engineWarningSchema = z.discriminatedUnion('code', [
     stepIndex,
     params: z.object({ balanceItemId: z.string(), netMassG: z.number(), minimumWeightG: z.number() }),
   }),
+  z.object({
+    code: z.literal('dominantAtomicWeight'),
+    stepIndex,
+    params: z.object({ element: z.string().nullable(), itemId: z.string().nullable(), indexPercent: z.number() }),
+  }),
 ]);
 
 /** A warning stored as an English sentence, before warnings had codes: its words are the stored text. */

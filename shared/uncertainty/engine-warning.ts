@@ -2,9 +2,20 @@
  * A warning the engine raises while it builds a model: what happened (`code`), the plan step it belongs to,
  * and the figures its words need. The engine writes no words; shared/contracts/warning-text.ts does.
  */
-export type EngineWarning = {
-  /** A net mass below the balance's USP <41> minimum weight (2·s/m ≤ 0.10 %, s not below 0.41·d). */
-  code: 'belowMinimumWeight';
-  stepIndex: number;
-  params: { balanceItemId: string; netMassG: number; minimumWeightG: number };
-};
+export type EngineWarning =
+  | {
+      /** A net mass below the balance's USP <41> minimum weight (2·s/m ≤ 0.10 %, s not below 0.41·d). */
+      code: 'belowMinimumWeight';
+      stepIndex: number;
+      params: { balanceItemId: string; netMassG: number; minimumWeightG: number };
+    }
+  | {
+      /**
+       * One atomic-weight source (a standard atomic weight, or a lot's value from its certificate) holds more than
+       * half of u_c². `element` is null for a molar mass from a certificate; `itemId` is the material whose
+       * certificate gave the value, null for a standard atomic weight.
+       */
+      code: 'dominantAtomicWeight';
+      stepIndex: number;
+      params: { element: string | null; itemId: string | null; indexPercent: number };
+    };

@@ -215,6 +215,7 @@ describe('warnings', () => {
       params: { balanceItemId: 'B-01', netMassG: 0.05 },
     });
     // B-01 in the fixture: s = 0.00005 g ≥ 0.41·d, so m_min = 2000·s = 0.100 g (USP <41>).
+    if (warning.code !== 'belowMinimumWeight') throw new Error('expected the minimum-weight warning');
     expect(warning.params.minimumWeightG).toBeCloseTo(0.1, 12);
   });
 

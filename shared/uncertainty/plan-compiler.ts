@@ -1,7 +1,7 @@
 import { standardAtomicWeights, type AtomicWeightTable } from './atomic-weights';
 import { weighByDifference } from './balance-weighing';
 import { parseFormula, type Composition } from './chemical-formula';
-import { analyteCountIn, molarMassNode } from './composition-nodes';
+import { analyteCountIn, hasCertificateComposition, materialMolarMassNodes, molarMassNode } from './composition-nodes';
 import { addAbsoluteExtraSources, applyRelativeExtraSources } from './extra-sources';
 import { ModelBuilder, type NodeReference } from './model-builder';
 import type { CompiledModel } from './model-types';
@@ -57,6 +57,11 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
     return analyteMolarMass;
   };
   const solutionDensity = solutionDensityNode(builder, plan);
+  /** A material's lot values, when its certificate gives them, are the plan's M(analyte) from then on. */
+  const adoptAnalyteMolarMass = <Nodes extends { analyte: NodeReference }>(nodes: Nodes) => {
+    analyteMolarMass = nodes.analyte;
+    return nodes;
+  };
 
   let state = { kind: 'nothing' } as ChainState;
   plan.steps.forEach((step, stepIndex) => {
@@ -67,7 +72,7 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
       stepIndex,
       path: ['steps', stepIndex],
     };
-    state = applyStep(context, step, state, { analyte, analyteMolarMassNode, solutionDensity });
+    state = applyStep(context, step, state, { analyte, analyteMolarMassNode, adoptAnalyteMolarMass, solutionDensity });
     if (state.kind === 'solution') {
       builder.checkpoint({
         stepIndex,
@@ -96,6 +101,7 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
 interface SharedNodes {
   analyte: Composition;
   analyteMolarMassNode: (stepIndex: number) => NodeReference;
+  adoptAnalyteMolarMass: <Nodes extends { analyte: NodeReference }>(nodes: Nodes) => Nodes;
   solutionDensity: NodeReference;
 }
 
@@ -135,10 +141,24 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
       const formulaPath = [...path, 'material', 'formula'];
       const compound = parseFormula(step.material.formula, formulaPath, context.atomicWeights);
       const count = analyteCountIn(compound, shared.analyte, step.material.analyteCount, [...path, 'material']);
-      const factor = builder.divide(
-        builder.scale(shared.analyteMolarMassNode(context.stepIndex), count),
-        molarMassNode(builder, compound, context.atomicWeights, context.stepIndex, formulaPath),
-      );
+      const molarMasses = hasCertificateComposition(step.material)
+        ? shared.adoptAnalyteMolarMass(
+            materialMolarMassNodes(
+              builder,
+              step.material,
+              compound,
+              shared.analyte,
+              count,
+              context.atomicWeights,
+              context.stepIndex,
+              [...path, 'material'],
+            ),
+          )
+        : {
+            analyte: shared.analyteMolarMassNode(context.stepIndex),
+            compound: molarMassNode(builder, compound, context.atomicWeights, context.stepIndex, formulaPath),
+          };
+      const factor = builder.divide(builder.scale(molarMasses.analyte, count), molarMasses.compound);
       const amountMg = builder.multiply(builder.multiply(builder.scale(mass, 1000), purity), factor);
       return {
         kind: 'portion',

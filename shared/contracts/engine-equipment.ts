@@ -91,6 +91,7 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
               ? { shape: 'normal', expandedUncertainty: u.expandedUncertainty, coverageFactor: u.coverageFactor }
               : { shape: 'rectangular', halfWidth: u.halfWidth },
         },
+        ...certificateComposition(d),
       };
     }
     case 'solution-material': {
@@ -107,6 +108,37 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
       };
     }
   }
+}
+
+/**
+ * The lot's values a solid's certificate gives, as the engine uses them: a molar mass with its uncertainty
+ * (a molar mass without one is only checked against the formula, in the library), or the analyte's atomic weight.
+ */
+function certificateComposition(
+  d: SolidMaterialData,
+): Pick<SolidMaterial, 'certificateMolarMass' | 'certificateAtomicWeight'> {
+  // A revision stored before these fields existed has none of them: the same as null.
+  const source = d.compositionSource ?? '';
+  const lotValue = (value?: number | null, expanded?: number | null, coverageFactor?: number | null) =>
+    value == null || expanded == null || coverageFactor == null
+      ? undefined
+      : {
+          valueGPerMol: value,
+          uncertainty: { shape: 'normal', expandedUncertainty: expanded, coverageFactor } as const,
+          source,
+        };
+  const molarMass = lotValue(
+    d.certificateMolarMassGPerMol,
+    d.certificateMolarMassExpandedUncertaintyGPerMol,
+    d.certificateMolarMassCoverageFactor,
+  );
+  if (molarMass) return { certificateMolarMass: molarMass };
+  const atomicWeight = lotValue(
+    d.analyteAtomicWeightGPerMol,
+    d.analyteAtomicWeightExpandedUncertaintyGPerMol,
+    d.analyteAtomicWeightCoverageFactor,
+  );
+  return atomicWeight ? { certificateAtomicWeight: { element: d.analyte, ...atomicWeight } } : {};
 }
 
 /** The plan settings a lab's policy sets; the plan keeps its own output unit and lab temperature. */

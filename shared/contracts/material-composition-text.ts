@@ -11,18 +11,64 @@ import { PlanError } from '../uncertainty/plan-error';
  * M in g/mol (CIAAW 2021 weights give M to at least that), 4 for the mass fraction ("Pb: 0.6254 g/g").
  */
 export function molarMassText(valueGPerMol: number): string {
-  return `${valueGPerMol.toPrecision(5)} g/mol`;
+  return `${molarMassFigures(valueGPerMol)} g/mol`;
 }
 
-/** "M = 331.05 g/mol; Pb is 0.6254 g/g of it", or null when the formula cannot be read. */
-export function compositionText(formula: string, analyte: string, lot?: LotAtomicWeight): string | null {
-  const composition = readComposition(formula, analyte, lot);
-  if (composition === null) return null;
-  const fraction =
-    composition.analyteMassFraction === null
-      ? ''
-      : `; ${analyte.trim()} is ${composition.analyteMassFraction.toPrecision(4)} g/g of it`;
-  return `M = ${molarMassText(composition.molarMassGPerMol)}${fraction}`;
+/** The figures of a molar mass without its unit, for a column headed "(g/mol)": "331.05". */
+export function molarMassFigures(valueGPerMol: number): string {
+  return valueGPerMol.toPrecision(5);
+}
+
+/** The molar mass a solid material's library data give (with its lot's atomic weight), or undefined. */
+export function molarMassOf(data: Record<string, unknown>): number | undefined {
+  const summary = readComposition(typeof data.formula === 'string' ? data.formula : '', '', lotOf(data));
+  return summary?.molarMassGPerMol;
+}
+
+/**
+ * What the library and the planner show while a formula is typed: "M = 331.05 g/mol; Pb is 0.6254 g/g of it", the
+ * engine's words when the formula cannot be read, or null while it is empty. `lot`: the analyte's atomic weight
+ * from the lot's certificate, when the library holds one.
+ */
+export function compositionSummary(
+  formula: string,
+  analyte: string,
+  lot?: LotAtomicWeight,
+): { text: string } | { problem: string } | null {
+  if (formula.trim() === '') return null;
+  try {
+    const composition = materialComposition(formula, analyte, lot);
+    const fraction =
+      composition.analyteMassFraction === null
+        ? ''
+        : `; ${analyte.trim()} is ${composition.analyteMassFraction.toPrecision(4)} g/g of it`;
+    return { text: `M = ${molarMassText(composition.molarMassGPerMol)}${fraction}` };
+  } catch (error) {
+    if (error instanceof PlanError) return { problem: error.message };
+    throw error;
+  }
+}
+
+/** compositionSummary of a solid material's library data, for the plan's analyte when given (else the material's). */
+export function compositionSummaryOf(
+  data: Record<string, unknown>,
+  analyte?: string,
+): { text: string } | { problem: string } | null {
+  const materialAnalyte = typeof data.analyte === 'string' ? data.analyte.trim() : '';
+  return compositionSummary(
+    typeof data.formula === 'string' ? data.formula : '',
+    analyte ?? materialAnalyte,
+    lotOf(data),
+  );
+}
+
+/** The lot's atomic weight of the material's analyte in its library data, when QA entered one. */
+function lotOf(data: Record<string, unknown>): LotAtomicWeight | undefined {
+  const element = typeof data.analyte === 'string' ? data.analyte.trim() : '';
+  const atomicWeight = data.analyteAtomicWeightGPerMol;
+  return typeof atomicWeight === 'number' && /^[A-Z][a-z]?$/.test(element)
+    ? { element, valueGPerMol: atomicWeight }
+    : undefined;
 }
 
 /**

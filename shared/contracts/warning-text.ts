@@ -28,7 +28,10 @@ export function warningText(warning: Warning): string {
     case 'dominantStep': {
       const { stepKind } = warning.params;
       const label = stepKind ? STEP_KINDS[stepKind].label.toLowerCase() : 'this step';
-      return `Step ${warning.stepIndex + 1} (${label}) contributes ${Math.round(warning.params.indexPercent)} % of the variance: better equipment here lowers the uncertainty most.`;
+      const share = `Step ${warning.stepIndex + 1} (${label}) contributes ${Math.round(warning.params.indexPercent)} % of the variance`;
+      return warning.params.lowerableByEquipment
+        ? `${share}: better equipment here lowers the uncertainty most.`
+        : `${share}, mostly from the material (its certificate, purity or atomic weights): better equipment would not lower it; a certificate with a smaller uncertainty, or the lot's atomic weight or molar mass, would.`;
     }
     case 'flaggedItem':
       return `${warning.params.itemCode}: ${warning.params.flags.join('; ')}.`;

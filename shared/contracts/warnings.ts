@@ -47,7 +47,8 @@ type PlannerWarning =
       /** One step contributes more than the dominant share of the variance. */
       code: 'dominantStep';
       stepIndex: number;
-      params: { indexPercent: number; stepKind: PlanStep['kind'] | null };
+      /** `lowerableByEquipment`: most of it comes from the balance, glassware or temperature, not the material. */
+      params: { indexPercent: number; stepKind: PlanStep['kind'] | null; lowerableByEquipment: boolean };
     }
   | {
       /** A library item the plan uses is flagged (calibration due or overdue, material expiring or expired). */

@@ -1,4 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { libraryRepository } from './library-repository';
 import { buildTestApp, countRows, demo, signIn, type Client, type TestApp } from '../test-support/test-app';
 
 /** An invented lot of potassium dichromate; CIAAW 2021 atomic weights give M(K2Cr2O7) = 294.18 g/mol. */
@@ -139,6 +140,33 @@ describe('CSV of solid materials with the certificate columns', () => {
       (candidate: { code: string }) => candidate.code === 'T-RM-OLD',
     );
     expect(item.current.data.certificateMolarMassGPerMol).toBeNull();
+    expect((await again(old)).map((row) => row.action)).toEqual(['unchanged']);
+    // A revision stored before the columns existed has none of the new fields; it reads as the same data.
+    const stored = Object.fromEntries(
+      Object.entries(item.current.data as Record<string, unknown>).filter(
+        ([key]) => !/^(certificateMolarMass|analyteAtomicWeight|compositionSource)/.test(key),
+      ),
+    );
+    expect(Object.keys(stored)).not.toContain('certificateMolarMassGPerMol');
+    const qaId = (
+      await t
+        .db('users')
+        .where({ email: demo('qa') })
+        .first()
+    ).id;
+    await t.db.transaction((trx) =>
+      libraryRepository(trx).appendRevision(
+        item.id,
+        {
+          data: stored,
+          reason: 'as stored before',
+          createdAt: '2026-11-01T00:00:00.000Z',
+          createdBy: qaId,
+          code: 'T-RM-OLD',
+        },
+        trx,
+      ),
+    );
     expect((await again(old)).map((row) => row.action)).toEqual(['unchanged']);
   });
 });

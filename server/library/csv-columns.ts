@@ -174,6 +174,20 @@ export const CSV_COLUMNS: Record<EquipmentKind, CsvColumn[]> = {
       type: 'optional-number',
       help: 'g/cm³ (safety data sheet), for air buoyancy',
     },
+    ...[
+      ['certificate_molar_mass_g_per_mol', 'molar mass from the certificate, g/mol (checked against the formula)'],
+      ['certificate_molar_mass_expanded_uncertainty_g_per_mol', 'its U, g/mol (then used in the budget)'],
+      ['certificate_molar_mass_coverage_factor', 'k of that U (1 for a standard uncertainty)'],
+      ['analyte_atomic_weight_g_per_mol', 'the lot’s atomic weight of the analyte, g/mol'],
+      ['analyte_atomic_weight_expanded_uncertainty_g_per_mol', 'its U, g/mol'],
+      ['analyte_atomic_weight_coverage_factor', 'k of that U (1 for a standard uncertainty)'],
+    ].map(([column, help]): CsvColumn => ({ column, path: [camel(column)], type: 'optional-number', help })),
+    {
+      column: 'composition_source',
+      path: ['compositionSource'],
+      type: 'optional-text',
+      help: 'where the molar mass or atomic weight comes from',
+    },
   ],
   'solution-material': [
     ...material,

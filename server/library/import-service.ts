@@ -68,7 +68,7 @@ export function importService(deps: { transact: Transact; library: LibraryReposi
             itemId = existing.id;
             const current = await library.revision(existing.current_revision_id);
             action =
-              current && canonicalJson(JSON.parse(current.data_json)) === canonicalJson(parsed.data)
+              current && canonicalJson(storedWithDefaults(kind, current.data_json)) === canonicalJson(parsed.data)
                 ? 'unchanged'
                 : 'revise';
           }
@@ -100,4 +100,11 @@ export function importService(deps: { transact: Transact; library: LibraryReposi
       return { ...result, written: true };
     },
   };
+}
+
+/** A stored revision read with today's defaults, so a field added since (null by default) is no change. */
+function storedWithDefaults(kind: EquipmentKind, dataJson: string): unknown {
+  const stored: unknown = JSON.parse(dataJson);
+  const read = equipmentDataSchemas[kind].safeParse(stored);
+  return read.success ? read.data : stored;
 }

@@ -101,6 +101,7 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
         // The library keeps g/cm³ as chemists write it; the engine reads kg/m³ (1 g/cm³ = 1000 kg/m³).
         densityKgPerM3:
           d.densityGPerCm3 === null || d.densityGPerCm3 === undefined ? undefined : d.densityGPerCm3 * 1000,
+        ...certificateComposition(d),
       };
     }
     case 'solution-material': {
@@ -153,6 +154,37 @@ function pistonCalibration(d: PistonPipetteData): Pick<PistonPipette, 'calibrati
         ],
   );
   return points.length === 0 ? {} : { calibration: { points, ...calibrationOrigin(d) } };
+}
+
+/**
+ * The lot's values a solid's certificate gives, as the engine uses them: a molar mass with its uncertainty
+ * (a molar mass without one is only checked against the formula, in the library), or the analyte's atomic weight.
+ */
+function certificateComposition(
+  d: SolidMaterialData,
+): Pick<SolidMaterial, 'certificateMolarMass' | 'certificateAtomicWeight'> {
+  // A revision stored before these fields existed has none of them: the same as null.
+  const source = d.compositionSource ?? '';
+  const lotValue = (value?: number | null, expanded?: number | null, coverageFactor?: number | null) =>
+    value == null || expanded == null || coverageFactor == null
+      ? undefined
+      : {
+          valueGPerMol: value,
+          uncertainty: { shape: 'normal', expandedUncertainty: expanded, coverageFactor } as const,
+          source,
+        };
+  const molarMass = lotValue(
+    d.certificateMolarMassGPerMol,
+    d.certificateMolarMassExpandedUncertaintyGPerMol,
+    d.certificateMolarMassCoverageFactor,
+  );
+  if (molarMass) return { certificateMolarMass: molarMass };
+  const atomicWeight = lotValue(
+    d.analyteAtomicWeightGPerMol,
+    d.analyteAtomicWeightExpandedUncertaintyGPerMol,
+    d.analyteAtomicWeightCoverageFactor,
+  );
+  return atomicWeight ? { certificateAtomicWeight: { element: d.analyte, ...atomicWeight } } : {};
 }
 
 /** The plan settings a lab's policy sets; the plan keeps its own output unit and lab temperature. */

@@ -3,6 +3,7 @@ import { matrixKey } from '../uncertainty/certified-solution-density';
 import { molarMass } from '../uncertainty/chemical-formula';
 import { MAXIMUM_COVERAGE_FACTOR } from '../uncertainty/coverage-factor';
 import { PlanError } from '../uncertainty/plan-error';
+import { molarMassDisagreement } from './material-composition-text';
 
 /**
  * The lab's tolerance library: what QA records for each kind of item. Every number carries its
@@ -259,6 +260,23 @@ export const solidMaterialDataSchema = z
       .refine((v) => v <= 25, 'Give the density in g/cm³, e.g. 2.165 for sodium chloride.')
       .nullable()
       .default(null),
+    /**
+     * The lot's values from its certificate (docs/plan-format.md, "Atomic weights per lot"): the compound's molar
+     * mass, checked against the formula and, with its uncertainty, used in place of the standard atomic weights;
+     * or the analyte's atomic weight with its uncertainty. Expanded U with k (k = 1: a standard uncertainty).
+     */
+    certificateMolarMassGPerMol: positive('the molar mass').nullable().default(null),
+    certificateMolarMassExpandedUncertaintyGPerMol: nonNegative('the molar mass’s uncertainty')
+      .nullable()
+      .default(null),
+    certificateMolarMassCoverageFactor: positive('the coverage factor k').nullable().default(null),
+    analyteAtomicWeightGPerMol: positive('the atomic weight').nullable().default(null),
+    analyteAtomicWeightExpandedUncertaintyGPerMol: nonNegative('the atomic weight’s uncertainty')
+      .nullable()
+      .default(null),
+    analyteAtomicWeightCoverageFactor: positive('the coverage factor k').nullable().default(null),
+    /** Where the lot's molar mass or atomic weight comes from, e.g. "certificate lot 2291, isotopic analysis". */
+    compositionSource: optionalText(200),
   })
   .refine(
     (v) =>
@@ -269,8 +287,64 @@ export const solidMaterialDataSchema = z
       message: 'The purity’s uncertainty must be smaller than the purity.',
       path: ['purityUncertainty'],
     },
-  );
+  )
+  .superRefine(checkCertificateComposition);
 export type SolidMaterialData = z.infer<typeof solidMaterialDataSchema>;
+
+/** The lot's molar mass or atomic weight: each with a value, U with its k, a source; one of them in the model. */
+function checkCertificateComposition(
+  v: {
+    formula: string;
+    analyte: string;
+    certificateMolarMassGPerMol: number | null;
+    certificateMolarMassExpandedUncertaintyGPerMol: number | null;
+    certificateMolarMassCoverageFactor: number | null;
+    analyteAtomicWeightGPerMol: number | null;
+    analyteAtomicWeightExpandedUncertaintyGPerMol: number | null;
+    analyteAtomicWeightCoverageFactor: number | null;
+    compositionSource: string;
+  },
+  context: z.RefinementCtx,
+) {
+  const refuse = (path: string, message: string) => context.addIssue({ code: 'custom', path: [path], message });
+  const molarMassU = v.certificateMolarMassExpandedUncertaintyGPerMol;
+  if ((molarMassU === null) !== (v.certificateMolarMassCoverageFactor === null))
+    refuse(
+      'certificateMolarMassCoverageFactor',
+      'Give the molar mass’s expanded uncertainty with its coverage factor k (k = 1 for a standard uncertainty).',
+    );
+  if (molarMassU !== null && v.certificateMolarMassGPerMol === null)
+    refuse('certificateMolarMassGPerMol', 'Give the molar mass its uncertainty belongs to.');
+  const atomicWeight = v.analyteAtomicWeightGPerMol;
+  if (
+    atomicWeight !== null &&
+    (v.analyteAtomicWeightExpandedUncertaintyGPerMol === null || v.analyteAtomicWeightCoverageFactor === null)
+  )
+    refuse(
+      'analyteAtomicWeightExpandedUncertaintyGPerMol',
+      'Give the atomic weight’s expanded uncertainty with its coverage factor k (k = 1 for a standard uncertainty).',
+    );
+  if (atomicWeight === null && v.analyteAtomicWeightExpandedUncertaintyGPerMol !== null)
+    refuse('analyteAtomicWeightGPerMol', 'Give the atomic weight its uncertainty belongs to.');
+  if (atomicWeight !== null && molarMassU !== null)
+    refuse(
+      'analyteAtomicWeightGPerMol',
+      'Give the lot’s molar mass with an uncertainty or the analyte’s atomic weight, not both: either one replaces the standard atomic weights.',
+    );
+  if (atomicWeight !== null && !/^[A-Z][a-z]?$/.test(v.analyte))
+    refuse(
+      'analyteAtomicWeightGPerMol',
+      `An atomic weight belongs to an element; the analyte ${v.analyte} is not one.`,
+    );
+  if ((atomicWeight !== null || molarMassU !== null) && v.compositionSource === '')
+    refuse('compositionSource', 'Say where the value comes from, e.g. "certificate lot 2291, isotopic analysis".');
+  const lot = atomicWeight === null ? undefined : { element: v.analyte, valueGPerMol: atomicWeight };
+  const disagreement =
+    v.certificateMolarMassGPerMol === null
+      ? null
+      : molarMassDisagreement(v.formula, v.certificateMolarMassGPerMol, lot);
+  if (disagreement !== null) refuse('certificateMolarMassGPerMol', disagreement);
+}
 
 export const certifiedUnitSchema = z.enum(['mg/L', 'mg/kg'], { message: 'Choose mg/L or mg/kg.' });
 

@@ -27,10 +27,25 @@ export function warningText(warning: Warning): string {
         standardUncertaintyGPerMl > 0 ? ` with a standard uncertainty of ${standardUncertaintyGPerMl} g/mL` : '';
       return `Step ${warning.stepIndex + 1}: ${materialName} (${materialItemId}) is certified in ${certifiedUnit} and its density is not known, so water's density (${densityGPerMl.toFixed(4)} g/mL) was used${uncertainty}. Enter the density from its certificate, or add its matrix to the lab's density table.`;
     }
+    case 'dominantAtomicWeight': {
+      const { element, itemId, indexPercent } = warning.params;
+      const what =
+        itemId === null
+          ? `The standard atomic weight of ${element ?? 'the analyte'}`
+          : `The certificate's ${element === null ? 'molar mass' : `atomic weight of ${element}`} for ${itemId}`;
+      const remedy =
+        itemId === null
+          ? "the lot's atomic weight or molar mass from its certificate would lower it"
+          : 'a certificate with a smaller uncertainty would lower it';
+      return `${what} contributes ${Math.round(indexPercent)} % of the variance: ${remedy}; better glassware or a better balance would not.`;
+    }
     case 'dominantStep': {
       const { stepKind } = warning.params;
       const label = stepKind ? STEP_KINDS[stepKind].label.toLowerCase() : 'this step';
-      return `Step ${warning.stepIndex + 1} (${label}) contributes ${Math.round(warning.params.indexPercent)} % of the variance: better equipment here lowers the uncertainty most.`;
+      const share = `Step ${warning.stepIndex + 1} (${label}) contributes ${Math.round(warning.params.indexPercent)} % of the variance`;
+      return warning.params.lowerableByEquipment
+        ? `${share}: better equipment here lowers the uncertainty most.`
+        : `${share}, mostly from the material (its certificate, purity or atomic weights): better equipment would not lower it; a certificate with a smaller uncertainty, or the lot's atomic weight or molar mass, would.`;
     }
     case 'flaggedItem':
       return `${warning.params.itemCode}: ${warning.params.flags.join('; ')}.`;

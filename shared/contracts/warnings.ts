@@ -32,6 +32,11 @@ export const engineWarningSchema = z.discriminatedUnion('code', [
       standardUncertaintyGPerMl: z.number(),
     }),
   }),
+  z.object({
+    code: z.literal('dominantAtomicWeight'),
+    stepIndex,
+    params: z.object({ element: z.string().nullable(), itemId: z.string().nullable(), indexPercent: z.number() }),
+  }),
 ]);
 
 /** A warning stored as an English sentence, before warnings had codes: its words are the stored text. */
@@ -58,7 +63,8 @@ type PlannerWarning =
       /** One step contributes more than the dominant share of the variance. */
       code: 'dominantStep';
       stepIndex: number;
-      params: { indexPercent: number; stepKind: PlanStep['kind'] | null };
+      /** `lowerableByEquipment`: most of it comes from the balance, glassware or temperature, not the material. */
+      params: { indexPercent: number; stepKind: PlanStep['kind'] | null; lowerableByEquipment: boolean };
     }
   | {
       /** A library item the plan uses is flagged (calibration due or overdue, material expiring or expired). */

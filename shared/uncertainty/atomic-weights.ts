@@ -14,7 +14,8 @@ export type AtomicWeightTable = Readonly<Record<string, AtomicWeight>>;
 /*
  * Source: CIAAW standard atomic weights 2021 (Prohaska et al., Pure Appl. Chem. 94 (2022) 573–600, Table 1).
  * An interval [a, b] is used as (a + b)/2 with rectangular half-width (b − a)/2, i.e. u = (b − a)/(2√3)
- * (van der Veen et al., Pure Appl. Chem. 93 (2021) 629); a value with its uncertainty in parentheses is taken as
+ * (van der Veen et al., Pure Appl. Chem. 93 (2021) 629; Possolo et al., Pure Appl. Chem. 90 (2018) 395, from memory:
+ * Pb [206.14, 207.94] → 207.04 with half-width 0.90, u = 0.52); a value with its uncertainty in parentheses is taken as
  * rectangular with that half-width (EURACHEM/CITAC CG4 practice).
  */
 

@@ -32,6 +32,53 @@ describe('formula parsing', () => {
   });
 });
 
+describe('formulas with brackets that do not balance (common practice)', () => {
+  it.each([
+    ['Pb(NO3', /unclosed parenthesis/],
+    ['Pb NO3)2', /closing parenthesis without an opening one/],
+    ['K3[Fe(CN)6)', /unclosed "\["/],
+    ['Pb(NO3]2', /unclosed "\("/],
+  ])('refuses %s', (formula, message) => {
+    expect(() => parseFormula(formula)).toThrow(message);
+  });
+});
+
+describe('a 0 typed for the letter O (rules in formula-zero-check.ts; common practice)', () => {
+  // "K2Cr207" read as Cr × 207 gives M = 10841 g/mol, 37 times K2Cr2O7 (294.18 g/mol, CIAAW 2021).
+  it.each([
+    ['K2Cr207', /reads as 207 atoms of Cr.*Did you mean "K2Cr2O7"\?/],
+    ['Na2S203', /reads as 203 atoms of S.*Did you mean "Na2S2O3"\?/],
+    ['H20', /reads as 20 atoms of H and nothing else.*Did you mean "H2O"\?/],
+    ['H202', /Did you mean "H2O2"\?/],
+    ['Fe203·H20', /Did you mean "Fe2O3·H2O"\?/],
+    ['KMn04', /count "04" after Mn.*Did you mean "KMnO4"\?/],
+    ['Pb(N03)2', /Did you mean "Pb\(NO3\)2"\?/],
+    ['Ca0', /count of 0 after Ca.*Did you mean "CaO"\?/],
+    ['Na2B4O7·10H20', /Did you mean "Na2B4O7·10H2O"\?/],
+  ])('refuses %s and suggests the O reading', (formula, message) => {
+    expect(() => parseFormula(formula)).toThrow(message);
+  });
+
+  it('refuses a count of 0 after a bracket without suggesting an O there', () => {
+    expect(() => parseFormula('Pb(NO3)0')).toThrow(/count of 0 after the bracketed group/);
+    expect(() => parseFormula('Pb(NO3)0')).not.toThrow(/Did you mean/);
+  });
+
+  // Real formulas with zeros in their counts stay readable: fullerenes, long alkanes (C18H38, C20H42, hectane
+  // C100H202 whose "202" would read as "2O2" only beside a count of 100), borax decahydrate (CIAAW 2021 masses).
+  it.each([
+    ['C60', 720.64],
+    ['C70', 840.74],
+    ['C18H38', 254.49],
+    ['C20H42', 282.55],
+    ['C100H202', 1404.67],
+    ['Na2B4O7·10H2O', 381.38],
+    ['(NH4)2SO4', 132.14],
+  ])('reads %s (M ≈ %f g/mol)', (formula, expected) => {
+    expect(molarMass(formula).valueGPerMol).toBeCloseTo(expected, 2);
+  });
+});
+
 describe('molar masses', () => {
   // Handbook values (see the fixture for the source of each); they are printed to `printedDecimals`
   // and computed from older or abridged atomic weights, so the tolerance is one unit of the last printed

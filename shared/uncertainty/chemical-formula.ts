@@ -1,4 +1,5 @@
 import { atomicWeightOf, standardAtomicWeights, type AtomicWeightTable } from './atomic-weights';
+import { findMistypedZero } from './formula-zero-check';
 import { PlanError, type PlanPathSegment } from './plan-error';
 import { MAXIMUM_FORMULA_LENGTH, MAXIMUM_FORMULA_NESTING } from './plan-limits';
 
@@ -10,8 +11,9 @@ export type Composition = ReadonlyMap<string, number>;
  * nested parentheses or brackets with a multiplier, and hydrates or adducts joined by
  * `·`, `•`, `.` or `*` with an optional leading count: `Pb(NO3)2`, `CuSO4·5H2O`, `K2Cr2O7`.
  * At most MAXIMUM_FORMULA_LENGTH characters and MAXIMUM_FORMULA_NESTING levels of brackets, checked before
- * reading (the reader recurses once per level).
- * @throws PlanError for an unknown element, unbalanced parentheses, or a formula beyond those caps
+ * reading (the reader recurses once per level). A 0 typed for the letter O ("K2Cr207") is refused with the
+ * formula read with an O in its place (rules in formula-zero-check.ts).
+ * @throws PlanError for an unknown element, unbalanced brackets, a mistyped zero, or a formula beyond those caps
  * @example parseFormula('CuSO4·5H2O') // Map { Cu → 1, S → 1, O → 9, H → 10 }
  */
 export function parseFormula(
@@ -33,6 +35,13 @@ export function parseFormula(
       `"${text}" nests brackets more than ${MAXIMUM_FORMULA_NESTING} deep; a formula can nest them at most ${MAXIMUM_FORMULA_NESTING} levels.`,
     );
   }
+  const mistyped = findMistypedZero(text);
+  if (mistyped) {
+    throw new PlanError(
+      path,
+      `"${text}" ${mistyped.problem}; a 0 was probably typed for the letter O.${suggestion(mistyped.corrected, table)}`,
+    );
+  }
   const total = new Map<string, number>();
   for (const part of text.split(/[·•.*]/)) {
     if (part.length === 0) throw new PlanError(path, `"${formula}" has an empty part around a hydrate dot.`);
@@ -45,6 +54,23 @@ export function parseFormula(
     for (const [symbol, count] of composition) total.set(symbol, (total.get(symbol) ?? 0) + count * multiplier);
   }
   return total;
+}
+
+/** ' Did you mean "K2Cr2O7"?' when the text with every mistyped 0 read as O is a formula; else nothing. */
+function suggestion(corrected: string | undefined, table: AtomicWeightTable): string {
+  let candidate = corrected;
+  for (let round = 0; candidate !== undefined && round < MAXIMUM_FORMULA_LENGTH; round += 1) {
+    const next = findMistypedZero(candidate);
+    if (next === undefined) break;
+    candidate = next.corrected;
+  }
+  if (candidate === undefined) return '';
+  try {
+    parseFormula(candidate, [], table);
+    return ` Did you mean "${candidate}"?`;
+  } catch {
+    return '';
+  }
 }
 
 /** Deepest level of brackets, counted in one pass (unbalanced brackets are reported by the reader). */

@@ -33,4 +33,14 @@ export type EngineWarning =
         densityGPerMl: number;
         standardUncertaintyGPerMl: number;
       };
+    }
+  | {
+      /**
+       * One atomic-weight source (a standard atomic weight, or a lot's value from its certificate) holds more than
+       * half of u_c². `element` is null for a molar mass from a certificate; `itemId` is the material whose
+       * certificate gave the value, null for a standard atomic weight.
+       */
+      code: 'dominantAtomicWeight';
+      stepIndex: number;
+      params: { element: string | null; itemId: string | null; indexPercent: number };
     };

@@ -152,6 +152,18 @@ export const pistonPipetteSchema = z
   })
   .strict();
 
+/** A value from a material's certificate (g/mol) with its uncertainty and where it comes from. */
+function certificateValueSchema(what: string) {
+  return z
+    .object({
+      valueGPerMol: positive(what),
+      uncertainty: distributionSchema,
+      /** e.g. "certificate lot 2291, isotopic analysis". */
+      source: z.string().min(1, 'Say where the value comes from, e.g. the certificate and its lot.'),
+    })
+    .strict();
+}
+
 export const solidMaterialSchema = z
   .object({
     kind: z.literal('solidMaterial'),
@@ -171,8 +183,21 @@ export const solidMaterialSchema = z
     analyteCount: z.number().int().positive().optional(),
     /** For air buoyancy (settings.airBuoyancy): the solid's density, kg/m³ (the library keeps g/cm³). */
     densityKgPerM3: positive('The density').optional(),
+    /**
+     * The lot's molar mass of the compound from its certificate: one source for M(compound) in place of the
+     * standard atomic weights of its elements (CIAAW 2021; Possolo et al. 2018 for a material of known provenance).
+     */
+    certificateMolarMass: certificateValueSchema('The molar mass').optional(),
+    /** The lot's atomic weight of one element of the compound from its certificate, in place of the standard one. */
+    certificateAtomicWeight: certificateValueSchema('The atomic weight')
+      .extend({ element: z.string().regex(/^[A-Z][a-z]?$/, 'Name the element by its symbol, e.g. Pb.') })
+      .optional(),
   })
-  .strict();
+  .strict()
+  .refine((material) => !(material.certificateMolarMass && material.certificateAtomicWeight), {
+    message: 'Give the certificate’s molar mass or its atomic weight of the analyte, not both.',
+    path: ['certificateAtomicWeight'],
+  });
 
 export const certifiedSolutionSchema = z
   .object({

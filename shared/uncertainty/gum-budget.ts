@@ -1,3 +1,4 @@
+import { dominantAtomicWeightWarnings } from './atomic-weight-warning';
 import { coverageFactorOf, coverageProbabilityOf, type CoverageSetting } from './coverage-setting';
 import type { Distribution } from './distributions';
 import type { EngineWarning } from './engine-warning';
@@ -164,6 +165,6 @@ export function propagate(model: CompiledModel, coverage: CoverageSetting): Budg
       coverageProbability,
       referenceTemperatureC: model.referenceTemperatureC,
     }),
-    warnings: model.warnings,
+    warnings: [...model.warnings, ...dominantAtomicWeightWarnings(rows)],
   };
 }

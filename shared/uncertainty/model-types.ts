@@ -23,6 +23,22 @@ export const SOURCE_CATEGORIES = [
 export type SourceCategory = (typeof SOURCE_CATEGORIES)[number];
 
 /**
+ * Categories better equipment can lower: the balance, glassware, pipettes and temperature. The rest come with the
+ * material (purity, certified value, atomic weights, density) or the user, and only a better certificate lowers them.
+ */
+export const EQUIPMENT_CATEGORIES: ReadonlySet<SourceCategory> = new Set<SourceCategory>([
+  'balanceRepeatability',
+  'balanceReadability',
+  'balanceLinearity',
+  'balanceSensitivity',
+  'volumetricTolerance',
+  'fillRepeatability',
+  'pipetteSystematicError',
+  'pipetteRandomError',
+  'temperature',
+]);
+
+/**
  * One independent elementary input of the measurement model.
  * `sharing` is 'item' for a systematic effect of a physical item (one source however often the item is used)
  * and 'use' for an effect drawn afresh each time (a reading, a fill).

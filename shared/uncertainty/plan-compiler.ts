@@ -7,7 +7,7 @@ import {
   type DensityValue,
 } from './certified-solution-density';
 import { parseFormula, type Composition } from './chemical-formula';
-import { analyteCountIn, molarMassNode } from './composition-nodes';
+import { analyteCountIn, hasCertificateComposition, materialMolarMassNodes, molarMassNode } from './composition-nodes';
 import { addAbsoluteExtraSources, applyRelativeExtraSources } from './extra-sources';
 import { ModelBuilder, type NodeReference } from './model-builder';
 import type { CompiledModel } from './model-types';
@@ -68,6 +68,11 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
   const solutionDensity = solutionDensityNode(builder, plan);
   const waterGPerMl = waterDensityKgPerM3(plan.settings.labTemperatureC) / 1000;
   const airBuoyancy = effectiveAirBuoyancy(plan);
+  /** A material's lot values, when its certificate gives them, are the plan's M(analyte) from then on. */
+  const adoptAnalyteMolarMass = <Nodes extends { analyte: NodeReference }>(nodes: Nodes) => {
+    analyteMolarMass = nodes.analyte;
+    return nodes;
+  };
 
   const settings = settingsWithDefaults(plan.settings);
   let state = { kind: 'nothing' } as ChainState;
@@ -82,6 +87,7 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
     state = applyStep(context, step, state, {
       analyte,
       analyteMolarMassNode,
+      adoptAnalyteMolarMass,
       solutionDensity,
       waterGPerMl,
       airBuoyancy,
@@ -117,6 +123,7 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
 interface SharedNodes {
   analyte: Composition;
   analyteMolarMassNode: (stepIndex: number) => NodeReference;
+  adoptAnalyteMolarMass: <Nodes extends { analyte: NodeReference }>(nodes: Nodes) => Nodes;
   /** Density of the solutions the plan prepares: the plan's stated one, or water at the lab temperature. */
   solutionDensity: DensityValue;
   /** Water at the lab temperature (Tanaka et al. 2001), g/mL. */
@@ -184,10 +191,24 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
       const formulaPath = [...path, 'material', 'formula'];
       const compound = parseFormula(step.material.formula, formulaPath, context.atomicWeights);
       const count = analyteCountIn(compound, shared.analyte, step.material.analyteCount, [...path, 'material']);
-      const factor = builder.divide(
-        builder.scale(shared.analyteMolarMassNode(context.stepIndex), count),
-        molarMassNode(builder, compound, context.atomicWeights, context.stepIndex, formulaPath),
-      );
+      const molarMasses = hasCertificateComposition(step.material)
+        ? shared.adoptAnalyteMolarMass(
+            materialMolarMassNodes(
+              builder,
+              step.material,
+              compound,
+              shared.analyte,
+              count,
+              context.atomicWeights,
+              context.stepIndex,
+              [...path, 'material'],
+            ),
+          )
+        : {
+            analyte: shared.analyteMolarMassNode(context.stepIndex),
+            compound: molarMassNode(builder, compound, context.atomicWeights, context.stepIndex, formulaPath),
+          };
+      const factor = builder.divide(builder.scale(molarMasses.analyte, count), molarMasses.compound);
       const amountMg = builder.multiply(builder.multiply(builder.scale(mass, 1000), purity), factor);
       return {
         kind: 'portion',

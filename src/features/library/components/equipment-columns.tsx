@@ -13,6 +13,7 @@ import {
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { EquipmentItem, EquipmentKind } from '../../../../shared/contracts/library';
+import { molarMassFigures, molarMassOf } from '../../../../shared/contracts/material-composition-text';
 import { paths } from '../../../config/paths';
 import { formatFormula } from '../utils/format-formula';
 import { formatQuantity } from '../utils/format-quantity';
@@ -43,6 +44,7 @@ export const NUMERIC_COLUMN_IDS = new Set([
   'systematicErrorUl',
   'randomErrorUl',
   'purity',
+  'molarMass',
   'certifiedValue',
   'expandedUncertainty',
   'certificateCount',
@@ -212,6 +214,16 @@ export const EQUIPMENT_COLUMNS: Record<EquipmentKind, ReturnType<typeof column.c
       cell: (info) => formatFormula(info.getValue() ?? '—'),
     }),
     lotColumn,
+    column.accessor((item) => molarMassOf(item.current.data), {
+      id: 'molarMass',
+      header: withUnit('Molar mass', 'g/mol'),
+      sortFn: 'basic',
+      sortUndefined: 'last',
+      cell: (info) => {
+        const value = info.getValue();
+        return value === undefined ? '—' : molarMassFigures(value);
+      },
+    }),
     numeric('purity', withUnit('Purity', 'g/g'), (item) => numberOf(item, 'purity')),
     dateColumn('expiresOn', 'Expires'),
     hazardColumn,

@@ -1,8 +1,10 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import type { solidMaterialDataSchema } from '../../../../shared/contracts/library';
+import { compositionSummaryOf } from '../../../../shared/contracts/material-composition-text';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
+import { CertificateCompositionFields } from './certificate-composition-fields';
 import { AS_NUMBER } from './form-registrations';
 import { QuantityField } from './quantity-field';
 
@@ -32,6 +34,11 @@ export function SolidMaterialFields() {
     formState: { errors },
   } = useFormContext<SolidValues>();
   const shape = useWatch({ control, name: 'data.purityUncertainty.shape' });
+  const [formula, analyte, analyteAtomicWeightGPerMol] = useWatch({
+    control,
+    name: ['data.formula', 'data.analyte', 'data.analyteAtomicWeightGPerMol'],
+  });
+  const composition = compositionSummaryOf({ formula, analyte, analyteAtomicWeightGPerMol });
   const error = errors.data;
   const uncertaintyError = error?.purityUncertainty;
   return (
@@ -67,6 +74,17 @@ export function SolidMaterialFields() {
           registration={register('data.densityGPerCm3', AS_NUMBER)}
         />
       </div>
+      <p
+        role="status"
+        aria-label="Molar mass and analyte"
+        className={composition && 'problem' in composition ? 'text-danger' : 'text-muted'}
+      >
+        {composition === null
+          ? 'The molar mass and the analyte’s mass fraction appear here as the formula is typed.'
+          : 'problem' in composition
+            ? composition.problem
+            : composition.text}
+      </p>
       <div className="grid items-start gap-4 md:grid-cols-3">
         <Select
           label="Purity uncertainty"
@@ -98,6 +116,7 @@ export function SolidMaterialFields() {
           </>
         )}
       </div>
+      <CertificateCompositionFields />
     </fieldset>
   );
 }

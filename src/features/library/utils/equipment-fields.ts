@@ -1,4 +1,5 @@
 import type { EquipmentKind } from '../../../../shared/contracts/library';
+import { compositionSummaryOf } from '../../../../shared/contracts/material-composition-text';
 import { formatFormula } from './format-formula';
 import { formatQuantity } from './format-quantity';
 
@@ -12,6 +13,8 @@ export type EquipmentField = {
   format?: (value: unknown) => string;
   /** Shown when the value is empty (default "—"). */
   emptyText?: string;
+  /** For a value computed from the data rather than stored under `key`. */
+  read?: (data: Data) => unknown;
 };
 
 const yesNo = (value: unknown) => (value ? 'Yes' : 'No');
@@ -130,6 +133,28 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
     { key: 'analyte', label: 'Analyte' },
     { key: 'purity', label: 'Purity (mass fraction)' },
     { key: 'purityUncertainty', label: 'Purity uncertainty', format: formatPurityUncertainty },
+    {
+      key: 'composition',
+      label: 'Molar mass and analyte',
+      read: (data) => {
+        const summary = compositionSummaryOf(data);
+        return summary === null ? null : 'text' in summary ? summary.text : summary.problem;
+      },
+      format: String,
+    },
+    { key: 'certificateMolarMassGPerMol', label: 'Molar mass from the certificate', unit: 'g/mol' },
+    {
+      key: 'certificateMolarMassExpandedUncertaintyGPerMol',
+      label: 'Molar mass: expanded uncertainty U',
+      unit: (data) => `g/mol (k = ${number(data.certificateMolarMassCoverageFactor)})`,
+    },
+    { key: 'analyteAtomicWeightGPerMol', label: 'Atomic weight of the analyte, this lot', unit: 'g/mol' },
+    {
+      key: 'analyteAtomicWeightExpandedUncertaintyGPerMol',
+      label: 'Atomic weight: expanded uncertainty U',
+      unit: (data) => `g/mol (k = ${number(data.analyteAtomicWeightCoverageFactor)})`,
+    },
+    { key: 'compositionSource', label: 'Source of these values' },
   ],
   'solution-material': [
     ...MATERIAL,
@@ -146,7 +171,7 @@ export const EQUIPMENT_FIELDS: Record<EquipmentKind, EquipmentField[]> = {
 
 /** The value of one field as text with its unit; "—" when it is empty. */
 export function formatFieldValue(field: EquipmentField, data: Data): string {
-  const value = data[field.key];
+  const value = field.read ? field.read(data) : data[field.key];
   if (value === null || value === undefined || value === '') return field.emptyText ?? '—';
   const text = field.format ? field.format(value) : typeof value === 'boolean' ? yesNo(value) : number(value);
   const unit = typeof field.unit === 'function' ? field.unit(data) : field.unit;

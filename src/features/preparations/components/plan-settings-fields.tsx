@@ -1,4 +1,5 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
+import { compositionSummaryOf } from '../../../../shared/contracts/material-composition-text';
 import { needsOverrideReason } from '../../../../shared/contracts/preparations';
 import { concentrationUnitNames } from '../../../../shared/uncertainty';
 import { Select } from '../../../components/ui/select';
@@ -14,6 +15,13 @@ type PlanSettingsFieldsProps = {
   onOverrideChange: (libraryId: string, reason: string) => void;
   errorAt: (field: string) => string | undefined;
 };
+
+/** The material's name and, for a solid, its molar mass and the plan analyte's mass fraction in it (live). */
+function materialHint(material: EquipmentItem, analyte: string): string {
+  const name = String(material.current.data.name ?? '');
+  const composition = material.kind === 'solid-material' ? compositionSummaryOf(material.current.data, analyte) : null;
+  return composition === null ? name : `${name}. ${'text' in composition ? composition.text : composition.problem}`;
+}
 
 const UNIT_OPTIONS = concentrationUnitNames.map((unit) => ({ value: unit, label: unit }));
 
@@ -48,7 +56,7 @@ export function PlanSettingsFields({
         ]}
         error={errorAt('material')}
         hint={
-          material ? String(material.current.data.name ?? '') : 'Solids are weighed; certified solutions are pipetted.'
+          material ? materialHint(material, draft.analyte) : 'Solids are weighed; certified solutions are pipetted.'
         }
       />
       <TextField

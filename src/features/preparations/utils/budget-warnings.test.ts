@@ -65,6 +65,30 @@ describe('the planner’s live warnings', () => {
     expect(flagged).toBe('BAL-04: calibration overdue.');
   });
 
+  // CIAAW 2021: Pb [206.14, 207.94], u = 0.52 g/mol, 0.16 % of M(Pb(NO3)2): on the five-place BAL-05 with 1.6 g it
+  // outweighs the balance, so step 1 dominates through the atomic weight and the purity, not through equipment.
+  it('do not advise better equipment when the dominant step is dominated by the material (atomic weight, purity)', () => {
+    const draft: PlanDraft = {
+      ...leadOnFourPlaceBalance('1.5990'),
+      outputUnit: 'mmol/L',
+      overrides: {},
+      steps: [
+        { ...emptyStep('weighSolid'), equipmentId: '1', quantity: '1.5990' },
+        { ...emptyStep('makeUpToVolume'), equipmentId: '3' },
+      ],
+    };
+    const budget = liveBudget(draft, true);
+    const warnings = placedWarnings({ budget, warnings: budget.warnings }, draft, DEMO_LIBRARY_BY_ID);
+    const dominant = warnings.find((warning) => warning.code === 'dominantStep');
+    expect(dominant).toMatchObject({ stepIndex: 0, params: { lowerableByEquipment: false } });
+    expect(warningText(dominant!)).toMatch(/mostly from the material .*better equipment would not lower it/);
+    expect(warningText(dominant!)).not.toMatch(/better equipment here lowers/);
+    const atomicWeight = warnings.find((warning) => warning.code === 'dominantAtomicWeight');
+    expect(atomicWeight && warningText(atomicWeight)).toMatch(
+      /^The standard atomic weight of Pb contributes \d+ % of the variance: the lot's atomic weight or molar mass from its certificate would lower it; better glassware or a better balance would not\.$/,
+    );
+  });
+
   it('name no dominant step when no step holds more than half of the variance', () => {
     const draft = leadOnFourPlaceBalance('0.1599');
     const budget = liveBudget(draft, true);

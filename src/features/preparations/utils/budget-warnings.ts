@@ -1,5 +1,6 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import type { Budget } from '../../../../shared/contracts/snapshot';
+import { EQUIPMENT_CATEGORIES } from '../../../../shared/uncertainty/model-types';
 import type { StoredWarning, Warning } from '../../../../shared/contracts/warnings';
 import type { PlanDraft } from './plan-draft';
 
@@ -23,13 +24,17 @@ export function placedWarnings(
   const budget = shown?.budget;
   const warnings: Warning[] = [...(shown?.warnings ?? [])];
   for (const group of budget?.byStep ?? []) {
-    if (group.indexPercent > DOMINANT_STEP_PERCENT && /^\d+$/.test(group.key)) {
+    if (budget && group.indexPercent > DOMINANT_STEP_PERCENT && /^\d+$/.test(group.key)) {
       const index = Number(group.key);
       const stepKind = draft.steps[index]?.kind ?? null;
       warnings.push({
         code: 'dominantStep',
         stepIndex: index,
-        params: { indexPercent: group.indexPercent, stepKind },
+        params: {
+          indexPercent: group.indexPercent,
+          stepKind,
+          lowerableByEquipment: lowerableByEquipment(budget, group.key),
+        },
       });
     }
   }
@@ -42,4 +47,16 @@ export function placedWarnings(
       warnings.push({ code: 'flaggedItem', stepIndex: index, params: { itemCode: item.code, flags: item.flags } });
   });
   return warnings;
+}
+
+/** Whether most of a step group's variance comes from what better equipment can lower (not the material's certificate). */
+function lowerableByEquipment(budget: Budget, key: string): boolean {
+  let equipment = 0;
+  let material = 0;
+  for (const row of budget.rows) {
+    if (row.stepIndices.join('+') !== key) continue;
+    if (EQUIPMENT_CATEGORIES.has(row.category)) equipment += row.contribution ** 2;
+    else material += row.contribution ** 2;
+  }
+  return equipment >= material;
 }

@@ -1,4 +1,5 @@
 import type { EquipmentItem } from '../../../../shared/contracts/library';
+import { molarMassOf, molarMassText } from '../../../../shared/contracts/material-composition-text';
 
 const data = (item: EquipmentItem) => item.current.data as Record<string, unknown>;
 
@@ -10,7 +11,11 @@ export function equipmentOptionLabel(item: EquipmentItem): string {
   if (item.kind === 'flask' || item.kind === 'glass-pipette')
     facts.push(`${fields.nominalMl} mL`, `class ${fields.glassClass}`, `± ${fields.toleranceMl} mL`);
   if (item.kind === 'piston-pipette') facts.push(`${fields.minVolumeUl}–${fields.maxVolumeUl} µL`);
-  if (item.kind === 'solid-material') facts.push(String(fields.formula), `purity ${fields.purity}`);
+  if (item.kind === 'solid-material') {
+    const molarMass = molarMassOf(fields);
+    facts.push(String(fields.formula), ...(molarMass === undefined ? [] : [molarMassText(molarMass)]));
+    facts.push(`purity ${fields.purity}`);
+  }
   if (item.kind === 'solution-material')
     facts.push(`${fields.analyte} ${fields.certifiedValue} ${fields.certifiedUnit}`);
   const flags = item.flags.length > 0 ? ` — ${item.flags.join('; ')}` : '';

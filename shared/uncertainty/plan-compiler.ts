@@ -3,10 +3,12 @@ import { weighByDifference } from './balance-weighing';
 import { parseFormula, type Composition } from './chemical-formula';
 import { analyteCountIn, molarMassNode } from './composition-nodes';
 import { addAbsoluteExtraSources, applyRelativeExtraSources } from './extra-sources';
+import { checkFlaskHoldsNoSolution } from './flask-use';
 import { ModelBuilder, type NodeReference } from './model-builder';
 import type { CompiledModel } from './model-types';
 import { parsePlan } from './parse-plan';
 import { PlanError } from './plan-error';
+import { checkAliquotFromSolution, checkPortionFitsMakeUp, type Amount } from './plan-plausibility';
 import type { Plan, PlanInput, PlanStep } from './plan-schema';
 import type { StepContext } from './step-context';
 import { unitOf } from './units';
@@ -16,19 +18,29 @@ import { waterDensityKgPerM3 } from './water-density';
 /** Where the preparation stands between steps. */
 type ChainState =
   | { kind: 'nothing' }
-  /** A quantity of analyte in hand (mg), e.g. a weighed solid or an aliquot not yet diluted. */
-  /** `volumeMl`: the volume of an aliquot taken by pipette, which the next flask must hold. */
-  | { kind: 'portion'; amountMg: NodeReference; fromSolid: boolean; volumeMl?: number }
+  /**
+   * A quantity of analyte in hand (mg), e.g. a weighed solid or an aliquot not yet diluted;
+   * `taken`: the solid's mass, or the aliquot's volume or mass, which the next make-up must hold;
+   * `takenDensityGPerMl`: the estimated density of the solution an aliquot was taken from.
+   */
+  | {
+      kind: 'portion';
+      amountMg: NodeReference;
+      fromSolid: boolean;
+      taken: Amount;
+      takenDensityGPerMl?: number;
+    }
   /**
    * A solution: mass concentration (mg/L), mass fraction (mg/kg) or molality (mol/kg);
-   * `densityGPerMl` converts between the first two; `containedMl` is the flask's volume, when known.
+   * `densityGPerMl` converts between the first two; `holds` is how much was made (the flask's volume or the
+   * final mass) and at which step, when known (not for a certified solution).
    */
   | {
       kind: 'solution';
       basis: 'massConcentration' | 'massFraction' | 'molality';
       value: NodeReference;
       densityGPerMl: NodeReference;
-      containedMl?: number;
+      holds?: { amount: Amount; stepIndex: number };
     };
 
 const basisUnit = { massConcentration: 'mg/L', massFraction: 'mg/kg', molality: 'mol/kg' } as const;
@@ -67,6 +79,7 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
       stepIndex,
       path: ['steps', stepIndex],
     };
+    checkFlaskHoldsNoSolution(plan.steps, stepIndex);
     state = applyStep(context, step, state, { analyte, analyteMolarMassNode, solutionDensity });
     if (state.kind === 'solution') {
       builder.checkpoint({
@@ -144,6 +157,7 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'portion',
         amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
         fromSolid: true,
+        taken: { unit: 'g', value: step.netMassG },
       };
     }
     case 'startFromCertifiedSolution': {
@@ -199,12 +213,14 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
       );
       if (state.kind !== 'portion') throw new Error('unreachable');
       // A flask cannot be made up to a mark below the liquid already in it (common practice: a dilution dilutes).
-      if (state.volumeMl !== undefined && state.volumeMl > step.flask.nominalMl) {
-        throw new PlanError(
-          [...path, 'flask'],
-          `The aliquot (${state.volumeMl} mL) does not fit in the ${step.flask.nominalMl} mL flask it is to be made up in; choose a larger flask or a smaller aliquot.`,
-        );
-      }
+      checkPortionFitsMakeUp({
+        stepIndex: context.stepIndex,
+        portion: state.fromSolid ? undefined : state.taken,
+        portionKind: 'aliquot',
+        made: { unit: 'mL', value: step.flask.nominalMl },
+        densityGPerMl: state.takenDensityGPerMl ?? builder.estimate(shared.solutionDensity),
+        path: [...path, 'flask'],
+      });
       const volume = addAbsoluteExtraSources(
         context,
         glasswareVolume(context, step.flask, 'flask'),
@@ -217,7 +233,7 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         basis: 'massConcentration',
         value: applyRelativeExtraSources(context, concentration, step.extraSources),
         densityGPerMl: shared.solutionDensity,
-        containedMl: step.flask.nominalMl,
+        holds: { amount: { unit: 'mL', value: step.flask.nominalMl }, stepIndex: context.stepIndex },
       };
     }
     case 'pipetteAliquot': {
@@ -228,12 +244,13 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
           [...path, 'kind'],
           'An aliquot by volume of a molality solution cannot be converted to an amount; weigh it instead.',
         );
-      if (state.containedMl !== undefined && step.volumeMl >= state.containedMl) {
-        throw new PlanError(
-          [...path, 'volumeMl'],
-          `The aliquot (${step.volumeMl} mL) is not smaller than the solution it is taken from (${state.containedMl} mL).`,
-        );
-      }
+      checkAliquotFromSolution({
+        stepIndex: context.stepIndex,
+        aliquot: { unit: 'mL', value: step.volumeMl },
+        source: state.holds,
+        densityGPerMl: builder.estimate(state.densityGPerMl),
+        path: [...path, 'volumeMl'],
+      });
       const pipette = step.pipette;
       if (pipette.kind === 'glassPipette' && Math.abs(step.volumeMl - pipette.nominalMl) > 1e-9 * pipette.nominalMl) {
         throw new PlanError(
@@ -253,7 +270,8 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'portion',
         amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
         fromSolid: false,
-        volumeMl: step.volumeMl,
+        taken: { unit: 'mL', value: step.volumeMl },
+        takenDensityGPerMl: builder.estimate(state.densityGPerMl),
       };
     }
     case 'weighAliquot': {
@@ -264,6 +282,13 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
           [...path, 'kind'],
           'Diluting a molality solution is not supported; prepare the molality directly.',
         );
+      checkAliquotFromSolution({
+        stepIndex: context.stepIndex,
+        aliquot: { unit: 'g', value: step.netMassG },
+        source: state.holds,
+        densityGPerMl: builder.estimate(state.densityGPerMl),
+        path: [...path, 'netMassG'],
+      });
       const mass = addAbsoluteExtraSources(
         context,
         weighByDifference(context, step.balance, step.netMassG, step.containerMassG, 'netMassG'),
@@ -277,6 +302,8 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'portion',
         amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
         fromSolid: false,
+        taken: { unit: 'g', value: step.netMassG },
+        takenDensityGPerMl: builder.estimate(state.densityGPerMl),
       };
     }
     case 'makeUpToMass': {
@@ -285,6 +312,14 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         'makes up a weighed solid or an aliquot to a final mass; put a weighing or an aliquot before it',
       );
       if (state.kind !== 'portion') throw new Error('unreachable');
+      checkPortionFitsMakeUp({
+        stepIndex: context.stepIndex,
+        portion: state.taken,
+        portionKind: state.fromSolid ? 'solid' : 'aliquot',
+        made: { unit: 'g', value: step.finalMassG },
+        densityGPerMl: state.takenDensityGPerMl ?? builder.estimate(shared.solutionDensity),
+        path: [...path, 'finalMassG'],
+      });
       const mass = addAbsoluteExtraSources(
         context,
         weighByDifference(context, step.balance, step.finalMassG, step.containerMassG, 'finalMassG'),
@@ -297,6 +332,7 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         basis: 'massFraction',
         value: applyRelativeExtraSources(context, massFraction, step.extraSources),
         densityGPerMl: shared.solutionDensity,
+        holds: { amount: { unit: 'g', value: step.finalMassG }, stepIndex: context.stepIndex },
       };
     }
     case 'dissolveInSolvent': {

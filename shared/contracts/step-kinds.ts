@@ -100,7 +100,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     container: false,
     onThePan: null,
     instruction: (step, { item, labTemperatureC }) =>
-      `Transfer quantitatively into the ${step.flask.nominalMl} mL flask ${item('flask')}, ${glassClass(step.flask.toleranceClass)}, and make up to the mark at about ${labTemperatureC} °C; stopper and mix.`,
+      `Transfer quantitatively into the ${step.flask.nominalMl} mL flask ${item('flask')}, ${glassClass(step.flask.toleranceClass)}${step.flaskEmptiedBefore ? ' (its earlier solution bottled and the flask rinsed)' : ''}, and make up to the mark at about ${labTemperatureC} °C; stopper and mix.`,
   },
   pipetteAliquot: {
     label: 'Pipette an aliquot',
@@ -155,6 +155,15 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
       `Dissolve in ${onBalance(step.solventMassG, step.balance)} of solvent weighed on ${item('balance')}.`,
   },
 };
+
+/**
+ * The bench line before a make-up in a flask that held an earlier solution of the plan (`flaskEmptiedBefore`):
+ * that solution goes to a storage bottle first, so the sheet never has the analyst transfer into a flask that
+ * still holds the stock. Printed before the aliquot for the make-up, which is then taken from the bottle.
+ */
+export const flaskEmptyingWords = (flask: string, earlierStepNumber: number, aliquotFromIt: boolean) =>
+  `First transfer the solution of step ${earlierStepNumber} from ${flask} into a labelled storage bottle, and rinse ${flask}` +
+  (aliquotFromIt ? `; take this aliquot from that bottle.` : '.');
 
 /** True for a kind the plan format knows (and not for "toString" or other names every object has). */
 export const isStepKind = (kind: unknown): kind is StepKind =>

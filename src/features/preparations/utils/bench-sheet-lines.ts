@@ -1,35 +1,62 @@
-import { isStepKind, itemIn, STEP_KINDS, stepInstruction } from '../../../../shared/contracts/step-kinds';
-import { stepSchema } from '../../../../shared/uncertainty';
+import {
+  flaskEmptyingWords,
+  isStepKind,
+  itemIn,
+  STEP_KINDS,
+  stepInstruction,
+} from '../../../../shared/contracts/step-kinds';
+import { aliquotDrawnFrom, earlierMakeUpInSameFlask, stepSchema } from '../../../../shared/uncertainty';
 
 /** What the analyst does at one step, and which readings the sheet leaves blank for it. */
 export type BenchLine = {
   stepNumber: number;
+  /** What to do first, before the step itself (a flask to empty into a storage bottle); null when nothing. */
+  first: string | null;
   action: string;
   /** Equipment IDs used in the step. */
   equipment: string[];
   readings: 'weighing' | 'volume' | 'none';
 };
 
+const ALIQUOT_KINDS = new Set<unknown>(['pipetteAliquot', 'weighAliquot']);
+
 /**
  * The steps of a plan (inline equipment) as bench instructions, in the words of the step-kind registry (the PDF
  * record prints the same): target masses to each balance's readability, volumes as the glassware marks them.
- * A step not yet complete (no equipment chosen) is named only.
+ * A step not yet complete (no equipment chosen) is named only. A make-up in a flask an earlier step used, which the
+ * plan says was emptied first, gets a line before its aliquot: bottle the earlier solution and rinse the flask.
  */
 export function benchSheetLines(plan: Record<string, unknown>, labTemperatureC: number): BenchLine[] {
-  const steps: unknown[] = Array.isArray(plan.steps) ? plan.steps : [];
-  return steps.map((raw, stepIndex) => {
+  const raws: unknown[] = Array.isArray(plan.steps) ? plan.steps : [];
+  const parsed = raws.map((raw) => stepSchema.safeParse(raw));
+  const steps = parsed.map((result) => (result.success ? result.data : undefined));
+  const kinds = raws.map((raw) => ({ kind: String((raw as { kind?: unknown } | null)?.kind) }));
+  const flaskIds = steps.map((step) => (step?.kind === 'makeUpToVolume' ? step.flask.itemId : undefined));
+  const firstLines = new Map<number, string>();
+  steps.forEach((step, stepIndex) => {
+    const earlier = earlierMakeUpInSameFlask(flaskIds, stepIndex);
+    if (step?.kind !== 'makeUpToVolume' || !step.flaskEmptiedBefore || earlier === undefined) return;
+    const beforeAliquot = ALIQUOT_KINDS.has(kinds[stepIndex - 1]?.kind) && stepIndex - 1 > earlier;
+    const aliquot = aliquotDrawnFrom(kinds, earlier, stepIndex);
+    firstLines.set(
+      beforeAliquot ? stepIndex - 1 : stepIndex,
+      flaskEmptyingWords(step.flask.itemId, earlier + 1, beforeAliquot && aliquot !== undefined),
+    );
+  });
+  return raws.map((raw, stepIndex) => {
     const stepNumber = stepIndex + 1;
-    const parsed = stepSchema.safeParse(raw);
-    if (!parsed.success) {
+    const step = steps[stepIndex];
+    const first = firstLines.get(stepIndex) ?? null;
+    if (!step) {
       const kind = (raw as { kind?: unknown } | null)?.kind;
       const label = isStepKind(kind) ? STEP_KINDS[kind].label : 'Unknown step';
-      return { stepNumber, action: `${label}: not complete in the plan.`, equipment: [], readings: 'none' };
+      return { stepNumber, first, action: `${label}: not complete in the plan.`, equipment: [], readings: 'none' };
     }
-    const step = parsed.data;
     const entry = STEP_KINDS[step.kind];
     const slots = [entry.slot?.name, entry.materialKinds ? 'material' : undefined] as const;
     return {
       stepNumber,
+      first,
       action: stepInstruction(step, { item: (slot) => itemIn(step, slot)?.itemId ?? '—', stepIndex, labTemperatureC }),
       equipment: slots.flatMap((slot) => (slot ? [itemIn(step, slot)?.itemId ?? ''] : [])).filter(Boolean),
       readings: entry.recordedMass ? 'weighing' : entry.slot ? 'volume' : 'none',

@@ -20,7 +20,7 @@ export function earlierMakeUpInSameFlask(
 }
 
 /** For each step of a plan, the itemId of the flask it makes up to volume in. */
-export function planFlaskIds(steps: readonly PlanStep[]): (string | undefined)[] {
+function planFlaskIds(steps: readonly PlanStep[]): (string | undefined)[] {
   return steps.map((step) => (step.kind === 'makeUpToVolume' ? step.flask.itemId : undefined));
 }
 

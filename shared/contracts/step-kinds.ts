@@ -1,3 +1,4 @@
+import { aliquotDrawnFrom, earlierMakeUpInSameFlask } from '../uncertainty/flask-use';
 import type { Plan, PlanStep } from '../uncertainty/plan-schema';
 import { formatToReadability } from './balance-reading';
 import type { EquipmentKind } from './library';
@@ -157,13 +158,32 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
 };
 
 /**
- * The bench line before a make-up in a flask that held an earlier solution of the plan (`flaskEmptiedBefore`):
- * that solution goes to a storage bottle first, so the sheet never has the analyst transfer into a flask that
- * still holds the stock. Printed before the aliquot for the make-up, which is then taken from the bottle.
+ * What to do first, before some steps, by step index (from 0): for a make-up in a flask that held an earlier
+ * solution of the plan (`flaskEmptiedBefore`), bottle that solution and rinse the flask, before the aliquot for
+ * the make-up (which is then taken from the bottle). So neither the bench sheet nor the PDF record ever has the
+ * analyst transfer into a flask that still holds the stock. Steps not yet complete are `undefined`.
  */
-export const flaskEmptyingWords = (flask: string, earlierStepNumber: number, aliquotFromIt: boolean) =>
-  `First transfer the solution of step ${earlierStepNumber} from ${flask} into a labelled storage bottle, and rinse ${flask}` +
-  (aliquotFromIt ? `; take this aliquot from that bottle.` : '.');
+export function firstInstructions(steps: readonly (PlanStep | undefined)[]): Map<number, string> {
+  const flaskIds = steps.map((step) => (step?.kind === 'makeUpToVolume' ? step.flask.itemId : undefined));
+  const kinds = steps.map((step) => ({ kind: step?.kind ?? '' }));
+  const lines = new Map<number, string>();
+  steps.forEach((step, stepIndex) => {
+    const earlier = earlierMakeUpInSameFlask(flaskIds, stepIndex);
+    if (step?.kind !== 'makeUpToVolume' || !step.flaskEmptiedBefore || earlier === undefined) return;
+    const aliquotIndex = stepIndex - 1;
+    const beforeAliquot =
+      (kinds[aliquotIndex].kind === 'pipetteAliquot' || kinds[aliquotIndex].kind === 'weighAliquot') &&
+      aliquotIndex > earlier;
+    const fromIt = beforeAliquot && aliquotDrawnFrom(kinds, earlier, stepIndex) !== undefined;
+    const flask = step.flask.itemId;
+    lines.set(
+      beforeAliquot ? aliquotIndex : stepIndex,
+      `First transfer the solution of step ${earlier + 1} from ${flask} into a labelled storage bottle, and rinse ${flask}` +
+        (fromIt ? '; take this aliquot from that bottle.' : '.'),
+    );
+  });
+  return lines;
+}
 
 /** True for a kind the plan format knows (and not for "toString" or other names every object has). */
 export const isStepKind = (kind: unknown): kind is StepKind =>

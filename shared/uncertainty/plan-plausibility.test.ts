@@ -84,6 +84,7 @@ describe('an aliquot is smaller than the solution it is drawn from (common pract
       'mg/kg',
     );
     expect(error.path).toEqual(['steps', 3, 'netMassG']);
+    expect(error.message).toMatch(/the aliquot \(0\.3 g\) is not smaller than the solution it is taken from \(0\.3 g,/);
   });
 
   it('accepts a 10 mL aliquot of 100 mL, and does not check a certified solution (its amount is not known)', () => {

@@ -6,7 +6,9 @@ export type Amount = { unit: 'mL' | 'g'; value: number };
 /** Two amounts equal to this relative tolerance are one amount (binary remainders of typed decimals). */
 const RELATIVE_TOLERANCE = 1e-9;
 
-/** 25 → "25", 24.95508… → "24.96": a figure for a message, to four significant digits. */
+/** An amount as the plan states it, without binary remainders: 0.30000000000000004 → "0.3". */
+const stated = (value: number) => String(Number(value.toPrecision(10)));
+/** A converted amount or a density, to four significant digits: 24.95508… → "24.96". */
 const figure = (value: number) => String(Number(value.toPrecision(4)));
 
 /** The amount in the other unit, through the solution's density (g/mL). */
@@ -17,9 +19,9 @@ function convert(amount: Amount, unit: Amount['unit'], densityGPerMl: number): n
 
 /** "25 g" or, when it must be compared in another unit, "25 g, about 25.04 mL at 0.9982 g/mL". */
 function described(amount: Amount, comparedIn: Amount['unit'], densityGPerMl: number): string {
-  const stated = `${figure(amount.value)} ${amount.unit}`;
-  if (amount.unit === comparedIn) return stated;
-  return `${stated}, about ${figure(convert(amount, comparedIn, densityGPerMl))} ${comparedIn} at ${figure(densityGPerMl)} g/mL`;
+  const asStated = `${stated(amount.value)} ${amount.unit}`;
+  if (amount.unit === comparedIn) return asStated;
+  return `${asStated}, about ${figure(convert(amount, comparedIn, densityGPerMl))} ${comparedIn} at ${figure(densityGPerMl)} g/mL`;
 }
 
 /**
@@ -43,7 +45,7 @@ export function checkAliquotFromSolution(input: {
   throw new PlanError(
     path,
     `Step ${stepIndex + 1}: the aliquot (${described(aliquot, source.amount.unit, densityGPerMl)}) is not smaller than ` +
-      `the solution it is taken from (${figure(source.amount.value)} ${source.amount.unit}, ${madeUp} at step ${source.stepIndex + 1}); ` +
+      `the solution it is taken from (${stated(source.amount.value)} ${source.amount.unit}, ${madeUp} at step ${source.stepIndex + 1}); ` +
       `take a smaller aliquot, or make up more solution at step ${source.stepIndex + 1}.`,
   );
 }
@@ -74,7 +76,7 @@ export function checkPortionFitsMakeUp(input: {
     if (portionInMadeUnit <= made.value * (1 + RELATIVE_TOLERANCE)) return;
     throw new PlanError(
       path,
-      `Step ${stepIndex + 1}: the ${portionWords} (${portionText}) does not fit in the ${figure(made.value)} mL flask it is to be made up in; ` +
+      `Step ${stepIndex + 1}: the ${portionWords} (${portionText}) does not fit in the ${stated(made.value)} mL flask it is to be made up in; ` +
         `choose a larger flask or ${smaller}.`,
     );
   }
@@ -83,7 +85,7 @@ export function checkPortionFitsMakeUp(input: {
   if (strictlyLess ? portionInMadeUnit < limit : portionInMadeUnit <= limit) return;
   throw new PlanError(
     path,
-    `Step ${stepIndex + 1}: the final solution mass (${figure(made.value)} g) is not more than the ${portionWords} it is made up from (${portionText}); ` +
+    `Step ${stepIndex + 1}: the final solution mass (${stated(made.value)} g) is not more than the ${portionWords} it is made up from (${portionText}); ` +
       `make up to a larger mass, or take ${smaller}.`,
   );
 }

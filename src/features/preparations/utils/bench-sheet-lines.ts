@@ -1,11 +1,11 @@
 import {
-  flaskEmptyingWords,
+  firstInstructions,
   isStepKind,
   itemIn,
   STEP_KINDS,
   stepInstruction,
 } from '../../../../shared/contracts/step-kinds';
-import { aliquotDrawnFrom, earlierMakeUpInSameFlask, stepSchema } from '../../../../shared/uncertainty';
+import { stepSchema } from '../../../../shared/uncertainty';
 
 /** What the analyst does at one step, and which readings the sheet leaves blank for it. */
 export type BenchLine = {
@@ -18,31 +18,19 @@ export type BenchLine = {
   readings: 'weighing' | 'volume' | 'none';
 };
 
-const ALIQUOT_KINDS = new Set<unknown>(['pipetteAliquot', 'weighAliquot']);
-
 /**
  * The steps of a plan (inline equipment) as bench instructions, in the words of the step-kind registry (the PDF
  * record prints the same): target masses to each balance's readability, volumes as the glassware marks them.
- * A step not yet complete (no equipment chosen) is named only. A make-up in a flask an earlier step used, which the
- * plan says was emptied first, gets a line before its aliquot: bottle the earlier solution and rinse the flask.
+ * A step not yet complete (no equipment chosen) is named only. A step may have something to do first
+ * (`firstInstructions`: bottle an earlier solution before its flask is used again).
  */
 export function benchSheetLines(plan: Record<string, unknown>, labTemperatureC: number): BenchLine[] {
   const raws: unknown[] = Array.isArray(plan.steps) ? plan.steps : [];
-  const parsed = raws.map((raw) => stepSchema.safeParse(raw));
-  const steps = parsed.map((result) => (result.success ? result.data : undefined));
-  const kinds = raws.map((raw) => ({ kind: String((raw as { kind?: unknown } | null)?.kind) }));
-  const flaskIds = steps.map((step) => (step?.kind === 'makeUpToVolume' ? step.flask.itemId : undefined));
-  const firstLines = new Map<number, string>();
-  steps.forEach((step, stepIndex) => {
-    const earlier = earlierMakeUpInSameFlask(flaskIds, stepIndex);
-    if (step?.kind !== 'makeUpToVolume' || !step.flaskEmptiedBefore || earlier === undefined) return;
-    const beforeAliquot = ALIQUOT_KINDS.has(kinds[stepIndex - 1]?.kind) && stepIndex - 1 > earlier;
-    const aliquot = aliquotDrawnFrom(kinds, earlier, stepIndex);
-    firstLines.set(
-      beforeAliquot ? stepIndex - 1 : stepIndex,
-      flaskEmptyingWords(step.flask.itemId, earlier + 1, beforeAliquot && aliquot !== undefined),
-    );
+  const steps = raws.map((raw) => {
+    const parsed = stepSchema.safeParse(raw);
+    return parsed.success ? parsed.data : undefined;
   });
+  const firstLines = firstInstructions(steps);
   return raws.map((raw, stepIndex) => {
     const stepNumber = stepIndex + 1;
     const step = steps[stepIndex];

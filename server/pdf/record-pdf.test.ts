@@ -235,6 +235,23 @@ describe('the PDF record', () => {
     expect(flat).toContain(`Warning: ${MINIMUM_WEIGHT_SENTENCE}`);
   });
 
+  it('bottles the stock before its flask is used again, in the words of the bench sheet (common practice)', async () => {
+    const library = await libraryByCode(analyst, labId);
+    const plan = leadPlan(library, { aliquotFlask: 'VF-100-A' });
+    Object.assign(plan.steps[3], { flaskEmptiedBefore: true });
+    preparationId = (await analyst.post(url('/preparations'), { title: 'Pb bottled stock', plan, seed: 5 }).expect(201))
+      .body.id;
+    const flat = pdfText(await downloadPdf(analyst), 'flask-reused').replace(/\s+/g, ' ');
+    // The draft's watermark letters fall between words of the layout text: the sentence is checked in pieces.
+    expect(flat).toContain(
+      '3. First transfer the solution of step 2 from VF-100-A into a labelled storage bottle, and rinse VF-100-A; take',
+    );
+    expect(flat).toContain('this aliquot from that bottle. Pipette 10 mL from the solution of step 2');
+    expect(flat).toMatch(
+      /4\. Transfer quantitatively into the 100 mL flask VF-100-A .*\(its earlier solution bottled and/,
+    );
+  });
+
   it('is refused for a version with no computed budget', async () => {
     const library = await libraryByCode(analyst, labId);
     const plan = leadPlan(library);

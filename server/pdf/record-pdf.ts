@@ -3,7 +3,13 @@ import { RECORD_CAUTIONS } from '../../shared/contracts/safety-advice';
 import PDFDocument from 'pdfkit';
 import type { VersionDetail } from '../../shared/contracts/preparations';
 import { warningText } from '../../shared/contracts/warning-text';
-import { itemIn, readingWords, snapshotStepNamer, stepInstruction } from '../../shared/contracts/step-kinds';
+import {
+  firstInstructions,
+  itemIn,
+  readingWords,
+  snapshotStepNamer,
+  stepInstruction,
+} from '../../shared/contracts/step-kinds';
 import { formatDegreesOfFreedom } from '../../shared/uncertainty';
 import { PDF_FONTS } from './fonts';
 import { percent, significant, utc } from './format';
@@ -131,6 +137,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     // Plan
     heading('Plan');
     const { steps, settings } = snapshot.plan;
+    const firstLines = firstInstructions(steps);
     steps.forEach((step, index) => {
       const checkpoint = budget.checkpoints.find((c) => c.stepIndex === index);
       const after = checkpoint ? ` → ${significant(checkpoint.value, 5)} ${checkpoint.unit}` : '';
@@ -139,7 +146,8 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
         stepIndex: index,
         labTemperatureC: settings.labTemperatureC,
       });
-      paragraph(`${index + 1}. ${instruction}${after}`);
+      const first = firstLines.get(index);
+      paragraph(`${index + 1}. ${first ? `${first} ` : ''}${instruction}${after}`);
       doc.moveDown(0.15);
     });
     paragraph(

@@ -207,7 +207,7 @@ describe('drafts, versions, variants and roles', () => {
       await analyst.agent
         .put(url(`/preparations/${created.id}/versions/1`))
         .set('x-csrf-token', analyst.token)
-        .send({ title: 'Pb working standard', plan: leadPlanWith({ aliquotFlask: 'VF-100-A' }) })
+        .send({ title: 'Pb working standard', plan: leadPlanWith({ aliquotFlask: 'VF-200-A' }) })
         .expect(200)
     ).body;
     expect(saved.title).toBe('Pb working standard');

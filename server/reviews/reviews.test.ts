@@ -146,7 +146,7 @@ describe('an approved version never changes', () => {
     await analyst.agent
       .put(url(`/preparations/${preparationId}/versions/1`))
       .set('x-csrf-token', analyst.token)
-      .send({ title: 'Changed', plan: leadPlan(library, { aliquotFlask: 'VF-100-A' }) })
+      .send({ title: 'Changed', plan: leadPlan(library, { aliquotFlask: 'VF-200-A' }) })
       .expect(409);
     await analyst.post(v1('submit'), {}).expect(409);
     await qa.post(v1('return'), { comment: 'Changed my mind.' }).expect(409);

@@ -1,3 +1,4 @@
+import { aliquotDrawnFrom, earlierMakeUpInSameFlask } from '../uncertainty/flask-use';
 import type { Plan, PlanStep } from '../uncertainty/plan-schema';
 import { formatToReadability } from './balance-reading';
 import type { EquipmentKind } from './library';
@@ -100,7 +101,7 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
     container: false,
     onThePan: null,
     instruction: (step, { item, labTemperatureC }) =>
-      `Transfer quantitatively into the ${step.flask.nominalMl} mL flask ${item('flask')}, ${glassClass(step.flask.toleranceClass)}, and make up to the mark at about ${labTemperatureC} °C; stopper and mix.`,
+      `Transfer quantitatively into the ${step.flask.nominalMl} mL flask ${item('flask')}, ${glassClass(step.flask.toleranceClass)}${step.flaskEmptiedBefore ? ' (its earlier solution bottled and the flask rinsed)' : ''}, and make up to the mark at about ${labTemperatureC} °C; stopper and mix.`,
   },
   pipetteAliquot: {
     label: 'Pipette an aliquot',
@@ -155,6 +156,34 @@ export const STEP_KINDS: { [K in StepKind]: StepKindEntry<K> } = {
       `Dissolve in ${onBalance(step.solventMassG, step.balance)} of solvent weighed on ${item('balance')}.`,
   },
 };
+
+/**
+ * What to do first, before some steps, by step index (from 0): for a make-up in a flask that held an earlier
+ * solution of the plan (`flaskEmptiedBefore`), bottle that solution and rinse the flask, before the aliquot for
+ * the make-up (which is then taken from the bottle). So neither the bench sheet nor the PDF record ever has the
+ * analyst transfer into a flask that still holds the stock. Steps not yet complete are `undefined`.
+ */
+export function firstInstructions(steps: readonly (PlanStep | undefined)[]): Map<number, string> {
+  const flaskIds = steps.map((step) => (step?.kind === 'makeUpToVolume' ? step.flask.itemId : undefined));
+  const kinds = steps.map((step) => ({ kind: step?.kind ?? '' }));
+  const lines = new Map<number, string>();
+  steps.forEach((step, stepIndex) => {
+    const earlier = earlierMakeUpInSameFlask(flaskIds, stepIndex);
+    if (step?.kind !== 'makeUpToVolume' || !step.flaskEmptiedBefore || earlier === undefined) return;
+    const aliquotIndex = stepIndex - 1;
+    const beforeAliquot =
+      (kinds[aliquotIndex].kind === 'pipetteAliquot' || kinds[aliquotIndex].kind === 'weighAliquot') &&
+      aliquotIndex > earlier;
+    const fromIt = beforeAliquot && aliquotDrawnFrom(kinds, earlier, stepIndex) !== undefined;
+    const flask = step.flask.itemId;
+    lines.set(
+      beforeAliquot ? aliquotIndex : stepIndex,
+      `First transfer the solution of step ${earlier + 1} from ${flask} into a labelled storage bottle, and rinse ${flask}` +
+        (fromIt ? '; take this aliquot from that bottle.' : '.'),
+    );
+  });
+  return lines;
+}
 
 /** True for a kind the plan format knows (and not for "toString" or other names every object has). */
 export const isStepKind = (kind: unknown): kind is StepKind =>

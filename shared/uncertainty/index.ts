@@ -12,6 +12,7 @@ export type {
 } from './equipment-schema';
 export { parsePlan } from './parse-plan';
 export { compilePlan } from './plan-compiler';
+export { earlierMakeUpInSameFlask } from './flask-use';
 export { evaluatePlan } from './evaluate-plan';
 export type { EngineWarning } from './engine-warning';
 export { propagate, type BudgetResult, type BudgetRow, type BudgetGroup } from './gum-budget';

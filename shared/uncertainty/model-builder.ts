@@ -34,6 +34,8 @@ export class ModelBuilder {
   private readonly sources: SourceDefinition[] = [];
   private readonly sourceNodes = new Map<string, NodeReference>();
   private readonly nodes: TapeNode[] = [];
+  /** Each node's value at the sources' estimates, in step with `nodes`. */
+  private readonly estimates: number[] = [];
   private readonly checkpoints: Checkpoint[] = [];
   private readonly warnings: EngineWarning[] = [];
 
@@ -114,6 +116,11 @@ export class ModelBuilder {
     this.warnings.push(warning);
   }
 
+  /** A node's value with every source at its estimate (e.g. the density used to compare a mass with a volume). */
+  estimate(node: NodeReference): number {
+    return this.estimates[node];
+  }
+
   constantValue(node: NodeReference): number | undefined {
     const entry = this.nodes[node];
     return entry.operation === 'constant' ? entry.value : undefined;
@@ -181,6 +188,13 @@ export class ModelBuilder {
   }
 
   private push(node: TapeNode): NodeReference {
+    this.estimates.push(
+      node.operation === 'source'
+        ? this.sources[node.sourceIndex].estimate
+        : node.operation === 'constant'
+          ? node.value
+          : applyOperation(node.operation, this.estimates[node.left], this.estimates[node.right]),
+    );
     this.nodes.push(node);
     return this.nodes.length - 1;
   }

@@ -9,10 +9,12 @@ import {
 import { parseFormula, type Composition } from './chemical-formula';
 import { analyteCountIn, hasCertificateComposition, materialMolarMassNodes, molarMassNode } from './composition-nodes';
 import { addAbsoluteExtraSources, applyRelativeExtraSources } from './extra-sources';
+import { checkFlaskHoldsNoSolution } from './flask-use';
 import { ModelBuilder, type NodeReference } from './model-builder';
 import type { CompiledModel } from './model-types';
 import { parsePlan } from './parse-plan';
 import { PlanError } from './plan-error';
+import { checkAliquotFromSolution, checkPortionFitsMakeUp, type Amount } from './plan-plausibility';
 import { settingsWithDefaults, type Plan, type PlanInput, type PlanStep } from './plan-schema';
 import type { StepContext } from './step-context';
 import { unitOf } from './units';
@@ -22,14 +24,24 @@ import { waterDensityKgPerM3 } from './water-density';
 /** Where the preparation stands between steps. */
 type ChainState =
   | { kind: 'nothing' }
-  /** A quantity of analyte in hand (mg), e.g. a weighed solid or an aliquot not yet diluted. */
-  /** `volumeMl`: the volume of an aliquot taken by pipette, which the next flask must hold. */
-  | { kind: 'portion'; amountMg: NodeReference; fromSolid: boolean; volumeMl?: number }
+  /**
+   * A quantity of analyte in hand (mg), e.g. a weighed solid or an aliquot not yet diluted;
+   * `taken`: the solid's mass, or the aliquot's volume or mass, which the next make-up must hold;
+   * `takenDensityGPerMl`: the estimated density of the solution an aliquot was taken from.
+   */
+  | {
+      kind: 'portion';
+      amountMg: NodeReference;
+      fromSolid: boolean;
+      taken: Amount;
+      takenDensityGPerMl?: number;
+    }
   /**
    * A solution: mass concentration (mg/L), mass fraction (mg/kg) or molality (mol/kg);
    * `density` converts between the first two, asked only when a conversion needs it (`purpose` says which, for
    * a refusal's words); `buoyancyDensity` is what an air-buoyancy correction of a weighing of it uses;
-   * `containedMl` is the flask's volume, when known.
+   * `holds` is how much was made (the flask's volume or the final mass) and at which step, when known (not for a
+   * certified solution).
    */
   | {
       kind: 'solution';
@@ -37,7 +49,7 @@ type ChainState =
       value: NodeReference;
       density: (purpose: string) => DensityValue;
       buoyancyDensity: () => DensityValue;
-      containedMl?: number;
+      holds?: { amount: Amount; stepIndex: number };
     };
 
 const basisUnit = { massConcentration: 'mg/L', massFraction: 'mg/kg', molality: 'mol/kg' } as const;
@@ -84,6 +96,7 @@ export function compilePlan(input: PlanInput | Plan, options: CompileOptions = {
       stepIndex,
       path: ['steps', stepIndex],
     };
+    checkFlaskHoldsNoSolution(plan.steps, stepIndex);
     state = applyStep(context, step, state, {
       analyte,
       analyteMolarMassNode,
@@ -214,6 +227,7 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'portion',
         amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
         fromSolid: true,
+        taken: { unit: 'g', value: step.netMassG },
       };
     }
     case 'startFromCertifiedSolution': {
@@ -254,12 +268,14 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
       );
       if (state.kind !== 'portion') throw new Error('unreachable');
       // A flask cannot be made up to a mark below the liquid already in it (common practice: a dilution dilutes).
-      if (state.volumeMl !== undefined && state.volumeMl > step.flask.nominalMl) {
-        throw new PlanError(
-          [...path, 'flask'],
-          `The aliquot (${state.volumeMl} mL) does not fit in the ${step.flask.nominalMl} mL flask it is to be made up in; choose a larger flask or a smaller aliquot.`,
-        );
-      }
+      checkPortionFitsMakeUp({
+        stepIndex: context.stepIndex,
+        portion: state.fromSolid ? undefined : state.taken,
+        portionKind: 'aliquot',
+        made: { unit: 'mL', value: step.flask.nominalMl },
+        densityGPerMl: state.takenDensityGPerMl ?? shared.solutionDensity.estimateGPerMl,
+        path: [...path, 'flask'],
+      });
       const volume = addAbsoluteExtraSources(
         context,
         glasswareVolume(context, step.flask, 'flask'),
@@ -272,7 +288,7 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         basis: 'massConcentration',
         value: applyRelativeExtraSources(context, concentration, step.extraSources),
         ...preparedSolutionDensity(shared),
-        containedMl: step.flask.nominalMl,
+        holds: { amount: { unit: 'mL', value: step.flask.nominalMl }, stepIndex: context.stepIndex },
       };
     }
     case 'pipetteAliquot': {
@@ -283,12 +299,13 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
           [...path, 'kind'],
           'An aliquot by volume of a molality solution cannot be converted to an amount; weigh it instead.',
         );
-      if (state.containedMl !== undefined && step.volumeMl >= state.containedMl) {
-        throw new PlanError(
-          [...path, 'volumeMl'],
-          `The aliquot (${step.volumeMl} mL) is not smaller than the solution it is taken from (${state.containedMl} mL).`,
-        );
-      }
+      checkAliquotFromSolution({
+        stepIndex: context.stepIndex,
+        aliquot: { unit: 'mL', value: step.volumeMl },
+        source: state.holds,
+        densityGPerMl: state.buoyancyDensity().estimateGPerMl,
+        path: [...path, 'volumeMl'],
+      });
       const pipette = step.pipette;
       if (pipette.kind === 'glassPipette' && Math.abs(step.volumeMl - pipette.nominalMl) > 1e-9 * pipette.nominalMl) {
         throw new PlanError(
@@ -310,7 +327,8 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'portion',
         amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
         fromSolid: false,
-        volumeMl: step.volumeMl,
+        taken: { unit: 'mL', value: step.volumeMl },
+        takenDensityGPerMl: state.buoyancyDensity().estimateGPerMl,
       };
     }
     case 'weighAliquot': {
@@ -321,6 +339,13 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
           [...path, 'kind'],
           'Diluting a molality solution is not supported; prepare the molality directly.',
         );
+      checkAliquotFromSolution({
+        stepIndex: context.stepIndex,
+        aliquot: { unit: 'g', value: step.netMassG },
+        source: state.holds,
+        densityGPerMl: state.buoyancyDensity().estimateGPerMl,
+        path: [...path, 'netMassG'],
+      });
       const mass = massOnThePan(
         context,
         addAbsoluteExtraSources(
@@ -342,6 +367,8 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         kind: 'portion',
         amountMg: applyRelativeExtraSources(context, amountMg, step.extraSources),
         fromSolid: false,
+        taken: { unit: 'g', value: step.netMassG },
+        takenDensityGPerMl: state.buoyancyDensity().estimateGPerMl,
       };
     }
     case 'makeUpToMass': {
@@ -350,6 +377,14 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         'makes up a weighed solid or an aliquot to a final mass; put a weighing or an aliquot before it',
       );
       if (state.kind !== 'portion') throw new Error('unreachable');
+      checkPortionFitsMakeUp({
+        stepIndex: context.stepIndex,
+        portion: state.taken,
+        portionKind: state.fromSolid ? 'solid' : 'aliquot',
+        made: { unit: 'g', value: step.finalMassG },
+        densityGPerMl: state.takenDensityGPerMl ?? shared.solutionDensity.estimateGPerMl,
+        path: [...path, 'finalMassG'],
+      });
       const mass = massOnThePan(
         context,
         addAbsoluteExtraSources(
@@ -368,6 +403,7 @@ function applyStep(context: StepContext, step: PlanStep, state: ChainState, shar
         basis: 'massFraction',
         value: applyRelativeExtraSources(context, massFraction, step.extraSources),
         ...preparedSolutionDensity(shared),
+        holds: { amount: { unit: 'g', value: step.finalMassG }, stepIndex: context.stepIndex },
       };
     }
     case 'dissolveInSolvent': {

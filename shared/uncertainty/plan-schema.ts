@@ -55,7 +55,16 @@ const startFromCertifiedSolutionStep = z
   .strict();
 
 const makeUpToVolumeStep = z
-  .object({ kind: z.literal('makeUpToVolume'), flask: volumetricFlaskSchema, extraSources })
+  .object({
+    kind: z.literal('makeUpToVolume'),
+    flask: volumetricFlaskSchema,
+    /**
+     * The solution previously made in this flask (by an earlier step of the plan) was transferred to a storage
+     * bottle or used up, and the flask rinsed, before this step; the aliquot for this step is taken from the bottle.
+     */
+    flaskEmptiedBefore: z.boolean().optional(),
+    extraSources,
+  })
   .strict();
 
 const pipetteAliquotStep = z

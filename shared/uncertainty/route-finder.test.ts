@@ -95,6 +95,28 @@ describe('route finder', () => {
     }
   });
 
+  it('never makes up twice in one flask, even when the library lists the same flask twice (common practice)', () => {
+    // A flask holds one solution at a time: with F-100-A listed twice and F-10-A too small for a 10 mL aliquot,
+    // two dilutions by 10 would need F-100-A again, and the plan compiler would refuse that route.
+    const twice = pick(library.flasks, ['F-100-A', 'F-100-A', 'F-100-B']) as RouteRequest['flasks'];
+    const routes = findRoutes({ ...small, flasks: twice }).routes;
+    expect(routes.length).toBeGreaterThan(0);
+    const twoStep = routes.filter((route) => route.dilutionSteps === 2);
+    expect(twoStep.length).toBeGreaterThan(0);
+    for (const route of routes) {
+      const flasks = (route.plan.steps as { flask?: { itemId: string } }[]).flatMap((step) =>
+        step.flask ? [step.flask.itemId] : [],
+      );
+      expect(new Set(flasks).size).toBe(flasks.length);
+    }
+    const oneFlask = findRoutes({
+      ...small,
+      flasks: pick(library.flasks, ['F-100-A', 'F-100-A']) as RouteRequest['flasks'],
+    });
+    expect(oneFlask.routes.length).toBeGreaterThan(0);
+    expect(oneFlask.routes.every((route) => route.dilutionSteps === 1)).toBe(true);
+  });
+
   it('from a solid, weighs at least the USP <41> minimum and no more than the capacity', () => {
     const result = findRoutes({
       target: { value: 10, unit: 'µg/L' },

@@ -90,6 +90,8 @@ export interface RouteResult {
 interface Stage {
   pipetteIndex: number;
   flaskIndex: number;
+  /** The flask's itemId: a flask holds one solution at a time, so a route never makes up in it twice. */
+  flaskId: string;
   volumeMl: number;
   flaskMl: number;
   factor: number;
@@ -106,7 +108,7 @@ interface Candidate {
 /**
  * Enumerates preparation routes with 0–3 dilutions (pipette aliquot → flask) from a solid (weighed on a balance
  * into a first flask) or a certified solution, respecting minimum weight (USP <41>), balance capacity, the
- * items on hand (each flask used once, each aliquot smaller than the flask it comes from), and ranks them by
+ * items on hand (each flask, by itemId, used once: it holds one solution at a time; each aliquot smaller than the flask it comes from), and ranks them by
  * relative expanded uncertainty (compared at two significant digits), then fewer steps, less material, less
  * solution made.
  *
@@ -161,6 +163,7 @@ export function findRoutes(input: RouteRequest): RouteResult {
         stages.push({
           pipetteIndex,
           flaskIndex,
+          flaskId: flask.itemId,
           volumeMl,
           flaskMl: flask.nominalMl,
           factor: flask.nominalMl / volumeMl,
@@ -208,7 +211,7 @@ export function findRoutes(input: RouteRequest): RouteResult {
       const maximumG = Math.min(start.balance.capacityG, request.maximumMaterialG ?? Infinity);
       // m = c·V₀·D/(1000 mL/L · 1000 mg/g · P·f), D the product of the dilution factors.
       const massPerFactor = (targetMgPerL * start.flask.nominalMl) / (1e6 * purity * factor);
-      const used = new Set<number>([start.flaskIndex]);
+      const used = new Set<string>([start.flask.itemId]);
       const visit = (chosen: Stage[], dilution: number, variance: number, previousMl: number) => {
         const massG = massPerFactor * dilution;
         if (massG > maximumG) return;
@@ -223,16 +226,16 @@ export function findRoutes(input: RouteRequest): RouteResult {
         for (const stage of stages) {
           if (variance + stage.relativeVariance >= bound() || !withinBudget()) break;
           if (
-            used.has(stage.flaskIndex) ||
+            used.has(stage.flaskId) ||
             stage.volumeMl >= previousMl ||
             massPerFactor * dilution * stage.factor > maximumG
           )
             continue;
-          used.add(stage.flaskIndex);
+          used.add(stage.flaskId);
           chosen.push(stage);
           visit(chosen, dilution * stage.factor, variance + stage.relativeVariance, stage.flaskMl);
           chosen.pop();
-          used.delete(stage.flaskIndex);
+          used.delete(stage.flaskId);
         }
       };
       visit([], 1, base, start.flask.nominalMl);
@@ -268,19 +271,19 @@ export function findRoutes(input: RouteRequest): RouteResult {
     (certifiedUnit.dimension === 'massFraction' ? densityGPerMl : 1);
   const certificateVariance = (standardUncertainty(material.uncertainty) / material.certifiedValue) ** 2;
   const wantedDilution = startMgPerL / targetMgPerL;
-  const used = new Set<number>();
+  const used = new Set<string>();
   const visit = (chosen: Stage[], dilution: number, variance: number, previousMl: number) => {
     if (Math.abs(dilution / wantedDilution - 1) <= tolerance)
       offer({ approximateVariance: variance, startIndex: 0, stages: [...chosen] });
     if (chosen.length === maximumDilutions || dilution > wantedDilution * (1 + tolerance)) return;
     for (const stage of stages) {
       if (variance + stage.relativeVariance >= bound() || !withinBudget()) break;
-      if (used.has(stage.flaskIndex) || stage.volumeMl >= previousMl) continue;
-      used.add(stage.flaskIndex);
+      if (used.has(stage.flaskId) || stage.volumeMl >= previousMl) continue;
+      used.add(stage.flaskId);
       chosen.push(stage);
       visit(chosen, dilution * stage.factor, variance + stage.relativeVariance, stage.flaskMl);
       chosen.pop();
-      used.delete(stage.flaskIndex);
+      used.delete(stage.flaskId);
     }
   };
   visit([], 1, certificateVariance, Infinity);

@@ -269,4 +269,48 @@ describe('the analyst plans a lead standard', () => {
     await page.emulateMedia({ media: 'screen' });
     expect(problems).toEqual([]);
   });
+
+  it('takes a piston-pipette volume in µL and bottles a stock before its flask is reused', async () => {
+    // The variant: 0.1599 g → VF-100-A, 25 mL (GP-25-A) → VF-250-A, then 1000 µL with PP-1000 back into VF-250-A.
+    await page.goto(`${server.baseUrl}/preparations/${created.variant}`);
+    await statement().waitFor();
+    await chooseItem(steps().nth(4).getByLabel('Pipette'), 'PP-1000');
+    const volume = steps().nth(4).getByLabel('Volume (µL)');
+    await volume.fill('1000');
+    await chooseItem(steps().nth(5).getByLabel('Volumetric flask'), 'VF-250-A');
+    // VF-250-A still holds the solution of step 4, which step 5 pipettes from: refused at that flask.
+    const flask = steps().nth(5).getByLabel('Volumetric flask');
+    await expect(flask.getAttribute('aria-invalid')).resolves.toBe('true');
+    await steps()
+      .nth(5)
+      .getByText(/^Flask VF-250-A still holds the solution made up in it at step 4/)
+      .waitFor();
+    await steps()
+      .nth(5)
+      .getByLabel(/^Before this step, the solution made in VF-250-A at step 4 is poured into a labelled storage bottle/)
+      .check();
+    await expect(flask.getAttribute('aria-invalid')).resolves.toBeNull();
+    // 999.82 mg/L · 25/250 · 1/250 = 0.39993 mg/L (the 1000 µL stored as 1 mL).
+    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(0\.399\d* ± 0\.\d+\) mg\/L/);
+    await saveState()
+      .filter({ hasText: /Saved at/ })
+      .waitFor({ timeout: 15_000 });
+    await page.reload();
+    await statement().waitFor();
+    await expect(steps().nth(4).getByLabel('Volume (µL)').inputValue()).resolves.toBe('1000');
+
+    await page.getByRole('link', { name: 'Bench sheet' }).click();
+    const sheet = page.getByRole('article');
+    await sheet.getByText('Bench sheet', { exact: true }).waitFor();
+    const text = await sheet.innerText();
+    expect(text).toContain(
+      'First transfer the solution of step 4 from VF-250-A into a labelled storage bottle, and rinse VF-250-A; take this aliquot from that bottle.',
+    );
+    expect(text).toContain(
+      'Set the piston pipette PP-1000 to 1000 µL and deliver the aliquot from the solution of step 4.',
+    );
+    expect(text.indexOf('First transfer')).toBeLessThan(text.indexOf('Set the piston pipette'));
+    await screenshot(page, 'bench-sheet-flask-reused');
+    expect(problems).toEqual([]);
+  });
 });

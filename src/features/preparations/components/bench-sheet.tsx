@@ -103,6 +103,9 @@ export function BenchSheet({ detail, library }: BenchSheetProps) {
             key={line.stepNumber}
             className="break-inside-avoid rounded-md border border-line p-3 print:border-ink/40"
           >
+            {line.first ? (
+              <p className="mb-1 rounded-md bg-caution-tint px-2 py-1 font-semibold text-caution">{line.first}</p>
+            ) : null}
             <p>
               <span className="mr-2 font-bold">Step {line.stepNumber}.</span>
               {line.action}

@@ -57,7 +57,8 @@ export function ExtraSourcesEditor({ stepNumber, absoluteUnit, sources, onChange
               options={SHAPES}
             />
             <TextField
-              label={source.effect === 'relative' ? 'Width (fraction)' : `Width (${absoluteUnit})`}
+              label="Width"
+              unit={source.effect === 'relative' ? 'fraction' : absoluteUnit}
               inputMode="decimal"
               value={source.amount}
               onChange={(event) => update(index, { amount: event.target.value })}

@@ -10,7 +10,7 @@ import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
 import { defaultAnalyteOf } from '../utils/equipment-labels';
 import { fieldMessage } from '../utils/evaluate-draft';
-import { emptyStep, newKey, type DraftStep, type PlanDraft } from '../utils/plan-draft';
+import { earlierStepInSameFlask, emptyStep, newKey, type DraftStep, type PlanDraft } from '../utils/plan-draft';
 import { problemField } from '../utils/problem-field';
 import { ADDABLE_STEP_KINDS, isStartKind, startKindFor } from '../utils/step-choices';
 import { ExtraSourcesEditor } from './extra-sources-editor';
@@ -118,6 +118,7 @@ export function PlanEditor({ draft, onChange, library, problem, budget, warnings
               library={library}
               material={material}
               overrides={draft.overrides}
+              earlierStepInFlask={earlierStepInSameFlask(draft.steps, index)}
               runningValue={runningValueOf(budget, index)}
               warnings={stepWarnings(index)}
               errorAt={errorAt}

@@ -86,7 +86,8 @@ export function PlanSettingsFields({
         />
       ) : null}
       <TextField
-        label="Lab temperature (°C)"
+        label="Lab temperature"
+        unit="°C"
         className="md:col-span-2"
         inputMode="decimal"
         value={draft.labTemperatureC}

@@ -26,24 +26,29 @@ type ReadingInputProps = {
   field: UseFormRegisterReturn;
 };
 
-/** A mass box in the readings table: its label is read out ("Step 1 tare (g)") but the column header shows it. */
+/** A mass box in the readings table: its label is read out ("Step 1 tare (g)"); the column header and the unit beside the box show it. */
 function ReadingInput({ id, label, error, hint, field }: ReadingInputProps) {
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="sr-only">
         {label}
       </label>
-      <input
-        id={id}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
-        spellCheck={false}
-        {...field}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={[describedBy(id, undefined, error), hint].filter(Boolean).join(' ') || undefined}
-        className={`numeric w-32 rounded-md border bg-surface px-2 py-1.5 text-right text-base text-ink ${error ? 'border-danger' : 'border-line-strong'}`}
-      />
+      <span className="flex items-center gap-1">
+        <input
+          id={id}
+          type="text"
+          inputMode="decimal"
+          autoComplete="off"
+          spellCheck={false}
+          {...field}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={[describedBy(id, undefined, error), hint].filter(Boolean).join(' ') || undefined}
+          className={`numeric w-32 rounded-md border bg-surface px-2 py-1.5 text-right text-base text-ink ${error ? 'border-danger' : 'border-line-strong'}`}
+        />
+        <span aria-hidden="true" className="font-semibold text-muted">
+          g
+        </span>
+      </span>
       <FieldMessages id={id} error={error} />
     </div>
   );

@@ -3,10 +3,11 @@ import type { EquipmentItem } from '../../../../shared/contracts/library';
 import { needsOverrideReason } from '../../../../shared/contracts/preparations';
 import { STEP_KINDS } from '../../../../shared/contracts/step-kinds';
 import { Button } from '../../../components/ui/button';
+import { Checkbox } from '../../../components/ui/checkbox';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { equipmentOptionLabel } from '../utils/equipment-labels';
-import type { DraftStep } from '../utils/plan-draft';
+import { quantityUnit, withEquipment, type DraftStep } from '../utils/plan-draft';
 import { isStartKind } from '../utils/step-choices';
 
 type StepCardProps = {
@@ -16,6 +17,8 @@ type StepCardProps = {
   library: EquipmentItem[];
   material: EquipmentItem | undefined;
   overrides: Record<string, string>;
+  /** For a make-up to volume, the earlier step (from 0) that made a solution in the flask chosen here. */
+  earlierStepInFlask: number | undefined;
   /** The running concentration after this step, already formatted ("999.8 mg/L"), when the step ends in a solution. */
   runningValue: string | null;
   warnings: string[];
@@ -39,6 +42,8 @@ export function StepCard(props: StepCardProps) {
   const choices = slot ? library.filter((item) => slot.libraryKinds.includes(item.kind)) : [];
   const item = library.find((candidate) => String(candidate.id) === step.equipmentId);
   const glassPipette = step.kind === 'pipetteAliquot' && item?.kind === 'glass-pipette';
+  const unit = quantityUnit(step.kind, item);
+  const earlier = props.earlierStepInFlask;
   const stepError = errorAt(`step-${index}`);
 
   return (
@@ -101,12 +106,7 @@ export function StepCard(props: StepCardProps) {
             value={step.equipmentId}
             onChange={(event) => {
               const chosen = library.find((candidate) => String(candidate.id) === event.target.value);
-              const nominal = chosen?.kind === 'glass-pipette' ? String(chosen.current.data.nominalMl) : step.quantity;
-              onChange({
-                ...step,
-                equipmentId: event.target.value,
-                quantity: step.kind === 'pipetteAliquot' ? nominal : step.quantity,
-              });
+              onChange(withEquipment(step, event.target.value, chosen, item));
             }}
             options={[
               { value: '', label: 'Choose from the library…' },
@@ -115,9 +115,10 @@ export function StepCard(props: StepCardProps) {
             error={errorAt(`step-${index}-equipment`)}
           />
         ) : null}
-        {info.quantity ? (
+        {info.quantity && unit ? (
           <TextField
-            label={`${info.quantity.label} (${info.quantity.unit})`}
+            label={info.quantity.label}
+            unit={unit}
             className="md:col-span-2"
             inputMode="decimal"
             value={glassPipette ? String(item?.current.data.nominalMl ?? '') : step.quantity}
@@ -146,7 +147,8 @@ export function StepCard(props: StepCardProps) {
         ) : null}
         {info.container ? (
           <TextField
-            label="Container on the pan (g)"
+            label="Container on the pan"
+            unit="g"
             className="md:col-span-2"
             inputMode="decimal"
             value={step.containerMassG}
@@ -154,6 +156,20 @@ export function StepCard(props: StepCardProps) {
             error={errorAt(`step-${index}-container`)}
             hint="Optional; checks the balance capacity."
           />
+        ) : null}
+        {step.kind === 'makeUpToVolume' && item && earlier !== undefined ? (
+          <div className="md:col-span-6">
+            <Checkbox
+              label={`Before this step, the solution made in ${item.code} at step ${earlier + 1} is poured into a labelled storage bottle and ${item.code} is rinsed`}
+              checked={step.flaskEmptiedBefore === true}
+              onChange={(event) => onChange({ ...step, flaskEmptiedBefore: event.target.checked })}
+            />
+            <p className="text-sm text-muted">
+              A flask holds one solution at a time. Tick this only if the solution of step {earlier + 1} is bottled
+              first (the aliquot is then taken from the bottle, and the bench sheet says so); otherwise choose another
+              flask.
+            </p>
+          </div>
         ) : null}
       </div>
 

@@ -90,6 +90,16 @@ export const DEMO_LIBRARY: EquipmentItem[] = [
     fillRepeatabilityMl: 0.0075,
     calibrationTemperatureC: 20,
   }),
+  // ISO 8655-2:2002 at 1000 µL: systematic ±8 µL, random 3 µL (from memory; the demo library's template).
+  item(10, 'piston-pipette', {
+    code: 'PP-1000',
+    description: 'Adjustable piston pipette 100–1000 µL',
+    adjustable: true,
+    minVolumeUl: 100,
+    maxVolumeUl: 1000,
+    errorBasis: 'iso-8655',
+    points: [{ volumeUl: 1000, systematicErrorUl: 8, randomErrorUl: 3 }],
+  }),
   item(
     8,
     'solid-material',

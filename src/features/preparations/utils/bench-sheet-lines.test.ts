@@ -39,6 +39,27 @@ describe('benchSheetLines', () => {
     expect(certified[0]).toMatchObject({ equipment: ['CRM-SE-0415'], readings: 'none' });
   });
 
+  it('never has the analyst make up in a flask that still holds the stock: the stock is bottled first (common practice)', () => {
+    const stored = storedPlan('lead-standard-from-nitrate') as { steps: Record<string, unknown>[] };
+    // Step 4 makes up in F-100-A, the flask of the stock that step 3 pipettes from; the plan says it was emptied.
+    stored.steps[3] = { ...stored.steps[3], flask: stored.steps[1].flask, flaskEmptiedBefore: true };
+    const lines = benchSheetLines(stored, 20);
+    expect(lines.map((line) => line.first)).toEqual([
+      null,
+      null,
+      'First transfer the solution of step 2 from F-100-A into a labelled storage bottle, and rinse F-100-A; take this aliquot from that bottle.',
+      null,
+      null,
+      null,
+    ]);
+    expect(lines[3].action).toMatch(
+      /^Transfer quantitatively into the 100 mL flask F-100-A, class A \(its earlier solution bottled and the flask rinsed\), and make up/,
+    );
+    expect(benchSheetLines(storedPlan('lead-standard-from-nitrate'), 20).map((line) => line.first)).toEqual(
+      Array(6).fill(null),
+    );
+  });
+
   it('names a step the planner has not finished instead of printing blanks', () => {
     const lines = benchSheetLines(
       { steps: [{ kind: 'makeUpToVolume', flask: { libraryId: '4' } }, { kind: 'toString' }] },

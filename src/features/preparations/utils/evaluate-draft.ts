@@ -4,7 +4,7 @@ import { needsOverrideReason, overrideReasonSchema, type PlanProblem } from '../
 import { warningsUnderPolicy } from '../../../../shared/contracts/warning-policy';
 import { evaluatePlan, PlanError, type BudgetResult, type PlanInput } from '../../../../shared/uncertainty';
 import { emptySlotWords, STEP_KINDS, wrongItemWords } from '../../../../shared/contracts/step-kinds';
-import { enginePlan, type PlanDraft } from './plan-draft';
+import { enginePlan, quantityUnit, type PlanDraft, type QuantityUnit } from './plan-draft';
 import { parseDecimal } from './parse-decimal';
 import { isStartKind } from './step-choices';
 
@@ -18,6 +18,9 @@ function missingReason(item: EquipmentItem, reason: string | undefined): string 
   const parsed = overrideReasonSchema.safeParse(reason ?? '');
   return parsed.success ? null : `${item.code}: ${item.flags.join('; ')}. ${parsed.error.issues[0].message}`;
 }
+
+/** A number worth showing as an example in each unit a quantity is typed in. */
+const EXAMPLE_QUANTITY: Record<QuantityUnit, string> = { g: '0.1600', mL: '10', µL: '250' };
 
 /** Checks the editor can make before the engine: choices made, numbers readable, reasons for overdue items. */
 export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>): PlanProblem | null {
@@ -50,16 +53,17 @@ export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>
       const itemReason = missingReason(item, draft.overrides[item.id]);
       if (itemReason) return { path: [...path, 'override'], message: itemReason };
     }
-    const glass = step.kind === 'pipetteAliquot' && library.get(step.equipmentId)?.kind === 'glass-pipette';
-    if (info.quantity && !glass) {
+    const item = library.get(step.equipmentId);
+    const glass = step.kind === 'pipetteAliquot' && item?.kind === 'glass-pipette';
+    const unit = quantityUnit(step.kind, item);
+    if (info.quantity && unit && !glass) {
       const value = parseDecimal(step.quantity);
       const path = ['steps', index, info.quantity.field];
-      if (value === null)
-        return { path, message: `Enter the ${info.quantity.label.toLowerCase()} in ${info.quantity.unit}.` };
+      if (value === null) return { path, message: `Enter the ${info.quantity.label.toLowerCase()} in ${unit}.` };
       if (Number.isNaN(value))
         return {
           path,
-          message: `Enter the ${info.quantity.label.toLowerCase()} as a number, e.g. ${info.quantity.unit === 'g' ? '0.1600' : '10'}.`,
+          message: `Enter the ${info.quantity.label.toLowerCase()} as a number in ${unit}, e.g. ${EXAMPLE_QUANTITY[unit]}.`,
         };
     }
     if (info.container && Number.isNaN(parseDecimal(step.containerMassG))) {
@@ -79,9 +83,10 @@ export function checkDraft(draft: PlanDraft, library: Map<string, EquipmentItem>
   return null;
 }
 
-/** Removes the engine's "Step 2 › volumeMl: " prefix when the message sits on that very field. */
+/** Removes the engine's "Step 2 › volumeMl: " or "Step 2: " prefix when the message sits on that very field (or after "step 2:"). */
 export function fieldMessage(message: string): string {
-  return message.replace(/^(Step \d+|The plan|settings|analyte)( › [^:]+)?: /, '');
+  const stripped = message.replace(/^(Step \d+|The plan|settings|analyte)( › [^:]+)?: /, '');
+  return stripped.charAt(0).toUpperCase() + stripped.slice(1);
 }
 
 /**
@@ -125,5 +130,8 @@ export function evaluationKey(evaluation: DraftEvaluation): string {
 /** A draft's first problem as the save line says it: "step 3: Choose the pipette from the lab’s library." */
 export function problemLine(problem: PlanProblem): string {
   const [where, index] = problem.path;
-  return where === 'steps' && typeof index === 'number' ? `step ${index + 1}: ${problem.message}` : problem.message;
+  // The engine names the step itself ("Step 4: the aliquot …"): said once.
+  return where === 'steps' && typeof index === 'number'
+    ? `step ${index + 1}: ${fieldMessage(problem.message)}`
+    : problem.message;
 }

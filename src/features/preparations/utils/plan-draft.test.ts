@@ -1,7 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_LIBRARY_BY_ID, DEMO_POLICY } from '../test-support/demo-library';
-import { evaluateDraft } from './evaluate-draft';
-import { draftFromPlan, emptyStep, overridesToSave, storedPlan, type PlanDraft } from './plan-draft';
+import { evaluateDraft, fieldMessage, problemLine } from './evaluate-draft';
+import {
+  draftFromPlan,
+  earlierStepInSameFlask,
+  emptyStep,
+  overridesToSave,
+  quantityToPlan,
+  quantityUnit,
+  storedPlan,
+  withEquipment,
+  type PlanDraft,
+} from './plan-draft';
 import { problemField } from './problem-field';
 
 /** The demo lead standard: 0.1599 g of Pb(NO3)2 on BAL-05 into VF-100-A, then 10 mL (GP-10-A) into VF-100-B. */
@@ -57,7 +67,7 @@ describe('the live budget of a draft', () => {
     expect(evaluation.ok).toBe(false);
     if (evaluation.ok) return;
     expect(problemField(evaluation.problem)).toBe('step-0-quantity');
-    expect(evaluation.problem.message).toBe('Enter the net mass as a number, e.g. 0.1600.');
+    expect(evaluation.problem.message).toBe('Enter the net mass as a number in g, e.g. 0.1600.');
   });
 
   it('refuses an overdue balance until a reason is recorded, then sends that reason', () => {
@@ -98,5 +108,91 @@ describe('saving and reopening', () => {
     ]);
     const steps = plan.steps as { balance?: { libraryId: string; revisionId: string } }[];
     expect(steps[0].balance).toMatchObject({ libraryId: '1', revisionId: '10' });
+  });
+});
+
+describe('piston-pipette volumes are typed in µL, the unit of the item (common practice)', () => {
+  const withPiston = (quantity: string): PlanDraft => {
+    const draft = leadStandard();
+    draft.steps[2] = { ...draft.steps[2], equipmentId: '10', quantity };
+    return draft;
+  };
+  const storedVolume = (draft: PlanDraft) =>
+    (storedPlan(draft, DEMO_LIBRARY_BY_ID).steps as { volumeMl?: number }[])[2].volumeMl;
+
+  it('stores µL as mL exactly, with no binary remainder (250 µL is 0.25 mL; 123.4 µL is 0.1234 mL)', () => {
+    expect(storedVolume(withPiston('250'))).toBe(0.25);
+    expect(storedVolume(withPiston('123.4'))).toBe(0.1234);
+    expect(123.4 / 1000).not.toBe(0.1234); // what a plain division would have stored
+    expect(storedVolume(withPiston('1e3'))).toBe(1);
+    expect(storedVolume(withPiston('0,5'))).toBe(0.0005);
+    expect(quantityToPlan('250', 'µL')).toBe(0.25);
+    expect(quantityToPlan('10', 'mL')).toBe(10);
+  });
+
+  it('reopens a stored piston volume in µL, and a glass pipette volume in mL', () => {
+    const plan = storedPlan(withPiston('123.4'), DEMO_LIBRARY_BY_ID);
+    const reopened = draftFromPlan(JSON.parse(JSON.stringify(plan)), { title: 'Pb 100 mg/L', overrides: [], seed: 42 });
+    expect(reopened.steps[2].quantity).toBe('123.4');
+    expect(storedPlan(reopened, DEMO_LIBRARY_BY_ID)).toEqual(plan);
+    expect(quantityUnit('pipetteAliquot', DEMO_LIBRARY_BY_ID.get('10'))).toBe('µL');
+    expect(quantityUnit('pipetteAliquot', DEMO_LIBRARY_BY_ID.get('6'))).toBe('mL');
+    expect(quantityUnit('weighSolid', DEMO_LIBRARY_BY_ID.get('1'))).toBe('g');
+  });
+
+  it('keeps a typed volume’s meaning when the pipette changes: 0.5 mL becomes 500 µL, and back', () => {
+    const typed = { ...emptyStep('pipetteAliquot'), quantity: '0.5' };
+    const piston = withEquipment(typed, '10', DEMO_LIBRARY_BY_ID.get('10'), undefined);
+    expect(piston.quantity).toBe('500');
+    expect(withEquipment(piston, '', undefined, DEMO_LIBRARY_BY_ID.get('10')).quantity).toBe('0.5');
+    expect(withEquipment(piston, '6', DEMO_LIBRARY_BY_ID.get('6'), DEMO_LIBRARY_BY_ID.get('10')).quantity).toBe('10');
+  });
+
+  it('asks for a piston volume in µL', () => {
+    const evaluation = evaluateDraft(withPiston('lots'), DEMO_LIBRARY_BY_ID, DEMO_POLICY);
+    expect(evaluation.ok ? null : evaluation.problem.message).toBe('Enter the volume as a number in µL, e.g. 250.');
+  });
+});
+
+describe('a flask reused in the plan (common practice: a flask holds one solution at a time)', () => {
+  const reusing = (emptied: boolean): PlanDraft => {
+    const draft = leadStandard();
+    draft.steps[3] = { ...draft.steps[3], equipmentId: '3', flaskEmptiedBefore: emptied };
+    return draft;
+  };
+
+  it('shows the engine’s refusal at the flask of the step that reuses it', () => {
+    const evaluation = evaluateDraft(reusing(false), DEMO_LIBRARY_BY_ID, DEMO_POLICY);
+    if (evaluation.ok) throw new Error('expected the reused flask to be refused');
+    expect(problemField(evaluation.problem)).toBe('step-3-equipment');
+    expect(fieldMessage(evaluation.problem.message)).toMatch(
+      /^Flask VF-100-A still holds the solution made up in it at step 2, from which step 3 takes its aliquot\./,
+    );
+    expect(problemLine(evaluation.problem)).toMatch(/^step 4: Flask VF-100-A still holds/);
+  });
+
+  it('computes once the stock is said to be bottled first, and stores that statement', () => {
+    const draft = reusing(true);
+    expect(earlierStepInSameFlask(draft.steps, 3)).toBe(1);
+    expect(evaluateDraft(draft, DEMO_LIBRARY_BY_ID, DEMO_POLICY).ok).toBe(true);
+    const plan = storedPlan(draft, DEMO_LIBRARY_BY_ID) as { steps: { flaskEmptiedBefore?: boolean }[] };
+    expect(plan.steps[3].flaskEmptiedBefore).toBe(true);
+    const reopened = draftFromPlan(JSON.parse(JSON.stringify(plan)), { title: '', overrides: [], seed: 42 });
+    expect(reopened.steps[3].flaskEmptiedBefore).toBe(true);
+  });
+
+  it('drops the statement when the flask is not used earlier, and asks again when the flask changes', () => {
+    const draft = leadStandard();
+    draft.steps[3] = { ...draft.steps[3], flaskEmptiedBefore: true };
+    expect(earlierStepInSameFlask(draft.steps, 3)).toBeUndefined();
+    const plan = storedPlan(draft, DEMO_LIBRARY_BY_ID) as { steps: Record<string, unknown>[] };
+    expect(plan.steps[3]).not.toHaveProperty('flaskEmptiedBefore');
+    const changed = withEquipment(
+      reusing(true).steps[3],
+      '5',
+      DEMO_LIBRARY_BY_ID.get('5'),
+      DEMO_LIBRARY_BY_ID.get('3'),
+    );
+    expect(changed.flaskEmptiedBefore).toBe(false);
   });
 });

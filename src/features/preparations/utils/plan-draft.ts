@@ -1,7 +1,7 @@
 import { toEngineEquipment } from '../../../../shared/contracts/engine-equipment';
 import type { EquipmentItem } from '../../../../shared/contracts/library';
 import { overrideReasonSchema } from '../../../../shared/contracts/preparations';
-import type { PlanInput } from '../../../../shared/uncertainty';
+import { earlierMakeUpInSameFlask, type PlanInput } from '../../../../shared/uncertainty';
 import { isStepKind, STEP_KINDS, type StepKind } from '../../../../shared/contracts/step-kinds';
 import { isStartKind } from './step-choices';
 import { parseDecimal } from './parse-decimal';
@@ -24,11 +24,70 @@ export type DraftStep = {
   kind: StepKind;
   /** Library id of the balance, flask or pipette ('' while none is chosen). */
   equipmentId: string;
-  /** Mass or volume as typed (see STEP_KINDS[kind].quantity). */
+  /** Mass or volume as typed, in the unit `quantityUnit` gives (µL for a piston pipette, else STEP_KINDS[kind].quantity). */
   quantity: string;
   containerMassG: string;
   extraSources: DraftExtraSource[];
+  /** A make-up in a flask an earlier step used: its earlier solution is bottled and the flask rinsed first. */
+  flaskEmptiedBefore?: boolean;
 };
+
+/** The unit a step's quantity is typed in: a piston pipette's volume in µL, the unit of the item; else mL or g. */
+export type QuantityUnit = 'g' | 'mL' | 'µL';
+
+/** The unit the planner shows beside a step's quantity box, by the step's kind and the item chosen in it. */
+export function quantityUnit(kind: StepKind, item: EquipmentItem | undefined): QuantityUnit | null {
+  const quantity = STEP_KINDS[kind].quantity;
+  if (quantity === null) return null;
+  return kind === 'pipetteAliquot' && item?.kind === 'piston-pipette' ? 'µL' : quantity.unit;
+}
+
+/** Powers of ten from the unit typed to the unit the plan stores (volumeMl, …G): the one place µL meets mL. */
+const TO_PLAN_POWER: Record<QuantityUnit, number> = { g: 0, mL: 0, µL: -3 };
+
+/** A typed quantity as the plan stores it (µL → mL exactly: "250" → 0.25); null when empty, NaN when unreadable. */
+export function quantityToPlan(text: string, unit: QuantityUnit): number | null {
+  return parseDecimal(text, TO_PLAN_POWER[unit]);
+}
+
+/** A stored quantity as the planner shows it, in the unit typed (0.25 mL → "250" µL). */
+function quantityFromPlan(value: unknown, unit: QuantityUnit): string {
+  const stored = text(value);
+  if (TO_PLAN_POWER[unit] === 0) return stored;
+  const shown = parseDecimal(stored, -TO_PLAN_POWER[unit]);
+  return shown === null || Number.isNaN(shown) ? stored : String(shown);
+}
+
+/**
+ * A step with another balance, flask or pipette chosen. A one-mark pipette fills in its nominal volume; a volume
+ * already typed keeps its meaning when the unit changes (1 mL becomes 1000 µL on choosing a piston pipette); a
+ * new flask asks again whether an earlier solution was bottled.
+ */
+export function withEquipment(
+  step: DraftStep,
+  equipmentId: string,
+  chosen: EquipmentItem | undefined,
+  previous: EquipmentItem | undefined,
+): DraftStep {
+  const changed = { ...step, equipmentId, ...(step.kind === 'makeUpToVolume' ? { flaskEmptiedBefore: false } : {}) };
+  if (step.kind !== 'pipetteAliquot') return changed;
+  if (chosen?.kind === 'glass-pipette') return { ...changed, quantity: String(chosen.current.data.nominalMl) };
+  const from = quantityUnit(step.kind, previous);
+  const to = quantityUnit(step.kind, chosen);
+  if (from === null || to === null || from === to) return changed;
+  const inPlanUnit = quantityToPlan(step.quantity, from);
+  return inPlanUnit === null || Number.isNaN(inPlanUnit)
+    ? changed
+    : { ...changed, quantity: quantityFromPlan(inPlanUnit, to) };
+}
+
+/** The earlier step that made a solution in the flask this make-up step chose, if any (the engine's own rule). */
+export function earlierStepInSameFlask(steps: readonly DraftStep[], index: number): number | undefined {
+  const flaskIds = steps.map((step) =>
+    step.kind === 'makeUpToVolume' && step.equipmentId ? step.equipmentId : undefined,
+  );
+  return earlierMakeUpInSameFlask(flaskIds, index);
+}
 
 /** Everything the plan editor edits; turned into the engine's plan document for the budget and the server. */
 export type PlanDraft = {
@@ -115,11 +174,15 @@ export function draftFromPlan(
       .filter((step): step is Record<string, unknown> & { kind: StepKind } => isStepKind(step.kind))
       .map((step) => {
         const info = STEP_KINDS[step.kind];
+        const piston = isRecord(step.pipette) && step.pipette.kind === 'pistonPipette';
         return {
           key: newKey('step'),
           kind: step.kind,
           equipmentId: info.slot ? libraryIdOf(step[info.slot.name]) : '',
-          quantity: info.quantity ? text(step[info.quantity.field]) : '',
+          quantity: info.quantity
+            ? quantityFromPlan(step[info.quantity.field], piston ? 'µL' : info.quantity.unit)
+            : '',
+          ...(step.flaskEmptiedBefore === true ? { flaskEmptiedBefore: true } : {}),
           containerMassG:
             step.containerMassG === undefined || step.containerMassG === 0 ? '' : text(step.containerMassG),
           extraSources: (Array.isArray(step.extraSources) ? step.extraSources : [])
@@ -146,7 +209,7 @@ function buildPlan(draft: PlanDraft, library: Map<string, EquipmentItem>, withTi
     return item ? toEngineEquipment(item) : { libraryId: id };
   };
   const material = draft.materialId ? writeEquipment(draft.materialId) : undefined;
-  const steps = draft.steps.map((step) => {
+  const steps = draft.steps.map((step, index) => {
     const info = STEP_KINDS[step.kind];
     const out: Record<string, unknown> = { kind: step.kind };
     if (isStartKind(step.kind) && material) out.material = material;
@@ -158,9 +221,12 @@ function buildPlan(draft: PlanDraft, library: Map<string, EquipmentItem>, withTi
         step.kind === 'pipetteAliquot' && item?.kind === 'glass-pipette'
           ? (item.current.data.nominalMl as number)
           : undefined;
-      const typed = parseDecimal(step.quantity);
+      const typed = quantityToPlan(step.quantity, quantityUnit(step.kind, item) ?? info.quantity.unit);
       out[info.quantity.field] = glassVolume ?? (typed === null ? undefined : typed);
     }
+    // Said only of a flask an earlier step used: elsewhere there is nothing to bottle (and the engine refuses it).
+    if (step.flaskEmptiedBefore && earlierStepInSameFlask(draft.steps, index) !== undefined)
+      out.flaskEmptiedBefore = true;
     if (info.container) {
       const container = parseDecimal(step.containerMassG);
       if (container !== null) out.containerMassG = container;

@@ -112,12 +112,16 @@ export function toEngineEquipment(item: Pick<EquipmentItem, 'id' | 'kind' | 'cod
 /** The plan settings a lab's policy sets; the plan keeps its own output unit and lab temperature. */
 export function policySettings(
   policy: LabPolicy,
-): Pick<PlanInput['settings'], 'coverage' | 'defaultGlasswareDistribution' | 'temperatureHalfRangeC'> {
+): Pick<
+  PlanInput['settings'],
+  'coverage' | 'defaultGlasswareDistribution' | 'temperatureHalfRangeC' | 'monteCarloInterval'
+> {
   return {
     coverage:
       policy.coverage.mode === 'probability' ? { probability: policy.coverage.probability } : { k: policy.coverage.k },
     defaultGlasswareDistribution: policy.glasswareDistribution,
     temperatureHalfRangeC: policy.temperatureHalfRangeC,
+    monteCarloInterval: policy.monteCarloInterval,
   };
 }
 

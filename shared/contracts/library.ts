@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { molarMass } from '../uncertainty/chemical-formula';
 import { MAXIMUM_COVERAGE_FACTOR } from '../uncertainty/coverage-factor';
 import { PlanError } from '../uncertainty/plan-error';
+import { MONTE_CARLO_INTERVALS } from '../uncertainty/result-statement';
 
 /**
  * The lab's tolerance library: what QA records for each kind of item. Every number carries its
@@ -331,6 +332,10 @@ export const labPolicySchema = z.object({
     'Give a half-range of at most 20 °C.',
   ),
   minimumWeightRule: z.boolean(),
+  /** The Monte Carlo interval a result states when Monte Carlo does not validate GUM; a policy stored before it read symmetric. */
+  monteCarloInterval: z
+    .enum(MONTE_CARLO_INTERVALS, { message: 'Choose the probabilistically symmetric or the shortest interval.' })
+    .default('symmetric'),
 });
 export type LabPolicy = z.infer<typeof labPolicySchema>;
 
@@ -345,6 +350,7 @@ export const DEFAULT_LAB_POLICY: LabPolicy = {
   glasswareDistribution: 'triangular',
   temperatureHalfRangeC: 4,
   minimumWeightRule: true,
+  monteCarloInterval: 'symmetric',
 };
 
 export const importRequestSchema = z.object({

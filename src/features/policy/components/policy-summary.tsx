@@ -1,5 +1,6 @@
 import type { LabPolicy } from '../../../../shared/contracts/library';
 
+const INTERVAL_WORDS = { symmetric: 'Probabilistically symmetric', shortest: 'Shortest' } as const;
 const DISTRIBUTION_WORDS = { triangular: 'Triangular, u = a/√6', rectangular: 'Rectangular, u = a/√3' } as const;
 
 /** The policy as read-only text, for members who are not QA. */
@@ -18,6 +19,8 @@ export function PolicySummary({ policy }: { policy: LabPolicy }) {
       <dd className="numeric">± {policy.temperatureHalfRangeC} °C around the calibration temperature (rectangular)</dd>
       <dt className="font-semibold">Minimum weight</dt>
       <dd>{policy.minimumWeightRule ? 'USP <41> rule applied: 2·s/m ≤ 0.10 %, s not below 0.41·d' : 'Not checked'}</dd>
+      <dt className="font-semibold">Monte Carlo interval on the record</dt>
+      <dd>{INTERVAL_WORDS[policy.monteCarloInterval]}, stated when Monte Carlo does not confirm the GUM interval</dd>
     </dl>
   );
 }

@@ -1,6 +1,7 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PreparationDetail, PreparationWrite } from '../../../../shared/contracts/preparations';
+import type { Snapshot } from '../../../../shared/contracts/snapshot';
 import { warningText } from '../../../../shared/contracts/warning-text';
 import { parsePlan, PlanError, type PlanInput } from '../../../../shared/uncertainty';
 import { Alert } from '../../../components/ui/alert';
@@ -35,7 +36,7 @@ type WorkspaceProps = {
   policy: LabPolicy;
   editable: boolean;
   /** The stored result of a read-only version (its snapshot): shown instead of a live recomputation. */
-  stored: (ShownResult & { plan: PlanInput }) | null;
+  stored: (ShownResult & { plan: PlanInput } & Pick<Snapshot, 'monteCarlo' | 'validation'>) | null;
   save: (write: PreparationWrite) => Promise<PreparationDetail>;
   onSaved?: (detail: PreparationDetail, draft: PlanDraft, savedKey: string) => void;
   /** The page header, given the save-state line and the current draft. */
@@ -186,7 +187,9 @@ export function Workspace({
               </p>
             ) : null}
             {budget ? (
-              <ResultStatement budget={budget} />
+              <ResultStatement
+                result={stored ?? { plan: { settings: {} }, budget, monteCarlo: null, validation: null }}
+              />
             ) : (
               <p className="text-muted">The budget appears as soon as the plan is complete.</p>
             )}

@@ -113,4 +113,5 @@ export const DEMO_POLICY = {
   glasswareDistribution: 'triangular',
   temperatureHalfRangeC: 4,
   minimumWeightRule: true,
+  monteCarloInterval: 'symmetric',
 } as const;

@@ -7,5 +7,5 @@ export function validationWords(validation: GumValidation, unit: string): string
   const ends = `the interval ends differ by ${formatSignificant(validation.lowEndDifference)} ${unit} and ${formatSignificant(validation.highEndDifference)} ${unit}`;
   return validation.passed
     ? `Confirmed: ${ends}, both within the numerical tolerance ${tolerance}.`
-    : `Not confirmed: ${ends}, more than the numerical tolerance ${tolerance}. State the Monte Carlo interval instead.`;
+    : `Not confirmed: ${ends}, more than the numerical tolerance ${tolerance}. The result above states the Monte Carlo interval.`;
 }

@@ -15,6 +15,7 @@ import {
   parsePlan,
   PlanError,
   planJsonSchema,
+  resultStatement,
   runMonteCarlo,
   validateAgainstGum,
 } from '../../shared/uncertainty/index';
@@ -63,8 +64,9 @@ try {
 try {
   const plan = parsePlan(document);
   const budget = evaluatePlan(plan);
-  const monteCarlo =
-    options.trials >= 2 ? runMonteCarlo(plan, { trials: options.trials, seed: options.seed }) : undefined;
+  const monteCarlo = options.trials >= 2 ? runMonteCarlo(plan, { trials: options.trials, seed: options.seed }) : null;
+  const validation = monteCarlo ? validateAgainstGum(budget, monteCarlo) : null;
+  const statement = resultStatement({ plan, budget, monteCarlo, validation });
   const output = {
     engineVersion: budget.engineVersion,
     title: plan.title,
@@ -79,13 +81,14 @@ try {
     expandedUncertainty: budget.expandedUncertainty,
     relativeExpandedUncertainty: budget.relativeExpandedUncertainty,
     rounded: budget.rounded,
-    statement: budget.statement,
+    statement: statement.text,
+    statementReason: statement.reason,
     contributions: budget.rows,
     byStep: budget.byStep,
     byCategory: budget.byCategory,
     checkpoints: budget.checkpoints,
-    monteCarlo: monteCarlo ?? null,
-    validation: monteCarlo ? validateAgainstGum(budget, monteCarlo) : null,
+    monteCarlo,
+    validation,
     warnings: budget.warnings.map((warning) => ({ ...warning, message: warningText(warning) })),
   };
   process.stdout.write(`${JSON.stringify(output, nonFiniteNumberReplacer, 2)}\n`);

@@ -18,13 +18,7 @@ export { propagate, type BudgetResult, type BudgetRow, type BudgetGroup } from '
 export type { CompiledModel, SourceCategory } from './model-types';
 export { formatDegreesOfFreedom } from './effective-degrees';
 export { roundToUncertainty } from './result-rounding';
-export {
-  MONTE_CARLO_INTERVALS,
-  resultStatement,
-  type MonteCarloInterval,
-  type ResultStatement,
-  type StatedResult,
-} from './result-statement';
+export { resultStatement, type StatedResult } from './result-statement';
 export { concentrationUnitNames } from './units';
 export { runMonteCarlo, startMonteCarlo, type MonteCarloResult } from './monte-carlo';
 export { validateAgainstGum, type GumValidation } from './validation';

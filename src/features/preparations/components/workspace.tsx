@@ -115,6 +115,12 @@ export function Workspace({
   const shown = stored ?? lastValid.current;
   const stale = !stored && !evaluation.ok;
   const budget = shown?.budget ?? null;
+  // The stated result: the stored snapshot's, or the live budget's (no Monte Carlo yet); the same object while the
+  // budget is, so the statement skips repainting as the title is typed.
+  const statedResult = useMemo(
+    () => stored ?? (budget ? { plan: { settings: {} }, budget, monteCarlo: null, validation: null } : null),
+    [stored, budget],
+  );
   const liveProblem = stored ? null : evaluation.problem;
   const warnings = placedWarnings(shown, draft, libraryById);
   const planWarnings = warnings.filter((warning) => !('stepIndex' in warning)).map(warningText);
@@ -186,10 +192,8 @@ export function Workspace({
                 Last valid result, shown until the marked field is fixed.
               </p>
             ) : null}
-            {budget ? (
-              <ResultStatement
-                result={stored ?? { plan: { settings: {} }, budget, monteCarlo: null, validation: null }}
-              />
+            {statedResult ? (
+              <ResultStatement result={statedResult} />
             ) : (
               <p className="text-muted">The budget appears as soon as the plan is complete.</p>
             )}

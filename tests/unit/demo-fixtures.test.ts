@@ -1,5 +1,6 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { pistonErrorsUl } from '../../shared/uncertainty/volume-delivery';
 
 const plansFolder = new URL('../fixtures/plans/', import.meta.url);
 const readJson = (relative: string): unknown => JSON.parse(readFileSync(new URL(relative, plansFolder), 'utf8'));
@@ -53,6 +54,11 @@ describe('the demo fixtures: one data set per itemId', () => {
       expect(spec.systematicError).toEqual({ absoluteUl: 8 });
       expect(spec.randomError).toEqual({ absoluteUl: 3 });
     }
-    expect(equipmentUses.filter(({ item }) => item.itemId === 'PP-07').length).toBeGreaterThanOrEqual(3);
+    const uses = equipmentUses.filter(({ item }) => item.itemId === 'PP-07');
+    expect(uses.length).toBeGreaterThanOrEqual(3);
+    // As the engine reads each plan's PP-07 at 100, 250 and 1000 µL: the 1000 µL limits everywhere.
+    for (const { item } of uses)
+      for (const volumeUl of [100, 250, 1000])
+        expect(pistonErrorsUl(item as never, volumeUl)).toMatchObject({ systematicUl: 8, randomUl: 3 });
   });
 });

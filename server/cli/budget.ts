@@ -17,6 +17,7 @@ import {
   parsePlan,
   PlanError,
   planJsonSchema,
+  resultStatement,
 } from '../../shared/uncertainty/index';
 
 const usage = 'usage: npm run budget -- <plan.json> [--seed S] [--no-monte-carlo]   |   npm run budget -- --schema';
@@ -64,6 +65,9 @@ try {
   const plan = parsePlan(document);
   const budget = evaluatePlan(plan);
   const check = options.monteCarlo ? checkGumByMonteCarlo(plan, budget, { seed: options.seed }) : undefined;
+  const monteCarlo = check?.monteCarlo ?? null;
+  const validation = check?.validation ?? null;
+  const statement = resultStatement({ plan, budget, monteCarlo, validation });
   const output = {
     engineVersion: budget.engineVersion,
     title: plan.title,
@@ -78,13 +82,14 @@ try {
     expandedUncertainty: budget.expandedUncertainty,
     relativeExpandedUncertainty: budget.relativeExpandedUncertainty,
     rounded: budget.rounded,
-    statement: budget.statement,
+    statement: statement.text,
+    statementReason: statement.reason,
     contributions: budget.rows,
     byStep: budget.byStep,
     byCategory: budget.byCategory,
     checkpoints: budget.checkpoints,
-    monteCarlo: check?.monteCarlo ?? null,
-    validation: check?.validation ?? null,
+    monteCarlo,
+    validation,
     warnings: budget.warnings.map((warning) => ({ ...warning, message: warningText(warning) })),
   };
   process.stdout.write(`${JSON.stringify(output, nonFiniteNumberReplacer, 2)}\n`);

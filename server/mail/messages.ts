@@ -59,7 +59,8 @@ export function submittedMessage(input: {
   analyst: string;
   title: string;
   version: number;
-  statement: string | null;
+  /** The result as the record states it (resultStatement): the statement and, for a Monte Carlo interval, why. */
+  statement: { text: string; reason: string | null };
   comment: string;
   link: string;
 }) {
@@ -69,7 +70,8 @@ export function submittedMessage(input: {
       [
         `Hello ${input.reviewerName},`,
         `${input.analyst} has submitted version ${input.version} of “${input.title}” for review.`,
-        input.statement ? `Result: ${input.statement}` : 'The version has no computed result.',
+        `Result: ${input.statement.text}`,
+        ...(input.statement.reason ? [input.statement.reason] : []),
         ...(input.comment ? [`Note from ${input.analyst}: ${input.comment}`] : []),
       ],
       { href: input.link, label: 'Open the record' },

@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { snapshotSchema } from '../../shared/contracts/snapshot';
 import { itemIn, snapshotStepNamer, stepInstruction } from '../../shared/contracts/step-kinds';
+import { resultStatement } from '../../shared/uncertainty';
 import { leadPlan, libraryByCode } from '../test-support/demo-plans';
 import { itemReference } from './item-reference';
 import { buildTestApp, demo, DEMO_PASSWORD, signIn, type Client, type TestApp } from '../test-support/test-app';
@@ -165,6 +166,37 @@ describe('the PDF record', () => {
       expect(from, line).toBeGreaterThanOrEqual(0);
     }
     expect(flat).not.toContain('DRAFT');
+  });
+
+  it('states the Monte Carlo interval and why, in the words of the record page, when Monte Carlo does not validate GUM (JCGM 101:2008 §8)', async () => {
+    const library = await libraryByCode(analyst, labId);
+    const plan = leadPlan(library);
+    // A dominant rectangular source (±2 %): its 95.45 % Monte Carlo interval is about ±2.0 %, the GUM one ±2.3 %, so the
+    // ends differ by tenths of a mg/L, far more than δ = 0.05 mg/L (a dominant rectangular input, as in JCGM 101:2008 §9.2, from memory).
+    Object.assign(plan.steps[3], {
+      extraSources: [
+        { name: 'Evaporation before use', effect: 'relative', distribution: { shape: 'rectangular', halfWidth: 0.02 } },
+      ],
+    });
+    const created = (
+      await analyst
+        .post(url('/preparations'), { title: 'Pb with a dominant rectangular source', plan, seed: 5 })
+        .expect(201)
+    ).body;
+    preparationId = created.id;
+    const snapshot = snapshotSchema.parse(created.current.snapshot);
+    expect(snapshot.validation.passed).toBe(false);
+    const statement = resultStatement(snapshot);
+    expect(statement.method).toBe('monteCarlo');
+    expect(statement.text).toMatch(
+      /^c\(Pb\) = 100\.0 mg\/L, 95\.45 % coverage interval \[98\.0, 102\.0\] mg\/L, Monte Carlo interval/,
+    );
+    // The list, the e-mail and the audit trail read the same words, stored with the version.
+    expect(created.current.resultStatement).toBe(statement.text);
+    const flat = pdfText(await downloadPdf(analyst), 'monte-carlo').replace(/\s+/g, ' ');
+    expect(flat).toContain(statement.text);
+    expect(flat).toContain(statement.reason);
+    expect(flat).not.toContain(snapshot.budget.statement);
   });
 
   it('prints ν_eff truncated to the integer the coverage factor was read at (8.7 → 8, never 9)', async () => {

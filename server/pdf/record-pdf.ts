@@ -10,7 +10,7 @@ import {
   snapshotStepNamer,
   stepInstruction,
 } from '../../shared/contracts/step-kinds';
-import { formatDegreesOfFreedom } from '../../shared/uncertainty';
+import { formatDegreesOfFreedom, resultStatement } from '../../shared/uncertainty';
 import { PDF_FONTS } from './fonts';
 import { percent, significant, utc } from './format';
 import { drawContributionBars, drawHistogram } from './pdf-charts';
@@ -61,6 +61,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
   const { budget, monteCarlo, validation, items } = snapshot;
   const stepName = snapshotStepNamer(snapshot);
   const approved = version.status === 'approved';
+  const statement = resultStatement(snapshot);
 
   return new Promise((resolve, reject) => {
     const doc = new PDFDocument({
@@ -112,7 +113,12 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
       .font('bold')
       .fontSize(12)
       .fillColor(INK)
-      .text(budget.statement, MARGIN + 8, boxTop + 8, { width: CONTENT_WIDTH - 16 });
+      .text(statement.text, MARGIN + 8, boxTop + 8, { width: CONTENT_WIDTH - 16 });
+    if (statement.reason)
+      doc
+        .font('regular')
+        .fontSize(9)
+        .text(statement.reason, MARGIN + 8, doc.y + 3, { width: CONTENT_WIDTH - 16 });
     doc
       .font('regular')
       .fontSize(8.5)
@@ -269,7 +275,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     paragraph(
       validation.passed
         ? `Validated: both ends of the GUM interval agree with the Monte Carlo interval within the numerical tolerance δ = ${significant(validation.numericalTolerance, 2)} ${budget.unit} (differences ${significant(validation.lowEndDifference, 2)} and ${significant(validation.highEndDifference, 2)}).`
-        : `Not validated: the ends of the GUM interval differ from the Monte Carlo interval by ${significant(validation.lowEndDifference, 2)} and ${significant(validation.highEndDifference, 2)} ${budget.unit}, more than δ = ${significant(validation.numericalTolerance, 2)} ${budget.unit}. The Monte Carlo interval is the better statement of this result.`,
+        : `Not validated: the ends of the GUM interval differ from the Monte Carlo interval by ${significant(validation.lowEndDifference, 2)} and ${significant(validation.highEndDifference, 2)} ${budget.unit}, more than δ = ${significant(validation.numericalTolerance, 2)} ${budget.unit}. The result above states the Monte Carlo interval.`,
       { font: 'bold' },
     );
 

@@ -13,7 +13,7 @@ import type {
   VersionSummary,
 } from '../../shared/contracts/preparations';
 import { isStepKind, STEP_KINDS } from '../../shared/contracts/step-kinds';
-import { parsePlan, PlanError } from '../../shared/uncertainty';
+import { parsePlan, PlanError, resultStatement } from '../../shared/uncertainty';
 import type { AuditRepository } from '../audit/audit-repository';
 import type { LabActor } from '../auth/authorize';
 import { allowedActions, allows, ownsPreparation, type LabMember } from '../../shared/domain/version-lifecycle';
@@ -191,7 +191,7 @@ export function preparationsService(deps: {
         problem_json: null,
         snapshot_json: snapshotJson,
         snapshot_sha256: sha256Hex(snapshotJson),
-        result_statement: budget.statement,
+        result_statement: resultStatement(snapshot).text,
         value: budget.value,
         unit: budget.unit,
         relative_expanded_uncertainty: budget.relativeExpandedUncertainty,

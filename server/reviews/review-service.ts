@@ -25,6 +25,8 @@ import type { PreparationsRepository } from '../preparations/preparations-reposi
 import type { ReviewsRepository } from './reviews-repository';
 import { approvedAsOf, approvedRecordSha256, toApprovedAsColumns, type ApprovedAs } from './approved-record';
 import type { Transact } from '../db/transaction';
+import { readStoredSnapshot } from '../preparations/stored-snapshot';
+import { resultStatement } from '../../shared/uncertainty';
 
 /** 'a, b or c'. */
 const listOf = (words: readonly string[]) =>
@@ -145,6 +147,8 @@ export function reviewService(deps: {
           after: { status: 'submitted' },
         });
       });
+      // The result in the words of the record page and the PDF, stated from the stored numbers.
+      const statement = resultStatement(readStoredSnapshot(version.snapshot_json));
       const reviewers = (await labs.members(labId)).filter(
         (m) => m.role === 'qa' && m.active && m.user_id !== actor.id,
       );
@@ -158,7 +162,7 @@ export function reviewService(deps: {
               analyst: actor.name,
               title: prep.title,
               version: number,
-              statement: version.result_statement,
+              statement,
               comment,
               link: deps.publicUrl(`/records/${preparationId}/v/${number}`),
             }),

@@ -202,6 +202,7 @@ export function policySettings(
   | 'linearityCorrelationNetFraction'
   | 'airBuoyancy'
   | 'certifiedSolutionDensity'
+  | 'monteCarloInterval'
 > {
   return {
     // Weights of conventional density 8000 kg/m³ (OIML R 111-1).
@@ -216,6 +217,7 @@ export function policySettings(
     operationTemperatureHalfRangeC: policy.operationTemperatureHalfRangeC,
     linearityCorrelation: policy.linearityCorrelation,
     linearityCorrelationNetFraction: policy.linearityCorrelationNetFraction,
+    monteCarloInterval: policy.monteCarloInterval,
   };
 }
 

@@ -4,6 +4,7 @@ import { molarMass } from '../uncertainty/chemical-formula';
 import { MAXIMUM_COVERAGE_FACTOR } from '../uncertainty/coverage-factor';
 import { PlanError } from '../uncertainty/plan-error';
 import { molarMassDisagreement } from './material-composition-text';
+import { MONTE_CARLO_INTERVALS } from '../uncertainty/result-statement';
 
 /**
  * The lab's tolerance library: what QA records for each kind of item. Every number carries its
@@ -554,6 +555,10 @@ export const labPolicySchema = z.object({
   // Policies stored before these fields read with the defaults (docs/plan-format.md says why these).
   airBuoyancy: airBuoyancyPolicySchema.default(DEFAULT_AIR_BUOYANCY_POLICY),
   solutionDensity: solutionDensityPolicySchema.default(DEFAULT_SOLUTION_DENSITY_POLICY),
+  /** The Monte Carlo interval a result states when Monte Carlo does not validate GUM; a policy stored before it read symmetric. */
+  monteCarloInterval: z
+    .enum(MONTE_CARLO_INTERVALS, { message: 'Choose the probabilistically symmetric or the shortest interval.' })
+    .default('symmetric'),
 });
 export type LabPolicy = z.infer<typeof labPolicySchema>;
 
@@ -575,6 +580,7 @@ export const DEFAULT_LAB_POLICY: LabPolicy = {
   linearityCorrelationNetFraction: 0.1,
   airBuoyancy: DEFAULT_AIR_BUOYANCY_POLICY,
   solutionDensity: DEFAULT_SOLUTION_DENSITY_POLICY,
+  monteCarloInterval: 'symmetric',
 };
 
 export const importRequestSchema = z.object({

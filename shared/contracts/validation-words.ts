@@ -36,14 +36,14 @@ export function validationWords(validation: GumValidation, unit: string): string
     case 'confirmed':
       return `Confirmed: ${ends}, both within the numerical tolerance ${tolerance}.`;
     case 'notConfirmed':
-      return `Not confirmed: ${ends}, more than the numerical tolerance ${tolerance}. State the Monte Carlo interval instead.`;
+      return `Not confirmed: ${ends}, more than the numerical tolerance ${tolerance}. The result above states the Monte Carlo interval.`;
     case 'notDecided': {
       const limit = `${groupedDigits(MAXIMUM_MONTE_CARLO_TRIALS)} trials`;
       const known =
         validation.intervalEndTolerance === undefined
           ? `at this coverage probability Monte Carlo cannot place its interval ends closely enough within ${limit}`
           : `after ${limit} Monte Carlo still knows its interval ends only to within ${figure(validation.intervalEndTolerance)} ${unit}`;
-      return `Not decided: ${known}, too coarse to judge the GUM interval against the numerical tolerance ${tolerance}; ${ends}. State the Monte Carlo interval instead.`;
+      return `Not decided: ${known}, too coarse to judge the GUM interval against the numerical tolerance ${tolerance}; ${ends}. The result above states the Monte Carlo interval.`;
     }
   }
 }

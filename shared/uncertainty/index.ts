@@ -19,6 +19,7 @@ export { propagate, type BudgetResult, type BudgetRow, type BudgetGroup } from '
 export type { CompiledModel, SourceCategory } from './model-types';
 export { formatDegreesOfFreedom } from './effective-degrees';
 export { roundToUncertainty } from './result-rounding';
+export { resultStatement, type StatedResult } from './result-statement';
 export { concentrationUnitNames } from './units';
 export { runMonteCarlo, startMonteCarlo, type MonteCarloResult } from './monte-carlo';
 export { checkGumByMonteCarlo, validateAgainstGum, type GumValidation } from './validation';

@@ -13,6 +13,7 @@ import {
   volumetricFlaskSchema,
 } from './equipment-schema';
 import { MAXIMUM_EXTRA_SOURCES_PER_STEP, MAXIMUM_PLAN_STEPS } from './plan-limits';
+import { MONTE_CARLO_INTERVALS } from './result-statement';
 import { concentrationUnitNames } from './units';
 
 const positive = (what: string) => z.number().finite().positive(`${what} must be greater than zero.`);
@@ -171,6 +172,12 @@ export const settingsSchema = z
       .optional(),
     coverage: coverageSchema.default({ probability: 0.9545 }),
     defaultGlasswareDistribution: z.enum(['triangular', 'rectangular']).default('triangular'),
+    /**
+     * The Monte Carlo interval stated when the GUM interval is not validated (JCGM 101:2008 7.7), from the lab
+     * policy; left out (as in every plan stored before it existed) it is the probabilistically symmetric one. No
+     * default is filled in, so a stored snapshot encodes back to the very text it was stored with.
+     */
+    monteCarloInterval: z.enum(MONTE_CARLO_INTERVALS).optional(),
     outputUnit: z.enum(concentrationUnitNames, {
       error: `Unknown unit. Use one of: ${concentrationUnitNames.join(', ')}.`,
     }),

@@ -36,6 +36,40 @@ export function roundToUncertainty(value: number, uncertainty: number, significa
   };
 }
 
+/** A value and a coverage interval rounded for a report. */
+export interface RoundedInterval {
+  decimals: number;
+  valueText: string;
+  lowText: string;
+  highText: string;
+}
+
+/**
+ * Rounds a value and a coverage interval [low, high] for a report: the half-width (high − low)/2 sets the decimal
+ * place as an expanded uncertainty does (roundToUncertainty, JCGM 100:2008 7.2.6), and the value and both ends are
+ * rounded to it, half away from zero.
+ * @example roundIntervalToUncertainty(10.0123, { low: 9.95812, high: 10.06634 }) // { decimals: 3, valueText: '10.012', lowText: '9.958', highText: '10.066' }
+ */
+export function roundIntervalToUncertainty(
+  value: number,
+  interval: { low: number; high: number },
+  significantDigits = 2,
+): RoundedInterval {
+  const halfWidth = (interval.high - interval.low) / 2;
+  const rounded = roundToUncertainty(value, halfWidth, significantDigits);
+  // A zero or non-finite width has no decimal place to round to: the ends print as they are.
+  const end = (bound: number) =>
+    halfWidth > 0 && Number.isFinite(halfWidth)
+      ? roundToDecimals(bound, rounded.decimals).toFixed(Math.max(rounded.decimals, 0))
+      : String(bound);
+  return {
+    decimals: rounded.decimals,
+    valueText: rounded.valueText,
+    lowText: end(interval.low),
+    highText: end(interval.high),
+  };
+}
+
 function roundToDecimals(value: number, decimals: number): number {
   const factor = 10 ** Math.abs(decimals);
   const scaled = decimals >= 0 ? value * factor : value / factor;

@@ -154,7 +154,7 @@ function RecordPage({ labId, preparationId, versionNumber, roles }: RecordPagePr
           />
         ) : null}
         {snapshot ? (
-          <ResultStatementPanel budget={snapshot.budget} />
+          <ResultStatementPanel snapshot={snapshot} />
         ) : (
           <Alert tone="info" title="Not computed">
             {version.problem

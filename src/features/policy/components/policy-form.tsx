@@ -69,6 +69,7 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
               'solutionDensity.matrixDensities',
               'solutionDensity.otherwise',
               'solutionDensity.waterStandardUncertaintyGPerMl',
+              'monteCarloInterval',
             ]),
           ),
       },
@@ -255,6 +256,28 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
 
         <AirBuoyancyFields />
         <SolutionDensityFields />
+
+        <fieldset className="flex flex-col gap-2">
+          <legend className="mb-1 text-lg font-bold">Monte Carlo interval on the record</legend>
+          <p className="text-muted">
+            When Monte Carlo does not confirm the GUM interval y ± U (JCGM 101 §8), the record, the PDF and the e-mails
+            state the Monte Carlo coverage interval instead, and say why.
+          </p>
+          <label className="flex items-center gap-2">
+            <input type="radio" value="symmetric" className={RADIO} {...register('monteCarloInterval')} />
+            <span>
+              <span className="font-semibold">Probabilistically symmetric</span>: equal probability outside each end
+              (the interval the check compares with GUM)
+            </span>
+          </label>
+          <label className="flex items-center gap-2">
+            <input type="radio" value="shortest" className={RADIO} {...register('monteCarloInterval')} />
+            <span>
+              <span className="font-semibold">Shortest</span>: the narrowest interval holding the coverage probability
+              (for a skewed distribution)
+            </span>
+          </label>
+        </fieldset>
 
         {saved ? <Alert tone="ok">The lab policy is saved. Budgets computed from now on use it.</Alert> : null}
         <Button type="submit" pending={updatePolicy.isPending} pendingLabel="Saving…" className="self-start">

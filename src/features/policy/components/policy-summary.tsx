@@ -1,5 +1,6 @@
 import type { LabPolicy } from '../../../../shared/contracts/library';
 
+const INTERVAL_WORDS = { symmetric: 'Probabilistically symmetric', shortest: 'Shortest' } as const;
 const DISTRIBUTION_WORDS = { triangular: 'Triangular, u = a/√6', rectangular: 'Rectangular, u = a/√3' } as const;
 
 /** The policy as read-only text, for members who are not QA. */
@@ -49,6 +50,8 @@ export function PolicySummary({ policy }: { policy: LabPolicy }) {
           ? 'otherwise the plan is refused'
           : `otherwise water's density with u = ${policy.solutionDensity.waterStandardUncertaintyGPerMl} g/mL, and a warning`}
       </dd>
+      <dt className="font-semibold">Monte Carlo interval on the record</dt>
+      <dd>{INTERVAL_WORDS[policy.monteCarloInterval]}, stated when Monte Carlo does not confirm the GUM interval</dd>
     </dl>
   );
 }

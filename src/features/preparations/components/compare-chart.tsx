@@ -9,12 +9,12 @@ const FILLS = [
 ];
 
 type CompareChartProps = {
-  /** One entry per step position: "Step 1", with each variant's relative contribution uᵢ(y)/y in %. */
+  /** One entry per budget group ("Step 1", "Shared by steps 2 and 4"), with each variant's (uᵢ(y)/y)² in %². */
   data: Record<string, string | number>[];
   variants: { key: string; label: string }[];
 };
 
-/** Relative contribution of each step, variant beside variant; the bars carry their values. */
+/** Each step's contribution to the relative variance, variant beside variant; the bars carry their values. */
 export default function CompareChart({ data, variants }: CompareChartProps) {
   return (
     <ResponsiveContainer width="100%" height={320} initialDimension={{ width: 900, height: 320 }}>
@@ -31,7 +31,7 @@ export default function CompareChart({ data, variants }: CompareChartProps) {
         </defs>
         <CartesianGrid vertical={false} strokeDasharray="2 4" />
         <XAxis dataKey="step" tick={{ fontSize: 12 }} />
-        <YAxis unit=" %" tick={{ fontSize: 12 }} width={64} />
+        <YAxis unit=" %²" tick={{ fontSize: 12 }} width={72} />
         <Legend />
         {variants.map((variant, index) => (
           <Bar
@@ -45,7 +45,7 @@ export default function CompareChart({ data, variants }: CompareChartProps) {
             <LabelList
               dataKey={variant.key}
               position="top"
-              formatter={(value: unknown) => (typeof value === 'number' ? value.toFixed(2) : '')}
+              formatter={(value: unknown) => (typeof value === 'number' ? Number(value.toPrecision(2)).toString() : '')}
               style={{ fontSize: 11, fill: '#17323b' }}
             />
           </Bar>

@@ -5,7 +5,7 @@ import type { Budget } from '../../../../shared/contracts/snapshot';
 import { snapshotStepNamer } from '../../../../shared/contracts/step-kinds';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { formatPercent, formatSignificant } from '../utils/format-number';
-import { dilutionComparison, dominantStep, planFigures } from '../utils/plan-figures';
+import { dilutionComparison, dominantStep, planFigures, relativeVarianceByStep } from '../utils/plan-figures';
 
 const CompareChart = lazy(() => import('./compare-chart'));
 
@@ -15,7 +15,6 @@ type Column = {
   detail: PreparationDetail;
   budget: Budget | null;
   figures: ReturnType<typeof planFigures> | null;
-  steps: { kind: string }[];
   /** Budget group names, as the record page and the PDF give them. */
   stepName: ((key: string) => string) | null;
 };
@@ -38,7 +37,6 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
       detail,
       budget,
       figures: snapshot ? planFigures(plan) : null,
-      steps: (Array.isArray(plan.steps) ? plan.steps : []) as { kind: string }[],
       stepName: snapshot ? snapshotStepNamer(snapshot) : null,
     };
   });
@@ -99,15 +97,9 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
     { label: 'Product volume', cell: (column) => (column.figures?.productMl ? `${column.figures.productMl} mL` : '—') },
   ];
 
-  const stepCount = Math.max(0, ...computed.map((column) => column.steps.length));
-  const chartData = Array.from({ length: stepCount }, (_, index) => {
-    const entry: Record<string, string | number> = { step: `Step ${index + 1}` };
-    for (const column of computed) {
-      const group = column.budget!.byStep.find((each) => each.key === String(index));
-      if (group) entry[`p${column.detail.id}`] = (100 * group.contribution) / Math.abs(column.budget!.value);
-    }
-    return entry;
-  });
+  const chartData = relativeVarianceByStep(
+    computed.map((column) => ({ key: `p${column.detail.id}`, budget: column.budget! })),
+  );
 
   return (
     <div>
@@ -161,7 +153,13 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
 
       {computed.length > 0 ? (
         <figure className="mt-8 rounded-lg border border-line bg-surface p-4">
-          <figcaption className="mb-2 font-semibold">Relative contribution of each step, uᵢ(y)/y in %</figcaption>
+          <figcaption className="mb-2 font-semibold">
+            Contribution of each step to the relative variance, (uᵢ(y)/y)² in %²
+            <span className="block text-sm font-normal text-muted">
+              Sources shared by several steps (one pipette or flask used twice, a balance&apos;s sensitivity) have a bar
+              of their own, so each preparation&apos;s bars add up to its (u<sub>c</sub>(y)/y)².
+            </span>
+          </figcaption>
           <div aria-hidden="true">
             <Suspense fallback={<LoadingLine label="Drawing the chart…" />}>
               <CompareChart
@@ -171,7 +169,7 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
             </Suspense>
           </div>
           <table className="sr-only">
-            <caption>Relative contribution of each step, in %</caption>
+            <caption>Contribution of each step to the relative variance, in %²</caption>
             <thead>
               <tr>
                 <th scope="col">Step</th>
@@ -189,7 +187,7 @@ export function CompareView({ preparations, hrefOf }: CompareViewProps) {
                   {computed.map((column) => (
                     <td key={column.detail.id}>
                       {typeof entry[`p${column.detail.id}`] === 'number'
-                        ? (entry[`p${column.detail.id}`] as number).toFixed(3)
+                        ? formatSignificant(entry[`p${column.detail.id}`] as number, 3)
                         : '—'}
                     </td>
                   ))}

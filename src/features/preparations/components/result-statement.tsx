@@ -1,14 +1,25 @@
 import { memo } from 'react';
 import type { Budget } from '../../../../shared/contracts/snapshot';
-import { formatDegreesOfFreedom } from '../../../../shared/uncertainty';
+import { formatDegreesOfFreedom, resultStatement, type StatedResult } from '../../../../shared/uncertainty';
 import { formatPercent } from '../utils/format-number';
 
-/** The result as the GUM asks for it (JCGM 100:2008 7.2.3): value, U, k, coverage probability and ν_eff. */
-export const ResultStatement = memo(function ResultStatement({ budget }: { budget: Budget }) {
-  const { rounded } = budget;
+/**
+ * The result as the record states it (resultStatement: value ± U with k, or the Monte Carlo coverage interval and
+ * why, when Monte Carlo does not validate GUM), with the GUM figures it is made of (JCGM 100:2008 7.2.3).
+ */
+export const ResultStatement = memo(function ResultStatement({
+  result,
+}: {
+  result: StatedResult & { budget: Budget };
+}) {
+  const { budget } = result;
+  const statement = resultStatement(result);
   const facts: [string, string][] = [
-    [`Value ${budget.measurand}`, `${rounded.valueText} ${budget.unit}`],
-    ['Expanded uncertainty U', `${rounded.uncertaintyText} ${budget.unit}`],
+    [`Value ${budget.measurand}`, `${statement.valueText} ${budget.unit}`],
+    ...(statement.method === 'monteCarlo'
+      ? [['Monte Carlo coverage interval', `${statement.intervalText} ${budget.unit}`] satisfies [string, string]]
+      : []),
+    ['Expanded uncertainty U', `${budget.rounded.uncertaintyText} ${budget.unit}`],
     ['Relative U', formatPercent(budget.relativeExpandedUncertainty)],
     ['Coverage factor k', budget.coverageFactor.toFixed(2)],
     ['Coverage probability', `${(budget.coverageProbability * 100).toFixed(2)} %`],
@@ -17,8 +28,13 @@ export const ResultStatement = memo(function ResultStatement({ budget }: { budge
   return (
     <div>
       <p className="text-xl font-bold" data-testid="result-statement">
-        {budget.statement}
+        {statement.text}
       </p>
+      {statement.reason ? (
+        <p className="mt-1 text-sm font-semibold text-caution" data-testid="result-statement-reason">
+          {statement.reason}
+        </p>
+      ) : null}
       <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-3">
         {facts.map(([term, value]) => (
           <div key={term}>

@@ -1,6 +1,7 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { EquipmentItem, LabPolicy } from '../../../../shared/contracts/library';
 import type { PreparationDetail, PreparationWrite } from '../../../../shared/contracts/preparations';
+import type { Snapshot } from '../../../../shared/contracts/snapshot';
 import { warningText } from '../../../../shared/contracts/warning-text';
 import { parsePlan, PlanError, type PlanInput } from '../../../../shared/uncertainty';
 import { Alert } from '../../../components/ui/alert';
@@ -35,7 +36,7 @@ type WorkspaceProps = {
   policy: LabPolicy;
   editable: boolean;
   /** The stored result of a read-only version (its snapshot): shown instead of a live recomputation. */
-  stored: (ShownResult & { plan: PlanInput }) | null;
+  stored: (ShownResult & { plan: PlanInput } & Pick<Snapshot, 'monteCarlo' | 'validation'>) | null;
   save: (write: PreparationWrite) => Promise<PreparationDetail>;
   onSaved?: (detail: PreparationDetail, draft: PlanDraft, savedKey: string) => void;
   /** The page header, given the save-state line and the current draft. */
@@ -114,6 +115,12 @@ export function Workspace({
   const shown = stored ?? lastValid.current;
   const stale = !stored && !evaluation.ok;
   const budget = shown?.budget ?? null;
+  // The stated result: the stored snapshot's, or the live budget's (no Monte Carlo yet); the same object while the
+  // budget is, so the statement skips repainting as the title is typed.
+  const statedResult = useMemo(
+    () => stored ?? (budget ? { plan: { settings: {} }, budget, monteCarlo: null, validation: null } : null),
+    [stored, budget],
+  );
   const liveProblem = stored ? null : evaluation.problem;
   const warnings = placedWarnings(shown, draft, libraryById);
   const planWarnings = warnings.filter((warning) => !('stepIndex' in warning)).map(warningText);
@@ -185,8 +192,8 @@ export function Workspace({
                 Last valid result, shown until the marked field is fixed.
               </p>
             ) : null}
-            {budget ? (
-              <ResultStatement budget={budget} />
+            {statedResult ? (
+              <ResultStatement result={statedResult} />
             ) : (
               <p className="text-muted">The budget appears as soon as the plan is complete.</p>
             )}

@@ -1,4 +1,5 @@
 import type { Budget } from '../../../../shared/contracts/snapshot';
+import { stepGroupName } from '../../../../shared/contracts/step-kinds';
 
 /** What a preparation consumes and makes, read from its computed plan (inline equipment). */
 export type PlanFigures = {
@@ -50,6 +51,34 @@ export function planFigures(plan: Record<string, unknown>): PlanFigures {
 /** The step with the largest share of the variance. */
 export function dominantStep(budget: Budget) {
   return [...budget.byStep].sort((a, b) => b.indexPercent - a.indexPercent)[0] ?? null;
+}
+
+/** Budget group keys in reading order: steps by number, then the groups shared by several steps ("1+3"). */
+const byStepOrder = (a: string, b: string) => {
+  const [first, second] = [a, b].map((key) => key.split('+').map(Number));
+  if (first.length !== second.length) return first.length - second.length;
+  const differing = first.findIndex((number, index) => number !== second[index]);
+  return differing < 0 ? 0 : first[differing] - second[differing];
+};
+
+/**
+ * The compare chart's bars: for each budget group (a step, or the sources shared by several steps, such as one
+ * pipette used in steps 2 and 4, which must not be left out) each preparation's share of the relative variance
+ * (uᵢ(y)/y)² in %², so a preparation's bars add up to its (u_c(y)/y)² (JCGM 100:2008 5.1.2: variances add, standard
+ * uncertainties do not). One entry per group, named as the record names it, with a value per preparation key.
+ */
+export function relativeVarianceByStep(
+  preparations: { key: string; budget: Budget }[],
+): Record<string, string | number>[] {
+  const keys = [...new Set(preparations.flatMap(({ budget }) => budget.byStep.map((group) => group.key)))];
+  return keys.sort(byStepOrder).map((groupKey) => {
+    const entry: Record<string, string | number> = { step: stepGroupName(groupKey, []) };
+    for (const { key, budget } of preparations) {
+      const group = budget.byStep.find((each) => each.key === groupKey);
+      if (group) entry[key] = ((100 * group.contribution) / budget.value) ** 2;
+    }
+    return entry;
+  });
 }
 
 /**

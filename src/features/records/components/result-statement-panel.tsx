@@ -1,11 +1,19 @@
-import type { Budget } from '../../../../shared/contracts/snapshot';
-import { formatDegreesOfFreedom } from '../../../../shared/uncertainty';
+import type { Snapshot } from '../../../../shared/contracts/snapshot';
+import { formatDegreesOfFreedom, resultStatement } from '../../../../shared/uncertainty';
 import { formatSignificant } from '../utils/format-figures';
 
-/** The result as the GUM asks for it (JCGM 100:2008 7.2.3), prominently, with the figures it is made of. */
-export function ResultStatementPanel({ budget }: { budget: Budget }) {
+/**
+ * The result as the record states it (resultStatement, the same words as the PDF: value ± U with k, or the Monte
+ * Carlo coverage interval and why), prominently, with the GUM figures it is made of (JCGM 100:2008 7.2.3).
+ */
+export function ResultStatementPanel({ snapshot }: { snapshot: Snapshot }) {
+  const { budget } = snapshot;
+  const statement = resultStatement(snapshot);
   const facts: [string, string][] = [
-    [budget.measurand, `${budget.rounded.valueText} ${budget.unit}`],
+    [budget.measurand, `${statement.valueText} ${budget.unit}`],
+    ...(statement.method === 'monteCarlo'
+      ? [['Monte Carlo coverage interval', `${statement.intervalText} ${budget.unit}`] satisfies [string, string]]
+      : []),
     ['Expanded uncertainty U', `${budget.rounded.uncertaintyText} ${budget.unit}`],
     ['Relative U', `${formatSignificant(budget.relativeExpandedUncertainty * 100)} %`],
     ['Coverage factor k', budget.coverageFactor.toFixed(2)],
@@ -18,8 +26,13 @@ export function ResultStatementPanel({ budget }: { budget: Budget }) {
         Result
       </h2>
       <p className="mt-1 text-2xl font-bold" data-testid="record-result-statement">
-        {budget.statement}
+        {statement.text}
       </p>
+      {statement.reason ? (
+        <p className="mt-2 font-semibold text-caution" data-testid="record-result-reason">
+          {statement.reason}
+        </p>
+      ) : null}
       <dl className="mt-4 grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-3 lg:grid-cols-6">
         {facts.map(([term, value]) => (
           <div key={term}>

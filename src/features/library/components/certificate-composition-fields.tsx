@@ -40,14 +40,14 @@ export function CertificateCompositionFields() {
           registration={register('data.certificateMolarMassGPerMol', AS_NUMBER)}
         />
         <QuantityField
-          label="Molar mass: expanded uncertainty U"
+          label="U of the molar mass"
           unit="g/mol"
-          hint="With it, this molar mass is used in the budget"
+          hint="Expanded; with it, this molar mass is used in the budget"
           error={error?.certificateMolarMassExpandedUncertaintyGPerMol?.message}
           registration={register('data.certificateMolarMassExpandedUncertaintyGPerMol', AS_NUMBER)}
         />
         <QuantityField
-          label="Molar mass: coverage factor k"
+          label="k of the molar mass’s U"
           hint="1 for a standard uncertainty"
           error={error?.certificateMolarMassCoverageFactor?.message}
           registration={register('data.certificateMolarMassCoverageFactor', AS_NUMBER)}
@@ -60,13 +60,14 @@ export function CertificateCompositionFields() {
           registration={register('data.analyteAtomicWeightGPerMol', AS_NUMBER)}
         />
         <QuantityField
-          label="Atomic weight: expanded uncertainty U"
+          label="U of the atomic weight"
           unit="g/mol"
+          hint="Expanded"
           error={error?.analyteAtomicWeightExpandedUncertaintyGPerMol?.message}
           registration={register('data.analyteAtomicWeightExpandedUncertaintyGPerMol', AS_NUMBER)}
         />
         <QuantityField
-          label="Atomic weight: coverage factor k"
+          label="k of the atomic weight’s U"
           hint="1 for a standard uncertainty"
           error={error?.analyteAtomicWeightCoverageFactor?.message}
           registration={register('data.analyteAtomicWeightCoverageFactor', AS_NUMBER)}

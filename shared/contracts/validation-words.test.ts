@@ -28,7 +28,7 @@ describe('the verdict in words (record page and planner)', () => {
     const validation = { ...base, highEndDifference: 0.0071, passed: false, decided: true };
     expect(VALIDATION_HEADLINES[validationOutcome(validation)]).toBe('GUM result not confirmed');
     expect(validationWords(validation, 'mg/L')).toMatch(
-      /^Not confirmed: .* 0\.0071 mg\/L, more than the numerical tolerance δ = 0\.005 mg\/L\. State the Monte Carlo interval instead\.$/,
+      /^Not confirmed: .* 0\.0071 mg\/L, more than the numerical tolerance δ = 0\.005 mg\/L\. The result above states the Monte Carlo interval\.$/,
     );
   });
 

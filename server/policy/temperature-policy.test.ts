@@ -39,14 +39,12 @@ describe('lab policy: reference temperature, temperature treatment and balance l
       .db('users')
       .where({ email: demo('qa') })
       .first();
-    await t
-      .db('lab_policies')
-      .insert({
-        lab_id: labId,
-        policy_json: JSON.stringify(stored),
-        updated_at: '2026-01-01T00:00:00Z',
-        updated_by: user.id,
-      });
+    await t.db('lab_policies').insert({
+      lab_id: labId,
+      policy_json: JSON.stringify(stored),
+      updated_at: '2026-01-01T00:00:00Z',
+      updated_by: user.id,
+    });
     const policy = (await qa.get(url('/policy')).expect(200)).body;
     expect(policy).toMatchObject({
       ...stored,

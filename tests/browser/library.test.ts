@@ -262,9 +262,13 @@ describe('the tolerance library, kept by QA', () => {
     await page.getByRole('heading', { level: 1, name: 'Lab policy' }).waitFor();
     await page.getByText('The defaults apply; nobody has changed the policy yet.').waitFor();
     await page.getByLabel('Half-range around the lab temperature').fill('3');
+    await expect(page.getByLabel('Reference temperature').inputValue()).resolves.toBe('20');
+    await page.getByRole('radio', { name: /One shared lab temperature/ }).check();
+    await page.getByLabel('Half-range of one operation around the lab temperature').fill('0.5');
     await page.getByRole('button', { name: 'Save lab policy' }).click();
     await page.getByText(/^Last changed by .+ on /).waitFor();
     await expect(page.getByLabel('Half-range around the lab temperature').inputValue()).resolves.toBe('3');
+    await expect(page.getByRole('radio', { name: /One shared lab temperature/ }).isChecked()).resolves.toBe(true);
     await screenshot(page, 'policy-qa');
     expect(problems).toEqual([]);
   });
@@ -292,7 +296,12 @@ describe('the tolerance library, read by an analyst', () => {
     await expect(page.getByText(REVISION_REASON).count()).resolves.toBe(1);
 
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Lab policy' }).click();
-    await page.getByText('± 3 °C around the lab temperature (rectangular), independent for each use').waitFor();
+    await page
+      .getByText(
+        '± 3 °C around the lab temperature (rectangular), shared by every volume of a preparation, plus ± 0.5 °C per operation',
+      )
+      .waitFor();
+    await page.getByText('Tare and gross readings independent').waitFor();
     await expect(page.getByRole('button', { name: 'Save lab policy' }).count()).resolves.toBe(0);
     await screenshot(page, 'policy-analyst');
     expect(problems).toEqual([]);

@@ -80,7 +80,7 @@ describe('the analyst plans a lead standard', () => {
     // 0.1599 g · 0.9998 · 207.04/331.2 (the CIAAW 2021 interval midpoint for Pb) / 0.1 L / 10 ≈ 99.98 mg/L, times the
     // default policy's air-buoyancy factor for lead nitrate (1 − 1.2/8000)/(1 − 1.2/4530) = 1.000115 (OIML R 111) ≈ 99.99.
     await expect(statement().innerText()).resolves.toMatch(
-      /^c\(Pb\) = \(99\.99 ± 0\.\d\d\) mg\/L, k = 2\.00, coverage probability ≈ 95\.45 %$/,
+      /^c\(Pb\) = \(99\.99 ± 0\.\d\d\) mg\/L at 20 °C, k = 2\.00, coverage probability ≈ 95\.45 %$/,
     );
     await expect(steps().nth(1).innerText()).resolves.toMatch(/after step 2\s+999\.9 mg\/L/i);
     const table = page.getByRole('table', { name: /Uncertainty budget of c\(Pb\)/ });

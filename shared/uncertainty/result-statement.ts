@@ -19,6 +19,8 @@ export interface StatedResult {
     expandedUncertainty: number;
     coverageFactor: number;
     coverageProbability: number;
+    /** The temperature a result per volume is stated at; absent for a mass fraction, a molality, or an old snapshot. */
+    referenceTemperatureC?: number;
   };
   monteCarlo: {
     coverageProbability: number;
@@ -27,6 +29,8 @@ export interface StatedResult {
   } | null;
   validation: {
     passed: boolean;
+    /** false when the trial limit came before the interval ends were known well enough to judge (absent: decided). */
+    decided?: boolean;
     lowEndDifference: number;
     highEndDifference: number;
     numericalTolerance: number;
@@ -80,13 +84,18 @@ export function resultStatement(result: StatedResult): ResultStatement {
   const unit = (text: string) => (budget.unit === '1' || budget.unit === '' ? text : `${text} ${budget.unit}`);
   const percent = (monteCarlo.coverageProbability * 100).toFixed(2);
   const intervalText = `[${rounded.lowText}, ${rounded.highText}]`;
+  const temperature = budget.referenceTemperatureC === undefined ? '' : ` at ${budget.referenceTemperatureC} °C`;
   return {
     method: 'monteCarlo',
-    text: `${budget.measurand} = ${unit(rounded.valueText)}, ${percent} % coverage interval ${unit(intervalText)}, Monte Carlo interval (${INTERVAL_WORDS[choice]}; the GUM interval is not validated)`,
+    text: `${budget.measurand} = ${unit(rounded.valueText)}${temperature}, ${percent} % coverage interval ${unit(intervalText)}, Monte Carlo interval (${INTERVAL_WORDS[choice]}; the GUM interval is not validated)`,
     reason:
-      `Monte Carlo (JCGM 101 §8) does not validate the GUM interval y ± U: its ends differ from the Monte Carlo ` +
-      `interval by ${unit(twoDigits(validation.lowEndDifference))} and ${unit(twoDigits(validation.highEndDifference))}, ` +
-      `more than the numerical tolerance δ = ${unit(twoDigits(validation.numericalTolerance))}, so the Monte Carlo ` +
+      (validation.decided === false
+        ? `Monte Carlo (JCGM 101 §8) could not judge the GUM interval y ± U within its trial limit: its ends differ ` +
+          `from the Monte Carlo interval by ${unit(twoDigits(validation.lowEndDifference))} and ${unit(twoDigits(validation.highEndDifference))}, ` +
+          `against the numerical tolerance δ = ${unit(twoDigits(validation.numericalTolerance))}, so the Monte Carlo `
+        : `Monte Carlo (JCGM 101 §8) does not validate the GUM interval y ± U: its ends differ from the Monte Carlo ` +
+          `interval by ${unit(twoDigits(validation.lowEndDifference))} and ${unit(twoDigits(validation.highEndDifference))}, ` +
+          `more than the numerical tolerance δ = ${unit(twoDigits(validation.numericalTolerance))}, so the Monte Carlo `) +
       `coverage interval is stated instead of U = ${unit(roundToUncertainty(budget.value, budget.expandedUncertainty).uncertaintyText)} (k = ${budget.coverageFactor.toFixed(2)}).`,
     valueText: rounded.valueText,
     intervalText,

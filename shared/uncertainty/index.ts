@@ -21,7 +21,7 @@ export { formatDegreesOfFreedom } from './effective-degrees';
 export { roundToUncertainty } from './result-rounding';
 export { resultStatement, type StatedResult } from './result-statement';
 export { concentrationUnitNames } from './units';
-export { runMonteCarlo, startMonteCarlo, type MonteCarloResult } from './monte-carlo';
+export { runMonteCarlo, type MonteCarloResult } from './monte-carlo';
 export { checkGumByMonteCarlo, validateAgainstGum, type GumValidation } from './validation';
 export { RandomGenerator } from './random-generator';
 export { findRoutes, type RouteRequest, type RouteResult } from './route-finder';

@@ -30,13 +30,16 @@ export interface MonteCarloOptions {
    * The adaptive procedure of JCGM 101:2008 7.9.4, stopped at `maximumTrials` (at most, and by default,
    * MAXIMUM_MONTE_CARLO_TRIALS). With `intervalEndTolerance` it stops on the interval ends alone, when twice the
    * standard deviation of their batch means is at most that tolerance (the rule the validation of JCGM 101:2008 §8
-   * needs, see gum-check.ts); `minimumBatches` (default 2) batches are always run.
+   * needs, see validation.ts); `minimumBatches` (default 2) batches are always run. `stopEarly`, asked after each
+   * batch from `minimumBatches` on with the mean of the batches' interval ends and the tolerance reached, ends the
+   * run unconverged when it returns true (the verdict stops once an end is clearly outside its tolerance).
    */
   adaptive?: {
     significantDigits?: 1 | 2;
     maximumTrials?: number;
     intervalEndTolerance?: number;
     minimumBatches?: number;
+    stopEarly?: (batchEnds: { low: number; high: number; reachedTolerance: number }) => boolean;
   };
   /** Defaults to the plan's coverage setting, or 2Φ(2) − 1 for a compiled model. */
   coverageProbability?: number;
@@ -256,6 +259,12 @@ function startAdaptive(
     );
     return h >= minimumBatches && reached <= tolerance;
   };
+  const stopsEarly = () => {
+    if (settings.stopEarly === undefined || batchStatistics.length < minimumBatches) return false;
+    const average = (column: number) =>
+      batchStatistics.reduce((sum, row) => sum + row[column], 0) / batchStatistics.length;
+    return settings.stopEarly({ low: average(2), high: average(3), reachedTolerance: reached });
+  };
 
   return {
     advance(maximumTrials_) {
@@ -273,7 +282,7 @@ function startAdaptive(
         budget -= count;
         if (done === batchEnd) {
           const converged = finishBatch();
-          if (converged || done + batchSize > maximumTrials) {
+          if (converged || done + batchSize > maximumTrials || stopsEarly()) {
             summary = summarise(outputs.slice(0, done), {
               converged,
               batches: batchStatistics.length,

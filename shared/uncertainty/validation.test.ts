@@ -99,6 +99,19 @@ describe('the verdict from the adaptive procedure (JCGM 101:2008 7.9 run to the 
     }
   });
 
+  // One rectangular input with σ = 9 (half-width a = 9√3): GUM gives ±1.96·9 = ±17.6, Monte Carlo ±0.95·a = ±14.8
+  // (JCGM 101:2008 §6.4.2, from memory: the p-quantiles of a rectangular are linear in p), ends 2.8 apart against
+  // δ = 0.05. Ends known to δ/2 would take over 10⁶ trials; the verdict is clear after the minimum batches.
+  it('stops after the minimum batches when an end is clearly outside δ, and says "not validated"', () => {
+    const model = sumModel([{ shape: 'rectangular', halfWidth: 9 * Math.sqrt(3) }]);
+    const budget = propagate(model, { probability: 0.95 });
+    const { monteCarlo, validation } = checkGumByMonteCarlo(model, budget, { seed: 5 });
+    expect(monteCarlo.trials).toBe(MINIMUM_VALIDATION_BATCHES * 10_000);
+    expect(monteCarlo.adaptive?.converged).toBe(false);
+    expect(validation).toMatchObject({ decided: true, passed: false });
+    expect(validation.highEndDifference).toBeGreaterThan(2.5);
+  });
+
   // Four normal inputs with σ = 4.5: u = 9.0, δ = 0.05 = u/180. The ends of a 95 % interval from M trials carry a standard
   // error ≈ 2.67·u/√M (from memory: √(p(1 − p)/M)/φ(1.96)), still ≈ δ/2 at 10⁶ trials: the rule cannot be met.
   it('says "not decided" when the trial limit comes before the ends are known to the tolerance', () => {

@@ -69,7 +69,8 @@ export function validateAgainstGum(
  * The verdict on a GUM budget, as the stored record, the planner and the CLI all take it: the adaptive Monte Carlo
  * procedure (JCGM 101:2008 7.9) at the budget's coverage probability, in batches of adaptiveBatchSize(p), run until
  * the numerical tolerance of both interval ends is at most δ/VALIDATION_SAFETY_FACTOR (δ of the validation, §8.2),
- * after at least MINIMUM_VALIDATION_BATCHES batches and at most MAXIMUM_MONTE_CARLO_TRIALS trials; then
+ * after at least MINIMUM_VALIDATION_BATCHES batches and at most MAXIMUM_MONTE_CARLO_TRIALS trials, or as soon as an
+ * end is clearly outside δ (beyond δ + (VALIDATION_SAFETY_FACTOR + 1)·t, t the ends' tolerance reached); then
  * validateAgainstGum. When the coverage probability is so high that the minimum batches exceed the trial limit, a
  * fixed run at the limit is made and the verdict is not decided. The same seed gives the same verdict everywhere.
  * `onProgress` may return false to cancel (the function then throws).
@@ -87,12 +88,21 @@ export function checkGumByMonteCarlo(
     return { monteCarlo, validation: { ...validateAgainstGum(budget, monteCarlo), passed: false, decided: false } };
   }
   const delta = numericalTolerance(budget.standardUncertainty, 2);
+  // An end already beyond δ by more than (safety factor + 1)·t is "not validated" whatever more trials bring: stop there
+  // (one t more than validateAgainstGum asks of the pooled ends, so the pooled verdict is decided too).
+  const clearlyOutside = ({ low, high, reachedTolerance }: { low: number; high: number; reachedTolerance: number }) =>
+    Math.max(
+      Math.abs(budget.value - budget.expandedUncertainty - low),
+      Math.abs(budget.value + budget.expandedUncertainty - high),
+    ) >
+    delta + (VALIDATION_SAFETY_FACTOR + 1) * reachedTolerance;
   const monteCarlo = runMonteCarlo(input, {
     ...run,
     adaptive: {
       intervalEndTolerance: delta / VALIDATION_SAFETY_FACTOR,
       minimumBatches: MINIMUM_VALIDATION_BATCHES,
       maximumTrials: MAXIMUM_MONTE_CARLO_TRIALS,
+      stopEarly: clearlyOutside,
     },
   });
   return { monteCarlo, validation: validateAgainstGum(budget, monteCarlo) };

@@ -3,17 +3,18 @@
  * lab policy, computed by computeSnapshot (GUM, Monte Carlo with the seed, their JCGM 101 §8 validation), the
  * value, U, k, the result as stated and the verdict. Used for before/after tables when the engine changes.
  *
- *   npx tsx server/cli/demo-figures.ts [--seed S]
+ *   npm run demo-figures -- [--seed S]
  */
 import { readdirSync, readFileSync } from 'node:fs';
 import { DEFAULT_LAB_POLICY } from '../../shared/contracts/library';
+import { VALIDATION_HEADLINES, validationOutcome } from '../../shared/contracts/validation-words';
 import { resultStatement } from '../../shared/uncertainty';
 import { computeSnapshot } from '../preparations/compute-snapshot';
 
 const seedAt = process.argv.indexOf('--seed');
 const seed = seedAt >= 0 ? Number(process.argv[seedAt + 1]) : 1;
 if (!Number.isInteger(seed) || seed < 0) {
-  process.stderr.write('usage: npx tsx server/cli/demo-figures.ts [--seed S]\n');
+  process.stderr.write('usage: npm run demo-figures -- [--seed S]\n');
   process.exit(2);
 }
 
@@ -35,7 +36,7 @@ for (const file of files) {
       `  value     ${figure(budget.value)} ${budget.unit}`,
       `  U         ${figure(budget.expandedUncertainty)} ${budget.unit} (k = ${budget.coverageFactor.toFixed(2)}, ν_eff = ${figure(budget.effectiveDegreesOfFreedom)})`,
       `  stated    ${statement.text}`,
-      `  verdict   ${validation.passed ? 'validated' : 'not validated'} (ends differ by ${figure(validation.lowEndDifference)} and ${figure(validation.highEndDifference)}, δ = ${figure(validation.numericalTolerance)} ${budget.unit})`,
+      `  verdict   ${VALIDATION_HEADLINES[validationOutcome(validation)]} after ${snapshot.trials} trials (ends differ by ${figure(validation.lowEndDifference)} and ${figure(validation.highEndDifference)}, δ = ${figure(validation.numericalTolerance)} ${budget.unit})`,
       '',
     ].join('\n'),
   );

@@ -189,7 +189,7 @@ describe('the PDF record', () => {
     const statement = resultStatement(snapshot);
     expect(statement.method).toBe('monteCarlo');
     expect(statement.text).toMatch(
-      /^c\(Pb\) = 100\.0 mg\/L, 95\.45 % coverage interval \[98\.0, 102\.0\] mg\/L, Monte Carlo interval/,
+      /^c\(Pb\) = 100\.0 mg\/L at 20 °C, 95\.45 % coverage interval \[98\.0, 102\.0\] mg\/L, Monte Carlo interval/,
     );
     // The list, the e-mail and the audit trail read the same words, stored with the version.
     expect(created.current.resultStatement).toBe(statement.text);

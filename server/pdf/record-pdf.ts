@@ -11,6 +11,7 @@ import {
   stepInstruction,
 } from '../../shared/contracts/step-kinds';
 import { formatDegreesOfFreedom, resultStatement } from '../../shared/uncertainty';
+import { validationWords } from '../../shared/contracts/validation-words';
 import { PDF_FONTS } from './fonts';
 import { percent, significant, utc } from './format';
 import { drawContributionBars, drawHistogram } from './pdf-charts';
@@ -272,12 +273,10 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
       unit: monteCarlo.unit,
     });
     heading('Validation of the GUM result (JCGM 101 §8)');
-    paragraph(
-      validation.passed
-        ? `Validated: both ends of the GUM interval agree with the Monte Carlo interval within the numerical tolerance δ = ${significant(validation.numericalTolerance, 2)} ${budget.unit} (differences ${significant(validation.lowEndDifference, 2)} and ${significant(validation.highEndDifference, 2)}).`
-        : `Not validated: the ends of the GUM interval differ from the Monte Carlo interval by ${significant(validation.lowEndDifference, 2)} and ${significant(validation.highEndDifference, 2)} ${budget.unit}, more than δ = ${significant(validation.numericalTolerance, 2)} ${budget.unit}. The result above states the Monte Carlo interval.`,
-      { font: 'bold' },
-    );
+    // The record page's words (one voice): the verdict, the end differences and δ.
+    paragraph(validationWords(validation, budget.unit), {
+      font: 'bold',
+    });
 
     // Review and signatures
     heading('Review and signatures');

@@ -47,7 +47,7 @@ describe('a flask reused while it holds the stock', () => {
       await analyst.post(url('/preparations'), { title: 'Pb bottled stock', plan: reusingStockFlask(true) }).expect(201)
     ).body;
     expect(created.current.problem).toBeNull();
-    expect(created.current.resultStatement).toMatch(/^c\(Pb\) = \(99\.98 ± /);
+    expect(created.current.resultStatement).toMatch(/^c\(Pb\) = \(99\.99 ± /);
     expect(created.current.snapshot.plan.steps[3].flaskEmptiedBefore).toBe(true);
   });
 });

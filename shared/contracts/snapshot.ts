@@ -76,6 +76,8 @@ export const budgetSchema = z.object({
   ),
   rounded: roundedResultSchema,
   statement: z.string(),
+  /** The temperature a result per volume is stated at; absent for other results and for snapshots stored before it. */
+  referenceTemperatureC: z.number().optional(),
   warnings: z.array(storedWarningSchema),
 });
 

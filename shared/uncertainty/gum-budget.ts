@@ -54,6 +54,8 @@ export interface BudgetResult {
   checkpoints: { stepIndex: number; label: string; value: number; unit: string; standardUncertainty: number }[];
   rounded: RoundedResult;
   statement: string;
+  /** The temperature a result per volume is stated at (its volumes were corrected to it); absent otherwise. */
+  referenceTemperatureC?: number;
   warnings: EngineWarning[];
 }
 
@@ -165,6 +167,7 @@ export function propagate(model: CompiledModel, coverage: CoverageSetting): Budg
       coverageProbability,
       referenceTemperatureC: model.referenceTemperatureC,
     }),
+    ...(model.referenceTemperatureC === undefined ? {} : { referenceTemperatureC: model.referenceTemperatureC }),
     warnings: [...model.warnings, ...dominantAtomicWeightWarnings(rows)],
   };
 }

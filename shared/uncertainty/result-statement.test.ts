@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { evaluatePlan } from './evaluate-plan';
 import { formatResultStatement } from './result-rounding';
 import { resultStatement, type StatedResult } from './result-statement';
 
@@ -52,5 +53,82 @@ describe('resultStatement: one statement for screen, PDF and e-mail', () => {
     expect(resultStatement(validated)).toMatchObject({ method: 'gum', text: expected, reason: null });
     expect(resultStatement({ ...validated, monteCarlo: null, validation: null }).text).toBe(expected);
     expect(expected).toBe('Y = (0 ± 20) 1, k = 1.96, coverage probability ≈ 95.00 %');
+  });
+});
+
+describe('resultStatement names the reference temperature of a result per volume', () => {
+  const planAt25 = {
+    formatVersion: 1 as const,
+    analyte: { formula: 'Pb' },
+    settings: { outputUnit: 'mg/L' as const, labTemperatureC: 25, referenceTemperatureC: 20 },
+    steps: [
+      {
+        kind: 'startFromCertifiedSolution' as const,
+        material: {
+          kind: 'certifiedSolution' as const,
+          itemId: 'CRM-PB',
+          name: 'Lead standard',
+          certifiedValue: 1000,
+          certifiedUnit: 'mg/L' as const,
+          uncertainty: { shape: 'normal' as const, expandedUncertainty: 2, coverageFactor: 2 },
+        },
+      },
+      {
+        kind: 'pipetteAliquot' as const,
+        pipette: {
+          kind: 'glassPipette' as const,
+          itemId: 'GP-10',
+          nominalMl: 10,
+          toleranceClass: 'A' as const,
+          toleranceMl: 0.02,
+        },
+        volumeMl: 10,
+      },
+      {
+        kind: 'makeUpToVolume' as const,
+        flask: {
+          kind: 'volumetricFlask' as const,
+          itemId: 'VF-100',
+          nominalMl: 100,
+          toleranceClass: 'A' as const,
+          toleranceMl: 0.1,
+        },
+      },
+    ],
+  };
+
+  it('in the GUM statement, the same words as the budget (common practice: a volume-based result names its temperature)', () => {
+    const budget = evaluatePlan(planAt25);
+    expect(budget.referenceTemperatureC).toBe(20);
+    const statement = resultStatement({ plan: { settings: {} }, budget, monteCarlo: null, validation: null });
+    expect(statement.text).toBe(budget.statement);
+    expect(statement.text).toMatch(/^c\(Pb\) = \(\d+\.\d+ ± \d\.\d+\) mg\/L at 20 °C, k = 2\.00/);
+  });
+
+  it('in the Monte Carlo statement too', () => {
+    const budget = evaluatePlan(planAt25);
+    const statement = resultStatement({
+      plan: { settings: {} },
+      budget,
+      monteCarlo: {
+        coverageProbability: budget.coverageProbability,
+        symmetricInterval: { low: budget.value - 2, high: budget.value + 2 },
+        shortestInterval: { low: budget.value - 2, high: budget.value + 2 },
+      },
+      validation: { passed: false, lowEndDifference: 1, highEndDifference: 1, numericalTolerance: 0.05 },
+    });
+    expect(statement.method).toBe('monteCarlo');
+    expect(statement.text).toMatch(/^c\(Pb\) = \d+\.\d mg\/L at 20 °C, 95\.45 % coverage interval \[/);
+  });
+
+  it('and none for a mass fraction, which does not depend on temperature', () => {
+    const budget = evaluatePlan({
+      ...planAt25,
+      settings: { ...planAt25.settings, outputUnit: 'mg/kg' as const },
+    });
+    expect(budget.referenceTemperatureC).toBeUndefined();
+    expect(resultStatement({ plan: { settings: {} }, budget, monteCarlo: null, validation: null }).text).not.toContain(
+      '°C',
+    );
   });
 });

@@ -1,4 +1,4 @@
-import { lazy, memo, Suspense } from 'react';
+import { lazy, memo, Suspense, useEffect } from 'react';
 import type { Budget } from '../../../../shared/contracts/snapshot';
 import {
   VALIDATION_HEADLINES,
@@ -9,7 +9,7 @@ import { Button } from '../../../components/ui/button';
 import { LoadingLine } from '../../../components/ui/loading-line';
 import { TextField } from '../../../components/ui/text-field';
 import { useMonteCarlo } from '../hooks/use-monte-carlo';
-import type { PlanInput } from '../../../../shared/uncertainty';
+import type { GumValidation, MonteCarloResult, PlanInput } from '../../../../shared/uncertainty';
 import { formatSignificant } from '../utils/format-number';
 import { randomSeed } from '../utils/plan-draft';
 
@@ -22,6 +22,15 @@ type MonteCarloPanelProps = {
   seed: number;
   onSeedChange: (seed: number) => void;
   seedEditable: boolean;
+  /** Told the finished verdict run for this budget, or null while there is none, so the stated result can use it. */
+  onCheck?: (check: LiveCheck | null) => void;
+};
+
+/** A finished verdict run with the budget it was judged against. */
+export type LiveCheck = {
+  budget: Budget;
+  monteCarlo: MonteCarloResult;
+  validation: GumValidation;
 };
 
 /**
@@ -35,6 +44,7 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({
   seed,
   onSeedChange,
   seedEditable,
+  onCheck,
 }: MonteCarloPanelProps) {
   const { state, start: onStart, cancel: onCancel, planKey } = useMonteCarlo(plan, seed, { automatic: true });
   const running = state.phase === 'running';
@@ -44,6 +54,9 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({
   const planned = running ? Math.max(state.trialsPlanned, state.trialsDone, 1) : 1;
   const percent = running ? Math.round((100 * state.trialsDone) / planned) : 0;
   const unit = budget?.unit ?? '';
+  useEffect(() => {
+    onCheck?.(result && budget && validation ? { budget, monteCarlo: result, validation } : null);
+  }, [onCheck, result, budget, validation]);
 
   return (
     <div>

@@ -21,7 +21,7 @@ import { overridesToSave, storedPlan, type PlanDraft } from '../utils/plan-draft
 import { stepNamer } from '../utils/step-names';
 import { BudgetTable } from './budget-table';
 import { HazardCaution } from '../../../components/hazard-caution';
-import { MonteCarloPanel } from './monte-carlo-panel';
+import { MonteCarloPanel, type LiveCheck } from './monte-carlo-panel';
 import { PlanEditor } from './plan-editor';
 import { ResultStatement } from './result-statement';
 import { SaveStateLine } from './save-state-line';
@@ -117,10 +117,19 @@ export function Workspace({
   const budget = shown?.budget ?? null;
   // The stated result: the stored snapshot's, or the live budget's (no Monte Carlo yet); the same object while the
   // budget is, so the statement skips repainting as the title is typed.
-  const statedResult = useMemo(
-    () => stored ?? (budget ? { plan: { settings: {} }, budget, monteCarlo: null, validation: null } : null),
-    [stored, budget],
-  );
+  // A finished verdict run states the Monte Carlo interval here as on the record, but only for the budget it judged.
+  const [liveCheck, setLiveCheck] = useState<LiveCheck | null>(null);
+  const statedResult = useMemo(() => {
+    if (stored) return stored;
+    if (!budget) return null;
+    const check = liveCheck?.budget === budget ? liveCheck : null;
+    return {
+      plan: { settings: { monteCarloInterval: policy.monteCarloInterval } },
+      budget,
+      monteCarlo: check?.monteCarlo ?? null,
+      validation: check?.validation ?? null,
+    };
+  }, [stored, budget, liveCheck, policy.monteCarloInterval]);
   const liveProblem = stored ? null : evaluation.problem;
   const warnings = placedWarnings(shown, draft, libraryById);
   const planWarnings = warnings.filter((warning) => !('stepIndex' in warning)).map(warningText);
@@ -248,6 +257,7 @@ export function Workspace({
           seed={draft.seed}
           onSeedChange={changeSeed}
           seedEditable={editable}
+          onCheck={setLiveCheck}
         />
       </section>
     </>

@@ -8,7 +8,7 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { DEFAULT_LAB_POLICY } from '../../shared/contracts/library';
 import { VALIDATION_HEADLINES, validationOutcome } from '../../shared/contracts/validation-words';
-import { resultStatement } from '../../shared/uncertainty';
+import { formatDegreesOfFreedom, resultStatement } from '../../shared/uncertainty';
 import { computeSnapshot } from '../preparations/compute-snapshot';
 
 const seedAt = process.argv.indexOf('--seed');
@@ -34,7 +34,7 @@ for (const file of files) {
     [
       `\n${file}`,
       `  value     ${figure(budget.value)} ${budget.unit}`,
-      `  U         ${figure(budget.expandedUncertainty)} ${budget.unit} (k = ${budget.coverageFactor.toFixed(2)}, ν_eff = ${figure(budget.effectiveDegreesOfFreedom)})`,
+      `  U         ${figure(budget.expandedUncertainty)} ${budget.unit} (k = ${budget.coverageFactor.toFixed(2)}, ν_eff = ${formatDegreesOfFreedom(budget.effectiveDegreesOfFreedom)})`,
       `  stated    ${statement.text}`,
       `  verdict   ${VALIDATION_HEADLINES[validationOutcome(validation)]} after ${snapshot.trials} trials (ends differ by ${figure(validation.lowEndDifference)} and ${figure(validation.highEndDifference)}, δ = ${figure(validation.numericalTolerance)} ${budget.unit})`,
       '',

@@ -290,8 +290,9 @@ describe('the analyst plans a lead standard', () => {
       .getByLabel(/^Before this step, the solution made in VF-250-A at step 4 is poured into a labelled storage bottle/)
       .check();
     await expect(flask.getAttribute('aria-invalid')).resolves.toBeNull();
-    // 999.82 mg/L · 25/250 · 1/250 = 0.39993 mg/L (the 1000 µL stored as 1 mL).
-    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(0\.399\d* ± 0\.\d+\) mg\/L/);
+    // 999.92 mg/L (buoyancy-corrected stock) · 25/250 · 1/250 = 0.39997 mg/L (the 1000 µL stored as 1 mL); a 1000 µL
+    // read as 1000 mL would give 400 mg/L.
+    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(0\.4000 ± 0\.\d+\) mg\/L at 20 °C/);
     await saveState()
       .filter({ hasText: /Saved at/ })
       .waitFor({ timeout: 15_000 });

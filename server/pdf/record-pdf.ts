@@ -274,7 +274,7 @@ export function renderRecordPdf(input: RecordPdfInput): Promise<Buffer> {
     });
     heading('Validation of the GUM result (JCGM 101 §8)');
     // The record page's words (one voice): the verdict, the end differences and δ.
-    paragraph(validationWords(validation, budget.unit), {
+    paragraph(validationWords(validation, budget.unit, resultStatement(snapshot).method === 'monteCarlo'), {
       font: 'bold',
     });
 

@@ -29,21 +29,24 @@ function figure(value: number): string {
  * The JCGM 101:2008 §8 comparison of the GUM interval with the Monte Carlo interval, in words, with the numbers that
  * decide it: one voice for the record page and the planner's Monte Carlo panel.
  */
-export function validationWords(validation: GumValidation, unit: string): string {
+export function validationWords(validation: GumValidation, unit: string, statesMonteCarlo = true): string {
+  const instead = statesMonteCarlo
+    ? 'The result above states the Monte Carlo interval.'
+    : 'This record was computed before Dilutrace stated the Monte Carlo interval in that case, so its result is the GUM interval, as it was signed.';
   const tolerance = `δ = ${figure(validation.numericalTolerance)} ${unit}`;
   const ends = `the interval ends differ by ${figure(validation.lowEndDifference)} ${unit} and ${figure(validation.highEndDifference)} ${unit}`;
   switch (validationOutcome(validation)) {
     case 'confirmed':
       return `Confirmed: ${ends}, both within the numerical tolerance ${tolerance}.`;
     case 'notConfirmed':
-      return `Not confirmed: ${ends}, more than the numerical tolerance ${tolerance}. The result above states the Monte Carlo interval.`;
+      return `Not confirmed: ${ends}, more than the numerical tolerance ${tolerance}. ${instead}`;
     case 'notDecided': {
       const limit = `${groupedDigits(MAXIMUM_MONTE_CARLO_TRIALS)} trials`;
       const known =
         validation.intervalEndTolerance === undefined
           ? `at this coverage probability Monte Carlo cannot place its interval ends closely enough within ${limit}`
           : `after ${limit} Monte Carlo still knows its interval ends only to within ${figure(validation.intervalEndTolerance)} ${unit}`;
-      return `Not decided: ${known}, too coarse to judge the GUM interval against the numerical tolerance ${tolerance}; ${ends}. The result above states the Monte Carlo interval.`;
+      return `Not decided: ${known}, too coarse to judge the GUM interval against the numerical tolerance ${tolerance}; ${ends}. ${instead}`;
     }
   }
 }

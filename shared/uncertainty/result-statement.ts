@@ -11,6 +11,8 @@ const INTERVAL_WORDS: Record<MonteCarloInterval, string> = {
 
 /** What a result statement is made of: a computed budget, its Monte Carlo run and their comparison, live or stored. */
 export interface StatedResult {
+  /** The engine that computed a stored result; absent for a live one. */
+  engineVersion?: string;
   plan: { settings: { monteCarloInterval?: MonteCarloInterval } };
   budget: {
     measurand: string;
@@ -52,6 +54,20 @@ export interface ResultStatement {
   coverageText: string;
 }
 
+/** The first engine that states the Monte Carlo interval when GUM is not validated. */
+const MONTE_CARLO_STATEMENT_SINCE = [1, 1];
+
+/**
+ * A result stored by an engine before MONTE_CARLO_STATEMENT_SINCE keeps the GUM statement it was computed, reviewed
+ * and signed with: a signed record never changes its words afterwards (its verdict says so, see validation-words.ts).
+ */
+export function statedAsSigned(engineVersion: string | undefined): boolean {
+  if (engineVersion === undefined) return false;
+  const [major = 0, minor = 0] = engineVersion.split('.').map(Number);
+  const [sinceMajor, sinceMinor] = MONTE_CARLO_STATEMENT_SINCE;
+  return major < sinceMajor || (major === sinceMajor && minor < sinceMinor);
+}
+
 /** A positive figure to two significant digits, as the result's own rounding writes it (JCGM 100:2008 7.2.6). */
 const twoDigits = (value: number) => roundToUncertainty(0, value).uncertaintyText;
 
@@ -66,7 +82,7 @@ const twoDigits = (value: number) => roundToUncertainty(0, value).uncertaintyTex
  */
 export function resultStatement(result: StatedResult): ResultStatement {
   const { budget, monteCarlo, validation } = result;
-  if (!monteCarlo || !validation || validation.passed) {
+  if (!monteCarlo || !validation || validation.passed || statedAsSigned(result.engineVersion)) {
     const rounded = roundToUncertainty(budget.value, budget.expandedUncertainty);
     const coverageText = `k = ${budget.coverageFactor.toFixed(2)}`;
     return {

@@ -1,3 +1,4 @@
+import { resultStatement } from '../../../../shared/uncertainty';
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { Link, useNavigate, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router';
@@ -179,6 +180,7 @@ function RecordPage({ labId, preparationId, versionNumber, roles }: RecordPagePr
                 monteCarlo={snapshot.monteCarlo}
                 validation={snapshot.validation}
                 unit={snapshot.budget.unit}
+                statesMonteCarlo={resultStatement(snapshot).method === 'monteCarlo'}
               />
             ) : null}
             {version.snapshotSha256 ? <SnapshotHash {...reference} sha256={version.snapshotSha256} /> : null}

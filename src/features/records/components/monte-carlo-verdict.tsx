@@ -7,10 +7,16 @@ import type { GumValidation, MonteCarloResult } from '../../../../shared/uncerta
 import { Badge } from '../../../components/ui/badge';
 import { formatSignificant } from '../utils/format-figures';
 
-type MonteCarloVerdictProps = { monteCarlo: MonteCarloResult; validation: GumValidation; unit: string };
+type MonteCarloVerdictProps = {
+  monteCarlo: MonteCarloResult;
+  validation: GumValidation;
+  unit: string;
+  /** Whether the record's statement is the Monte Carlo interval (false for a record signed before it was). */
+  statesMonteCarlo: boolean;
+};
 
 /** Whether Monte Carlo (JCGM 101:2008) confirms the GUM interval, in words, with the run that decided it. */
-export function MonteCarloVerdict({ monteCarlo, validation, unit }: MonteCarloVerdictProps) {
+export function MonteCarloVerdict({ monteCarlo, validation, unit, statesMonteCarlo }: MonteCarloVerdictProps) {
   return (
     <section aria-labelledby="monte-carlo-heading" className="rounded-lg border border-line bg-surface p-6">
       <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
@@ -19,7 +25,7 @@ export function MonteCarloVerdict({ monteCarlo, validation, unit }: MonteCarloVe
         </h2>
         <Badge tone={validation.passed ? 'ok' : 'caution'}>{VALIDATION_HEADLINES[validationOutcome(validation)]}</Badge>
       </div>
-      <p>{validationWords(validation, unit)}</p>
+      <p>{validationWords(validation, unit, statesMonteCarlo)}</p>
       <p className="mt-2 text-sm text-muted">
         <span className="numeric">{monteCarlo.trials.toLocaleString('en-GB')}</span> trials
         {monteCarlo.adaptive ? ` in ${monteCarlo.adaptive.batches} batches` : ''}, seed{' '}

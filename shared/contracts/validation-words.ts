@@ -1,4 +1,5 @@
 import { groupedDigits, MAXIMUM_MONTE_CARLO_TRIALS } from '../uncertainty/plan-limits';
+import { verdictFigure } from '../uncertainty/result-rounding';
 import type { GumValidation } from '../uncertainty/validation';
 
 /** The three verdicts of the JCGM 101:2008 §8 validation; a validation stored before `decided` existed is decided. */
@@ -16,15 +17,6 @@ export const VALIDATION_HEADLINES: Record<ValidationOutcome, string> = {
   notDecided: 'GUM result not decided',
 };
 
-/** A figure to two significant digits, without exponent for everyday magnitudes ("0.0012", "3.4"). */
-function figure(value: number): string {
-  if (!Number.isFinite(value)) return String(value);
-  if (value === 0) return '0';
-  const magnitude = Math.abs(value);
-  if (magnitude >= 1e-4 && magnitude < 1e6) return Number(value.toPrecision(2)).toString();
-  return value.toExponential(1).replace('e', ' × 10^');
-}
-
 /**
  * The JCGM 101:2008 §8 comparison of the GUM interval with the Monte Carlo interval, in words, with the numbers that
  * decide it: one voice for the record page and the planner's Monte Carlo panel.
@@ -33,8 +25,8 @@ export function validationWords(validation: GumValidation, unit: string, statesM
   const instead = statesMonteCarlo
     ? 'The result above states the Monte Carlo interval.'
     : 'This record was computed before Dilutrace stated the Monte Carlo interval in that case, so its result is the GUM interval, as it was signed.';
-  const tolerance = `δ = ${figure(validation.numericalTolerance)} ${unit}`;
-  const ends = `the interval ends differ by ${figure(validation.lowEndDifference)} ${unit} and ${figure(validation.highEndDifference)} ${unit}`;
+  const tolerance = `δ = ${verdictFigure(validation.numericalTolerance)} ${unit}`;
+  const ends = `the interval ends differ by ${verdictFigure(validation.lowEndDifference)} ${unit} and ${verdictFigure(validation.highEndDifference)} ${unit}`;
   switch (validationOutcome(validation)) {
     case 'confirmed':
       return `Confirmed: ${ends}, both within the numerical tolerance ${tolerance}.`;
@@ -45,7 +37,7 @@ export function validationWords(validation: GumValidation, unit: string, statesM
       const known =
         validation.intervalEndTolerance === undefined
           ? `at this coverage probability Monte Carlo cannot place its interval ends closely enough within ${limit}`
-          : `after ${limit} Monte Carlo still knows its interval ends only to within ${figure(validation.intervalEndTolerance)} ${unit}`;
+          : `after ${limit} Monte Carlo still knows its interval ends only to within ${verdictFigure(validation.intervalEndTolerance)} ${unit}`;
       return `Not decided: ${known}, too coarse to judge the GUM interval against the numerical tolerance ${tolerance}; ${ends}. ${instead}`;
     }
   }

@@ -98,3 +98,18 @@ export function formatResultStatement(input: {
   const temperature = input.referenceTemperatureC === undefined ? '' : ` at ${input.referenceTemperatureC} °C`;
   return `${input.measurand} = (${rounded.valueText} ± ${rounded.uncertaintyText}) ${input.unit}${temperature}, k = ${input.coverageFactor.toFixed(2)}, coverage probability ≈ ${percent} %`;
 }
+
+/**
+ * A figure of the GUM-against-Monte-Carlo comparison (end differences, the numerical tolerance δ), to two
+ * significant digits without trailing zeros, so δ = ½·10^ℓ (JCGM 101:2008 7.9.2) reads as the exact 0.005 it is;
+ * without exponent for everyday magnitudes. The verdict and the result statement's reason both print with it.
+ * @example verdictFigure(0.005) // '0.005'
+ * @example verdictFigure(0.00712) // '0.0071'
+ */
+export function verdictFigure(value: number): string {
+  if (!Number.isFinite(value)) return String(value);
+  if (value === 0) return '0';
+  const magnitude = Math.abs(value);
+  if (magnitude >= 1e-4 && magnitude < 1e6) return Number(value.toPrecision(2)).toString();
+  return value.toExponential(1).replace('e', ' × 10^');
+}

@@ -36,7 +36,7 @@ describe('resultStatement: one statement for screen, PDF and e-mail', () => {
       'Y = 0, 95.00 % coverage interval [-17, 17], Monte Carlo interval (probabilistically symmetric; the GUM interval is not validated)',
     );
     expect(statement.coverageText).toBe('Monte Carlo interval');
-    expect(statement.reason).toContain('by 2.9 and 2.9, more than the numerical tolerance δ = 0.50');
+    expect(statement.reason).toContain('by 2.9 and 2.9, more than the numerical tolerance δ = 0.5,');
     expect(statement.reason).toContain('instead of U = 20 (k = 1.96)');
   });
 

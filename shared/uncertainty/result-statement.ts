@@ -1,4 +1,9 @@
-import { formatResultStatement, roundIntervalToUncertainty, roundToUncertainty } from './result-rounding';
+import {
+  formatResultStatement,
+  roundIntervalToUncertainty,
+  roundToUncertainty,
+  verdictFigure,
+} from './result-rounding';
 
 /** Which Monte Carlo coverage interval a result states when the GUM interval is not validated (JCGM 101:2008 7.7). */
 export const MONTE_CARLO_INTERVALS = ['symmetric', 'shortest'] as const;
@@ -68,9 +73,6 @@ export function statedAsSigned(engineVersion: string | undefined): boolean {
   return major < sinceMajor || (major === sinceMajor && minor < sinceMinor);
 }
 
-/** A positive figure to two significant digits, as the result's own rounding writes it (JCGM 100:2008 7.2.6). */
-const twoDigits = (value: number) => roundToUncertainty(0, value).uncertaintyText;
-
 /**
  * States a result as a laboratory reports it. GUM (JCGM 100:2008 7.2.3): y ± U with k and the coverage
  * probability. When Monte Carlo does not validate the GUM interval (JCGM 101:2008 §8: an end differs by more than
@@ -107,11 +109,11 @@ export function resultStatement(result: StatedResult): ResultStatement {
     reason:
       (validation.decided === false
         ? `Monte Carlo (JCGM 101 §8) could not judge the GUM interval y ± U within its trial limit: its ends differ ` +
-          `from the Monte Carlo interval by ${unit(twoDigits(validation.lowEndDifference))} and ${unit(twoDigits(validation.highEndDifference))}, ` +
-          `against the numerical tolerance δ = ${unit(twoDigits(validation.numericalTolerance))}, so the Monte Carlo `
+          `from the Monte Carlo interval by ${unit(verdictFigure(validation.lowEndDifference))} and ${unit(verdictFigure(validation.highEndDifference))}, ` +
+          `against the numerical tolerance δ = ${unit(verdictFigure(validation.numericalTolerance))}, so the Monte Carlo `
         : `Monte Carlo (JCGM 101 §8) does not validate the GUM interval y ± U: its ends differ from the Monte Carlo ` +
-          `interval by ${unit(twoDigits(validation.lowEndDifference))} and ${unit(twoDigits(validation.highEndDifference))}, ` +
-          `more than the numerical tolerance δ = ${unit(twoDigits(validation.numericalTolerance))}, so the Monte Carlo `) +
+          `interval by ${unit(verdictFigure(validation.lowEndDifference))} and ${unit(verdictFigure(validation.highEndDifference))}, ` +
+          `more than the numerical tolerance δ = ${unit(verdictFigure(validation.numericalTolerance))}, so the Monte Carlo `) +
       `coverage interval is stated instead of U = ${unit(roundToUncertainty(budget.value, budget.expandedUncertainty).uncertaintyText)} (k = ${budget.coverageFactor.toFixed(2)}).`,
     valueText: rounded.valueText,
     intervalText,

@@ -32,8 +32,10 @@ describe('the record’s result panel', () => {
   });
 
   it('states the Monte Carlo interval and why, in the PDF’s words, when Monte Carlo did not validate GUM (JCGM 101:2008 §8)', () => {
+    // Computed by 1.1.0 (a record signed earlier keeps its GUM statement: stored-statement.test.ts).
     const failed = {
       ...snapshot,
+      engineVersion: '1.1.0',
       validation: { ...snapshot.validation, passed: false, lowEndDifference: 0.02, highEndDifference: 0.011 },
     };
     render(<ResultStatementPanel snapshot={failed} />);

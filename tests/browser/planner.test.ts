@@ -136,6 +136,11 @@ describe('the analyst plans a lead standard', () => {
       .getByText(/trials in \d+ batches/)
       .first()
       .waitFor();
+    // Both Monte Carlo intervals carry the unit, as the record page states them.
+    for (const term of [/^Symmetric 95\.45 % interval$/, /^Shortest interval$/]) {
+      const interval = page.locator('dt', { hasText: term }).locator('xpath=following-sibling::dd');
+      await expect(interval.innerText()).resolves.toMatch(/^\[\d+\.\d+, \d+\.\d+\] mg\/L$/);
+    }
     await saveState()
       .filter({ hasText: /Saved at/ })
       .waitFor({ timeout: 15_000 });
@@ -290,8 +295,9 @@ describe('the analyst plans a lead standard', () => {
       .getByLabel(/^Before this step, the solution made in VF-250-A at step 4 is poured into a labelled storage bottle/)
       .check();
     await expect(flask.getAttribute('aria-invalid')).resolves.toBeNull();
-    // 999.82 mg/L · 25/250 · 1/250 = 0.39993 mg/L (the 1000 µL stored as 1 mL).
-    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(0\.399\d* ± 0\.\d+\) mg\/L/);
+    // 999.82 mg/L · 25/250 · 1/250 = 0.39993 mg/L (the 1000 µL stored as 1 mL), times the default policy's
+    // air-buoyancy factor for lead nitrate, 1.000115 (OIML R 111), = 0.39998, stated as 0.4000 beside U = 0.0046.
+    await expect(statement().innerText()).resolves.toMatch(/^c\(Pb\) = \(0\.4000 ± 0\.\d+\) mg\/L/);
     await saveState()
       .filter({ hasText: /Saved at/ })
       .waitFor({ timeout: 15_000 });

@@ -136,6 +136,11 @@ describe('the analyst plans a lead standard', () => {
       .getByText(/trials in \d+ batches/)
       .first()
       .waitFor();
+    // Both Monte Carlo intervals carry the unit, as the record page states them.
+    for (const term of [/^Symmetric 95\.45 % interval$/, /^Shortest interval$/]) {
+      const interval = page.locator('dt', { hasText: term }).locator('xpath=following-sibling::dd');
+      await expect(interval.innerText()).resolves.toMatch(/^\[\d+\.\d+, \d+\.\d+\] mg\/L$/);
+    }
     await saveState()
       .filter({ hasText: /Saved at/ })
       .waitFor({ timeout: 15_000 });

@@ -155,14 +155,14 @@ export const MonteCarloPanel = memo(function MonteCarloPanel({
               <dt className="text-muted">Symmetric {(result.coverageProbability * 100).toFixed(2)} % interval</dt>
               <dd className="numeric font-semibold">
                 [{formatSignificant(result.symmetricInterval.low, 6)},{' '}
-                {formatSignificant(result.symmetricInterval.high, 6)}]
+                {formatSignificant(result.symmetricInterval.high, 6)}] {unit}
               </dd>
             </div>
             <div>
               <dt className="text-muted">Shortest interval</dt>
               <dd className="numeric font-semibold">
                 [{formatSignificant(result.shortestInterval.low, 6)},{' '}
-                {formatSignificant(result.shortestInterval.high, 6)}]
+                {formatSignificant(result.shortestInterval.high, 6)}] {unit}
               </dd>
             </div>
           </dl>

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { FormProvider, useForm, useWatch, type UseFormRegisterReturn } from 'react-hook-form';
+import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { labPolicySchema, type LabPolicy } from '../../../../shared/contracts/library';
 import { Alert } from '../../../components/ui/alert';
@@ -9,6 +9,8 @@ import { Checkbox } from '../../../components/ui/checkbox';
 import { applyApiError } from '../../../lib/form-errors';
 import { useUpdateLabPolicy } from '../../../lib/api/lab-policy';
 import { AirBuoyancyFields } from './air-buoyancy-fields';
+import { ChoiceOption } from './choice-option';
+import { NumberBox } from './number-box';
 import { AS_NUMBER, RADIO } from './policy-form-values';
 import { SolutionDensityFields } from './solution-density-fields';
 
@@ -85,16 +87,10 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
           <p className="text-muted">
             How the expanded uncertainty U = k·u<sub>c</sub> is stated on every budget.
           </p>
-          <label className="flex items-start gap-2">
-            <input type="radio" value="probability" className={`${RADIO} mt-1.5`} {...register('coverage.mode')} />
-            <span>
-              <span className="font-semibold">Coverage probability</span>
-              <span className="block text-sm text-muted">
-                k comes from the t-distribution at the effective degrees of freedom (Welch–Satterthwaite); with many
-                degrees of freedom 95.45 % gives k = 2.
-              </span>
-            </span>
-          </label>
+          <ChoiceOption value="probability" title="Coverage probability" registration={register('coverage.mode')}>
+            k comes from the t-distribution at the effective degrees of freedom (Welch–Satterthwaite); with many degrees
+            of freedom 95.45 % gives k = 2.
+          </ChoiceOption>
           {mode === 'probability' ? (
             <div className="ml-6 flex flex-col gap-1">
               <label htmlFor="coverage-probability" className="font-semibold">
@@ -114,15 +110,9 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
               ) : null}
             </div>
           ) : null}
-          <label className="flex items-start gap-2">
-            <input type="radio" value="fixed-k" className={`${RADIO} mt-1.5`} {...register('coverage.mode')} />
-            <span>
-              <span className="font-semibold">Fixed coverage factor k</span>
-              <span className="block text-sm text-muted">
-                The same k on every budget, whatever its degrees of freedom (k = 2 is common practice).
-              </span>
-            </span>
-          </label>
+          <ChoiceOption value="fixed-k" title="Fixed coverage factor k" registration={register('coverage.mode')}>
+            The same k on every budget, whatever its degrees of freedom (k = 2 is common practice).
+          </ChoiceOption>
           {mode === 'fixed-k' ? (
             <div className="ml-6 flex flex-col gap-1">
               <label htmlFor="coverage-k" className="font-semibold">
@@ -188,27 +178,19 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
             registration={register('temperatureHalfRangeC', AS_NUMBER)}
           />
           <p className="font-semibold">Temperature effects of the volumes in one preparation</p>
-          <label className="flex items-start gap-2">
-            <input type="radio" value="perUse" className={`${RADIO} mt-1.5`} {...register('temperatureTreatment')} />
-            <span>
-              <span className="font-semibold">Independent per use</span>
-              <span className="block text-sm text-muted">
-                Each flask and pipette has its own temperature deviation over the half-range (as in the EURACHEM/CITAC
-                CG4 worked examples).
-              </span>
-            </span>
-          </label>
-          <label className="flex items-start gap-2">
-            <input type="radio" value="sharedLab" className={`${RADIO} mt-1.5`} {...register('temperatureTreatment')} />
-            <span>
-              <span className="font-semibold">One shared lab temperature</span>
-              <span className="block text-sm text-muted">
-                One deviation of the lab over the half-range, shared by every volume, plus a smaller difference per
-                operation. Right when the flasks and pipettes of a preparation are used at the same temperature: in a
-                dilution c₀·V<sub>pipette</sub>/V<sub>flask</sub> the shared part cancels.
-              </span>
-            </span>
-          </label>
+          <ChoiceOption value="perUse" title="Independent per use" registration={register('temperatureTreatment')}>
+            Each flask and pipette has its own temperature deviation over the half-range (as in the EURACHEM/CITAC CG4
+            worked examples).
+          </ChoiceOption>
+          <ChoiceOption
+            value="sharedLab"
+            title="One shared lab temperature"
+            registration={register('temperatureTreatment')}
+          >
+            One deviation of the lab over the half-range, shared by every volume, plus a smaller difference per
+            operation. Right when the flasks and pipettes of a preparation are used at the same temperature: in a
+            dilution c₀·V<sub>pipette</sub>/V<sub>flask</sub> the shared part cancels.
+          </ChoiceOption>
           {treatment === 'sharedLab' ? (
             <div className="ml-6">
               <NumberBox
@@ -285,56 +267,5 @@ export function PolicyForm({ labId, policy }: { labId: number; policy: LabPolicy
         </Button>
       </form>
     </FormProvider>
-  );
-}
-
-/** A number box with its label, unit, hint and error. */
-function NumberBox({
-  id,
-  label,
-  unit,
-  prefix,
-  hint,
-  error,
-  registration,
-}: {
-  id: string;
-  label: string;
-  unit?: string;
-  prefix?: string;
-  hint?: string;
-  error?: string;
-  registration: UseFormRegisterReturn;
-}) {
-  const described = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ');
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="font-semibold">
-        {label}
-      </label>
-      <div className="flex items-center gap-2">
-        {prefix ? <span aria-hidden="true">{prefix}</span> : null}
-        <input
-          id={id}
-          type="text"
-          inputMode="decimal"
-          className="numeric w-24 rounded-md border border-line-strong bg-surface px-3 py-2 text-right"
-          aria-invalid={error ? true : undefined}
-          aria-describedby={described || undefined}
-          {...registration}
-        />
-        {unit ? <span>{unit}</span> : null}
-      </div>
-      {hint ? (
-        <p id={`${id}-hint`} className="text-sm text-muted">
-          {hint}
-        </p>
-      ) : null}
-      {error ? (
-        <p id={`${id}-error`} className="text-sm font-semibold text-danger">
-          {error}
-        </p>
-      ) : null}
-    </div>
   );
 }

@@ -2,7 +2,9 @@ import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import type { matrixDensityRowSchema } from '../../../../shared/contracts/library';
 import { Button } from '../../../components/ui/button';
-import { AS_NUMBER, NUMBER_BOX, RADIO, type PolicyFormValues } from './policy-form-values';
+import { ChoiceOption } from './choice-option';
+import { NumberBox } from './number-box';
+import { AS_NUMBER, NUMBER_BOX, type PolicyFormValues } from './policy-form-values';
 
 /** A new row's boxes start empty (the schema asks for the numbers when the form is saved). */
 const EMPTY_ROW = { matrix: '', densityGPerMl: null, standardUncertaintyGPerMl: null } as unknown as z.input<
@@ -100,49 +102,26 @@ export function SolutionDensityFields() {
         Add a matrix
       </Button>
       <p className="mt-2 font-semibold">When neither the certificate nor the table gives the density</p>
-      <label className="flex items-start gap-2">
-        <input type="radio" value="refuse" className={`${RADIO} mt-1.5`} {...register('solutionDensity.otherwise')} />
-        <span>
-          <span className="font-semibold">Refuse the plan</span>
-          <span className="block text-sm text-muted">
-            The analyst is asked to enter the density or to have its matrix added here.
-          </span>
-        </span>
-      </label>
-      <label className="flex items-start gap-2">
-        <input
-          type="radio"
-          value="assumeWater"
-          className={`${RADIO} mt-1.5`}
-          {...register('solutionDensity.otherwise')}
-        />
-        <span>
-          <span className="font-semibold">Use water&apos;s density, with an uncertainty, and warn</span>
-          <span className="block text-sm text-muted">
-            Water at the lab temperature; the budget, the record and the PDF say so.
-          </span>
-        </span>
-      </label>
+      <ChoiceOption value="refuse" title="Refuse the plan" registration={register('solutionDensity.otherwise')}>
+        The analyst is asked to enter the density or to have its matrix added here.
+      </ChoiceOption>
+      <ChoiceOption
+        value="assumeWater"
+        title="Use water's density, with an uncertainty, and warn"
+        registration={register('solutionDensity.otherwise')}
+      >
+        Water at the lab temperature; the budget, the record and the PDF say so.
+      </ChoiceOption>
       {otherwise === 'assumeWater' ? (
-        <div className="ml-6 flex flex-col gap-1">
-          <label htmlFor="water-density-uncertainty" className="font-semibold">
-            Standard uncertainty of the assumed density
-          </label>
-          <div className="flex items-center gap-2">
-            <input
-              id="water-density-uncertainty"
-              type="text"
-              inputMode="decimal"
-              className={NUMBER_BOX}
-              aria-invalid={error?.waterStandardUncertaintyGPerMl ? true : undefined}
-              {...register('solutionDensity.waterStandardUncertaintyGPerMl', AS_NUMBER)}
-            />
-            <span>g/mL</span>
-          </div>
-          {error?.waterStandardUncertaintyGPerMl?.message ? (
-            <p className="text-sm font-semibold text-danger">{error.waterStandardUncertaintyGPerMl.message}</p>
-          ) : null}
-          <p className="text-sm text-muted">0.006 g/mL covers dilute acid matrices up to a few per cent.</p>
+        <div className="ml-6">
+          <NumberBox
+            id="water-density-uncertainty"
+            label="Standard uncertainty of the assumed density"
+            unit="g/mL"
+            hint="0.006 g/mL covers dilute acid matrices up to a few per cent."
+            error={error?.waterStandardUncertaintyGPerMl?.message}
+            registration={register('solutionDensity.waterStandardUncertaintyGPerMl', AS_NUMBER)}
+          />
         </div>
       ) : null}
     </fieldset>

@@ -108,7 +108,9 @@ function expectRefusalShape(res: request.Response, what: string) {
     expect(typeof res.body?.error?.code, what).toBe('string');
     expect(res.body.error.message.length, what).toBeGreaterThan(0);
     if (res.body.error.code === 'validation_failed' || res.body.error.code === 'plan_invalid') {
-      expect(res.body.error.details?.[0]?.path, `${what}: the message must name the field`).toBeTruthy();
+      expect(res.body.error.details?.[0]?.path, `${what}: the details must name the field`).toBeTruthy();
+      // The field path stays in the details; the message is words a chemist reads.
+      expect(res.body.error.message.startsWith(`${res.body.error.details[0].path}:`), what).toBe(false);
     }
   }
 }

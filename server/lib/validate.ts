@@ -21,6 +21,14 @@ export function toFieldIssues(error: z.ZodError, prefix?: string): FieldIssue[] 
   }));
 }
 
+/**
+ * The 400 for refused fields: the first refusal in its own words as the message, every field with its path in
+ * `details` (where the client marks it). A field path never reaches a chemist as words.
+ */
+export function fieldsRefused(issues: FieldIssue[]) {
+  return validationError(issues[0].message, issues);
+}
+
 /** Parses `{params, query, body}` with the route's schemas; a failure becomes one 400 naming each field. */
 export function validate<S extends Schemas>(schemas: S): RequestHandler {
   return (req, _res, next) => {
@@ -33,10 +41,7 @@ export function validate<S extends Schemas>(schemas: S): RequestHandler {
       if (result.success) out[part] = result.data;
       else issues.push(...toFieldIssues(result.error, part === 'body' ? undefined : part));
     }
-    if (issues.length > 0) {
-      const first = issues[0];
-      throw validationError(first.path ? `${first.path}: ${first.message}` : first.message, issues);
-    }
+    if (issues.length > 0) throw fieldsRefused(issues);
     req.valid = out;
     next();
   };

@@ -10,8 +10,8 @@ import {
 import type { AuditRepository } from '../audit/audit-repository';
 import type { SessionUser } from '../auth/authorize';
 import type { Db } from '../db/connection';
-import { conflict, notFound, validationError } from '../lib/errors';
-import { toFieldIssues } from '../lib/validate';
+import { conflict, notFound } from '../lib/errors';
+import { fieldsRefused, toFieldIssues } from '../lib/validate';
 import { calibrationState, expiryState, flagWords, isMaterial } from './item-status';
 import type { CertificateRow, ItemRow, LibraryRepository, RevisionRow } from './library-repository';
 import { canonicalJson } from '../lib/canonical-json';
@@ -44,7 +44,7 @@ export function parseItemData(kind: EquipmentKind, data: unknown) {
   const result = equipmentDataSchemas[kind].safeParse(data);
   if (!result.success) {
     const issues = toFieldIssues(result.error, 'data');
-    throw validationError(`${issues[0].path}: ${issues[0].message}`, issues);
+    throw fieldsRefused(issues);
   }
   return result.data as { code: string } & Record<string, unknown>;
 }

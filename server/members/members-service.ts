@@ -13,8 +13,8 @@ import { hashToken, newToken } from '../auth/tokens';
 import type { UsersRepository } from '../auth/users-repository';
 import { isUniqueViolation } from '../db/unique-violation';
 import type { LabsRepository, MemberRow } from '../labs/labs-repository';
-import { conflict, forbidden, notFound, unauthenticated, validationError } from '../lib/errors';
-import { toFieldIssues } from '../lib/validate';
+import { conflict, forbidden, notFound, unauthenticated } from '../lib/errors';
+import { fieldsRefused, toFieldIssues } from '../lib/validate';
 import type { Mailer } from '../mail/mailer';
 import { invitationMessage } from '../mail/messages';
 import type { InvitationRow, InvitationsRepository } from './invitations-repository';
@@ -183,7 +183,7 @@ export function membersService(deps: {
         const parsed = invitationJoinNewSchema.safeParse(input);
         if (!parsed.success) {
           const issues = toFieldIssues(parsed.error);
-          throw validationError(`${issues[0].path}: ${issues[0].message}`, issues);
+          throw fieldsRefused(issues);
         }
         const passwordHash = await hashPassword(parsed.data.password);
         userId = await transact(async (trx) => {

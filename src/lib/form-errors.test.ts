@@ -30,6 +30,13 @@ describe('applyApiError', () => {
     expect(applyApiError<Values>(error, vi.fn(), ['email'])).toBe('Check the form. Unknown lab.');
   });
 
+  it('says the server message once when it is also the unplaced issue (a malformed reset link)', () => {
+    const error = new ApiError(400, 'validation_failed', 'This link is not valid.', [
+      { path: 'params.token', message: 'This link is not valid.' },
+    ]);
+    expect(applyApiError<Values>(error, vi.fn(), ['password'])).toBe('This link is not valid.');
+  });
+
   it('has a plain message for errors that are not from the API', () => {
     expect(applyApiError<Values>(new Error('boom'), vi.fn(), ['email'])).toBe('Something went wrong. Try again.');
   });

@@ -19,5 +19,6 @@ export function applyApiError<Values extends FieldValues>(
     else unplaced.push(issue.message);
   }
   if (error.details.length > 0 && unplaced.length === 0) return null;
-  return [error.message, ...unplaced].join(' ');
+  // The server's message is its first issue in words: said once, not again among the unplaced ones.
+  return [error.message, ...unplaced.filter((message) => message !== error.message)].join(' ');
 }
